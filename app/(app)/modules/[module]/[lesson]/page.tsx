@@ -1,0 +1,81 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { lessons as registry } from "@/content/.generated/registry";
+import { MarkComplete } from "@/components/lesson/mark-complete";
+import { lessonComponents } from "@/components/lesson/mdx";
+import { findModule, loadCatalog } from "@/lib/content/load";
+
+// Statically generated; proxy.ts checks the session before serving it.
+export const dynamicParams = false;
+
+export function generateStaticParams() {
+  return loadCatalog().modules.flatMap((m) => m.lessons.map((l) => ({ module: m.slug, lesson: l.slug })));
+}
+
+type Params = { params: Promise<{ module: string; lesson: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  const { module, lesson } = await params;
+  const l = findModule(module)?.lessons.find((x) => x.slug === lesson);
+  return { title: l?.meta.title ?? "Lesson" };
+}
+
+export default async function LessonPage({ params }: Params) {
+  const { module: moduleSlug, lesson: lessonSlug } = await params;
+  const mod = findModule(moduleSlug);
+  const index = mod?.lessons.findIndex((l) => l.slug === lessonSlug) ?? -1;
+  const load = registry[`${moduleSlug}/${lessonSlug}`];
+  if (!mod || index < 0 || !load) notFound();
+  const lesson = mod.lessons[index]!;
+  const prev = mod.lessons[index - 1];
+  const next = mod.lessons[index + 1];
+  const { default: Body } = await load();
+
+  return (
+    <article className="flex flex-col gap-6">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link href="/modules">Modules</Link> / <Link href={`/modules/${mod.slug}`}>{mod.meta.title}</Link>
+      </nav>
+      <header>
+        <p className="font-mono text-sm text-muted">
+          Lesson {index + 1} of {mod.lessons.length} · {lesson.meta.minutes} min
+        </p>
+        <h1 className="mt-1 text-3xl sm:text-4xl">{lesson.meta.title}</h1>
+        <p className="mt-2 max-w-prose text-lg text-muted">{lesson.meta.summary}</p>
+      </header>
+      <section aria-labelledby="objectives" className="max-w-prose rounded border border-line bg-panel p-4">
+        <h2 id="objectives" className="text-lg">After this lesson you can</h2>
+        <ul className="mt-2 list-disc pl-6">
+          {lesson.meta.objectives.map((o) => (
+            <li key={o}>{o}</li>
+          ))}
+        </ul>
+      </section>
+      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note">
+        <strong>Edition note:</strong> {lesson.meta.edition}
+      </p>
+      <div className="prose-riser">
+        <Body components={lessonComponents} />
+      </div>
+      <section aria-labelledby="sources" className="max-w-prose text-sm">
+        <h2 id="sources" className="text-lg">Sources for the numbers in this lesson</h2>
+        <ul className="mt-2 list-disc pl-6">
+          {lesson.meta.sources.map((s) => (
+            <li key={s}>{s}</li>
+          ))}
+        </ul>
+        <p className="mt-2 text-muted">Updated {lesson.meta.updated}.</p>
+      </section>
+      <MarkComplete module={mod.slug} lesson={lesson.slug} total={mod.lessons.length} />
+      <nav aria-label="Lessons" className="flex flex-wrap justify-between gap-4">
+        {prev ? <Link href={`/modules/${mod.slug}/${prev.slug}`}>← {prev.meta.title}</Link> : <span />}
+        {next ? (
+          <Link href={`/modules/${mod.slug}/${next.slug}`}>{next.meta.title} →</Link>
+        ) : (
+          <Link href={`/modules/${mod.slug}/quiz`}>Take the module quiz →</Link>
+        )}
+      </nav>
+    </article>
+  );
+}

@@ -1,0 +1,76 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { buttonLinkClass } from "@/components/ui/button";
+import { requireViewer } from "@/lib/access";
+import { findModule, loadCatalog } from "@/lib/content/load";
+import { progressByModule } from "@/lib/progress";
+import { moduleStatus } from "@/lib/completion";
+
+type Params = { params: Promise<{ module: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  return { title: findModule((await params).module)?.meta.title ?? "Module" };
+}
+
+export default async function ModulePage({ params }: Params) {
+  const { module: slug } = await params;
+  const viewer = await requireViewer("signed-in", `/modules/${slug}`);
+  const mod = findModule(slug);
+  if (!mod) notFound();
+  const done = new Set((await progressByModule(viewer.id)).get(slug)?.completed ?? []);
+  const status = await moduleStatus(viewer.id, slug);
+  const paths = loadCatalog().paths.filter((p) => p.modules.includes(slug));
+  const firstOpen = mod.lessons.find((l) => !done.has(l.slug)) ?? mod.lessons[0]!;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <nav aria-label="Breadcrumb" className="text-sm"><Link href="/modules">Modules</Link></nav>
+      <header>
+        <p className="font-mono text-sm text-muted">Module {mod.meta.order} · {mod.meta.ceHours} CE hours</p>
+        <h1 className="mt-1 text-3xl sm:text-4xl">{mod.meta.title}</h1>
+        <p className="mt-2 max-w-prose text-lg text-muted">{mod.meta.summary}</p>
+        <p className="mt-2 text-sm">Part of: {paths.map((p) => p.title).join(", ")}</p>
+      </header>
+      {status.completedAt ? (
+        <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">
+          ✓ Module complete on {status.completedAt.toISOString().slice(0, 10)}
+        </p>
+      ) : null}
+      <section aria-labelledby="lessons-h">
+        <h2 id="lessons-h" className="text-2xl">Lessons</h2>
+        <p className="mt-1 text-sm text-muted" data-testid="module-lesson-count">{done.size} of {mod.lessons.length} done</p>
+        <ol className="mt-3 flex flex-col gap-2">
+          {mod.lessons.map((l, i) => (
+            <li key={l.slug} className="flex items-baseline gap-3 rounded border border-line bg-panel p-3">
+              <span className="font-mono text-sm text-muted">{i + 1}.</span>
+              <div className="flex-1">
+                <Link href={`/modules/${slug}/${l.slug}`} className="font-bold">{l.meta.title}</Link>
+                <p className="text-sm text-muted">{l.meta.summary}</p>
+              </div>
+              <span className="whitespace-nowrap text-sm">{l.meta.minutes} min</span>
+              <span className={`whitespace-nowrap text-sm font-bold ${done.has(l.slug) ? "text-pass" : "text-muted"}`}>{done.has(l.slug) ? "✓ done" : "to do"}</span>
+            </li>
+          ))}
+        </ol>
+      </section>
+      <section aria-labelledby="complete-h" className="max-w-prose rounded border border-line bg-panel p-4">
+        <h2 id="complete-h" className="text-xl">What completes this module</h2>
+        <ul className="mt-2 list-disc pl-6">
+          <li>All {mod.lessons.length} lessons marked complete ({done.size} so far).</li>
+          <li>
+            The quiz passed with {mod.meta.passMark}% or more — {mod.meta.quiz.questionsPerAttempt} questions
+            {mod.meta.quiz.timeLimitMinutes ? `, ${mod.meta.quiz.timeLimitMinutes} minutes` : ""}, up to {mod.meta.quiz.attemptsPerPeriod} attempts per {mod.meta.quiz.periodHours} hours.
+            {status.bestScore !== null ? ` Your best score so far: ${status.bestScore}%.` : ""}
+          </li>
+          {mod.meta.requiredSkills.length ? <li>Practical sign-offs: {mod.skills.filter((s) => mod.meta.requiredSkills.includes(s.id)).map((s) => s.title).join("; ")}.</li> : null}
+          <li>Completion earns a certificate for {mod.meta.ceHours} continuing-education hours, valid {mod.meta.validityMonths} months.</li>
+        </ul>
+        <div className="mt-4 flex flex-wrap gap-3">
+          <Link href={`/modules/${slug}/${firstOpen.slug}`} className={buttonLinkClass}>{done.size ? "Continue" : "Start"} the lessons</Link>
+          <Link href={`/modules/${slug}/quiz`} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Take the quiz</Link>
+        </div>
+      </section>
+    </div>
+  );
+}

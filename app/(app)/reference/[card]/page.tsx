@@ -1,0 +1,49 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { cards as registry } from "@/content/.generated/registry";
+import { lessonComponents } from "@/components/lesson/mdx";
+import { requireViewer } from "@/lib/access";
+import { findModule, loadCatalog } from "@/lib/content/load";
+
+type Params = { params: Promise<{ card: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  const { card } = await params;
+  return { title: loadCatalog().cards.find((c) => c.slug === card)?.meta.title ?? "Code card" };
+}
+
+export default async function CardPage({ params }: Params) {
+  const { card: slug } = await params;
+  await requireViewer("signed-in", `/reference/${slug}`);
+  const card = loadCatalog().cards.find((c) => c.slug === slug);
+  const load = registry[slug];
+  if (!card || !load) notFound();
+  const { default: Body } = await load();
+  return (
+    <article className="flex flex-col gap-5">
+      <nav aria-label="Breadcrumb" className="text-sm"><Link href="/reference">Code-reference cards</Link></nav>
+      <header>
+        <h1 className="text-3xl">{card.meta.title}</h1>
+        <p className="mt-2 max-w-prose text-lg text-muted">{card.meta.summary}</p>
+      </header>
+      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>Edition note:</strong> {card.meta.edition}</p>
+      <div className="prose-riser"><Body components={lessonComponents} /></div>
+      <section aria-labelledby="related" className="max-w-prose">
+        <h2 id="related" className="text-xl">Related lessons</h2>
+        <ul className="mt-2 list-disc pl-6">
+          {card.meta.relatedLessons.map((rl) => {
+            const [m, l] = rl.split("/") as [string, string];
+            const lesson = findModule(m)?.lessons.find((x) => x.slug === l);
+            return <li key={rl}><Link href={`/modules/${m}/${l}`}>{lesson?.meta.title ?? rl}</Link></li>;
+          })}
+        </ul>
+      </section>
+      <section aria-labelledby="sources" className="max-w-prose text-sm">
+        <h2 id="sources" className="text-lg">Sources</h2>
+        <ul className="mt-2 list-disc pl-6">{card.meta.sources.map((s) => <li key={s}>{s}</li>)}</ul>
+        <p className="mt-2 text-muted">Updated {card.meta.updated}.</p>
+      </section>
+    </article>
+  );
+}

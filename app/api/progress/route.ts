@@ -1,0 +1,24 @@
+import { z } from "zod";
+import { json, readJson, route } from "@/lib/api";
+import { assertCanReadPerson, markLessonComplete, progressByModule } from "@/lib/progress";
+import { slug } from "@/lib/content/schema";
+
+/** GET /api/progress?module=…[&userId=…] → completed lessons of a module (own, or a managed person's). */
+export const GET = route("signed-in", async ({ req, viewer }) => {
+  const url = new URL(req.url);
+  const personId = url.searchParams.get("userId") ?? viewer.id;
+  await assertCanReadPerson(viewer, personId);
+  const all = await progressByModule(personId);
+  const moduleSlug = url.searchParams.get("module");
+  if (moduleSlug) return json({ module: moduleSlug, completed: all.get(moduleSlug)?.completed ?? [] });
+  return json({ modules: [...all.values()].map((p) => ({ module: p.module, completed: p.completed })) });
+});
+
+const body = z.object({ module: slug, lesson: slug });
+
+/** POST /api/progress { module, lesson } → marks the lesson complete for the viewer (idempotent). */
+export const POST = route("signed-in", async ({ req, viewer }) => {
+  const input = await readJson(req, body);
+  const completed = await markLessonComplete(viewer.id, input.module, input.lesson);
+  return json({ module: input.module, completed });
+});

@@ -1,0 +1,50 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { env } from "@/lib/env";
+
+export const metadata: Metadata = { title: "Local mail" };
+export const dynamic = "force-dynamic";
+
+type Message = { id: string; at: string; from: string; to: string[]; subject: string; text: string };
+
+/** The local mail catcher's inbox. Exists only where MAIL_CATCHER_URL is set (local use and tests). */
+export default async function DevMailPage({ searchParams }: { searchParams: Promise<{ id?: string }> }) {
+  if (!env.MAIL_CATCHER_URL) notFound();
+  const { id } = await searchParams;
+  let messages: Message[] = [];
+  let problem: string | null = null;
+  try {
+    const res = await fetch(`${env.MAIL_CATCHER_URL}/messages`, { cache: "no-store" });
+    messages = (await res.json()) as Message[];
+  } catch {
+    problem = "The local mail catcher is not running. Start Riser with npm start.";
+  }
+  const open = messages.find((m) => m.id === id) ?? null;
+  return (
+    <div>
+      <h1 className="text-3xl">Local mail</h1>
+      <p className="mt-2 rounded border-l-4 border-copper bg-copper-light p-3 text-sm">
+        Development only: every message Riser sends locally is caught here and never leaves this machine.
+      </p>
+      {problem ? <p role="alert" className="mt-4 text-caution">{problem}</p> : null}
+      {!problem && messages.length === 0 ? <p className="mt-4">No messages yet.</p> : null}
+      <div className="mt-4 grid gap-4 md:grid-cols-[2fr_3fr]">
+        <ul className="flex flex-col gap-2" aria-label="Messages">
+          {messages.map((m) => (
+            <li key={m.id} className={`rounded border p-2 ${m.id === id ? "border-water bg-water-light" : "border-line bg-panel"}`}>
+              <a href={`/dev/mail?id=${m.id}`} className="font-bold">{m.subject || "(no subject)"}</a>
+              <p className="text-sm text-muted">to {m.to.join(", ")} · {new Date(m.at).toLocaleString("en-US", { timeZone: "UTC" })} UTC</p>
+            </li>
+          ))}
+        </ul>
+        {open ? (
+          <article className="rounded border border-line bg-panel p-4" aria-label="Message">
+            <h2 className="text-xl">{open.subject}</h2>
+            <p className="text-sm text-muted">From {open.from} to {open.to.join(", ")}</p>
+            <pre className="mt-3 whitespace-pre-wrap break-words font-mono text-sm">{open.text}</pre>
+          </article>
+        ) : null}
+      </div>
+    </div>
+  );
+}

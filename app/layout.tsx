@@ -1,0 +1,29 @@
+import type { Metadata, Viewport } from "next";
+import { SiteHeader } from "@/components/shell/site-header";
+import { SiteFooter } from "@/components/shell/site-footer";
+import { bodyFont, monoFont } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Riser — training for residential sprinkler work", template: "%s · Riser" },
+  description: "Lessons, quizzes, certificates, code-reference cards and field calculators for the residential fire-sprinkler trade.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#14202B" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${bodyFont.variable} ${monoFont.variable}`}>
+      <body>
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-panel focus:px-3 focus:py-2">
+          Skip to main content
+        </a>
+        <SiteHeader />
+        <main id="main" className="mx-auto w-full max-w-6xl px-4 py-6 sm:px-6">
+          {children}
+        </main>
+        <SiteFooter />
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,55 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
+import { useRouter, useSearchParams } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { Button } from "@/components/ui/button";
+import { Field, FormError, FormNotice } from "@/components/ui/field";
+import { authClient } from "@/lib/auth/client";
+import { signInSchema } from "@/lib/auth/schemas";
+
+type Values = z.infer<typeof signInSchema>;
+
+/** Only same-site paths are followed after sign-in. */
+function safeNext(next: string | null): string {
+  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/learn";
+}
+
+export function SignInForm() {
+  const router = useRouter();
+  const params = useSearchParams();
+  const [error, setError] = useState<string | null>(null);
+  const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(signInSchema) });
+
+  async function onSubmit(values: Values) {
+    setError(null);
+    const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
+    if (error) {
+      if (error.status === 403) setError("Confirm your e-mail address first: open the link we sent you.");
+      else if (error.status === 429) setError("Too many sign-in attempts. Wait a minute and try again.");
+      else if (error.status === 401) setError("That e-mail and password do not match an account.");
+      else setError(error.message ?? "Sign-in failed. Try again.");
+      return;
+    }
+    router.push(safeNext(params.get("next")));
+    router.refresh();
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      {params.get("verified") ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
+      {params.get("reset") ? <FormNotice message="Your password is changed. Sign in with the new one." /> : null}
+      <FormError message={error} />
+      <Field label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
+      <Field label="Password" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
+      <Button type="submit" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Signing in…" : "Sign in"}
+      </Button>
+      <p className="text-sm">
+        <Link href="/forgot-password">Forgot your password?</Link> · <Link href="/sign-up">Create an account for your company</Link>
+      </p>
+    </form>
+  );
+}

@@ -1,0 +1,44 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { Field, FormError, FormNotice } from "@/components/ui/field";
+import { signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
+import { postJson } from "@/lib/fetcher";
+
+export function SignUpForm() {
+  const [error, setError] = useState<string | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+  const { register, handleSubmit, formState, setError: setFieldError } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
+
+  async function onSubmit(values: SignUpInput) {
+    setError(null);
+    const res = await postJson<{ message: string }>("/api/account/sign-up", values);
+    if (!res.ok) {
+      for (const [field, messages] of Object.entries(res.fieldErrors ?? {})) {
+        setFieldError(field as keyof SignUpInput, { message: messages[0] });
+      }
+      setError(res.error);
+      return;
+    }
+    setDone(res.data.message);
+  }
+
+  if (done) return <FormNotice message={done} />;
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <FormError message={error} />
+      <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
+      <Field label="Work e-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
+      <Field label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
+      <Field label="Company" autoComplete="organization" hint="Your sprinkler contractor or home-building company." {...register("organizationName")} error={formState.errors.organizationName?.message} />
+      <Button type="submit" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Creating…" : "Create the account"}
+      </Button>
+      <p className="text-sm text-muted">
+        You become your company&apos;s training manager, with 3 trial seats for 30 days.
+      </p>
+    </form>
+  );
+}

@@ -1,0 +1,23 @@
+const kinds = {
+  caution: { label: "Caution", box: "border-caution bg-caution-light", title: "text-caution", icon: "!" },
+  tip: { label: "Field tip", box: "border-water bg-water-light", title: "text-water", icon: "i" },
+  code: { label: "Code note", box: "border-copper bg-copper-light", title: "text-copper", icon: "§" },
+} as const;
+
+export function Callout({ type = "tip", title, children }: { type?: keyof typeof kinds; title?: string; children: React.ReactNode }) {
+  const k = kinds[type] ?? kinds.tip;
+  return (
+    <aside className={`my-5 rounded border-l-4 p-4 ${k.box}`} aria-label={`${k.label}${title ? `: ${title}` : ""}`} data-callout={type}>
+      <p className={`flex items-center gap-2 font-bold ${k.title}`}>
+        <span aria-hidden="true" className="inline-flex h-6 w-6 items-center justify-center rounded-full border-2 border-current font-mono text-sm">
+          {k.icon}
+        </span>
+        <span>
+          {k.label}
+          {title ? `: ${title}` : ""}
+        </span>
+      </p>
+      <div className="mt-2 [&>p:first-child]:mt-0">{children}</div>
+    </aside>
+  );
+}

@@ -1,0 +1,25 @@
+import type { MDXComponents } from "mdx/types";
+import Link from "next/link";
+import { Calculator } from "@/components/tools/calculator";
+import { Callout } from "./callout";
+import { Figure, WorkedExample } from "./figure";
+import { Term } from "./term";
+
+/** Components every lesson and card may use without importing them. */
+export const lessonComponents: MDXComponents = {
+  Callout,
+  Figure,
+  WorkedExample,
+  Term,
+  Calculator,
+  a: ({ href = "", children, ...rest }) =>
+    href.startsWith("/") ? (
+      <Link href={href} {...rest}>
+        {children}
+      </Link>
+    ) : (
+      <a href={href} rel="noreferrer" {...rest}>
+        {children}
+      </a>
+    ),
+};

@@ -1,0 +1,43 @@
+"use client";
+import { useEffect, useId, useRef, useState } from "react";
+
+/** A glossary term: a button that shows its definition; Escape or a second press closes it. */
+export function TermPopover({ term, definition, children }: { term: string; definition: string; children: React.ReactNode }) {
+  const [open, setOpen] = useState(false);
+  const id = useId();
+  const ref = useRef<HTMLSpanElement>(null);
+  useEffect(() => {
+    if (!open) return;
+    const onKey = (e: KeyboardEvent) => e.key === "Escape" && setOpen(false);
+    const onClick = (e: MouseEvent) => ref.current && !ref.current.contains(e.target as Node) && setOpen(false);
+    document.addEventListener("keydown", onKey);
+    document.addEventListener("mousedown", onClick);
+    return () => {
+      document.removeEventListener("keydown", onKey);
+      document.removeEventListener("mousedown", onClick);
+    };
+  }, [open]);
+  return (
+    <span ref={ref} className="relative inline">
+      <button
+        type="button"
+        className="cursor-help border-b-2 border-dotted border-water text-left text-ink"
+        aria-expanded={open}
+        aria-controls={id}
+        onClick={() => setOpen((o) => !o)}
+      >
+        {children}
+        <span className="sr-only"> (glossary term)</span>
+      </button>
+      <span
+        id={id}
+        role="note"
+        hidden={!open}
+        className="absolute left-0 top-full z-20 mt-1 block w-72 max-w-[80vw] rounded border border-ink/30 bg-panel p-3 text-sm shadow-lg"
+      >
+        <strong className="block">{term}</strong>
+        {definition}
+      </span>
+    </span>
+  );
+}

@@ -1,0 +1,29 @@
+import Link from "next/link";
+import { SiteNav } from "./site-nav";
+
+export function SiteHeader() {
+  return (
+    <header className="border-b-4 border-copper bg-ink text-paper">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
+        <Link href="/" className="flex items-center gap-2 text-xl font-bold text-paper no-underline">
+          <RiserMark />
+          <span>Riser</span>
+        </Link>
+        <SiteNav />
+      </div>
+    </header>
+  );
+}
+
+/** Riser's mark: a vertical pipe with a gauge and a deflector. */
+function RiserMark() {
+  return (
+    <svg width="28" height="28" viewBox="0 0 28 28" aria-hidden="true" focusable="false">
+      <rect x="12" y="6" width="4" height="20" fill="#B5651D" />
+      <circle cx="20" cy="15" r="3.5" fill="none" stroke="#F7F4EE" strokeWidth="2" />
+      <line x1="16" y1="15" x2="16.5" y2="15" stroke="#F7F4EE" strokeWidth="2" />
+      <path d="M6 5 L22 5" stroke="#F7F4EE" strokeWidth="2.5" strokeLinecap="round" />
+      <path d="M14 5 L14 2" stroke="#F7F4EE" strokeWidth="2" />
+    </svg>
+  );
+}

@@ -1,0 +1,67 @@
+"use client";
+import Link from "next/link";
+import { usePathname, useRouter } from "next/navigation";
+import { useState } from "react";
+import { authClient } from "@/lib/auth/client";
+import { isRole } from "@/lib/access/rules";
+import { navFor } from "./nav-items";
+
+export function SiteNav() {
+  const { data, isPending } = authClient.useSession();
+  const pathname = usePathname();
+  const router = useRouter();
+  const [open, setOpen] = useState(false);
+  const role = (data?.user as { role?: string } | undefined)?.role;
+  const items = data ? navFor(isRole(role) ? role : "learner") : [];
+
+  async function signOut() {
+    await authClient.signOut();
+    router.push("/");
+    router.refresh();
+  }
+
+  return (
+    <nav aria-label="Main" className="flex flex-1 flex-wrap items-center justify-end gap-2">
+      {isPending ? (
+        <span className="text-sm text-paper/70">Loading…</span>
+      ) : data ? (
+        <>
+          <button
+            type="button"
+            className="rounded border border-paper/40 px-3 py-1 text-sm sm:hidden"
+            aria-expanded={open}
+            aria-controls="main-nav-list"
+            onClick={() => setOpen((o) => !o)}
+          >
+            Menu
+          </button>
+          <ul id="main-nav-list" className={`${open ? "flex" : "hidden"} w-full flex-col gap-1 sm:flex sm:w-auto sm:flex-row sm:flex-wrap sm:gap-4`} data-testid="main-nav">
+            {items.map((i) => (
+              <li key={i.href}>
+                <Link
+                  href={i.href}
+                  aria-current={pathname === i.href || pathname.startsWith(`${i.href}/`) ? "page" : undefined}
+                  className="block py-1 text-paper no-underline hover:underline aria-[current=page]:underline aria-[current=page]:decoration-2"
+                  onClick={() => setOpen(false)}
+                >
+                  {i.label}
+                </Link>
+              </li>
+            ))}
+            <li className="flex items-center gap-3 sm:ml-2 sm:border-l sm:border-paper/30 sm:pl-4">
+              <Link href="/account" className="py-1 text-sm text-paper/90">{data.user.name}</Link>
+              <button type="button" onClick={signOut} className="rounded border border-paper/40 px-2 py-0.5 text-sm hover:bg-paper hover:text-ink">
+                Sign out
+              </button>
+            </li>
+          </ul>
+        </>
+      ) : (
+        <ul className="flex gap-4">
+          <li><Link href="/sign-in" className="text-paper">Sign in</Link></li>
+          <li><Link href="/sign-up" className="text-paper">Create an account</Link></li>
+        </ul>
+      )}
+    </nav>
+  );
+}

@@ -1,0 +1,4 @@
+export * from "./auth";
+export * from "./org";
+export * from "./catalog";
+export * from "./quiz";

@@ -1,0 +1,58 @@
+/** Organizations (a sprinkler contractor or a home builder), their teams, and the audit and mail logs. */
+import { datetime, index, int, json, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+
+export const organization = mysqlTable("organization", {
+  id: varchar("id", { length: 36 }).primaryKey(),
+  name: varchar("name", { length: 200 }).notNull(),
+  kind: varchar("kind", { length: 20 }).notNull().default("contractor"), // contractor | builder
+  seats: int("seats").notNull().default(3),
+  trialEndsAt: datetime("trial_ends_at"),
+  createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
+});
+
+export const team = mysqlTable(
+  "team",
+  {
+    id: varchar("id", { length: 36 }).primaryKey(),
+    organizationId: varchar("organization_id", { length: 36 })
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 120 }).notNull(),
+    createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
+  },
+  (t) => [uniqueIndex("team_org_name_uq").on(t.organizationId, t.name)],
+);
+
+/** Append-only in the app's code paths: written only through lib/audit. */
+export const auditLog = mysqlTable(
+  "audit_log",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    at: timestamp("at", { fsp: 3 }).defaultNow().notNull(),
+    actorId: varchar("actor_id", { length: 36 }),
+    actorEmail: varchar("actor_email", { length: 255 }),
+    organizationId: varchar("organization_id", { length: 36 }),
+    action: varchar("action", { length: 64 }).notNull(),
+    targetType: varchar("target_type", { length: 40 }).notNull(),
+    targetId: varchar("target_id", { length: 64 }).notNull(),
+    reason: text("reason"),
+    ip: varchar("ip", { length: 64 }),
+    details: json("details"),
+  },
+  (t) => [index("audit_at_idx").on(t.at), index("audit_org_idx").on(t.organizationId, t.at)],
+);
+
+export const mailLog = mysqlTable(
+  "mail_log",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    at: timestamp("at", { fsp: 3 }).defaultNow().notNull(),
+    to: varchar("to", { length: 255 }).notNull(),
+    subject: varchar("subject", { length: 255 }).notNull(),
+    kind: varchar("kind", { length: 40 }).notNull(),
+    status: varchar("status", { length: 12 }).notNull(), // sent | failed
+    error: text("error"),
+    body: text("body"), // kept only outside production
+  },
+  (t) => [index("mail_at_idx").on(t.at)],
+);

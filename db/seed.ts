@@ -1,0 +1,54 @@
+// Demo data: `npm run db:seed` (skips when the database already holds organizations).
+// Syncs the content catalog first, every time.
+import { randomUUID } from "node:crypto";
+import { hashPassword } from "better-auth/crypto";
+import { db, pool } from "@/db/client";
+import { account, organization, team, user } from "@/db/schema";
+import { syncCatalog } from "@/lib/content/sync";
+import "@/lib/content/sync-hooks";
+import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "./demo";
+
+async function seedDemo() {
+  const existing = await db.select({ id: organization.id }).from(organization).limit(1);
+  if (existing.length) {
+    console.log("[seed] organizations exist: demo data left as it is");
+    return;
+  }
+  const hash = await hashPassword(DEMO_PASSWORD);
+  const orgIds: Record<string, string> = {};
+  const teamIds: Record<string, string> = {};
+  await db.transaction(async (tx) => {
+    for (const o of DEMO_ORGS) {
+      const id = randomUUID();
+      orgIds[o.key] = id;
+      await tx.insert(organization).values({ id, name: o.name, kind: o.kind, seats: o.seats });
+      for (const t of o.teams) {
+        const tid = randomUUID();
+        teamIds[`${o.key}/${t}`] = tid;
+        await tx.insert(team).values({ id: tid, organizationId: id, name: t });
+      }
+    }
+    for (const p of DEMO_PEOPLE) {
+      const id = randomUUID();
+      await tx.insert(user).values({
+        id,
+        name: p.name,
+        email: p.email,
+        emailVerified: true,
+        role: p.role,
+        organizationId: p.org ? orgIds[p.org]! : null,
+        teamId: p.org && p.team ? teamIds[`${p.org}/${p.team}`]! : null,
+      });
+      await tx.insert(account).values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: hash });
+    }
+  });
+  console.log(`[seed] demo: ${DEMO_ORGS.length} organizations, ${DEMO_PEOPLE.length} people`);
+}
+
+try {
+  const counts = await syncCatalog();
+  console.log(`[seed] catalog synced: ${JSON.stringify(counts)}`);
+  await seedDemo();
+} finally {
+  await pool.end();
+}

@@ -1,0 +1,19 @@
+import nextVitals from "eslint-config-next/core-web-vitals";
+import nextTs from "eslint-config-next/typescript";
+import drizzle from "eslint-plugin-drizzle";
+
+const config = [
+  ...nextVitals,
+  ...nextTs,
+  {
+    ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "content/.generated/**", "next-env.d.ts", "test-results/**", "playwright-report/**"],
+  },
+  {
+    plugins: { drizzle },
+    rules: {
+      "drizzle/enforce-delete-with-where": ["error", { drizzleObjectName: ["db", "tx"] }],
+      "drizzle/enforce-update-with-where": ["error", { drizzleObjectName: ["db", "tx"] }],
+    },
+  },
+];
+export default config;

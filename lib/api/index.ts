@@ -1,0 +1,82 @@
+import "server-only";
+import { ZodError, type ZodType } from "zod";
+import { AccessError, check, getRequestViewer, type Rule, type Viewer } from "@/lib/access";
+import { isDatabaseDown } from "@/lib/db-errors";
+
+/** An error whose message is safe to show: becomes `{ error }` with its status. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message);
+  }
+}
+
+export function json(body: unknown, init?: number | ResponseInit): Response {
+  const opts = typeof init === "number" ? { status: init } : init;
+  return Response.json(body, { ...opts, headers: { "Cache-Control": "no-store", ...(opts?.headers ?? {}) } });
+}
+
+export function fieldErrorsOf(error: ZodError): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join(".") || "_";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+/** Parses a JSON body with a schema; a body that is not JSON or does not fit → 400 with field errors. */
+export async function readJson<T>(req: Request, schema: ZodType<T>): Promise<T> {
+  let raw: unknown;
+  try {
+    raw = await req.json();
+  } catch {
+    throw new ApiError(400, "The request body must be JSON.");
+  }
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw new ApiError(400, "Some fields need attention.", fieldErrorsOf(parsed.error));
+  return parsed.data;
+}
+
+type Ctx<P> = { req: Request; viewer: Viewer | null; params: P };
+type SignedCtx<P> = { req: Request; viewer: Viewer; params: P };
+
+/** Maps any thrown error to a real status with a message; never a stack trace. */
+export function errorResponse(err: unknown): Response {
+  if (err instanceof ApiError) {
+    return json({ error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) }, err.status);
+  }
+  if (err instanceof AccessError) return json({ error: err.message }, err.status);
+  if (err instanceof ZodError) return json({ error: "Some fields need attention.", fieldErrors: fieldErrorsOf(err) }, 400);
+  if (isDatabaseDown(err)) {
+    return json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: { "Retry-After": "10" } });
+  }
+  console.error("[api] unexpected error", err);
+  return json({ error: "Something went wrong on our side. Nothing was saved." }, 500);
+}
+
+/**
+ * The one wrapper for route handlers: checks the access rule first (401/403), then runs the
+ * handler and maps errors. Route params arrive awaited.
+ */
+export function route<P = Record<string, string>>(rule: "public", fn: (ctx: Ctx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
+export function route<P = Record<string, string>>(rule: Exclude<Rule, "public">, fn: (ctx: SignedCtx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
+export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
+  return async (req: Request, ctx: { params: Promise<P> }) => {
+    try {
+      const viewer = check(await getRequestViewer(req), rule);
+      const params = ctx?.params ? await ctx.params : ({} as P);
+      return await (fn as (c: Ctx<P>) => Promise<Response>)({ req, viewer, params });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}
+
+/** The client address as the proxy in front reports it (for audit rows and rate limits). */
+export function clientIp(req: Request): string {
+  return req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+}

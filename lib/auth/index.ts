@@ -1,0 +1,97 @@
+import "server-only";
+import { betterAuth } from "better-auth";
+import { APIError } from "better-auth/api";
+import { drizzleAdapter } from "@better-auth/drizzle-adapter";
+import { admin } from "better-auth/plugins";
+import { nextCookies } from "better-auth/next-js";
+import { db } from "@/db/client";
+import * as schema from "@/db/schema";
+import { env } from "@/lib/env";
+import { sendMail } from "@/lib/mail";
+import { signupContext } from "./signup-context";
+
+export const auth = betterAuth({
+  appName: "Riser",
+  baseURL: env.APP_URL,
+  secret: env.BETTER_AUTH_SECRET,
+  trustedOrigins: [env.APP_URL],
+  database: drizzleAdapter(db, {
+    provider: "mysql",
+    schema: {
+      user: schema.user,
+      session: schema.session,
+      account: schema.account,
+      verification: schema.verification,
+      rateLimit: schema.rateLimit,
+    },
+  }),
+  emailAndPassword: {
+    enabled: true,
+    requireEmailVerification: true,
+    minPasswordLength: 10,
+    maxPasswordLength: 128,
+    revokeSessionsOnPasswordReset: true,
+    resetPasswordTokenExpiresIn: 60 * 60,
+    sendResetPassword: async ({ user, url }) => {
+      await sendMail({
+        to: user.email,
+        kind: "password-reset",
+        subject: "Reset your Riser password",
+        text: `Hello ${user.name},\n\nSomeone asked to reset the password of your Riser account. If it was you, open this link within an hour:\n\n${url}\n\nIf it was not you, ignore this message; your password stays as it is.`,
+      });
+    },
+  },
+  emailVerification: {
+    sendOnSignUp: true,
+    autoSignInAfterVerification: false,
+    expiresIn: 60 * 60 * 24,
+    sendVerificationEmail: async ({ user, url }) => {
+      await sendMail({
+        to: user.email,
+        kind: "verify-email",
+        subject: "Confirm your e-mail for Riser",
+        text: `Hello ${user.name},\n\nConfirm this address to finish setting up your Riser account:\n\n${url}\n\nThe link works for 24 hours.`,
+      });
+    },
+  },
+  user: {
+    additionalFields: {
+      organizationId: { type: "string", required: false, input: false },
+      teamId: { type: "string", required: false, input: false },
+    },
+  },
+  session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
+  rateLimit: {
+    enabled: true,
+    storage: "database",
+    window: 60,
+    max: 200,
+    customRules: {
+      "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW_S, max: env.AUTH_RATE_LIMIT_MAX },
+      "/sign-up/email": { window: 60, max: 10 },
+      "/request-password-reset": { window: 60, max: 5 },
+    },
+  },
+  advanced: {
+    useSecureCookies: env.INSECURE_COOKIES !== "1",
+    defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
+    ipAddress: { ipAddressHeaders: ["x-forwarded-for"] },
+    database: { generateId: () => crypto.randomUUID() },
+  },
+  databaseHooks: {
+    user: {
+      create: {
+        before: async (user) => {
+          const placement = signupContext.getStore();
+          if (!placement) {
+            throw new APIError("FORBIDDEN", { message: "Create an account from the sign-up page or an invitation." });
+          }
+          return { data: { ...user, ...placement } };
+        },
+      },
+    },
+  },
+  plugins: [admin({ defaultRole: "learner", adminRoles: ["admin"] }), nextCookies()],
+});
+
+export type Auth = typeof auth;

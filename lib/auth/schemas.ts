@@ -1,0 +1,20 @@
+/** Form schemas shared by the browser (react-hook-form) and the server (route handlers). */
+import { z } from "zod";
+
+export const email = z.string().trim().toLowerCase().email("Enter an e-mail address like name@company.com").max(255, "At most 255 characters");
+export const password = z.string().min(10, "Use at least 10 characters").max(128, "At most 128 characters");
+export const personName = z.string().trim().min(2, "Enter at least 2 characters").max(200, "At most 200 characters");
+
+export const signUpSchema = z.object({
+  name: personName,
+  email,
+  password,
+  organizationName: z.string().trim().min(2, "Enter your company's name").max(200, "At most 200 characters"),
+});
+export type SignUpInput = z.infer<typeof signUpSchema>;
+
+export const signInSchema = z.object({ email, password: z.string().min(1, "Enter your password") });
+export const forgotSchema = z.object({ email });
+export const resetSchema = z
+  .object({ password, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });

@@ -1,0 +1,3 @@
+import "server-only";
+// Registers every area's catalog-sync step (imported by the seed and the admin's sync action).
+export {};

@@ -1,0 +1,48 @@
+// With the test database stopped the app answers 503 (page and JSON, no stack trace) and recovers
+// by itself once it is back.
+import { execFileSync } from "node:child_process";
+import { afterAll, describe, expect, it } from "vitest";
+import { APP } from "../helpers/http";
+
+const db = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/db.mjs", cmd, "--profile=test"], { stdio: "inherit" });
+
+async function until(fn: () => Promise<boolean>, ms = 20_000) {
+  const end = Date.now() + ms;
+  while (Date.now() < end) {
+    if (await fn()) return true;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  return false;
+}
+
+describe("database outage", () => {
+  afterAll(() => db("start"));
+
+  it("health is 200 while the database runs", async () => {
+    const res = await fetch(`${APP}/api/health`);
+    expect(res.status).toBe(200);
+    expect((await res.json()).database).toBe("up");
+  });
+
+  it("gives 503 with a clear message while it is stopped, then recovers", async () => {
+    db("stop");
+    await new Promise((r) => setTimeout(r, 1200)); // the proxy's probe is remembered for 1 s
+    const health = await fetch(`${APP}/api/health`);
+    expect(health.status).toBe(503);
+    expect((await health.json()).database).toBe("down");
+
+    const page = await fetch(`${APP}/learn`, { redirect: "manual" });
+    expect(page.status).toBe(503);
+    const html = await page.text();
+    expect(html).toContain("briefly unavailable");
+    expect(html).not.toMatch(/at .*\.js:\d+/);
+
+    const api = await fetch(`${APP}/api/account/sign-up`, { method: "POST", body: "{}", headers: { "content-type": "application/json", origin: APP } });
+    expect(api.status).toBe(503);
+    expect((await api.json()).error).toMatch(/database/);
+
+    db("start");
+    const back = await until(async () => (await fetch(`${APP}/api/health`)).status === 200);
+    expect(back).toBe(true);
+  });
+});

@@ -1,0 +1,81 @@
+/** HTTP helpers for integration tests against the running app (started by scripts/test.mjs). */
+import { DEMO_PASSWORD } from "@/db/demo";
+
+export const APP = process.env.APP_URL ?? "http://127.0.0.1:3100";
+export const MAIL = process.env.MAIL_CATCHER_URL ?? "http://127.0.0.1:2536";
+
+let ipCounter = 10;
+/** A distinct client address per caller, so that per-IP rate limits of one test do not hit another. */
+export const freshIp = () => `10.77.${Math.floor(++ipCounter / 250)}.${ipCounter % 250}`;
+
+export type Client = { cookie: string; ip: string; fetch: (path: string, init?: RequestInit) => Promise<Response> };
+
+function clientFor(cookie: string, ip: string): Client {
+  return {
+    cookie,
+    ip,
+    fetch: (path, init = {}) =>
+      fetch(`${APP}${path}`, {
+        redirect: "manual",
+        ...init,
+        headers: { origin: APP, "x-forwarded-for": ip, ...(cookie ? { cookie } : {}), ...(init.headers as Record<string, string> | undefined) },
+      }),
+  };
+}
+
+export const anonymous = (ip = freshIp()) => clientFor("", ip);
+
+export function cookiesOf(res: Response): string {
+  return res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
+}
+
+export async function signIn(email: string, password = DEMO_PASSWORD, ip = freshIp()): Promise<Client> {
+  const res = await fetch(`${APP}/api/auth/sign-in/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": ip },
+    body: JSON.stringify({ email, password }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);
+  return clientFor(cookiesOf(res), ip);
+}
+
+export async function postJson(client: Client, path: string, body: unknown, method = "POST") {
+  const res = await client.fetch(path, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+  const text = await res.text();
+  let json: unknown = null;
+  try {
+    json = JSON.parse(text);
+  } catch {
+    /* not JSON */
+  }
+  return { status: res.status, json: json as Record<string, unknown>, text };
+}
+
+type CaughtMail = { id: string; to: string[]; subject: string; text: string; at: string };
+
+/** Waits for a mail to this address (optionally matching the subject) in the local catcher. */
+export async function waitForMail(to: string, subject?: RegExp, timeoutMs = 10_000): Promise<CaughtMail> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const list = (await (await fetch(`${MAIL}/messages?to=${encodeURIComponent(to)}`)).json()) as CaughtMail[];
+    const hit = list.find((m) => !subject || subject.test(m.subject));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no mail to ${to}${subject ? ` matching ${subject}` : ""} within ${timeoutMs} ms`);
+}
+
+export async function mailsTo(to: string): Promise<CaughtMail[]> {
+  return (await (await fetch(`${MAIL}/messages?to=${encodeURIComponent(to)}`)).json()) as CaughtMail[];
+}
+
+export const linkIn = (text: string) => {
+  const m = text.match(/https?:\/\/\S+/);
+  if (!m) throw new Error(`no link in mail:\n${text}`);
+  return m[0];
+};
+
+export const uniqueEmail = (tag: string) => `${tag}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 7)}@test.example`;
