@@ -1,7 +1,10 @@
 import "server-only";
-import { and, desc, eq, max } from "drizzle-orm";
+import { and, desc, eq, isNull, max, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { moduleCompletion, quizAttempt } from "@/db/schema";
+import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, quizAttempt } from "@/db/schema";
+import { issueCertificateForCompletion } from "@/lib/certificates";
+import { findModule } from "@/lib/content/load";
+import { missingSignOffs } from "@/lib/signoffs/requirement";
 
 export type ModuleStatus = { completedAt: Date | null; bestScore: number | null; lastPassed: boolean | null };
 
@@ -12,16 +15,9 @@ export async function moduleStatus(userId: string, moduleSlug: string): Promise<
     .where(and(eq(moduleCompletion.userId, userId), eq(moduleCompletion.moduleSlug, moduleSlug)))
     .orderBy(desc(moduleCompletion.completedAt))
     .limit(1);
-  const [best] = await db
-    .select({ best: max(quizAttempt.score) })
-    .from(quizAttempt)
-    .where(and(eq(quizAttempt.userId, userId), eq(quizAttempt.moduleSlug, moduleSlug), eq(quizAttempt.status, "graded")));
-  const [last] = await db
-    .select({ passed: quizAttempt.passed })
-    .from(quizAttempt)
-    .where(and(eq(quizAttempt.userId, userId), eq(quizAttempt.moduleSlug, moduleSlug), eq(quizAttempt.status, "graded")))
-    .orderBy(desc(quizAttempt.submittedAt))
-    .limit(1);
+  const graded = and(eq(quizAttempt.userId, userId), eq(quizAttempt.moduleSlug, moduleSlug), eq(quizAttempt.status, "graded"));
+  const [best] = await db.select({ best: max(quizAttempt.score) }).from(quizAttempt).where(graded);
+  const [last] = await db.select({ passed: quizAttempt.passed }).from(quizAttempt).where(graded).orderBy(desc(quizAttempt.submittedAt)).limit(1);
   return { completedAt: c?.at ?? null, bestScore: best?.best ?? null, lastPassed: last?.passed ?? null };
 }
 
@@ -33,4 +29,53 @@ export async function completionsOf(userId: string): Promise<Map<string, Date>> 
     .where(eq(moduleCompletion.userId, userId))
     .groupBy(moduleCompletion.moduleSlug);
   return new Map(rows.filter((r) => r.at).map((r) => [r.module, r.at as Date]));
+}
+
+/** Extra conditions other areas add (practical sign-offs): each returns what is still missing. */
+type Requirement = (userId: string, moduleSlug: string) => Promise<string[]>;
+const requirements: Requirement[] = [];
+export function addCompletionRequirement(fn: Requirement) {
+  requirements.push(fn);
+}
+addCompletionRequirement(missingSignOffs); // required practical sign-offs (module.yaml requiredSkills)
+
+/** What the person still needs before the module completes (empty = complete on the next pass). */
+export async function missingForCompletion(userId: string, moduleSlug: string): Promise<string[]> {
+  const mod = findModule(moduleSlug);
+  if (!mod) return ["unknown module"];
+  const done = await db
+    .select({ slug: catalogLesson.slug })
+    .from(lessonProgress)
+    .innerJoin(catalogLesson, eq(catalogLesson.id, lessonProgress.lessonId))
+    .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
+    .where(and(eq(lessonProgress.userId, userId), eq(catalogModule.slug, moduleSlug), isNull(catalogLesson.retiredAt)));
+  const doneSet = new Set(done.map((d) => d.slug));
+  const missing = mod.lessons.filter((l) => !doneSet.has(l.slug)).map((l) => `lesson: ${l.meta.title}`);
+  for (const r of requirements) missing.push(...(await r(userId, moduleSlug)));
+  return missing;
+}
+
+/**
+ * Completion = all lessons done and the quiz passed (and any required sign-offs approved).
+ * Called after a passing grade and after each lesson or sign-off; records one completion per
+ * passing attempt (a later pass is a renewal) and issues the certificate through one function.
+ * Safe to call any number of times.
+ */
+export async function checkAndRecordCompletion(userId: string, moduleSlug: string): Promise<number | null> {
+  const [pass] = await db
+    .select({ id: quizAttempt.id, at: quizAttempt.submittedAt })
+    .from(quizAttempt)
+    .where(and(eq(quizAttempt.userId, userId), eq(quizAttempt.moduleSlug, moduleSlug), eq(quizAttempt.status, "graded"), eq(quizAttempt.passed, true)))
+    .orderBy(desc(quizAttempt.submittedAt))
+    .limit(1);
+  if (!pass) return null;
+  if ((await missingForCompletion(userId, moduleSlug)).length) return null;
+  const result = await db
+    .insert(moduleCompletion)
+    .ignore()
+    .values({ userId, moduleSlug, attemptId: pass.id, completedAt: sql`CURRENT_TIMESTAMP(3)` as unknown as Date });
+  if (result[0].affectedRows === 0) return null; // this pass already completed the module
+  const id = result[0].insertId;
+  await issueCertificateForCompletion(id);
+  return id;
 }

@@ -4,6 +4,7 @@
 import { spawn } from "node:child_process";
 import path from "node:path";
 import { config, root } from "./lib/config.mjs";
+import { SERVICES } from "./lib/services.mjs";
 import { ensureDependencies, buildApp, node, tsx } from "./lib/steps.mjs";
 
 ensureDependencies();
@@ -12,7 +13,7 @@ const cfg = config("dev");
 const env = { ...cfg.env, NODE_ENV: "production" };
 
 node("scripts/db.mjs", ["start", "--profile=dev"]);
-node("scripts/mail-catcher.mjs", ["start", "--profile=dev"]);
+for (const s of SERVICES) node(s.script, ["start", "--profile=dev"]);
 tsx("db/migrate.ts", [], env);
 tsx("db/seed.ts", [], env);
 buildApp();
@@ -39,7 +40,7 @@ async function stopAll(code = 0) {
   if (stopping) return;
   stopping = true;
   server.kill("SIGTERM");
-  node("scripts/mail-catcher.mjs", ["stop", "--profile=dev"]);
+  for (const s of [...SERVICES].reverse()) node(s.script, ["stop", "--profile=dev"]);
   node("scripts/db.mjs", ["stop", "--profile=dev"]);
   process.exit(code);
 }

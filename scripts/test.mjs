@@ -6,13 +6,14 @@ import { spawn } from "node:child_process";
 import path from "node:path";
 import { config, root } from "./lib/config.mjs";
 import { ensureDebian, run, sleep } from "./lib/proc.mjs";
+import { SERVICES } from "./lib/services.mjs";
 import { buildApp, contentBuild, ensureDependencies, node, tsx } from "./lib/steps.mjs";
 
 const only = process.argv.find((a) => a.startsWith("--only="))?.split("=")[1]?.split(",");
 const want = (step) => !only || only.includes(step);
 const bin = (name) => path.join(root, "node_modules", ".bin", name);
-const cfg = config("test");
-const env = { ...process.env, ...cfg.env, NODE_ENV: "production", RISER_PROFILE: "test" };
+const cfg = config(process.argv.find((a) => a.startsWith("--profile="))?.split("=")[1] ?? "test");
+const env = { ...process.env, ...cfg.env, NODE_ENV: "production", RISER_PROFILE: cfg.name };
 const t0 = Date.now();
 const step = (name) => console.log(`\n=== ${name} (${Math.round((Date.now() - t0) / 1000)} s) ===`);
 
@@ -23,8 +24,8 @@ async function stopAll() {
     await new Promise((r) => server.once("exit", r));
   }
   try {
-    node("scripts/mail-catcher.mjs", ["stop", "--profile=test"]);
-    node("scripts/db.mjs", ["stop", "--profile=test"]);
+    for (const s of [...SERVICES].reverse()) node(s.script, ["stop", `--profile=${cfg.name}`]);
+    node("scripts/db.mjs", ["stop", `--profile=${cfg.name}`]);
   } catch (err) {
     console.error(err.message);
   }
@@ -64,12 +65,12 @@ try {
   }
   if (want("integration") || want("e2e") || want("faults")) {
     step("services (test profile)");
-    node("scripts/db.mjs", ["reset", "--profile=test"]);
-    node("scripts/mail-catcher.mjs", ["start", "--profile=test"]);
+    node("scripts/db.mjs", ["reset", `--profile=${cfg.name}`]);
+    for (const s of SERVICES) node(s.script, ["start", `--profile=${cfg.name}`]);
     tsx("db/migrate.ts", [], env);
     tsx("db/seed.ts", [], env);
     step("build");
-    buildApp();
+    buildApp({ distDir: cfg.env.NEXT_DIST_DIR });
     server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(cfg.appPort)], {
       cwd: root,
       env,

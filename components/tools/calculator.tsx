@@ -1,10 +1,36 @@
-import Link from "next/link";
+import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
+import { ElevationCalculator } from "./elevation";
+import { FlowTestCalculator } from "./flow-test";
+import { FrictionLossCalculator } from "./friction-loss";
+import { RoomCoverageCalculator } from "./room-coverage";
+import { SprinklerFlowCalculator } from "./sprinkler-flow";
+import { StoredWaterCalculator } from "./stored-water";
+import { SystemDemandCalculator } from "./system-demand";
+import type { CalculatorEmbedProps, CalculatorProps } from "./types";
 
-// Placeholder until the calculators land: links to the tool page.
-export function Calculator({ id }: { id: string; preset?: Record<string, unknown> }) {
-  return (
-    <p className="my-4 rounded border border-water bg-water-light p-3">
-      Try it: <Link href={`/tools/${id}`}>open the {id.replace(/-/g, " ")} calculator</Link>.
-    </p>
-  );
+export const CALCULATOR_COMPONENTS: Record<CalculatorId, (props: CalculatorProps) => React.ReactNode> = {
+  "sprinkler-flow": SprinklerFlowCalculator,
+  "friction-loss": FrictionLossCalculator,
+  elevation: ElevationCalculator,
+  "flow-test": FlowTestCalculator,
+  "stored-water": StoredWaterCalculator,
+  "room-coverage": RoomCoverageCalculator,
+  "system-demand": SystemDemandCalculator,
+};
+
+/**
+ * The MDX embed: `<Calculator id="sprinkler-flow" preset={{ kFactor: 4.9, pressurePsi: 10 }} />`.
+ * Preset keys follow the content contract ("Calculator embeds"); an unknown id renders a notice
+ * rather than breaking the lesson.
+ */
+export function Calculator({ id, preset, embedded = true }: CalculatorEmbedProps) {
+  if (!isCalculatorId(id)) {
+    return (
+      <p role="alert" className="my-4 rounded border border-caution bg-caution-light p-3 text-caution">
+        Unknown calculator “{String(id)}”.
+      </p>
+    );
+  }
+  const Component = CALCULATOR_COMPONENTS[id];
+  return <Component preset={preset} embedded={embedded} />;
 }

@@ -1,3 +1,6 @@
 import "server-only";
 // Registers every area's catalog-sync step (imported by the seed and the admin's sync action).
-export {};
+import { syncQuestionVersions } from "@/lib/quiz/sync";
+import { onCatalogSync } from "./sync";
+
+onCatalogSync(syncQuestionVersions);

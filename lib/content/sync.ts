@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { catalogCard, catalogLesson, catalogModule, catalogPath, contentSync } from "@/db/schema";
 import { loadCatalog, type Catalog } from "./load";
 
-export type SyncCounts = { modules: number; lessons: number; paths: number; cards: number; retired: number; questions: number };
+export type SyncCounts = { modules: number; lessons: number; paths: number; cards: number; retired: number; questions: number; questionVersionsAdded?: number };
 
 type SyncHook = (catalog: Catalog, now: Date) => Promise<Partial<SyncCounts>>;
 const hooks: SyncHook[] = [];

@@ -216,7 +216,7 @@ export function systemDemand(input: SystemDemandInput): SystemDemandResult {
 
   // the branch needing the most pressure at the split point governs
   const governing = heads.reduce((a, b) => (b.req.nodePsi > a.req.nodePsi ? b : a));
-  let nodePsi = governing.req.nodePsi;
+  const nodePsi = governing.req.nodePsi;
   const sprinklers: SystemDemandResult["sprinklers"] = [];
 
   for (const h of heads) {

@@ -148,6 +148,8 @@ export {
   calculatorReport,
   inputFromPreset,
   isCalculatorId,
+  convertInputUnits,
+  INPUT_QUANTITY,
   type CalculatorId,
   type CalculatorInputs,
   type CalculatorReport,

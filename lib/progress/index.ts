@@ -38,13 +38,6 @@ export async function lastCompletedLesson(userId: string): Promise<{ module: str
   return row ?? null;
 }
 
-type CompletionListener = (userId: string, moduleSlug: string) => Promise<void>;
-const listeners: CompletionListener[] = [];
-/** The quiz area listens here to complete a module when its last lesson is done after a pass. */
-export function onLessonCompleted(fn: CompletionListener) {
-  listeners.push(fn);
-}
-
 /** Marks a lesson complete; a second call changes nothing (one row per person and lesson). */
 export async function markLessonComplete(userId: string, moduleSlug: string, lessonSlug: string): Promise<string[]> {
   const [lesson] = await db
@@ -54,7 +47,9 @@ export async function markLessonComplete(userId: string, moduleSlug: string, les
     .where(and(eq(catalogModule.slug, moduleSlug), eq(catalogLesson.slug, lessonSlug), isNull(catalogLesson.retiredAt)));
   if (!lesson) throw new ApiError(404, `No lesson "${lessonSlug}" in module "${moduleSlug}".`);
   await db.insert(lessonProgress).ignore().values({ userId, lessonId: lesson.id });
-  for (const l of listeners) await l(userId, moduleSlug);
+  // The last lesson done after a passing quiz completes the module (lazy import: completion uses this module).
+  const { checkAndRecordCompletion } = await import("@/lib/completion");
+  await checkAndRecordCompletion(userId, moduleSlug);
   return (await progressByModule(userId)).get(moduleSlug)?.completed ?? [];
 }
 

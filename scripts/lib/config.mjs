@@ -13,10 +13,20 @@ const PROFILES = {
   test: { dbPort: 33071, smtpPort: 2535, mailHttpPort: 2536, s3Port: 4578, payPort: 12121, appPort: 3100 },
 };
 
+/** Extra test profiles ("test-a" … "test-h") let several people run the suite at once. */
+function profilePorts(name) {
+  if (PROFILES[name]) return PROFILES[name];
+  const m = /^test-([a-h])$/.exec(name);
+  if (!m) throw new Error(`unknown profile "${name}" (use dev, test or test-a … test-h)`);
+  const k = m[1].charCodeAt(0) - 96;
+  const base = PROFILES.test;
+  return Object.fromEntries(Object.entries(base).map(([key, port]) => [key, port + k * 10]));
+}
+
 export function profileFromArgs(argv = process.argv) {
   const arg = argv.find((a) => a.startsWith("--profile="));
   const name = arg ? arg.split("=")[1] : process.env.RISER_PROFILE || "dev";
-  if (!PROFILES[name]) throw new Error(`unknown profile "${name}" (use dev or test)`);
+  profilePorts(name);
   return name;
 }
 
@@ -28,7 +38,7 @@ function secretFor(name) {
 }
 
 export function config(name = profileFromArgs()) {
-  const p = PROFILES[name];
+  const p = profilePorts(name);
   const dir = path.join(dataRoot, name);
   const dbPassword = secretFor(`${name}-db`).slice(0, 24);
   return {
@@ -53,7 +63,22 @@ export function config(name = profileFromArgs()) {
       INSECURE_COOKIES: "1",
       JOBS_SECRET: secretFor(`${name}-jobs`),
       NEXT_TELEMETRY_DISABLED: "1",
-      ...(name === "test" ? { AUTH_RATE_LIMIT_MAX: "5", AUTH_RATE_LIMIT_WINDOW_S: "60" } : {}),
+      // sign-off evidence: the local fake S3 server (scripts/s3-fake.mjs); s3rver's fixed key pair
+      S3_ENDPOINT: `http://127.0.0.1:${p.s3Port}`,
+      S3_BUCKET: "riser-evidence",
+      S3_ACCESS_KEY_ID: "S3RVER",
+      S3_SECRET_ACCESS_KEY: "S3RVER",
+      S3_REGION: "us-east-1",
+      S3_FORCE_PATH_STYLE: "1",
+      // seat purchases: the payment provider's SDK pointed at the local fake (scripts/payments-fake.mjs)
+      STRIPE_SECRET_KEY: `sk_test_riser_local_${secretFor(`${name}-pay`).slice(0, 24)}`,
+      STRIPE_WEBHOOK_SECRET: `whsec_${secretFor(`${name}-payhook`)}`,
+      STRIPE_API_HOST: "127.0.0.1",
+      STRIPE_API_PORT: String(p.payPort),
+      STRIPE_API_PROTOCOL: "http",
+      // each profile builds into its own folder so that parallel runs do not share a build
+      NEXT_DIST_DIR: name === "dev" || name === "test" ? ".next" : `.next-${name}`,
+      ...(name.startsWith("test") ? { AUTH_RATE_LIMIT_MAX: "5", AUTH_RATE_LIMIT_WINDOW_S: "60" } : {}),
     },
   };
 }

@@ -52,14 +52,14 @@ function sourceHash() {
 }
 
 /** next build, skipped when nothing it depends on changed since the last successful build. */
-export function buildApp({ force = false } = {}) {
+export function buildApp({ force = false, distDir = ".next" } = {}) {
   contentBuild();
-  const stamp = path.join(root, ".next", "riser-source-hash");
+  const stamp = path.join(root, distDir, "riser-source-hash");
   const hash = sourceHash();
-  if (!force && existsSync(stamp) && readFileSync(stamp, "utf8") === hash && existsSync(path.join(root, ".next", "BUILD_ID"))) {
+  if (!force && existsSync(stamp) && readFileSync(stamp, "utf8") === hash && existsSync(path.join(root, distDir, "BUILD_ID"))) {
     console.log("[build] sources unchanged since the last build: reusing it");
     return;
   }
-  run(bin("next"), ["build"], { cwd: root, env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
+  run(bin("next"), ["build"], { cwd: root, env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NEXT_DIST_DIR: distDir } });
   writeFileSync(stamp, hash);
 }

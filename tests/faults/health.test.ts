@@ -4,7 +4,7 @@ import { execFileSync } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
 import { APP } from "../helpers/http";
 
-const db = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/db.mjs", cmd, "--profile=test"], { stdio: "inherit" });
+const db = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/db.mjs", cmd, `--profile=${process.env.RISER_PROFILE ?? "test"}`], { stdio: "inherit" });
 
 async function until(fn: () => Promise<boolean>, ms = 20_000) {
   const end = Date.now() + ms;

@@ -4,9 +4,9 @@ import { DEMO_PASSWORD } from "@/db/demo";
 export const APP = process.env.APP_URL ?? "http://127.0.0.1:3100";
 export const MAIL = process.env.MAIL_CATCHER_URL ?? "http://127.0.0.1:2536";
 
-let ipCounter = 10;
-/** A distinct client address per caller, so that per-IP rate limits of one test do not hit another. */
-export const freshIp = () => `10.77.${Math.floor(++ipCounter / 250)}.${ipCounter % 250}`;
+const octet = () => 1 + Math.floor(Math.random() * 254);
+/** A random client address per caller, so that per-IP rate limits of one test do not hit another. */
+export const freshIp = () => `10.${octet()}.${octet()}.${octet()}`;
 
 export type Client = { cookie: string; ip: string; fetch: (path: string, init?: RequestInit) => Promise<Response> };
 

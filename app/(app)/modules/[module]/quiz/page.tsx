@@ -1,0 +1,56 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { QuizRunner } from "@/components/quiz/quiz-runner";
+import { requireViewer } from "@/lib/access";
+import { missingForCompletion, moduleStatus } from "@/lib/completion";
+import { findModule } from "@/lib/content/load";
+import { listAttempts } from "@/lib/quiz/attempts";
+
+type Params = { params: Promise<{ module: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  return { title: `Quiz: ${findModule((await params).module)?.meta.title ?? "module"}` };
+}
+
+export default async function QuizPage({ params }: Params) {
+  const { module: slug } = await params;
+  const viewer = await requireViewer("signed-in", `/modules/${slug}/quiz`);
+  const mod = findModule(slug);
+  if (!mod) notFound();
+  const [attempts, status, missing] = await Promise.all([listAttempts(viewer, viewer.id, slug), moduleStatus(viewer.id, slug), missingForCompletion(viewer.id, slug)]);
+  const r = mod.meta.quiz;
+  return (
+    <div className="flex flex-col gap-6">
+      <nav aria-label="Breadcrumb" className="text-sm"><Link href="/modules">Modules</Link> / <Link href={`/modules/${slug}`}>{mod.meta.title}</Link></nav>
+      <header>
+        <h1 className="text-3xl">Quiz: {mod.meta.title}</h1>
+        <p className="mt-2 max-w-prose text-muted">
+          {r.questionsPerAttempt} questions drawn for you, pass mark {mod.meta.passMark}%{r.timeLimitMinutes ? `, ${r.timeLimitMinutes} minutes` : ", no time limit"}. Up to {r.attemptsPerPeriod} attempts in {r.periodHours} hours{r.waitMinutes ? `, ${r.waitMinutes} minutes apart` : ""}. Numeric answers state their unit and the tolerance accepted.
+        </p>
+      </header>
+      {status.completedAt ? <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">✓ Module complete on {status.completedAt.toISOString().slice(0, 10)}</p> : null}
+      {!status.completedAt && status.lastPassed && missing.length ? (
+        <p className="rounded border border-line bg-panel p-3">You passed the quiz. To complete the module, finish: {missing.join("; ")}.</p>
+      ) : null}
+      <QuizRunner module={slug} canStart blockedReason={null} />
+      {attempts.length ? (
+        <section aria-labelledby="past-h">
+          <h2 id="past-h" className="text-xl">Your attempts</h2>
+          <table className="mt-2 w-full max-w-xl border-collapse text-sm">
+            <thead><tr className="text-left"><th className="border-b border-line p-2">Started</th><th className="border-b border-line p-2">Score</th><th className="border-b border-line p-2">Result</th></tr></thead>
+            <tbody>
+              {attempts.map((a) => (
+                <tr key={a.id}>
+                  <td className="border-b border-line p-2 font-mono">{a.startedAt.toISOString().slice(0, 16).replace("T", " ")}</td>
+                  <td className="border-b border-line p-2 font-mono">{a.score ?? "—"}{a.score !== null ? "%" : ""}</td>
+                  <td className="border-b border-line p-2">{a.status === "open" ? "in progress" : a.passed ? "passed" : "not passed"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </section>
+      ) : null}
+    </div>
+  );
+}

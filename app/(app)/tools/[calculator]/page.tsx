@@ -1,0 +1,19 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { CalculatorPage, isCalculatorId } from "@/components/tools/calculator-page";
+import { requireViewer } from "@/lib/access";
+import { CALCULATOR_INFO } from "@/lib/hydraulics";
+
+type Params = { params: Promise<{ calculator: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  const { calculator } = await params;
+  return { title: isCalculatorId(calculator) ? CALCULATOR_INFO[calculator].title : "Calculator" };
+}
+
+export default async function ToolPage({ params }: Params) {
+  const { calculator } = await params;
+  await requireViewer("signed-in", `/tools/${calculator}`);
+  if (!isCalculatorId(calculator)) notFound();
+  return <CalculatorPage id={calculator} />;
+}

@@ -1,0 +1,9 @@
+import { json, readJson, route } from "@/lib/api";
+import { saveAnswers } from "@/lib/quiz/attempts";
+import { answersBody } from "@/lib/quiz/input";
+
+/** PUT { answers: [{ position, answer }] } → saved as the person goes (all or nothing). */
+export const PUT = route<{ id: string }>("signed-in", async ({ req, viewer, params }) => {
+  const { answers } = await readJson(req, answersBody);
+  return json(await saveAnswers(viewer, params.id, answers));
+});

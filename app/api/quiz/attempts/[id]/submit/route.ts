@@ -1,0 +1,10 @@
+import { json, readJson, route } from "@/lib/api";
+import { submitAttempt } from "@/lib/quiz/attempts";
+import { answersBody } from "@/lib/quiz/input";
+
+/** POST { answers? } → graded on the server once; repeats return the same result. */
+export const POST = route<{ id: string }>("signed-in", async ({ req, viewer, params }) => {
+  const hasBody = req.headers.get("content-length") !== "0" && req.headers.get("content-type")?.includes("json");
+  const { answers } = hasBody ? await readJson(req, answersBody.partial()) : { answers: [] };
+  return json(await submitAttempt(viewer, params.id, answers ?? []));
+});

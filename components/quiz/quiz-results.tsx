@@ -1,0 +1,38 @@
+"use client";
+import Link from "next/link";
+import { Button } from "@/components/ui/button";
+import type { GradedAttempt } from "./types";
+
+export function QuizResults({ result, onRetry }: { result: GradedAttempt; onRetry: () => void }) {
+  const review = [...new Map(result.feedback.filter((f) => !f.correct).map((f) => [f.lesson.href, f.lesson])).values()];
+  return (
+    <section aria-labelledby="result-h" className="flex flex-col gap-4" data-testid="quiz-result">
+      <div className={`rounded border-l-4 p-4 ${result.passed ? "border-pass bg-pass-light" : "border-caution bg-caution-light"}`}>
+        <h2 id="result-h" className="text-2xl">{result.passed ? "Passed" : "Not passed yet"}: {result.score}%</h2>
+        <p className="mt-1">
+          {result.correctCount} of {result.total} correct; the pass mark is {result.passMark}%.
+          {result.lateGraded ? " The time limit ran out, so the answers saved before it were graded." : ""}
+        </p>
+      </div>
+      {review.length ? (
+        <div className="rounded border border-line bg-panel p-4">
+          <h3 className="text-lg">What to review</h3>
+          <ul className="mt-2 list-disc pl-6">{review.map((l) => <li key={l.href}><Link href={l.href}>{l.title}</Link></li>)}</ul>
+        </div>
+      ) : null}
+      <ol className="flex flex-col gap-3">
+        {result.feedback.map((f, i) => (
+          <li key={f.position} className={`rounded border p-4 ${f.correct ? "border-pass/50 bg-panel" : "border-caution/50 bg-panel"}`}>
+            <p className="font-mono text-sm text-muted">Question {i + 1} · <span className={f.correct ? "text-pass" : "text-caution"}>{f.correct ? "correct" : "wrong"}</span></p>
+            <p className="mt-1 font-bold">{f.prompt}</p>
+            <p className="mt-2 text-sm">Your answer: {f.yourAnswer}</p>
+            {!f.correct ? <p className="text-sm">Correct answer: {f.correctAnswer}</p> : null}
+            <p className="mt-2">{f.explanation}</p>
+            <p className="mt-1 text-sm">From the lesson <Link href={f.lesson.href}>{f.lesson.title}</Link></p>
+          </li>
+        ))}
+      </ol>
+      {!result.passed ? <div><Button variant="secondary" onClick={onRetry}>Back to the quiz page</Button></div> : null}
+    </section>
+  );
+}

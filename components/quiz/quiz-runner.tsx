@@ -1,0 +1,171 @@
+"use client";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useCallback, useEffect, useRef, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { postJson } from "@/lib/fetcher";
+import { QuestionField } from "./question-field";
+import { QuizResults } from "./quiz-results";
+import type { AnswerValue, AttemptView, GradedAttempt, OpenAttempt } from "./types";
+
+function useCountdown(deadline: string | null) {
+  const [left, setLeft] = useState<number | null>(null);
+  useEffect(() => {
+    if (!deadline) return;
+    const tick = () => setLeft(Math.max(0, new Date(deadline).getTime() - Date.now()));
+    tick();
+    const t = setInterval(tick, 1000);
+    return () => clearInterval(t);
+  }, [deadline]);
+  return left;
+}
+
+const isAnswered = (v: AnswerValue | undefined) => v !== undefined && v !== null && !(Array.isArray(v) && v.length === 0);
+
+export function QuizRunner({ module, canStart, blockedReason }: { module: string; canStart: boolean; blockedReason: string | null }) {
+  const router = useRouter();
+  const [attempt, setAttempt] = useState<AttemptView | null>(null);
+  const [answers, setAnswers] = useState<Record<string, AnswerValue>>({});
+  const [current, setCurrent] = useState(0);
+  const [problem, setProblem] = useState<string | null>(null);
+  const [saveState, setSaveState] = useState<"idle" | "saving" | "saved" | "offline">("idle");
+  const [busy, setBusy] = useState(false);
+  const pending = useRef<Map<number, AnswerValue>>(new Map());
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const dialog = useRef<HTMLDialogElement>(null);
+  const open = attempt?.status === "open" ? (attempt as OpenAttempt) : null;
+  const left = useCountdown(open?.deadlineAt ?? null);
+
+  const flush = useCallback(async () => {
+    if (!open || pending.current.size === 0) return true;
+    const batch = [...pending.current.entries()].map(([position, answer]) => ({ position, answer }));
+    pending.current.clear();
+    setSaveState("saving");
+    const res = await postJson(`/api/quiz/attempts/${open.id}/answers`, { answers: batch }, "PUT");
+    if (!res.ok) {
+      if (res.status === 0) {
+        for (const b of batch) if (!pending.current.has(b.position)) pending.current.set(b.position, b.answer);
+        setSaveState("offline");
+        return false;
+      }
+      setProblem(res.error);
+      if (res.status === 409) router.refresh();
+      return false;
+    }
+    setSaveState("saved");
+    return true;
+  }, [open, router]);
+
+  function answer(position: number, value: AnswerValue) {
+    setAnswers((a) => ({ ...a, [position]: value }));
+    pending.current.set(position, value);
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(flush, 400);
+  }
+
+  async function start() {
+    setBusy(true);
+    setProblem(null);
+    const res = await postJson<AttemptView>("/api/quiz/attempts", { module });
+    setBusy(false);
+    if (!res.ok) return setProblem(res.error);
+    setAttempt(res.data);
+    if (res.data.status === "open") setAnswers(res.data.answers);
+    setCurrent(0);
+  }
+
+  const submit = useCallback(async () => {
+    if (!open) return;
+    dialog.current?.close();
+    setBusy(true);
+    await flush();
+    const res = await postJson<GradedAttempt>(`/api/quiz/attempts/${open.id}/submit`, {});
+    setBusy(false);
+    if (!res.ok) {
+      setProblem(res.error);
+      if (res.status === 409) {
+        const again = await fetch(`/api/quiz/attempts/${open.id}`).then((r) => r.json());
+        setAttempt(again);
+      }
+      return;
+    }
+    setAttempt(res.data);
+    router.refresh();
+    window.scrollTo({ top: 0 });
+  }, [open, flush, router]);
+
+  useEffect(() => {
+    if (left === 0 && open) void submit();
+  }, [left, open, submit]);
+
+  useEffect(() => {
+    const retry = () => saveState === "offline" && void flush();
+    window.addEventListener("online", retry);
+    return () => window.removeEventListener("online", retry);
+  }, [saveState, flush]);
+
+  if (attempt?.status === "graded") return <QuizResults result={attempt} onRetry={() => setAttempt(null)} />;
+
+  if (!open) {
+    return (
+      <div className="flex flex-col gap-3">
+        {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
+        {blockedReason ? <p className="rounded border border-line bg-panel p-3">{blockedReason}</p> : null}
+        <div>
+          <Button onClick={start} disabled={busy || !canStart}>{busy ? "Preparing…" : "Start the quiz"}</Button>
+        </div>
+      </div>
+    );
+  }
+
+  const total = open.questions.length;
+  const answered = open.questions.filter((q) => isAnswered(answers[q.position])).length;
+  const mins = left !== null ? Math.floor(left / 60000) : null;
+  const secs = left !== null ? Math.floor((left % 60000) / 1000) : null;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="sticky top-0 z-10 flex flex-wrap items-center gap-4 rounded border border-line bg-panel p-3">
+        <p aria-live="polite" data-testid="quiz-progress">Answered {answered} of {total}</p>
+        <div className="h-2 min-w-24 flex-1 rounded bg-line" role="progressbar" aria-label="Questions answered" aria-valuemin={0} aria-valuemax={total} aria-valuenow={answered}>
+          <div className="h-2 rounded bg-water" style={{ width: `${(answered / total) * 100}%` }} />
+        </div>
+        {left !== null ? (
+          <p className={`font-mono ${left < 120000 ? "font-bold text-caution" : ""}`} role="timer" aria-label="Time left">
+            {String(mins).padStart(2, "0")}:{String(secs).padStart(2, "0")} left
+          </p>
+        ) : null}
+        <p className="text-sm text-muted" aria-live="polite">
+          {saveState === "saving" ? "Saving…" : saveState === "saved" ? "Answers saved" : saveState === "offline" ? "Offline — answers kept here, saved when back online" : ""}
+        </p>
+      </div>
+      {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
+      <ol className="flex flex-col gap-4">
+        {open.questions.map((q, i) => (
+          <li key={q.position} className={`${i === current ? "block" : "hidden"} rounded border border-line bg-panel p-4 md:block`} aria-label={`Question ${i + 1} of ${total}`}>
+            <p className="mb-2 font-mono text-sm text-muted">Question {i + 1} of {total}</p>
+            <QuestionField q={q} value={answers[q.position] ?? null} onChange={(v) => answer(q.position, v)} />
+          </li>
+        ))}
+      </ol>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <div className="flex gap-2 md:hidden">
+          <Button variant="secondary" onClick={() => setCurrent((c) => Math.max(0, c - 1))} disabled={current === 0}>Previous</Button>
+          <Button variant="secondary" onClick={() => setCurrent((c) => Math.min(total - 1, c + 1))} disabled={current === total - 1}>Next</Button>
+        </div>
+        <Button onClick={() => dialog.current?.showModal()} disabled={busy}>Submit answers</Button>
+      </div>
+      <dialog ref={dialog} aria-labelledby="confirm-title" className="max-w-md rounded border border-ink/30 p-5 backdrop:bg-ink/50">
+        <h2 id="confirm-title" className="text-xl">Submit your answers?</h2>
+        <p className="mt-2">
+          You answered {answered} of {total} questions.{answered < total ? ` ${total - answered} unanswered will count as wrong.` : ""} You cannot change answers after submitting.
+        </p>
+        <div className="mt-4 flex gap-3">
+          <Button onClick={submit}>Submit now</Button>
+          <Button variant="secondary" onClick={() => dialog.current?.close()}>Keep working</Button>
+        </div>
+      </dialog>
+      <p className="text-sm text-muted"><Link href={`/modules/${module}`}>Back to the module</Link> — your answers are saved as you go.</p>
+    </div>
+  );
+}

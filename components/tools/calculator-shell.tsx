@@ -1,0 +1,146 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useEffect, useMemo, type ReactNode } from "react";
+import { FormProvider, useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
+import type { z } from "zod";
+import {
+  CALCULATOR_CAUTION_TEXT,
+  CALCULATOR_INFO,
+  calculatorReport,
+  convertInputUnits,
+  type CalculatorId,
+  type CalculatorReport,
+  type Units,
+} from "@/lib/hydraulics";
+import { UnitSwitch } from "./fields";
+import { PdfButton } from "./pdf-button";
+import { ReportView } from "./report-view";
+import { SupplyChart } from "./supply-chart";
+
+export interface CalculatorState<TValues extends FieldValues> {
+  form: UseFormReturn<TValues>;
+  report: CalculatorReport | null;
+  input: unknown;
+}
+
+/**
+ * One calculator's form: react-hook-form with the zod schema as resolver. Every change re-validates
+ * the whole form (so an error between two fields shows on the right one) and recomputes the report
+ * when the inputs are valid.
+ */
+export function useCalculator<TValues extends FieldValues>(
+  id: CalculatorId,
+  schema: z.ZodType<unknown, TValues>,
+  defaultValues: TValues,
+): CalculatorState<TValues> {
+  const form = useForm<TValues>({
+    resolver: zodResolver(schema as never) as unknown as Resolver<TValues>,
+    defaultValues: defaultValues as DefaultValues<TValues>,
+    mode: "onChange",
+  });
+  const values = useWatch({ control: form.control });
+  const key = JSON.stringify(values);
+  const { report, input } = useMemo(() => {
+    const parsed = schema.safeParse(JSON.parse(key));
+    if (!parsed.success) return { report: null, input: null };
+    try {
+      return { report: calculatorReport(id, parsed.data), input: parsed.data };
+    } catch {
+      return { report: null, input: null };
+    }
+  }, [id, schema, key]);
+  const { trigger, formState } = form;
+  useEffect(() => {
+    if (formState.isDirty || formState.submitCount > 0) void trigger();
+  }, [key, trigger, formState.isDirty, formState.submitCount]);
+  return { form, report, input };
+}
+
+/** every current field error as a list, so none can hide in a collapsed section */
+function ErrorList({ errors }: { errors: FieldErrors }) {
+  const messages: string[] = [];
+  const walk = (node: unknown) => {
+    if (!node || typeof node !== "object") return;
+    const m = (node as { message?: unknown }).message;
+    if (typeof m === "string") messages.push(m);
+    for (const [k, v] of Object.entries(node)) if (k !== "ref" && k !== "message" && k !== "type") walk(v);
+  };
+  walk(errors);
+  const unique = [...new Set(messages)];
+  if (!unique.length) return null;
+  return (
+    <ul className="mt-1 list-disc pl-5 text-sm">
+      {unique.map((m) => (
+        <li key={m}>{m}</li>
+      ))}
+    </ul>
+  );
+}
+
+/** title, unit switch, the fields, then the worked result, chart and PDF button */
+export function CalculatorShell<TValues extends FieldValues>({
+  id,
+  state,
+  children,
+  embedded,
+}: {
+  id: CalculatorId;
+  state: CalculatorState<TValues>;
+  children: ReactNode;
+  embedded?: boolean;
+}) {
+  const { form, report, input } = state;
+  const units = (useWatch({ control: form.control, name: "units" as never }) as unknown as Units | undefined) ?? "us";
+  const info = CALCULATOR_INFO[id];
+
+  function switchUnits(next: Units) {
+    if (next === units) return;
+    form.reset(convertInputUnits(form.getValues(), units, next) as TValues, { keepDefaultValues: true });
+    form.setValue("units" as never, next as never, { shouldDirty: true });
+  }
+
+  return (
+    <FormProvider {...form}>
+      <section className={`my-6 rounded border border-line bg-paper p-4 text-ink ${embedded ? "" : "sm:p-6"}`} data-calculator={id}>
+        {embedded ? (
+          <>
+            <h3 className="text-xl font-bold">{info.title}</h3>
+            <p className="text-muted">{info.summary}</p>
+          </>
+        ) : null}
+        <div className={`${embedded ? "mt-4 " : ""}grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]`}>
+          <form
+            noValidate
+            className="flex flex-col gap-4"
+            aria-label={`${info.title} inputs`}
+            onSubmit={form.handleSubmit(() => undefined)}
+          >
+            <UnitSwitch units={units} onSwitch={switchUnits} />
+            {children}
+            <button type="submit" className="sr-only">
+              Calculate
+            </button>
+          </form>
+          <div className="flex flex-col gap-4">
+            {report ? (
+              <>
+                {report.chart ? <SupplyChart chart={report.chart} verdict={report.verdict?.result} /> : null}
+                <ReportView report={report} />
+                <PdfButton id={id} input={input} />
+              </>
+            ) : (
+              <>
+                <div role="status" className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">
+                  <p>Fix the highlighted fields to see the result.</p>
+                  <ErrorList errors={form.formState.errors} />
+                </div>
+                <p className="text-sm text-muted">{CALCULATOR_CAUTION_TEXT}</p>
+              </>
+            )}
+          </div>
+        </div>
+      </section>
+    </FormProvider>
+  );
+}

@@ -1,0 +1,117 @@
+"use client";
+
+import { useId, type SelectHTMLAttributes } from "react";
+import { get, useFormContext } from "react-hook-form";
+import { Field } from "@/components/ui/field";
+
+/** a number typed as text (so a typo shows as a field error rather than vanishing), wired to the form */
+export function NumberField({
+  name,
+  label,
+  unit,
+  hint,
+  optional,
+}: {
+  name: string;
+  label: string;
+  unit?: string;
+  hint?: string;
+  optional?: boolean;
+}) {
+  const {
+    register,
+    formState: { errors },
+  } = useFormContext();
+  const error = (get(errors, name) as { message?: string } | undefined)?.message;
+  return (
+    <Field
+      label={`${label}${unit ? ` (${unit})` : ""}${optional ? " — optional" : ""}`}
+      hint={hint}
+      error={error}
+      inputMode="decimal"
+      autoComplete="off"
+      spellCheck={false}
+      className="font-mono"
+      data-field={name}
+      {...register(name)}
+    />
+  );
+}
+
+export function SelectField({
+  name,
+  label,
+  options,
+  hint,
+  ...rest
+}: { name: string; label: string; options: { value: string; label: string }[]; hint?: string } & SelectHTMLAttributes<HTMLSelectElement>) {
+  const {
+    register,
+    formState: { errors },
+  } = useFormContext();
+  const id = useId();
+  const error = (get(errors, name) as { message?: string } | undefined)?.message;
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-bold">
+        {label}
+      </label>
+      {hint ? (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      ) : null}
+      <select
+        id={id}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={[error ? `${id}-error` : null, hint ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined}
+        className={`min-h-11 rounded border bg-panel px-3 py-2 text-ink ${error ? "border-caution" : "border-ink/40"}`}
+        data-field={name}
+        {...rest}
+        {...register(name)}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-bold text-caution" role="alert">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+export function TextField({ name, label }: { name: string; label: string }) {
+  const {
+    register,
+    formState: { errors },
+  } = useFormContext();
+  return <Field label={label} error={(get(errors, name) as { message?: string } | undefined)?.message} autoComplete="off" data-field={name} {...register(name)} />;
+}
+
+/** US / SI switch: converts what is typed when flipped */
+export function UnitSwitch({ units, onSwitch }: { units: "us" | "si"; onSwitch: (next: "us" | "si") => void }) {
+  const name = useId();
+  const options = [
+    { value: "us" as const, label: "US (psi, gpm, ft)" },
+    { value: "si" as const, label: "SI (bar, L/min, m)" },
+  ];
+  return (
+    <fieldset className="flex flex-wrap items-center gap-3">
+      <legend className="mb-1 font-bold">Units</legend>
+      {options.map((o) => (
+        <label
+          key={o.value}
+          className={`inline-flex min-h-11 cursor-pointer items-center gap-2 rounded border px-3 py-2 ${units === o.value ? "border-water bg-water-light" : "border-line bg-panel"}`}
+        >
+          <input type="radio" name={name} value={o.value} checked={units === o.value} onChange={() => onSwitch(o.value)} />
+          {o.label}
+        </label>
+      ))}
+    </fieldset>
+  );
+}

@@ -1,0 +1,35 @@
+"use client";
+
+import { useMemo } from "react";
+import { useWatch } from "react-hook-form";
+import { inputFromPreset } from "@/lib/hydraulics";
+import { CalculatorShell, useCalculator } from "./calculator-shell";
+import { NumberField, SelectField } from "./fields";
+import { flatFormValues, sprinklerFlowSchema } from "./schemas";
+import { unitLabels } from "./unit-labels";
+import type { CalculatorProps } from "./types";
+
+export function SprinklerFlowCalculator({ preset, embedded }: CalculatorProps) {
+  const defaults = useMemo(() => flatFormValues("sprinkler-flow", inputFromPreset("sprinkler-flow", preset)), [preset]);
+  const state = useCalculator("sprinkler-flow", sprinklerFlowSchema, defaults);
+  const [units, solveFor] = useWatch({ control: state.form.control, name: ["units", "solveFor"] });
+  const u = unitLabels(units);
+  return (
+    <CalculatorShell id="sprinkler-flow" state={state} embedded={embedded}>
+      <SelectField
+        name="solveFor"
+        label="Find"
+        options={[
+          { value: "flow", label: "Flow at a pressure" },
+          { value: "pressure", label: "Pressure for a flow" },
+        ]}
+      />
+      <NumberField name="k" label="K-factor" unit={u.k} hint="From the sprinkler's listing." />
+      {solveFor === "pressure" ? (
+        <NumberField name="flow" label="Flow wanted" unit={u.flow} hint="The listed flow for the coverage area used." />
+      ) : (
+        <NumberField name="pressure" label="Pressure at the sprinkler" unit={u.pressure} />
+      )}
+    </CalculatorShell>
+  );
+}

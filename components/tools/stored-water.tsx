@@ -1,0 +1,22 @@
+"use client";
+
+import { useMemo } from "react";
+import { useWatch } from "react-hook-form";
+import { inputFromPreset } from "@/lib/hydraulics";
+import { CalculatorShell, useCalculator } from "./calculator-shell";
+import { NumberField } from "./fields";
+import { flatFormValues, storedWaterSchema } from "./schemas";
+import { unitLabels } from "./unit-labels";
+import type { CalculatorProps } from "./types";
+
+export function StoredWaterCalculator({ preset, embedded }: CalculatorProps) {
+  const defaults = useMemo(() => flatFormValues("stored-water", inputFromPreset("stored-water", preset)), [preset]);
+  const state = useCalculator("stored-water", storedWaterSchema, defaults);
+  const units = useWatch({ control: state.form.control, name: "units" });
+  return (
+    <CalculatorShell id="stored-water" state={state} embedded={embedded}>
+      <NumberField name="flow" label="Design flow" unit={unitLabels(units).flow} hint="The system demand's flow at the tank." />
+      <NumberField name="duration" label="Design duration" unit="min" hint="Set by the adopted code for the dwelling." />
+    </CalculatorShell>
+  );
+}

@@ -1,0 +1,301 @@
+import "server-only";
+import { randomInt, randomUUID } from "node:crypto";
+import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { questionVersion, quizAttempt, quizAttemptItem, user } from "@/db/schema";
+import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
+import { ApiError } from "@/lib/api";
+import { checkAndRecordCompletion } from "@/lib/completion";
+import { findModule } from "@/lib/content/load";
+import type { Question } from "@/lib/content/schema";
+import { answerProblem, correctAnswerText, drawAttempt, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
+
+/** Answers sent after the time limit plus this grace are refused; the attempt is graded as saved. */
+const GRACE_MS = 15_000;
+
+type AttemptRow = typeof quizAttempt.$inferSelect;
+type ItemRow = typeof quizAttemptItem.$inferSelect & { body: Question };
+
+function rulesOf(moduleSlug: string) {
+  const mod = findModule(moduleSlug);
+  if (!mod) throw new ApiError(404, `No module "${moduleSlug}".`);
+  return mod;
+}
+
+async function loadItems(attemptId: string, tx: Tx | typeof db = db): Promise<ItemRow[]> {
+  const rows = await tx
+    .select({ item: quizAttemptItem, body: questionVersion.body })
+    .from(quizAttemptItem)
+    .innerJoin(questionVersion, eq(questionVersion.id, quizAttemptItem.questionVersionId))
+    .where(eq(quizAttemptItem.attemptId, attemptId))
+    .orderBy(asc(quizAttemptItem.position));
+  return rows.map((r) => ({ ...r.item, body: r.body as Question }));
+}
+
+const pastDeadline = (a: AttemptRow, now = Date.now()) => a.deadlineAt !== null && now > a.deadlineAt.getTime();
+
+/** The attempt as the learner sees it while it is open: questions and saved answers, nothing more. */
+function openView(a: AttemptRow, items: ItemRow[]) {
+  return {
+    id: a.id,
+    module: a.moduleSlug,
+    status: "open" as const,
+    startedAt: a.startedAt.toISOString(),
+    deadlineAt: a.deadlineAt?.toISOString() ?? null,
+    passMark: a.passMark,
+    questions: items.map((i) => publicItem(i.position, { question: i.body, optionOrder: i.optionOrder, params: i.params })),
+    answers: Object.fromEntries(items.filter((i) => i.answer !== null).map((i) => [i.position, i.answer as Answer])),
+  };
+}
+
+function answerText(item: ItemRow): string {
+  const q = item.body;
+  const a = item.answer as Answer;
+  if (a === null || a === undefined) return "No answer";
+  if (q.type === "single") return q.options.find((o) => o.id === a)?.text ?? String(a);
+  if (q.type === "multiple" && Array.isArray(a)) return q.options.filter((o) => a.includes(o.id)).map((o) => o.text).join("; ") || "No answer";
+  if (q.type === "truefalse") return a ? "True" : "False";
+  return `${a} ${"unit" in q ? q.unit : ""}`.trim();
+}
+
+/** The graded attempt with per-question feedback (only after submit). */
+function resultView(a: AttemptRow, items: ItemRow[]) {
+  const mod = findModule(a.moduleSlug);
+  return {
+    id: a.id,
+    module: a.moduleSlug,
+    status: "graded" as const,
+    startedAt: a.startedAt.toISOString(),
+    submittedAt: a.submittedAt?.toISOString() ?? null,
+    lateGraded: a.lateGraded,
+    score: a.score,
+    passed: a.passed,
+    passMark: a.passMark,
+    correctCount: items.filter((i) => i.correct).length,
+    total: items.length,
+    feedback: items.map((i) => {
+      const lesson = mod?.lessons.find((l) => l.slug === i.body.lesson);
+      return {
+        position: i.position,
+        id: i.body.id,
+        prompt: i.body.type === "parametric" ? fillPrompt(i.body.prompt, { ...i.body.fixed, ...(i.params ?? {}) }) : i.body.prompt,
+        yourAnswer: answerText(i),
+        correct: !!i.correct,
+        correctAnswer: correctAnswerText({ question: i.body, params: i.params }),
+        explanation: i.body.explanation,
+        lesson: { slug: i.body.lesson, title: lesson?.meta.title ?? i.body.lesson, href: `/modules/${a.moduleSlug}/${i.body.lesson}` },
+      };
+    }),
+  };
+}
+
+export type AttemptView = ReturnType<typeof openView> | ReturnType<typeof resultView>;
+
+async function getAttemptRow(id: string, tx: Tx | typeof db = db, lock = false): Promise<AttemptRow> {
+  const q = tx.select().from(quizAttempt).where(eq(quizAttempt.id, id));
+  const [row] = lock ? await q.for("update") : await q;
+  if (!row) throw new ApiError(404, "No such attempt.");
+  return row;
+}
+
+function assertOwner(viewer: Viewer, a: AttemptRow) {
+  if (a.userId !== viewer.id) throw new AccessError(403, "This attempt belongs to someone else.");
+}
+
+/** Grades inside the caller's transaction (attempt row locked). Returns without change if graded. */
+async function gradeLocked(tx: Tx, a: AttemptRow, late: boolean): Promise<AttemptRow> {
+  if (a.status === "graded") return a;
+  const items = await loadItems(a.id, tx);
+  let correct = 0;
+  for (const i of items) {
+    const ok = gradeItem({ question: i.body, params: i.params }, (i.answer ?? null) as Answer);
+    if (ok) correct++;
+    await tx.update(quizAttemptItem).set({ correct: ok }).where(and(eq(quizAttemptItem.attemptId, a.id), eq(quizAttemptItem.position, i.position)));
+  }
+  const s = score(correct, items.length);
+  const graded = { status: "graded", score: s, passed: s >= a.passMark, submittedAt: new Date(), lateGraded: late };
+  await tx.update(quizAttempt).set(graded).where(eq(quizAttempt.id, a.id));
+  return { ...a, ...graded };
+}
+
+/** Starts an attempt (or resumes the open one) under the module's rules. */
+export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<AttemptView> {
+  const mod = rulesOf(moduleSlug);
+  const rules = mod.meta.quiz;
+  const now = Date.now();
+  let expiredToComplete = false;
+  const id = await db.transaction(async (tx) => {
+    // One start at a time per person: lock their user row.
+    await tx.select({ id: user.id }).from(user).where(eq(user.id, viewer.id)).for("update");
+    const open = await tx
+      .select()
+      .from(quizAttempt)
+      .where(and(eq(quizAttempt.userId, viewer.id), eq(quizAttempt.moduleSlug, moduleSlug), eq(quizAttempt.status, "open")));
+    for (const a of open) {
+      if (!pastDeadline(a, now)) return a.id;
+      const g = await gradeLocked(tx, a, true);
+      if (g.passed) expiredToComplete = true;
+    }
+    const since = new Date(now - rules.periodHours * 3_600_000);
+    const recent = await tx
+      .select({ startedAt: quizAttempt.startedAt, submittedAt: quizAttempt.submittedAt })
+      .from(quizAttempt)
+      .where(and(eq(quizAttempt.userId, viewer.id), eq(quizAttempt.moduleSlug, moduleSlug), gte(quizAttempt.startedAt, since)))
+      .orderBy(asc(quizAttempt.startedAt));
+    if (recent.length >= rules.attemptsPerPeriod) {
+      const next = new Date(recent[0]!.startedAt.getTime() + rules.periodHours * 3_600_000);
+      throw new ApiError(409, `You have used ${rules.attemptsPerPeriod} attempts in ${rules.periodHours} hours. Your next attempt opens at ${next.toISOString().slice(0, 16).replace("T", " ")} UTC.`);
+    }
+    const last = recent.at(-1)?.submittedAt;
+    if (last && rules.waitMinutes > 0 && now < last.getTime() + rules.waitMinutes * 60_000) {
+      const mins = Math.ceil((last.getTime() + rules.waitMinutes * 60_000 - now) / 60_000);
+      throw new ApiError(409, `Review the lessons first: the next attempt opens in ${mins} minute${mins === 1 ? "" : "s"}.`);
+    }
+    const versions = await tx
+      .select({ id: questionVersion.id, questionId: questionVersion.questionId })
+      .from(questionVersion)
+      .where(and(eq(questionVersion.moduleSlug, moduleSlug), isNull(questionVersion.retiredAt)));
+    const versionOf = new Map(versions.map((v) => [v.questionId, v.id]));
+    const bank = mod.questions.filter((q) => versionOf.has(q.id));
+    if (bank.length === 0) throw new ApiError(409, "This module's quiz is not ready yet.");
+    const seed = randomInt(0, 2 ** 31);
+    const drawn = drawAttempt(bank, rules.questionsPerAttempt, seed);
+    const attemptId = randomUUID();
+    await tx.insert(quizAttempt).values({
+      id: attemptId,
+      userId: viewer.id,
+      organizationId: viewer.organizationId,
+      moduleSlug,
+      seed,
+      status: "open",
+      startedAt: new Date(now),
+      deadlineAt: rules.timeLimitMinutes ? new Date(now + rules.timeLimitMinutes * 60_000) : null,
+      passMark: mod.meta.passMark,
+    });
+    await tx.insert(quizAttemptItem).values(
+      drawn.map((d, i) => ({ attemptId, position: i + 1, questionVersionId: versionOf.get(d.question.id)!, optionOrder: d.optionOrder, params: d.params, answer: null })),
+    );
+    return attemptId;
+  });
+  if (expiredToComplete) await checkAndRecordCompletion(viewer.id, moduleSlug);
+  return viewAttempt(viewer, id);
+}
+
+/** An attempt as its viewer may see it: open → questions only; graded → results. */
+export async function viewAttempt(viewer: Viewer, id: string): Promise<AttemptView> {
+  const a = await getAttemptRow(id);
+  if (a.userId !== viewer.id && !canManageOrganization(viewer, a.organizationId)) {
+    throw new AccessError(403, "This attempt belongs to someone else.");
+  }
+  const items = await loadItems(id);
+  if (a.status === "graded") return resultView(a, items);
+  if (a.userId !== viewer.id) return { ...openView(a, items), questions: [], answers: {} };
+  return openView(a, items);
+}
+
+export type AnswerInput = { position: number; answer: Answer };
+
+function validateAnswers(items: ItemRow[], answers: AnswerInput[]) {
+  const byPos = new Map(items.map((i) => [i.position, i]));
+  const fieldErrors: Record<string, string[]> = {};
+  for (const a of answers) {
+    const item = byPos.get(a.position);
+    if (!item) {
+      fieldErrors[`answers.${a.position}`] = ["this question is not part of the attempt"];
+      continue;
+    }
+    const problem = answerProblem({ question: item.body, optionOrder: item.optionOrder }, a.answer);
+    if (problem) fieldErrors[`answers.${a.position}`] = [problem];
+  }
+  if (Object.keys(fieldErrors).length) throw new ApiError(400, "Some answers do not fit their questions; nothing was saved.", fieldErrors);
+}
+
+/** Saves answers as the person goes; all or nothing. */
+export async function saveAnswers(viewer: Viewer, id: string, answers: AnswerInput[]): Promise<{ saved: number }> {
+  let gradedLate = false;
+  const result = await db.transaction(async (tx) => {
+    const a = await getAttemptRow(id, tx, true);
+    assertOwner(viewer, a);
+    if (a.status === "graded") throw new ApiError(409, "This attempt is already submitted.");
+    if (a.deadlineAt && Date.now() > a.deadlineAt.getTime() + GRACE_MS) {
+      await gradeLocked(tx, a, true);
+      gradedLate = true;
+      return { saved: 0 };
+    }
+    const items = await loadItems(id, tx);
+    validateAnswers(items, answers);
+    for (const ans of answers) {
+      await tx
+        .update(quizAttemptItem)
+        .set({ answer: ans.answer })
+        .where(and(eq(quizAttemptItem.attemptId, id), eq(quizAttemptItem.position, ans.position)));
+    }
+    return { saved: answers.length };
+  });
+  if (gradedLate) {
+    await afterGrading(viewer.id, id);
+    throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit.");
+  }
+  return result;
+}
+
+async function afterGrading(userId: string, id: string) {
+  const a = await getAttemptRow(id);
+  if (a.passed) await checkAndRecordCompletion(userId, a.moduleSlug);
+}
+
+/**
+ * Grades the attempt on the server, once: the attempt row is locked, so concurrent or repeated
+ * submits wait for the first and then return the same stored result.
+ */
+export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = []): Promise<AttemptView> {
+  let refusedLate = false;
+  await db.transaction(async (tx) => {
+    const a = await getAttemptRow(id, tx, true);
+    assertOwner(viewer, a);
+    if (a.status === "graded") return;
+    const late = a.deadlineAt !== null && Date.now() > a.deadlineAt.getTime() + GRACE_MS;
+    if (finalAnswers.length && !late) {
+      const items = await loadItems(id, tx);
+      validateAnswers(items, finalAnswers);
+      for (const ans of finalAnswers) {
+        await tx
+          .update(quizAttemptItem)
+          .set({ answer: ans.answer })
+          .where(and(eq(quizAttemptItem.attemptId, id), eq(quizAttemptItem.position, ans.position)));
+      }
+    }
+    if (late && finalAnswers.length) refusedLate = true;
+    await gradeLocked(tx, a, late);
+  });
+  await afterGrading(viewer.id, id);
+  if (refusedLate) throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
+  return viewAttempt(viewer, id);
+}
+
+/** Attempts of one person (own, or a managed person's), newest first. */
+export async function listAttempts(viewer: Viewer, personId: string, moduleSlug?: string) {
+  if (personId !== viewer.id) {
+    const [p] = await db.select({ org: user.organizationId }).from(user).where(eq(user.id, personId));
+    if (!p) throw new ApiError(404, "No such person.");
+    if (!canManageOrganization(viewer, p.org)) throw new AccessError(403, "You cannot see this person's attempts.");
+  }
+  const rows = await db
+    .select({ id: quizAttempt.id, module: quizAttempt.moduleSlug, status: quizAttempt.status, startedAt: quizAttempt.startedAt, submittedAt: quizAttempt.submittedAt, score: quizAttempt.score, passed: quizAttempt.passed })
+    .from(quizAttempt)
+    .where(and(eq(quizAttempt.userId, personId), moduleSlug ? eq(quizAttempt.moduleSlug, moduleSlug) : undefined))
+    .orderBy(desc(quizAttempt.startedAt))
+    .limit(200);
+  return rows;
+}
+
+/** Attempts of everyone in an organization (the team board's source), managers and admins only. */
+export async function listOrganizationAttempts(viewer: Viewer, organizationId: string, moduleSlug?: string) {
+  if (!canManageOrganization(viewer, organizationId)) throw new AccessError(403, "That belongs to another organization.");
+  return db
+    .select({ id: quizAttempt.id, userId: quizAttempt.userId, module: quizAttempt.moduleSlug, status: quizAttempt.status, submittedAt: quizAttempt.submittedAt, score: quizAttempt.score, passed: quizAttempt.passed })
+    .from(quizAttempt)
+    .where(and(eq(quizAttempt.organizationId, organizationId), moduleSlug ? eq(quizAttempt.moduleSlug, moduleSlug) : undefined, inArray(quizAttempt.status, ["open", "graded"])))
+    .orderBy(desc(quizAttempt.startedAt))
+    .limit(5000);
+}

@@ -1,0 +1,58 @@
+// Scheduled jobs: `npm run jobs:run` runs every job once; `npm run jobs:run -- certificate-reminders`
+// runs the named ones. Run it from cron (e.g. hourly) or let an external scheduler call the jobs'
+// routes instead. Every job must be safe to run twice and on two machines at once.
+// Add a job: one entry in JOBS (import lazily, so that the environment is set first).
+import { spawnSync } from "node:child_process";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+
+type Job = { name: string; run: () => Promise<unknown> };
+
+const JOBS: Job[] = [
+  { name: "certificate-reminders", run: async () => (await import("@/lib/certificates/reminders")).sendExpiryReminders() },
+  { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
+  { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
+];
+
+const here = path.dirname(fileURLToPath(import.meta.url));
+const root = path.resolve(here, "..");
+
+// Server modules start with `import "server-only"`, which loads only under the react-server
+// condition: re-run this script with it when it is missing (plain `tsx scripts/jobs.ts`).
+try {
+  await import("server-only");
+} catch {
+  const r = spawnSync(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", fileURLToPath(import.meta.url), ...process.argv.slice(2)], {
+    stdio: "inherit",
+  });
+  process.exit(r.status ?? 1);
+}
+
+// Outside the scripts' own profiles (npm start / npm test set everything), fill what is missing from
+// the local profile (dev unless --profile= or RISER_PROFILE says otherwise).
+if (!process.env.DATABASE_URL) {
+  const { config } = (await import(path.join(root, "scripts/lib/config.mjs"))) as { config: (name?: string) => { env: Record<string, string> } };
+  const profile = process.argv.find((a) => a.startsWith("--profile="))?.split("=")[1] ?? process.env.RISER_PROFILE ?? "dev";
+  for (const [k, v] of Object.entries(config(profile).env)) process.env[k] ??= v;
+}
+
+const names = process.argv.slice(2).filter((a) => !a.startsWith("--"));
+const unknown = names.filter((n) => !JOBS.some((j) => j.name === n));
+if (unknown.length) {
+  console.error(`[jobs] unknown job(s): ${unknown.join(", ")}. Known: ${JOBS.map((j) => j.name).join(", ")}`);
+  process.exit(2);
+}
+
+let failed = 0;
+for (const job of JOBS.filter((j) => !names.length || names.includes(j.name))) {
+  const t0 = Date.now();
+  try {
+    const result = await job.run();
+    console.log(`[jobs] ${job.name}: ${JSON.stringify(result)} (${Date.now() - t0} ms)`);
+  } catch (err) {
+    failed++;
+    console.error(`[jobs] ${job.name} failed:`, err);
+  }
+}
+await (await import("@/db/client")).pool.end();
+process.exit(failed ? 1 : 0);

@@ -1,0 +1,161 @@
+// Admin console and account settings in a real browser: an admin changes a person's role through
+// the UI, "sign out everywhere else" ends another browser's session, axe (WCAG 2.2 AA tags) finds
+// nothing on the admin pages and /account, and both work at phone width.
+import { randomUUID } from "node:crypto";
+import AxeBuilder from "@axe-core/playwright";
+import { expect, test, type Browser, type Page } from "@playwright/test";
+import { hashPassword } from "better-auth/crypto";
+import mysql from "mysql2/promise";
+import { DEMO_PASSWORD } from "../../db/demo";
+
+const PASSWORD = "e2e-person-pass-2026";
+let ipCounter = 0;
+// Each browser context is its own client address, so sign-in rate limits of one test never hit another.
+const freshIp = () => `10.91.${process.pid % 250}.${++ipCounter}`;
+
+async function newPage(browser: Browser, width = 1280) {
+  const context = await browser.newContext({ extraHTTPHeaders: { "x-forwarded-for": freshIp() }, viewport: { width, height: 900 } });
+  return context.newPage();
+}
+
+/** A verified person in an organization, straight in the test database (invented name). */
+async function createPerson(tag: string, role: string, organizationName: string, name: string) {
+  const conn = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
+  try {
+    const id = randomUUID();
+    const email = `${tag}-${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}@test.example`;
+    const [orgs] = await conn.query("select id from organization where name = ?", [organizationName]);
+    const orgId = (orgs as { id: string }[])[0]!.id;
+    await conn.query("insert into user (id, name, email, email_verified, role, organization_id, created_at, updated_at) values (?, ?, ?, 1, ?, ?, now(3), now(3))", [id, name, email, role, orgId]);
+    await conn.query("insert into account (id, account_id, provider_id, user_id, password, created_at, updated_at) values (?, ?, 'credential', ?, ?, now(3), now(3))", [randomUUID(), id, id, await hashPassword(PASSWORD)]);
+    return { id, email, name };
+  } finally {
+    await conn.end();
+  }
+}
+
+async function signIn(page: Page, email: string, password: string) {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL("**/learn");
+}
+
+async function axe(page: Page, what: string) {
+  const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
+  expect(results.violations.map((v) => `${what}: ${v.id} (${v.nodes.length}) ${v.nodes[0]?.target}`)).toEqual([]);
+}
+
+test("an admin changes a person's role through the people screen", async ({ browser }) => {
+  const person = await createPerson("e2e-role", "learner", "Quillmoor Fire Protection", "Orrin Talbec");
+  const page = await newPage(browser);
+  await signIn(page, "admin@riser.example", DEMO_PASSWORD);
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Admin" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Admin" })).toBeVisible();
+  await page.getByRole("navigation", { name: "Admin sections" }).getByRole("link", { name: "People" }).click();
+  await page.getByLabel("Search name or e-mail").fill(person.email);
+  const row = page.getByRole("row").filter({ hasText: person.email });
+  await expect(row).toHaveCount(1);
+  await expect(row).toContainText("Learner");
+  await row.getByRole("button", { name: `Manage ${person.name}` }).click();
+
+  const dialog = page.getByRole("dialog", { name: `Manage ${person.name}` });
+  await expect(dialog).toBeVisible();
+  await axe(page, "/admin/people with the manage dialog open");
+  await dialog.getByLabel("New role").selectOption("manager");
+  await dialog.getByRole("button", { name: "Change role" }).click();
+  // The reason is required: a field error, and nothing changes.
+  await expect(dialog.getByText(/Give a reason/)).toBeVisible();
+  await dialog.getByLabel("Reason for the role change").fill("Runs the Design office from next month");
+  await dialog.getByRole("button", { name: "Change role" }).click();
+  await expect(dialog).toBeHidden();
+  await expect(page.getByRole("status")).toContainText(`${person.name} is now Manager.`);
+  await expect(row).toContainText("Manager");
+
+  // The audit log shows the change with its reason.
+  await page.getByRole("navigation", { name: "Admin sections" }).getByRole("link", { name: "Audit log" }).click();
+  await page.getByLabel("Action").selectOption("user.role");
+  const entry = page.getByRole("row").filter({ hasText: person.email });
+  await expect(entry.first()).toContainText("Runs the Design office from next month");
+});
+
+test("axe finds no violations on the admin pages", async ({ browser }) => {
+  const page = await newPage(browser);
+  await signIn(page, "admin@riser.example", DEMO_PASSWORD);
+  for (const [url, ready] of [
+    ["/admin", "Latest audit entries"],
+    ["/admin/organizations", "All organizations"],
+    ["/admin/people", "Manage"],
+    ["/admin/content", "What is synced"],
+    ["/admin/mail", "Recipient"],
+    ["/admin/audit", "Reason and details"],
+  ] as const) {
+    await page.goto(url);
+    await expect(page.getByText(ready).first()).toBeVisible();
+    await axe(page, url);
+  }
+});
+
+test("the admin and account pages work at phone width (360 px) and desktop width (1280 px)", async ({ browser }) => {
+  for (const width of [1280, 360]) {
+    const page = await newPage(browser, width);
+    await signIn(page, "admin@riser.example", DEMO_PASSWORD);
+    for (const [url, ready] of [
+      ["/admin", "Latest audit entries"],
+      ["/admin/people", "Manage"],
+      ["/account", "This device"],
+    ] as const) {
+      await page.goto(url);
+      await expect(page.getByText(ready).first()).toBeVisible();
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      expect(overflow, `${url} at ${width} px scrolls sideways`).toBeLessThanOrEqual(1);
+      await page.screenshot({ path: `test-results/screens/${url.replace(/\//g, "_") || "root"}-${width}.png`, fullPage: true });
+    }
+    await page.context().close();
+  }
+});
+
+test("'sign out everywhere else' ends the session in another browser", async ({ browser }) => {
+  const person = await createPerson("e2e-others", "learner", "Quillmoor Fire Protection", "Linnea Sorvath");
+  const office = await newPage(browser);
+  const truck = await newPage(browser, 360);
+  await signIn(office, person.email, PASSWORD);
+  await signIn(truck, person.email, PASSWORD);
+
+  await office.getByRole("link", { name: person.name }).click();
+  await expect(office).toHaveURL(/\/account$/);
+  await expect(office.getByRole("heading", { level: 1, name: "Account" })).toBeVisible();
+  const sessions = office.getByTestId("session-list").getByRole("listitem");
+  await expect(sessions).toHaveCount(2);
+  await axe(office, "/account");
+
+  await office.getByRole("button", { name: "Sign out everywhere else" }).click();
+  await expect(office.getByText(/Signed out everywhere else \(1 session ended\)/)).toBeVisible();
+  await expect(sessions).toHaveCount(1);
+  await expect(sessions.first()).toContainText("This device");
+
+  // The other browser is signed out: the next page needs a sign-in.
+  await truck.goto("/learn");
+  await expect(truck).toHaveURL(/\/sign-in/);
+  // This browser is still signed in.
+  await office.goto("/learn");
+  await expect(office).toHaveURL(/\/learn$/);
+});
+
+test("the password form asks for the current password and says when it is wrong", async ({ browser }) => {
+  const person = await createPerson("e2e-pw", "sales", "Larkhaven Homes", "Marisol Quenby");
+  const page = await newPage(browser);
+  await signIn(page, person.email, PASSWORD);
+  await page.goto("/account");
+  await page.getByLabel("New password", { exact: true }).fill("another-good-pass-1");
+  await page.getByLabel("New password again").fill("another-good-pass-1");
+  await page.getByRole("button", { name: "Change the password" }).click();
+  await expect(page.getByText("Enter your current password")).toBeVisible();
+  await page.getByLabel("Current password").fill("not-the-password-9");
+  await page.getByRole("button", { name: "Change the password" }).click();
+  await expect(page.getByText("That is not your current password")).toBeVisible();
+  await page.getByLabel("Current password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Change the password" }).click();
+  await expect(page.getByRole("status").filter({ hasText: "Your password is changed" })).toBeVisible();
+});
