@@ -11,6 +11,8 @@ import { buildApp, contentBuild, ensureDependencies, node, tsx } from "./lib/ste
 
 const only = process.argv.find((a) => a.startsWith("--only="))?.split("=")[1]?.split(",");
 const want = (step) => !only || only.includes(step);
+// --files=a,b limits vitest and playwright to those files (for quick local loops)
+const files = process.argv.find((a) => a.startsWith("--files="))?.split("=")[1]?.split(",") ?? [];
 const bin = (name) => path.join(root, "node_modules", ".bin", name);
 const cfg = config(process.argv.find((a) => a.startsWith("--profile="))?.split("=")[1] ?? "test");
 const env = { ...process.env, ...cfg.env, NODE_ENV: "production", RISER_PROFILE: cfg.name };
@@ -79,11 +81,11 @@ try {
     await waitForApp();
     if (want("integration")) {
       step("integration tests");
-      run(bin("vitest"), ["run", "--project", "integration"], { cwd: root, env });
+      run(bin("vitest"), ["run", "--project", "integration", ...files.filter((f) => f.includes("integration/"))], { cwd: root, env });
     }
     if (want("e2e")) {
       step("browser tests");
-      run(bin("playwright"), ["test"], { cwd: root, env });
+      run(bin("playwright"), ["test", ...files.filter((f) => f.includes("e2e/"))], { cwd: root, env });
     }
     if (want("faults")) {
       step("fault tests (stops and restarts the test database)");

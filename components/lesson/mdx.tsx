@@ -1,6 +1,6 @@
 import type { MDXComponents } from "mdx/types";
 import Link from "next/link";
-import { Calculator } from "@/components/tools/calculator";
+import { CalculatorEmbed as Calculator } from "@/components/tools/calculator-embed";
 import { Callout } from "./callout";
 import { Figure, WorkedExample } from "./figure";
 import { Term } from "./term";

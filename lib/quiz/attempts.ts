@@ -1,6 +1,6 @@
 import "server-only";
 import { randomInt, randomUUID } from "node:crypto";
-import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, gte, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { questionVersion, quizAttempt, quizAttemptItem, user } from "@/db/schema";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
@@ -102,20 +102,22 @@ function assertOwner(viewer: Viewer, a: AttemptRow) {
   if (a.userId !== viewer.id) throw new AccessError(403, "This attempt belongs to someone else.");
 }
 
-/** Grades inside the caller's transaction (attempt row locked). Returns without change if graded. */
-async function gradeLocked(tx: Tx, a: AttemptRow, late: boolean): Promise<AttemptRow> {
-  if (a.status === "graded") return a;
-  const items = await loadItems(a.id, tx);
-  let correct = 0;
-  for (const i of items) {
-    const ok = gradeItem({ question: i.body, params: i.params }, (i.answer ?? null) as Answer);
-    if (ok) correct++;
-    await tx.update(quizAttemptItem).set({ correct: ok }).where(and(eq(quizAttemptItem.attemptId, a.id), eq(quizAttemptItem.position, i.position)));
+/**
+ * Grades inside the caller's transaction (attempt row locked): one statement marks every item,
+ * one updates the attempt. Returns the graded row and items (unchanged if already graded).
+ */
+async function gradeLocked(tx: Tx, a: AttemptRow, late: boolean, loaded?: ItemRow[]): Promise<{ row: AttemptRow; items: ItemRow[] }> {
+  const items = loaded ?? (await loadItems(a.id, tx));
+  if (a.status === "graded") return { row: a, items };
+  const marked = items.map((i) => ({ ...i, correct: gradeItem({ question: i.body, params: i.params }, (i.answer ?? null) as Answer) }));
+  if (marked.length) {
+    const cases = sql.join(marked.map((i) => sql`WHEN ${i.position} THEN ${i.correct ? 1 : 0}`), sql` `);
+    await tx.execute(sql`UPDATE quiz_attempt_item SET correct = CASE position ${cases} END WHERE attempt_id = ${a.id}`);
   }
-  const s = score(correct, items.length);
+  const s = score(marked.filter((i) => i.correct).length, marked.length);
   const graded = { status: "graded", score: s, passed: s >= a.passMark, submittedAt: new Date(), lateGraded: late };
   await tx.update(quizAttempt).set(graded).where(eq(quizAttempt.id, a.id));
-  return { ...a, ...graded };
+  return { row: { ...a, ...graded, submittedAt: new Date(Math.floor(graded.submittedAt.getTime())) }, items: marked };
 }
 
 /** Starts an attempt (or resumes the open one) under the module's rules. */
@@ -134,7 +136,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
     for (const a of open) {
       if (!pastDeadline(a, now)) return a.id;
       const g = await gradeLocked(tx, a, true);
-      if (g.passed) expiredToComplete = true;
+      if (g.row.passed) expiredToComplete = true;
     }
     const since = new Date(now - rules.periodHours * 3_600_000);
     const recent = await tx
@@ -224,12 +226,7 @@ export async function saveAnswers(viewer: Viewer, id: string, answers: AnswerInp
     }
     const items = await loadItems(id, tx);
     validateAnswers(items, answers);
-    for (const ans of answers) {
-      await tx
-        .update(quizAttemptItem)
-        .set({ answer: ans.answer })
-        .where(and(eq(quizAttemptItem.attemptId, id), eq(quizAttemptItem.position, ans.position)));
-    }
+    await writeAnswers(tx, id, answers);
     return { saved: answers.length };
   });
   if (gradedLate) {
@@ -250,27 +247,33 @@ async function afterGrading(userId: string, id: string) {
  */
 export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = []): Promise<AttemptView> {
   let refusedLate = false;
-  await db.transaction(async (tx) => {
+  const graded = await db.transaction(async (tx) => {
     const a = await getAttemptRow(id, tx, true);
     assertOwner(viewer, a);
-    if (a.status === "graded") return;
+    if (a.status === "graded") return null; // a repeat: answer from the stored result below
     const late = a.deadlineAt !== null && Date.now() > a.deadlineAt.getTime() + GRACE_MS;
+    let items = await loadItems(id, tx);
     if (finalAnswers.length && !late) {
-      const items = await loadItems(id, tx);
       validateAnswers(items, finalAnswers);
-      for (const ans of finalAnswers) {
-        await tx
-          .update(quizAttemptItem)
-          .set({ answer: ans.answer })
-          .where(and(eq(quizAttemptItem.attemptId, id), eq(quizAttemptItem.position, ans.position)));
-      }
+      await writeAnswers(tx, id, finalAnswers);
+      const byPos = new Map(finalAnswers.map((f) => [f.position, f.answer]));
+      items = items.map((i) => (byPos.has(i.position) ? { ...i, answer: byPos.get(i.position) ?? null } : i));
     }
     if (late && finalAnswers.length) refusedLate = true;
-    await gradeLocked(tx, a, late);
+    return gradeLocked(tx, a, late, items);
   });
-  await afterGrading(viewer.id, id);
+  if (graded?.row.passed) await checkAndRecordCompletion(viewer.id, graded.row.moduleSlug);
   if (refusedLate) throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
+  // Every response, first or repeated, is built from the stored rows so that all are identical.
   return viewAttempt(viewer, id);
+}
+
+/** Writes answers with one statement. */
+async function writeAnswers(tx: Tx, id: string, answers: AnswerInput[]) {
+  if (!answers.length) return;
+  const cases = sql.join(answers.map((a) => sql`WHEN ${a.position} THEN ${a.answer === null ? null : JSON.stringify(a.answer)}`), sql` `);
+  const positions = sql.join(answers.map((a) => sql`${a.position}`), sql`, `);
+  await tx.execute(sql`UPDATE quiz_attempt_item SET answer = CASE position ${cases} END WHERE attempt_id = ${id} AND position IN (${positions})`);
 }
 
 /** Attempts of one person (own, or a managed person's), newest first. */

@@ -75,18 +75,22 @@ export class SearchIndex {
   }
 }
 
+const escapeRe = (t: string) => t.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+
 /** About 160 characters of text around the first matching word, with the matches marked. */
 export function snippet(text: string, terms: string[], width = 160): Segment[] {
-  const words = [...text.matchAll(/[A-Za-z0-9\u00C0-\u024F]+/g)];
+  // A word matches when it starts with a query stem (prefix search), so only the window is scanned.
+  const wordStart = new RegExp(`(^|[^A-Za-z0-9])(${terms.map(escapeRe).join("|")})`, "i");
+  const first = wordStart.exec(text);
+  const at = first ? first.index + first[1]!.length : 0;
+  let start = Math.max(0, at - Math.floor(width / 3));
+  if (start > 0) start = text.indexOf(" ", start) + 1 || start;
+  const end = Math.min(text.length, start + width);
+  const slice = text.slice(start, end);
   const matches = (w: string) => {
     const s = tokens(w)[0];
     return !!s && terms.some((t) => s.startsWith(t) || t.startsWith(s));
   };
-  const first = words.find((m) => matches(m[0]));
-  let start = first ? Math.max(0, first.index! - Math.floor(width / 3)) : 0;
-  if (start > 0) start = text.indexOf(" ", start) + 1 || start;
-  const end = Math.min(text.length, start + width);
-  const slice = text.slice(start, end);
   const out: Segment[] = [];
   let last = 0;
   for (const m of slice.matchAll(/[A-Za-z0-9\u00C0-\u024F]+/g)) {

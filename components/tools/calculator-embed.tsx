@@ -1,0 +1,16 @@
+"use client";
+import dynamic from "next/dynamic";
+import type { CalculatorEmbedProps } from "./types";
+
+/**
+ * The calculator as embedded in lessons and cards, loaded only on pages that show one: the forms,
+ * the hydraulics library and the chart library stay out of every other lesson's first load.
+ */
+const Lazy = dynamic(() => import("./calculator").then((m) => m.Calculator), {
+  ssr: true,
+  loading: () => <p className="my-4 rounded border border-line bg-panel p-3 text-muted">Loading the calculator…</p>,
+});
+
+export function CalculatorEmbed(props: CalculatorEmbedProps) {
+  return <Lazy {...props} />;
+}
