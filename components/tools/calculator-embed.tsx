@@ -12,5 +12,9 @@ const Lazy = dynamic(() => import("./calculator").then((m) => m.Calculator), {
 });
 
 export function CalculatorEmbed(props: CalculatorEmbedProps) {
-  return <Lazy {...props} />;
+  return (
+    <div className="wide not-prose my-6">
+      <Lazy {...props} />
+    </div>
+  );
 }
