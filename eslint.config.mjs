@@ -6,7 +6,7 @@ const config = [
   ...nextVitals,
   ...nextTs,
   {
-    ignores: [".next/**", "node_modules/**", ".data/**", "db/migrations/**", "content/.generated/**", "next-env.d.ts", "test-results/**", "playwright-report/**"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "db/migrations/**", "content/.generated/**", "next-env.d.ts", "test-results/**", "playwright-report/**"],
   },
   {
     plugins: { drizzle },

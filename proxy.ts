@@ -1,5 +1,6 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
+import { applySecurityHeaders } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
@@ -8,6 +9,7 @@ import { NextResponse, type NextRequest } from "next/server";
  * Every dynamic page, action and route handler checks access again where the data is (lib/access).
  */
 let lastProbe = { at: 0, up: true };
+const production = process.env.NODE_ENV === "production";
 
 function probe(url: string): Promise<boolean> {
   const u = new URL(url);
@@ -17,19 +19,27 @@ function probe(url: string): Promise<boolean> {
       socket.destroy();
       resolve(up);
     };
-    socket.setTimeout(500, () => done(false));
+    // Only a refused or failed connection means "down". A slow answer (a busy machine) lets the
+    // request through: the route's own database call decides, and maps a real outage to 503.
+    socket.setTimeout(1500, () => done(true));
     socket.once("connect", () => done(true));
     socket.once("error", () => done(false));
   });
 }
 
+let inFlight: Promise<boolean> | null = null;
+
 async function databaseUp(): Promise<boolean> {
   const url = process.env.DATABASE_URL;
   if (!url) return true;
-  const now = Date.now();
-  if (now - lastProbe.at < 1000) return lastProbe.up;
-  lastProbe = { at: now, up: await probe(url) };
-  return lastProbe.up;
+  if (Date.now() - lastProbe.at < 1000) return lastProbe.up;
+  // One probe at a time, shared by the requests that arrive meanwhile.
+  inFlight ??= probe(url).then((up) => {
+    lastProbe = { at: Date.now(), up };
+    inFlight = null;
+    return up;
+  });
+  return inFlight;
 }
 
 const outagePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Riser is briefly unavailable</title></head>
@@ -40,10 +50,13 @@ export async function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
   if (pathname === "/api/health") return NextResponse.next();
   if (!(await databaseUp())) {
+    // The proxy's own answers carry the same security headers as every other response.
+    const headers = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store" }), production);
     if (pathname.startsWith("/api/")) {
-      return NextResponse.json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: { "Retry-After": "10" } });
+      return NextResponse.json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers });
     }
-    return new NextResponse(outagePage, { status: 503, headers: { "content-type": "text/html; charset=utf-8", "Retry-After": "10" } });
+    headers.set("content-type", "text/html; charset=utf-8");
+    return new NextResponse(outagePage, { status: 503, headers });
   }
   if (/^\/modules\/[^/]+\/[^/]+$/.test(pathname) && !pathname.endsWith("/quiz")) {
     const { auth } = await import("@/lib/auth");
@@ -52,7 +65,9 @@ export async function proxy(req: NextRequest) {
       const url = req.nextUrl.clone();
       url.pathname = "/sign-in";
       url.search = `?next=${encodeURIComponent(pathname)}`;
-      return NextResponse.redirect(url);
+      const res = NextResponse.redirect(url);
+      applySecurityHeaders(res.headers, production);
+      return res;
     }
   }
   return NextResponse.next();

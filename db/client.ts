@@ -13,7 +13,7 @@ export const pool =
     uri: env.DATABASE_URL,
     connectionLimit: env.DATABASE_POOL_SIZE,
     waitForConnections: true,
-    connectTimeout: 3000,
+    connectTimeout: 10_000,
     timezone: "Z",
     dateStrings: false,
   });

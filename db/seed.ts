@@ -5,8 +5,11 @@ import { hashPassword } from "better-auth/crypto";
 import { db, pool } from "@/db/client";
 import { account, organization, team, user } from "@/db/schema";
 import { syncCatalog } from "@/lib/content/sync";
+import { seedCertificates } from "@/lib/certificates/seed";
+import { seedSignOffs } from "@/lib/signoffs/seed";
 import "@/lib/content/sync-hooks";
 import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "./demo";
+import { seedTeamDemo } from "./seed-team";
 
 async function seedDemo() {
   const existing = await db.select({ id: organization.id }).from(organization).limit(1);
@@ -49,6 +52,9 @@ try {
   const counts = await syncCatalog();
   console.log(`[seed] catalog synced: ${JSON.stringify(counts)}`);
   await seedDemo();
+  await seedCertificates();
+  await seedSignOffs();
+  await seedTeamDemo();
 } finally {
   await pool.end();
 }

@@ -5,11 +5,13 @@ import { APIError } from "better-auth/api";
 import { db } from "@/db/client";
 import { organization, user } from "@/db/schema";
 import { auth } from "@/lib/auth";
+import { TRIAL } from "@/lib/billing/plans";
 import { signupContext, type SignupPlacement } from "@/lib/auth/signup-context";
 import type { SignUpInput } from "@/lib/auth/schemas";
 
-export const TRIAL_SEATS = 3;
-export const TRIAL_DAYS = 30;
+/** The trial allowance is set with the seat prices, in lib/billing/plans.ts. */
+export const TRIAL_SEATS = TRIAL.seats;
+export const TRIAL_DAYS = TRIAL.days;
 
 type Outcome = { ok: true; userId: string } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 

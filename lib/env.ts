@@ -4,6 +4,9 @@
  */
 import { z } from "zod";
 
+/** An empty variable (`FOO=`) counts as not set. */
+const emptyAsUnset = <T extends z.ZodType>(inner: T) => z.preprocess((v) => (v === "" ? undefined : v), inner);
+
 const schema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z.string().regex(/^mysql:\/\//, "must be a mysql:// URL"),
@@ -18,8 +21,42 @@ const schema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(5),
   AUTH_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),
   JOBS_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
+  /** public certificate look-ups (page + JSON) allowed per client address per window */
+  VERIFY_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(30),
+  VERIFY_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),
   /** "1" when the instance serves over plain http on loopback (local use): cookies without Secure. */
   INSECURE_COOKIES: z.enum(["0", "1"]).default("0"),
+  /**
+   * S3-compatible object store for sign-off evidence (lib/storage). Locally the scripts start a fake
+   * (scripts/s3-fake.mjs) and set all of these; hosted: the provider's endpoint (or none for AWS),
+   * a private bucket and a key pair limited to it (or none, for the SDK's own credential chain).
+   * Without S3_BUCKET, uploads answer 503.
+   */
+  S3_ENDPOINT: z.string().url("must be an http(s):// URL").optional(),
+  S3_BUCKET: z
+    .string()
+    .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, "must be a bucket name: 3-63 lower-case letters, digits, dots or hyphens")
+    .optional(),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  /** "1" for stores that need path-style addresses (the local fake, most self-hosted stores) */
+  S3_FORCE_PATH_STYLE: z.enum(["0", "1"]).default("0"),
+  // Payments for seats through the payment provider's SDK (lib/billing). The scripts point the SDK
+  // at the local fake (scripts/payments-fake.mjs) with the three STRIPE_API_* overrides; a real key
+  // and no overrides talk to the real service. Without a key, buying seats answers 503.
+  STRIPE_SECRET_KEY: emptyAsUnset(z.string().min(8, "must be an API secret key").optional()),
+  /** signing secret of the webhook endpoint POST /api/billing/webhook */
+  STRIPE_WEBHOOK_SECRET: emptyAsUnset(z.string().min(8, "must be a webhook signing secret").optional()),
+  STRIPE_API_HOST: emptyAsUnset(z.string().min(1).optional()),
+  STRIPE_API_PORT: emptyAsUnset(z.coerce.number().int().min(1).max(65535).optional()),
+  STRIPE_API_PROTOCOL: emptyAsUnset(z.enum(["http", "https"]).optional()),
+}).superRefine((e, ctx) => {
+  // A key pair comes whole; with neither, the SDK's own chain (e.g. an instance role) supplies one.
+  if (Boolean(e.S3_ACCESS_KEY_ID) !== Boolean(e.S3_SECRET_ACCESS_KEY)) {
+    const missing = e.S3_ACCESS_KEY_ID ? "S3_SECRET_ACCESS_KEY" : "S3_ACCESS_KEY_ID";
+    ctx.addIssue({ code: "custom", path: [missing], message: "is required with the other half of the S3 key pair" });
+  }
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,18 +1,12 @@
 // Scheduled jobs: `npm run jobs:run` runs every job once; `npm run jobs:run -- certificate-reminders`
 // runs the named ones. Run it from cron (e.g. hourly) or let an external scheduler call the jobs'
 // routes instead. Every job must be safe to run twice and on two machines at once.
-// Add a job: one entry in JOBS (import lazily, so that the environment is set first).
+// Add a job: one entry in JOBS in lib/jobs.ts (import lazily, so that the environment is set
+// first); POST /api/jobs/run runs the same list.
 import { spawnSync } from "node:child_process";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-
-type Job = { name: string; run: () => Promise<unknown> };
-
-const JOBS: Job[] = [
-  { name: "certificate-reminders", run: async () => (await import("@/lib/certificates/reminders")).sendExpiryReminders() },
-  { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
-  { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
-];
+import { JOBS } from "@/lib/jobs";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, "..");

@@ -199,8 +199,8 @@ function page(title, body) {
 body{font-family:system-ui,sans-serif;background:#F7F4EE;color:#14202B;margin:0;line-height:1.5}
 main{max-width:34rem;margin:0 auto;padding:1.5rem 1rem}
 .note{border:2px dashed #1B617A;background:#DCECF1;padding:.75rem 1rem;border-radius:4px}
-dl{display:grid;grid-template-columns:auto 1fr;gap:.25rem 1rem;background:#fff;border:1px solid #D5CFC3;border-radius:4px;padding:1rem}
-dt{color:#56616B}dd{margin:0;font-family:ui-monospace,monospace}
+dl{display:grid;grid-template-columns:auto minmax(0,1fr);gap:.25rem 1rem;background:#fff;border:1px solid #D5CFC3;border-radius:4px;padding:1rem}
+dt{color:#56616B}dd{margin:0;font-family:ui-monospace,monospace;overflow-wrap:anywhere}
 .actions{display:flex;flex-wrap:wrap;gap:.75rem;margin-top:1.25rem}
 button{min-height:44px;padding:.5rem 1.25rem;font:inherit;font-weight:700;border-radius:4px;cursor:pointer}
 .pay{background:#9A4F12;color:#fff;border:1px solid #9A4F12}.decline{background:#fff;color:#14202B;border:1px solid #14202B}

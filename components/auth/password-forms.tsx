@@ -42,7 +42,7 @@ export function ResetPasswordForm({ token }: { token: string | null }) {
     router.push("/sign-in?reset=1");
   }
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+    <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <FormError message={error} />
       <Field label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
       <Field label="New password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />

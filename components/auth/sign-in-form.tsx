@@ -27,7 +27,8 @@ export function SignInForm() {
     setError(null);
     const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
-      if (error.status === 403) setError("Confirm your e-mail address first: open the link we sent you.");
+      if (error.code === "BANNED_USER") setError("This account is banned from Riser. If you think this is a mistake, ask your training manager.");
+      else if (error.status === 403) setError("Confirm your e-mail address first: open the link we sent you.");
       else if (error.status === 429) setError("Too many sign-in attempts. Wait a minute and try again.");
       else if (error.status === 401) setError("That e-mail and password do not match an account.");
       else setError(error.message ?? "Sign-in failed. Try again.");
@@ -38,7 +39,7 @@ export function SignInForm() {
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+    <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       {params.get("verified") ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
       {params.get("reset") ? <FormNotice message="Your password is changed. Sign in with the new one." /> : null}
       <FormError message={error} />

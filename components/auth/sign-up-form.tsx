@@ -27,7 +27,7 @@ export function SignUpForm() {
 
   if (done) return <FormNotice message={done} />;
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+    <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <FormError message={error} />
       <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
       <Field label="Work e-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />

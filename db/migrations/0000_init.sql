@@ -231,6 +231,167 @@ CREATE TABLE `quiz_attempt_item` (
 	CONSTRAINT `quiz_attempt_item_attempt_id_position_pk` PRIMARY KEY(`attempt_id`,`position`)
 );
 --> statement-breakpoint
+CREATE TABLE `certificate` (
+	`id` int AUTO_INCREMENT NOT NULL,
+	`serial` varchar(20) NOT NULL,
+	`serial_year` int NOT NULL,
+	`serial_number` int NOT NULL,
+	`verification_code` varbinary(32) NOT NULL,
+	`user_id` varchar(36) NOT NULL,
+	`holder_name` varchar(200) NOT NULL,
+	`organization_id` varchar(36),
+	`organization_name` varchar(200),
+	`kind` varchar(10) NOT NULL,
+	`subject_slug` varchar(80) NOT NULL,
+	`subject_title` varchar(200) NOT NULL,
+	`ce_hours` decimal(5,2) NOT NULL,
+	`completion_id` int NOT NULL,
+	`issued_at` datetime(3) NOT NULL,
+	`expires_at` datetime(3) NOT NULL,
+	`renews_certificate_id` int,
+	`reminder_sent_at` datetime(3),
+	`revoked_at` datetime(3),
+	`revoked_by` varchar(36),
+	`revoke_reason` text,
+	`created_at` timestamp(3) NOT NULL DEFAULT (now()),
+	CONSTRAINT `certificate_id` PRIMARY KEY(`id`),
+	CONSTRAINT `cert_serial_uq` UNIQUE(`serial`),
+	CONSTRAINT `cert_year_number_uq` UNIQUE(`serial_year`,`serial_number`),
+	CONSTRAINT `cert_code_uq` UNIQUE(`verification_code`),
+	CONSTRAINT `cert_completion_uq` UNIQUE(`completion_id`,`kind`,`subject_slug`)
+);
+--> statement-breakpoint
+CREATE TABLE `certificate_serial_counter` (
+	`year` int NOT NULL,
+	`last_number` int NOT NULL DEFAULT 0,
+	CONSTRAINT `certificate_serial_counter_year` PRIMARY KEY(`year`)
+);
+--> statement-breakpoint
+CREATE TABLE `rate_limit_bucket` (
+	`bucket_key` varchar(120) NOT NULL,
+	`window_start` bigint NOT NULL,
+	`hits` int NOT NULL DEFAULT 0,
+	CONSTRAINT `rate_bucket_pk` PRIMARY KEY(`bucket_key`,`window_start`)
+);
+--> statement-breakpoint
+CREATE TABLE `assignment` (
+	`id` int AUTO_INCREMENT NOT NULL,
+	`organization_id` varchar(36) NOT NULL,
+	`kind` varchar(10) NOT NULL,
+	`target_slug` varchar(80) NOT NULL,
+	`user_id` varchar(36),
+	`team_id` varchar(36),
+	`target_key` varchar(40) NOT NULL,
+	`due_at` datetime NOT NULL,
+	`created_by` varchar(36),
+	`created_at` datetime(3) NOT NULL,
+	CONSTRAINT `assignment_id` PRIMARY KEY(`id`),
+	CONSTRAINT `assignment_item_target_uq` UNIQUE(`organization_id`,`kind`,`target_slug`,`target_key`)
+);
+--> statement-breakpoint
+CREATE TABLE `invitation` (
+	`id` varchar(36) NOT NULL,
+	`organization_id` varchar(36) NOT NULL,
+	`team_id` varchar(36),
+	`email` varchar(255) NOT NULL,
+	`name` varchar(200),
+	`role` varchar(20) NOT NULL,
+	`token_hash` varchar(64) NOT NULL,
+	`invited_by` varchar(36),
+	`created_at` datetime(3) NOT NULL,
+	`expires_at` datetime(3) NOT NULL,
+	`accepted_at` datetime(3),
+	`accepted_user_id` varchar(36),
+	`revoked_at` datetime(3),
+	CONSTRAINT `invitation_id` PRIMARY KEY(`id`),
+	CONSTRAINT `invitation_token_uq` UNIQUE(`token_hash`)
+);
+--> statement-breakpoint
+CREATE TABLE `reminder_log` (
+	`id` int AUTO_INCREMENT NOT NULL,
+	`kind` varchar(20) NOT NULL,
+	`user_id` varchar(36) NOT NULL,
+	`period_key` varchar(80) NOT NULL,
+	`sent_at` datetime(3) NOT NULL,
+	CONSTRAINT `reminder_log_id` PRIMARY KEY(`id`),
+	CONSTRAINT `reminder_once_uq` UNIQUE(`kind`,`user_id`,`period_key`)
+);
+--> statement-breakpoint
+CREATE TABLE `checkout` (
+	`id` varchar(36) NOT NULL,
+	`organization_id` varchar(36) NOT NULL,
+	`requested_by` varchar(36),
+	`requested_by_email` varchar(255) NOT NULL,
+	`requested_by_name` varchar(200) NOT NULL,
+	`seats` int NOT NULL,
+	`plan` varchar(40) NOT NULL,
+	`unit_amount` int NOT NULL,
+	`amount` int NOT NULL,
+	`currency` varchar(3) NOT NULL,
+	`idempotency_key` varchar(64) NOT NULL,
+	`provider_session_id` varchar(255),
+	`provider_url` text,
+	`status` varchar(12) NOT NULL,
+	`last_error` text,
+	`created_at` datetime(3) NOT NULL,
+	`updated_at` datetime(3) NOT NULL,
+	`paid_at` datetime(3),
+	CONSTRAINT `checkout_id` PRIMARY KEY(`id`),
+	CONSTRAINT `checkout_org_key_uq` UNIQUE(`organization_id`,`idempotency_key`),
+	CONSTRAINT `checkout_session_uq` UNIQUE(`provider_session_id`)
+);
+--> statement-breakpoint
+CREATE TABLE `payment_event` (
+	`id` int AUTO_INCREMENT NOT NULL,
+	`provider_event_id` varchar(255) NOT NULL,
+	`type` varchar(64) NOT NULL,
+	`organization_id` varchar(36) NOT NULL,
+	`checkout_id` varchar(36) NOT NULL,
+	`provider_session_id` varchar(255) NOT NULL,
+	`outcome` varchar(20) NOT NULL,
+	`seats_added` int NOT NULL DEFAULT 0,
+	`seats_before` int,
+	`seats_after` int,
+	`amount` int,
+	`currency` varchar(3),
+	`event_created_at` datetime(3) NOT NULL,
+	`processed_at` datetime(3) NOT NULL,
+	CONSTRAINT `payment_event_id` PRIMARY KEY(`id`),
+	CONSTRAINT `payment_event_provider_uq` UNIQUE(`provider_event_id`)
+);
+--> statement-breakpoint
+CREATE TABLE `sign_off` (
+	`id` varchar(36) NOT NULL,
+	`user_id` varchar(36) NOT NULL,
+	`organization_id` varchar(36),
+	`module_slug` varchar(80) NOT NULL,
+	`skill_id` varchar(80) NOT NULL,
+	`status` varchar(10) NOT NULL DEFAULT 'submitted',
+	`note` text,
+	`active_key` varchar(200),
+	`submitted_at` datetime(3) NOT NULL,
+	`reviewer_id` varchar(36),
+	`review_comment` text,
+	`reviewed_at` datetime(3),
+	CONSTRAINT `sign_off_id` PRIMARY KEY(`id`),
+	CONSTRAINT `sign_off_active_uq` UNIQUE(`active_key`)
+);
+--> statement-breakpoint
+CREATE TABLE `sign_off_evidence` (
+	`id` varchar(36) NOT NULL,
+	`sign_off_id` varchar(36) NOT NULL,
+	`position` int NOT NULL,
+	`object_key` varchar(300) NOT NULL,
+	`thumbnail_key` varchar(300),
+	`content_type` varchar(60) NOT NULL,
+	`size` int NOT NULL,
+	`original_name` varchar(160) NOT NULL,
+	`created_at` datetime(3) NOT NULL,
+	CONSTRAINT `sign_off_evidence_id` PRIMARY KEY(`id`),
+	CONSTRAINT `sign_off_ev_object_uq` UNIQUE(`object_key`),
+	CONSTRAINT `sign_off_ev_thumb_uq` UNIQUE(`thumbnail_key`)
+);
+--> statement-breakpoint
 ALTER TABLE `account` ADD CONSTRAINT `account_user_id_user_id_fk` FOREIGN KEY (`user_id`) REFERENCES `user`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `session` ADD CONSTRAINT `session_user_id_user_id_fk` FOREIGN KEY (`user_id`) REFERENCES `user`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `team` ADD CONSTRAINT `team_organization_id_organization_id_fk` FOREIGN KEY (`organization_id`) REFERENCES `organization`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -241,6 +402,14 @@ ALTER TABLE `module_completion` ADD CONSTRAINT `module_completion_user_id_user_i
 ALTER TABLE `quiz_attempt` ADD CONSTRAINT `quiz_attempt_user_id_user_id_fk` FOREIGN KEY (`user_id`) REFERENCES `user`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `quiz_attempt_item` ADD CONSTRAINT `quiz_attempt_item_attempt_id_quiz_attempt_id_fk` FOREIGN KEY (`attempt_id`) REFERENCES `quiz_attempt`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `quiz_attempt_item` ADD CONSTRAINT `attempt_item_version_fk` FOREIGN KEY (`question_version_id`) REFERENCES `quiz_question_version`(`id`) ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `certificate` ADD CONSTRAINT `cert_renews_fk` FOREIGN KEY (`renews_certificate_id`) REFERENCES `certificate`(`id`) ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `assignment` ADD CONSTRAINT `assignment_organization_id_organization_id_fk` FOREIGN KEY (`organization_id`) REFERENCES `organization`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `assignment` ADD CONSTRAINT `assignment_user_id_user_id_fk` FOREIGN KEY (`user_id`) REFERENCES `user`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `assignment` ADD CONSTRAINT `assignment_team_id_team_id_fk` FOREIGN KEY (`team_id`) REFERENCES `team`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `invitation` ADD CONSTRAINT `invitation_organization_id_organization_id_fk` FOREIGN KEY (`organization_id`) REFERENCES `organization`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `checkout` ADD CONSTRAINT `checkout_organization_id_organization_id_fk` FOREIGN KEY (`organization_id`) REFERENCES `organization`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `sign_off` ADD CONSTRAINT `sign_off_user_id_user_id_fk` FOREIGN KEY (`user_id`) REFERENCES `user`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `sign_off_evidence` ADD CONSTRAINT `sign_off_evidence_sign_off_id_sign_off_id_fk` FOREIGN KEY (`sign_off_id`) REFERENCES `sign_off`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX `account_user_idx` ON `account` (`user_id`);--> statement-breakpoint
 CREATE INDEX `session_user_idx` ON `session` (`user_id`);--> statement-breakpoint
 CREATE INDEX `user_org_idx` ON `user` (`organization_id`,`team_id`);--> statement-breakpoint
@@ -252,4 +421,20 @@ CREATE INDEX `progress_lesson_idx` ON `lesson_progress` (`lesson_id`);--> statem
 CREATE INDEX `completion_user_idx` ON `module_completion` (`user_id`,`module_slug`);--> statement-breakpoint
 CREATE INDEX `qv_module_idx` ON `quiz_question_version` (`module_slug`);--> statement-breakpoint
 CREATE INDEX `attempt_user_module_idx` ON `quiz_attempt` (`user_id`,`module_slug`,`started_at`);--> statement-breakpoint
-CREATE INDEX `attempt_org_idx` ON `quiz_attempt` (`organization_id`,`module_slug`);
+CREATE INDEX `attempt_org_idx` ON `quiz_attempt` (`organization_id`,`module_slug`);--> statement-breakpoint
+CREATE INDEX `cert_holder_idx` ON `certificate` (`user_id`,`kind`,`subject_slug`,`issued_at`);--> statement-breakpoint
+CREATE INDEX `cert_org_expiry_idx` ON `certificate` (`organization_id`,`expires_at`);--> statement-breakpoint
+CREATE INDEX `cert_expiry_idx` ON `certificate` (`expires_at`);--> statement-breakpoint
+CREATE INDEX `cert_renews_idx` ON `certificate` (`renews_certificate_id`);--> statement-breakpoint
+CREATE INDEX `rate_bucket_window_idx` ON `rate_limit_bucket` (`window_start`);--> statement-breakpoint
+CREATE INDEX `assignment_user_idx` ON `assignment` (`user_id`,`due_at`);--> statement-breakpoint
+CREATE INDEX `assignment_team_idx` ON `assignment` (`team_id`,`due_at`);--> statement-breakpoint
+CREATE INDEX `assignment_org_due_idx` ON `assignment` (`organization_id`,`due_at`);--> statement-breakpoint
+CREATE INDEX `invitation_org_email_idx` ON `invitation` (`organization_id`,`email`);--> statement-breakpoint
+CREATE INDEX `invitation_org_open_idx` ON `invitation` (`organization_id`,`accepted_at`,`revoked_at`,`expires_at`);--> statement-breakpoint
+CREATE INDEX `checkout_org_created_idx` ON `checkout` (`organization_id`,`created_at`);--> statement-breakpoint
+CREATE INDEX `payment_event_org_idx` ON `payment_event` (`organization_id`,`processed_at`);--> statement-breakpoint
+CREATE INDEX `payment_event_checkout_idx` ON `payment_event` (`checkout_id`);--> statement-breakpoint
+CREATE INDEX `sign_off_queue_idx` ON `sign_off` (`organization_id`,`status`,`submitted_at`);--> statement-breakpoint
+CREATE INDEX `sign_off_user_idx` ON `sign_off` (`user_id`,`module_slug`,`skill_id`);--> statement-breakpoint
+CREATE INDEX `sign_off_ev_parent_idx` ON `sign_off_evidence` (`sign_off_id`,`position`);

@@ -88,4 +88,34 @@ export const ROUTES: RouteEntry[] = [
     sample: "/api/sign-offs/00000000-0000-4000-8000-000000000000/evidence/00000000-0000-4000-8000-000000000000?thumb=1",
     okStatus: 404,
   },
+  // seats and billing (issue 9): learners get 403 everywhere here. The webhook is public (the
+  // signature is its proof): with body {} and no signature it answers 400.
+  { route: "/team/billing", rule: "manager" },
+  { route: "/team/billing/success", rule: "manager" },
+  { route: "/team/billing/cancel", rule: "manager" },
+  { route: "/api/billing", rule: "manager" },
+  { route: "/api/billing/checkout", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/billing/checkout/[id]", rule: "manager", sample: "/api/billing/checkout/00000000-0000-0000-0000-000000000000", okStatus: 404 },
+  { route: "/api/billing/webhook", rule: "public", method: "POST", okStatus: 400 },
+  // team training management (issue 6): POST {} → 400 (fields or the file missing); the person
+  // and assignment samples do not exist → 404 for managers and admins; the invite sample token is
+  // not valid → the public refusal page (200); the jobs route without x-jobs-secret → 401.
+  { route: "/team", rule: "manager" },
+  { route: "/team/assign", rule: "manager" },
+  { route: "/team/invite", rule: "manager" },
+  { route: "/team/people/[id]", rule: "manager", sample: "/team/people/00000000-0000-4000-8000-000000000000", okStatus: 404 },
+  { route: "/invite/[token]", rule: "public", sample: "/invite/not-a-real-invitation-token" },
+  { route: "/api/invite/accept", rule: "public", method: "POST", okStatus: 400 },
+  { route: "/api/team/invites", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/invites/preview", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/invites/import", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/invites/template.csv", rule: "manager" },
+  { route: "/api/team/assignments", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/assignments/[id]", rule: "manager", sample: "/api/team/assignments/0", method: "DELETE", okStatus: 404 },
+  { route: "/api/team/board", rule: "manager", sample: "/api/team/board?page=1&pageSize=10" },
+  { route: "/api/team/board.csv", rule: "manager" },
+  { route: "/api/team/certificates.csv", rule: "manager" },
+  { route: "/api/team/people", rule: "manager", sample: "/api/team/people?q=a" },
+  { route: "/api/team/summary", rule: "manager" },
+  { route: "/api/jobs/run", rule: "public", method: "POST", okStatus: 401 },
 ];

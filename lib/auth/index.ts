@@ -1,4 +1,5 @@
 import "server-only";
+import { eq } from "drizzle-orm";
 import { betterAuth } from "better-auth";
 import { APIError } from "better-auth/api";
 import { drizzleAdapter } from "@better-auth/drizzle-adapter";
@@ -46,6 +47,23 @@ export const auth = betterAuth({
     autoSignInAfterVerification: false,
     expiresIn: 60 * 60 * 24,
     sendVerificationEmail: async ({ user, url }) => {
+      // An e-mail change (account settings) sends this to the new address while the stored one is still the old.
+      const [stored] = await db.select({ email: schema.user.email }).from(schema.user).where(eq(schema.user.id, user.id));
+      if (stored && stored.email.toLowerCase() !== user.email.toLowerCase()) {
+        await sendMail({
+          to: user.email,
+          kind: "change-email",
+          subject: "Confirm your new e-mail for Riser",
+          text: `Hello ${user.name},\n\nYou asked to use this address for your Riser account instead of ${stored.email}. Open this link to confirm; until you do, nothing changes:\n\n${url}\n\nThe link works for 24 hours. If you did not ask for this, ignore this message.`,
+        });
+        await sendMail({
+          to: stored.email,
+          kind: "change-email-notice",
+          subject: "Your Riser e-mail address is about to change",
+          text: `Hello ${user.name},\n\nSomeone signed in to your Riser account asked to change its e-mail address to ${user.email}. The change happens only when the link sent to that address is opened.\n\nIf this was not you, sign in, change your password under Account, and choose "Sign out everywhere else".`,
+        });
+        return;
+      }
       await sendMail({
         to: user.email,
         kind: "verify-email",
@@ -55,6 +73,8 @@ export const auth = betterAuth({
     },
   },
   user: {
+    // Account settings: the new address gets a verification link; the change happens when it is opened.
+    changeEmail: { enabled: true },
     additionalFields: {
       organizationId: { type: "string", required: false, input: false },
       teamId: { type: "string", required: false, input: false },
@@ -70,6 +90,9 @@ export const auth = betterAuth({
       "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW_S, max: env.AUTH_RATE_LIMIT_MAX },
       "/sign-up/email": { window: 60, max: 10 },
       "/request-password-reset": { window: 60, max: 5 },
+      // account settings: guessing the current password or flooding someone's inbox
+      "/change-password": { window: 60, max: 10 },
+      "/change-email": { window: 60, max: 5 },
     },
   },
   advanced: {
@@ -91,7 +114,7 @@ export const auth = betterAuth({
       },
     },
   },
-  plugins: [admin({ defaultRole: "learner", adminRoles: ["admin"] }), nextCookies()],
+  plugins: [admin({ defaultRole: "learner", adminRoles: ["admin"], bannedUserMessage: "This account is banned from Riser. If you think this is a mistake, ask your training manager." }), nextCookies()],
 });
 
 export type Auth = typeof auth;

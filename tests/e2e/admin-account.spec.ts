@@ -2,6 +2,7 @@
 // the UI, "sign out everywhere else" ends another browser's session, axe (WCAG 2.2 AA tags) finds
 // nothing on the admin pages and /account, and both work at phone width.
 import { randomUUID } from "node:crypto";
+import path from "node:path";
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { hashPassword } from "better-auth/crypto";
@@ -36,6 +37,7 @@ async function createPerson(tag: string, role: string, organizationName: string,
 
 async function signIn(page: Page, email: string, password: string) {
   await page.goto("/sign-in");
+  await page.waitForLoadState("networkidle"); // the form posts through its script once hydrated
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
@@ -86,7 +88,7 @@ test("axe finds no violations on the admin pages", async ({ browser }) => {
   for (const [url, ready] of [
     ["/admin", "Latest audit entries"],
     ["/admin/organizations", "All organizations"],
-    ["/admin/people", "Manage"],
+    ["/admin/people", "Joined"],
     ["/admin/content", "What is synced"],
     ["/admin/mail", "Recipient"],
     ["/admin/audit", "Reason and details"],
@@ -97,21 +99,36 @@ test("axe finds no violations on the admin pages", async ({ browser }) => {
   }
 });
 
-test("the admin and account pages work at phone width (360 px) and desktop width (1280 px)", async ({ browser }) => {
+test("the admin and account pages work at phone width (360 px) and desktop width (1280 px)", async ({ browser }, testInfo) => {
+  // Screenshots for a person to look at: RISER_SCREENSHOT_DIR, or this test's output folder.
+  const shots = process.env.RISER_SCREENSHOT_DIR ?? testInfo.outputPath();
   for (const width of [1280, 360]) {
     const page = await newPage(browser, width);
     await signIn(page, "admin@riser.example", DEMO_PASSWORD);
     for (const [url, ready] of [
       ["/admin", "Latest audit entries"],
-      ["/admin/people", "Manage"],
+      ["/admin/organizations", "All organizations"],
+      ["/admin/people", "Joined"],
+      ["/admin/content", "What is synced"],
+      ["/admin/mail", "Recipient"],
+      ["/admin/audit", "Reason and details"],
       ["/account", "This device"],
     ] as const) {
       await page.goto(url);
       await expect(page.getByText(ready).first()).toBeVisible();
+      await page.waitForLoadState("networkidle");
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow, `${url} at ${width} px scrolls sideways`).toBeLessThanOrEqual(1);
-      await page.screenshot({ path: `test-results/screens/${url.replace(/\//g, "_") || "root"}-${width}.png`, fullPage: true });
+      await page.screenshot({ path: path.join(shots, `${url.slice(1).replace(/\//g, "-")}-${width}.png`), fullPage: true });
     }
+    // the manage dialog fits the screen too
+    await page.goto("/admin/people");
+    await page.getByRole("button", { name: "Manage Dario Feltham" }).click();
+    const dialog = page.getByRole("dialog", { name: "Manage Dario Feltham" });
+    await expect(dialog).toBeVisible();
+    const box = await dialog.boundingBox();
+    expect(box!.width).toBeLessThanOrEqual(width);
+    await page.screenshot({ path: path.join(shots, `admin-people-dialog-${width}.png`) });
     await page.context().close();
   }
 });
@@ -151,7 +168,7 @@ test("the password form asks for the current password and says when it is wrong"
   await page.getByLabel("New password", { exact: true }).fill("another-good-pass-1");
   await page.getByLabel("New password again").fill("another-good-pass-1");
   await page.getByRole("button", { name: "Change the password" }).click();
-  await expect(page.getByText("Enter your current password")).toBeVisible();
+  await expect(page.getByText("Enter your current password", { exact: true })).toBeVisible();
   await page.getByLabel("Current password").fill("not-the-password-9");
   await page.getByRole("button", { name: "Change the password" }).click();
   await expect(page.getByText("That is not your current password")).toBeVisible();

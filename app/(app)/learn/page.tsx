@@ -1,18 +1,101 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
+import { certificatesOfHolder } from "@/lib/certificates/queries";
+import { findModule } from "@/lib/content/load";
+import { lastCompletedLesson } from "@/lib/progress";
+import { assignedWork, type AssignedItem } from "@/lib/team/assignments";
+import type { BoardCell } from "@/lib/team/board";
 
 export const metadata: Metadata = { title: "My training" };
 
+const day = (iso: string) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
+
+/** Where "continue" leads: the lesson after the last one done, else that module's quiz, else the next assigned module. */
+function continueTarget(last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number): { href: string; label: string } | null {
+  if (last) {
+    const mod = findModule(last.module);
+    if (mod) {
+      const i = mod.lessons.findIndex((l) => l.slug === last.lesson);
+      const next = mod.lessons[i + 1];
+      if (next) return { href: `/modules/${mod.slug}/${next.slug}`, label: `${mod.meta.title}: ${next.meta.title}` };
+      if (lessonsDone(mod.slug) >= mod.lessons.length && !items.some((it) => it.kind === "module" && it.slug === mod.slug && (it.status === "passed" || it.status === "expiring"))) {
+        return { href: `/modules/${mod.slug}/quiz`, label: `${mod.meta.title}: the quiz` };
+      }
+    }
+  }
+  const open = items.find((it) => it.nextModule && it.status !== "passed" && it.status !== "expiring");
+  const mod = open?.nextModule ? findModule(open.nextModule) : undefined;
+  return mod ? { href: `/modules/${mod.slug}`, label: mod.meta.title } : null;
+}
+
 export default async function LearnPage() {
   const viewer = await requireViewer("signed-in", "/learn");
+  const person = viewer.organizationId
+    ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
+    : null;
+  const [work, last, certs] = await Promise.all([person ? assignedWork(person) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id)]);
+  const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0);
+  const shownCerts = certs.filter((c) => c.status !== "revoked").slice(0, 3);
+
   return (
     <>
       <PageTitle title={`Hello, ${viewer.name}`} lead="Your assigned work, where you left off, and your certificates." />
-      <p>
-        <Link href="/modules">Browse the modules</Link>
-      </p>
+
+      {next ? (
+        <section aria-labelledby="resume" className="mb-8 rounded border border-water/40 bg-water-light p-4">
+          <h2 id="resume" className="text-xl">{last ? "Continue where you left off" : "Start here"}</h2>
+          <p className="mt-2">
+            <Link href={next.href} className="font-bold">
+              {next.label} →
+            </Link>
+          </p>
+        </section>
+      ) : null}
+
+      <section aria-labelledby="assigned" className="mb-8">
+        <h2 id="assigned" className="mb-3 text-2xl">Assigned to you</h2>
+        {work.items.length === 0 ? (
+          <p>
+            Nothing is assigned to you right now. <Link href="/modules">Browse the modules</Link> to learn at your own pace.
+          </p>
+        ) : (
+          <ol className="flex flex-col gap-2" aria-label="Assigned work, soonest due first">
+            {work.items.map((i) => (
+              <li key={i.id} className="flex flex-wrap items-center gap-x-4 gap-y-1 rounded border border-line bg-panel px-3 py-3">
+                <StatusBadge status={i.status} />
+                <Link href={i.kind === "module" ? `/modules/${i.slug}` : `/modules?path=${i.slug}`} className="font-bold">
+                  {i.title}
+                </Link>
+                <span className="text-sm text-muted">
+                  {i.kind === "path" ? `Learning path · ${i.modulesDone} of ${i.modules} modules passed` : "Module"} · due <span className="font-mono">{day(i.dueAt)}</span>
+                  {i.via === "team" ? " · for your team" : ""}
+                </span>
+              </li>
+            ))}
+          </ol>
+        )}
+      </section>
+
+      <section aria-labelledby="certs" className="mb-8">
+        <h2 id="certs" className="mb-3 text-2xl">Your certificates</h2>
+        {shownCerts.length === 0 ? (
+          <p>None yet: finish a module&apos;s lessons and pass its quiz to earn one.</p>
+        ) : (
+          <ul className="mb-2 flex flex-col gap-1">
+            {shownCerts.map((c) => (
+              <li key={c.id}>
+                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? "expired" : c.expiringSoon ? "expires soon," : "valid until"} <span className="font-mono">{c.expiresAt.toISOString().slice(0, 10)}</span></span>
+              </li>
+            ))}
+          </ul>
+        )}
+        <p>
+          <Link href="/certificates">All your certificates</Link> · <Link href="/modules">Browse the modules</Link>
+        </p>
+      </section>
     </>
   );
 }

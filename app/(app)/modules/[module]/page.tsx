@@ -69,6 +69,7 @@ export default async function ModulePage({ params }: Params) {
         <div className="mt-4 flex flex-wrap gap-3">
           <Link href={`/modules/${slug}/${firstOpen.slug}`} className={buttonLinkClass}>{done.size ? "Continue" : "Start"} the lessons</Link>
           <Link href={`/modules/${slug}/quiz`} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Take the quiz</Link>
+          {mod.skills.length ? <Link href={`/modules/${slug}/sign-offs`} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Practical sign-offs</Link> : null}
         </div>
       </section>
     </div>

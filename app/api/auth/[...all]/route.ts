@@ -1,11 +1,22 @@
 import { toNextJsHandler } from "better-auth/next-js";
 import { auth } from "@/lib/auth";
-import { errorResponse } from "@/lib/api";
+import { errorResponse, json } from "@/lib/api";
 
 const handlers = toNextJsHandler(auth);
 
+/**
+ * better-auth's admin endpoints (ban, set role, impersonate, remove, set password …) are not served
+ * over HTTP: admins act through /api/admin/*, which calls them on the server and writes the audit log.
+ */
+function adminPath(req: Request): Response | null {
+  if (!new URL(req.url).pathname.startsWith("/api/auth/admin/")) return null;
+  return json({ error: "Not found. Admin actions go through the admin console, which records them in the audit log." }, 404);
+}
+
 // better-auth answers its own errors; a database outage still becomes a clear 503.
 export async function GET(req: Request) {
+  const blocked = adminPath(req);
+  if (blocked) return blocked;
   try {
     return await handlers.GET(req);
   } catch (err) {
@@ -13,6 +24,8 @@ export async function GET(req: Request) {
   }
 }
 export async function POST(req: Request) {
+  const blocked = adminPath(req);
+  if (blocked) return blocked;
   try {
     return await handlers.POST(req);
   } catch (err) {

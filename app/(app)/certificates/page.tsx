@@ -1,0 +1,175 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { RevokeForm } from "@/components/certificates/revoke-form";
+import { ShareLink } from "@/components/certificates/share-link";
+import { StatusBadge } from "@/components/certificates/status-badge";
+import { buttonLinkClass } from "@/components/ui/button";
+import { PageTitle } from "@/components/ui/page-title";
+import { requireViewer } from "@/lib/access";
+import { certificatesOfHolder, type HolderCertificate } from "@/lib/certificates";
+import { revocableCertificates } from "@/lib/certificates/access";
+import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/status";
+import { env } from "@/lib/env";
+
+export const metadata: Metadata = { title: "Certificates" };
+
+function CertificateCard({ c, now }: { c: HolderCertificate; now: Date }) {
+  const url = verificationUrl(env.APP_URL, c.verificationCode);
+  const days = daysUntil(c.expiresAt, now);
+  return (
+    <li className="flex flex-col gap-3 rounded border border-line bg-panel p-4" data-testid={`certificate-${c.serial}`}>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p className="font-mono text-xs uppercase text-muted">{KIND_LABEL[c.kind]}</p>
+        <StatusBadge status={c.status} expiringSoon={c.expiringSoon} />
+      </div>
+      <h3 className="text-xl">
+        <Link href={c.kind === "module" ? `/modules/${c.subjectSlug}` : `/modules?path=${c.subjectSlug}`}>{c.subjectTitle}</Link>
+      </h3>
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-4 lg:grid-cols-2">
+        <div>
+          <dt className="text-muted">Serial</dt>
+          <dd className="whitespace-nowrap font-mono">{c.serial}</dd>
+        </div>
+        <div>
+          <dt className="text-muted">CE hours</dt>
+          <dd className="font-mono">{formatHours(c.ceHours)}</dd>
+        </div>
+        <div>
+          <dt className="text-muted">Issued</dt>
+          <dd>{formatCertificateDate(c.issuedAt)}</dd>
+        </div>
+        <div>
+          <dt className="text-muted">{c.status === "expired" ? "Expired" : "Valid until"}</dt>
+          <dd>{formatCertificateDate(c.expiresAt)}</dd>
+        </div>
+      </dl>
+      {c.status === "revoked" && c.revokedAt ? (
+        <p className="text-sm text-caution">Revoked on {formatCertificateDate(c.revokedAt)}. Ask your training manager if you think this is a mistake.</p>
+      ) : null}
+      {c.expiringSoon && !c.renewedBySerial ? (
+        <p className="text-sm font-bold text-caution">
+          Expires in {days} day{days === 1 ? "" : "s"}.{" "}
+          {c.kind === "module" ? (
+            <>
+              <Link href={`/modules/${c.subjectSlug}`}>Pass the module again</Link> to renew it.
+            </>
+          ) : (
+            "Renew its modules to earn a new path certificate."
+          )}
+        </p>
+      ) : null}
+      {c.status === "expired" && c.kind === "module" && !c.renewedBySerial ? (
+        <p className="text-sm">
+          <Link href={`/modules/${c.subjectSlug}`}>Pass the module again</Link> to earn a new certificate.
+        </p>
+      ) : null}
+      {c.renewsSerial || c.renewedBySerial ? (
+        <p className="text-sm text-muted">
+          {c.renewsSerial ? `Renews ${c.renewsSerial}. ` : ""}
+          {c.renewedBySerial ? `Renewed by ${c.renewedBySerial}.` : ""}
+        </p>
+      ) : null}
+      <div className="flex flex-col gap-3 border-t border-line pt-3">
+        <p>
+          <a href={`/api/certificates/${c.id}/pdf`} className={buttonLinkClass} download>
+            Download PDF<span className="sr-only"> of {c.serial}</span>
+          </a>
+        </p>
+        {c.status === "valid" ? <ShareLink url={url} serial={c.serial} /> : <p className="text-sm"><a href={url}>Public check page</a> (shows the status above)</p>}
+      </div>
+    </li>
+  );
+}
+
+export default async function CertificatesPage() {
+  const viewer = await requireViewer("signed-in", "/certificates");
+  const now = new Date();
+  const [mine, revocable] = await Promise.all([certificatesOfHolder(viewer.id, now), revocableCertificates(viewer, now)]);
+  const current = mine.filter((c) => c.status === "valid");
+  const past = mine.filter((c) => c.status !== "valid");
+  // one certificate per module counts (a renewal and the one it renews may both be valid for a while)
+  const perModule = new Map(current.filter((c) => c.kind === "module").map((c) => [c.subjectSlug, c.ceHours]));
+  const hours = [...perModule.values()].reduce((n, h) => n + h, 0);
+
+  return (
+    <>
+      <PageTitle
+        title="Certificates"
+        lead="Every module you complete earns a certificate with its continuing-education hours; finishing all modules of a learning path earns one for the path. Share the link so that anyone can check it."
+      />
+      {mine.length === 0 ? (
+        <div className="max-w-prose rounded border border-line bg-panel p-4" data-testid="certificates-empty">
+          <p className="font-bold">No certificates yet.</p>
+          <p className="mt-2">
+            Finish a module&apos;s lessons and pass its quiz to earn the first one. <Link href="/modules">Browse the modules</Link>
+          </p>
+        </div>
+      ) : (
+        <>
+          <section aria-labelledby="current-heading">
+            <h2 id="current-heading" className="text-2xl">
+              Valid now
+            </h2>
+            <p className="mt-1 text-muted" data-testid="certificates-summary">
+              {current.length} valid certificate{current.length === 1 ? "" : "s"} · {formatHours(hours)} CE hours from modules
+            </p>
+            {current.length === 0 ? <p className="mt-3">None of your certificates is valid today.</p> : null}
+            <ul className="mt-4 grid gap-4 lg:grid-cols-2">
+              {current.map((c) => (
+                <CertificateCard key={c.id} c={c} now={now} />
+              ))}
+            </ul>
+          </section>
+          {past.length ? (
+            <section aria-labelledby="past-heading" className="mt-10">
+              <h2 id="past-heading" className="text-2xl">
+                Expired and revoked
+              </h2>
+              <ul className="mt-4 grid gap-4 lg:grid-cols-2">
+                {past.map((c) => (
+                  <CertificateCard key={c.id} c={c} now={now} />
+                ))}
+              </ul>
+            </section>
+          ) : null}
+        </>
+      )}
+      <p className="mt-8 max-w-prose text-sm text-muted">
+        Hours are Riser&apos;s estimate of the study time for each module. Whether they count toward a licence or registration is for
+        your licensing body or the authority having jurisdiction to decide.
+      </p>
+
+      {viewer.role === "manager" || viewer.role === "admin" ? (
+        <section aria-labelledby="revoke-heading" className="mt-10">
+          <h2 id="revoke-heading" className="text-2xl">
+            {viewer.role === "admin" ? "Certificates in all organizations" : "Certificates in your organization"}
+          </h2>
+          <p className="mt-1 max-w-prose text-muted">
+            Revoke a certificate that was earned improperly or issued in error. The reason is required and is kept in the audit log; the
+            public check then shows the certificate as revoked.
+          </p>
+          {revocable.length === 0 ? <p className="mt-3">No certificates to show.</p> : null}
+          <ul className="mt-4 flex flex-col gap-3">
+            {revocable.map((c) => (
+              <li key={c.id} className="flex flex-wrap items-start justify-between gap-3 rounded border border-line bg-panel p-3" data-testid={`org-certificate-${c.serial}`}>
+                <div>
+                  <p className="font-bold">
+                    {c.holderName} · {c.subjectTitle}
+                  </p>
+                  <p className="text-sm text-muted">
+                    <span className="font-mono">{c.serial}</span> · {viewer.role === "admin" && c.organizationName ? `${c.organizationName} · ` : ""}{c.status === "expired" ? "expired" : "valid until"}{" "}
+                    {formatCertificateDate(c.expiresAt)}
+                  </p>
+                </div>
+                <div className="flex flex-wrap items-start gap-2">
+                  <StatusBadge status={c.status} expiringSoon={c.expiringSoon} />
+                  <RevokeForm id={c.id} serial={c.serial} holderName={c.holderName} />
+                </div>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+    </>
+  );
+}

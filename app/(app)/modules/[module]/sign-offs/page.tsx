@@ -1,0 +1,117 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
+import { SignOffBadge } from "@/components/signoffs/status-badge";
+import { UploadForm } from "@/components/signoffs/upload-form";
+import { requireViewer } from "@/lib/access";
+import { findModule } from "@/lib/content/load";
+import { signOffsOf, type SignOffItem } from "@/lib/signoffs/queries";
+
+type Params = { params: Promise<{ module: string }> };
+
+export async function generateMetadata({ params }: Params): Promise<Metadata> {
+  return { title: `Sign-offs: ${findModule((await params).module)?.meta.title ?? "module"}` };
+}
+
+const day = (d: Date) => d.toISOString().slice(0, 10);
+
+function Decision({ s }: { s: SignOffItem }) {
+  if (s.status === "submitted") return <p>Sent on {day(s.submittedAt)}; waiting for a manager of your organization to review it.</p>;
+  return (
+    <div className={`rounded border p-3 ${s.status === "approved" ? "border-pass bg-pass-light" : "border-caution bg-caution-light"}`}>
+      <p className="font-bold">
+        {s.status === "approved" ? "Signed off" : "Returned"} by {s.reviewerName ?? "a reviewer"} on {s.reviewedAt ? day(s.reviewedAt) : "—"}
+      </p>
+      {s.reviewComment ? <p className="mt-1 whitespace-pre-line">“{s.reviewComment}”</p> : null}
+    </div>
+  );
+}
+
+export default async function ModuleSignOffsPage({ params }: Params) {
+  const { module: slug } = await params;
+  const viewer = await requireViewer("signed-in", `/modules/${slug}/sign-offs`);
+  const mod = findModule(slug);
+  if (!mod) notFound();
+  const mine = await signOffsOf(viewer.id, slug);
+  const required = new Set(mod.meta.requiredSkills);
+
+  return (
+    <div className="flex flex-col gap-6">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link href="/modules">Modules</Link> / <Link href={`/modules/${slug}`}>{mod.meta.title}</Link>
+      </nav>
+      <header>
+        <h1 className="text-3xl">Practical sign-offs</h1>
+        <p className="mt-2 max-w-prose text-muted">
+          {mod.meta.title}: skills you show on the job. Do the work with your crew lead or manager watching, then send the evidence here; a manager of your organization reviews it and you get an e-mail either way.
+          {required.size ? " Skills marked “required” must be signed off before this module completes." : " None of these is required to complete the module, but each one signed off is on your record."}
+        </p>
+      </header>
+      <aside aria-label="Safety" className="max-w-prose rounded border-l-4 border-caution bg-caution-light p-3">
+        <p className="font-bold text-caution">Caution: the photo never comes first</p>
+        <p className="mt-1">
+          Take pictures only once the work is safe to stop: not from a ladder while you are working, not beside a system under test pressure, and with solvent-cement fumes ventilated and ignition sources away. The listing, the adopted code and the authority having jurisdiction decide how the work is done; this page only records that you did it.
+        </p>
+      </aside>
+      {mod.skills.map((skill) => {
+        const history = mine.filter((s) => s.skillId === skill.id);
+        const latest = history[0];
+        const canSend = !latest || latest.status === "returned";
+        return (
+          <section key={skill.id} aria-labelledby={`skill-${skill.id}`} className="rounded border border-line bg-panel p-4" data-testid={`skill-${skill.id}`}>
+            <div className="flex flex-wrap items-start justify-between gap-2">
+              <h2 id={`skill-${skill.id}`} className="max-w-prose text-xl">
+                {skill.title}
+              </h2>
+              <div className="flex flex-wrap gap-2">
+                {required.has(skill.id) ? <span className="rounded border border-copper bg-copper-light px-2 py-0.5 text-sm font-bold text-copper">Required</span> : null}
+                <SignOffBadge status={latest?.status ?? "none"} />
+              </div>
+            </div>
+            <div className="mt-3 grid gap-4 md:grid-cols-2">
+              <div>
+                <h3 className="font-bold">What the observer must see</h3>
+                <ul className="mt-1 list-disc pl-6">
+                  {skill.observe.map((o) => (
+                    <li key={o}>{o}</li>
+                  ))}
+                </ul>
+              </div>
+              <div>
+                <h3 className="font-bold">Evidence to send</h3>
+                <p className="mt-1">{skill.evidence}</p>
+              </div>
+            </div>
+            {latest ? (
+              <div className="mt-4 flex flex-col gap-2" data-testid="latest-sign-off">
+                <Decision s={latest} />
+                {latest.note ? <p className="text-sm"><span className="font-bold">Your note:</span> {latest.note}</p> : null}
+                <EvidenceThumbs signOffId={latest.id} items={latest.evidence} />
+              </div>
+            ) : null}
+            {canSend ? (
+              <div className="mt-4 border-t border-line pt-4">
+                <h3 className="mb-2 font-bold">{latest ? "Send new evidence" : "Send evidence"}</h3>
+                <UploadForm module={slug} skill={skill.id} skillTitle={skill.title} />
+              </div>
+            ) : null}
+            {history.length > 1 ? (
+              <details className="mt-4">
+                <summary className="cursor-pointer font-bold">Earlier submissions ({history.length - 1})</summary>
+                <ol className="mt-2 flex flex-col gap-3">
+                  {history.slice(1).map((s) => (
+                    <li key={s.id} className="flex flex-col gap-2 border-t border-line pt-2">
+                      <Decision s={s} />
+                      <EvidenceThumbs signOffId={s.id} items={s.evidence} />
+                    </li>
+                  ))}
+                </ol>
+              </details>
+            ) : null}
+          </section>
+        );
+      })}
+    </div>
+  );
+}

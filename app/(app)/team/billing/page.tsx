@@ -1,0 +1,109 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { BuySeatsForm } from "@/components/billing/buy-seats-form";
+import { formatDayTime, plural } from "@/components/billing/format";
+import { PriceTable } from "@/components/billing/price-table";
+import { ReceiptsTable } from "@/components/billing/receipts-table";
+import { SeatFigures } from "@/components/billing/seat-summary";
+import { PageTitle } from "@/components/ui/page-title";
+import { requireViewer } from "@/lib/access";
+import { billingOverview, organizationSeatList, paymentsConfigured } from "@/lib/billing";
+import { billingPageScope } from "@/lib/billing/page-scope";
+import { formatMoney } from "@/lib/billing/pricing";
+
+export const metadata: Metadata = { title: "Seats and billing" };
+
+/** Admins without ?org=: every organization's seats, each linking to its billing page. */
+async function AllOrganizations() {
+  const list = await organizationSeatList();
+  return (
+    <>
+      <PageTitle title="Seats and billing" lead="Every organization's seats. Open one to see its receipts or to buy seats for it." />
+      <div className="overflow-x-auto rounded border border-line bg-panel">
+        <table className="w-full border-collapse text-left text-sm">
+          <caption className="sr-only">Organizations and their seats</caption>
+          <thead>
+            <tr className="border-b border-line bg-paper">
+              <th scope="col" className="px-3 py-2">
+                Organization
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Seats
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                In use
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Free
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Trial
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {list.map((o) => (
+              <tr key={o.orgId} className="border-b border-line last:border-b-0">
+                <td className="px-3 py-2">
+                  <Link href={`/team/billing?org=${o.orgId}`}>{o.orgName}</Link>
+                </td>
+                <td className="px-3 py-2 text-right font-mono">{o.seats}</td>
+                <td className="px-3 py-2 text-right font-mono">{o.used}</td>
+                <td className="px-3 py-2 text-right font-mono">{o.free}</td>
+                <td className="px-3 py-2">{o.trial === "none" ? "—" : `${o.trial === "active" ? "until" : "ended"} ${o.trialEndsAt?.slice(0, 10)}`}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </>
+  );
+}
+
+export default async function BillingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const viewer = await requireViewer("manager", "/team/billing");
+  const scope = await billingPageScope(viewer, (await searchParams).org);
+  if (!scope.orgId || !scope.orgName) return <AllOrganizations />;
+  const o = await billingOverview(scope.orgId, scope.orgName);
+  const unfinished = o.checkouts;
+
+  return (
+    <>
+      <PageTitle
+        title="Seats and billing"
+        lead={`${o.orgName}: each person in the organization takes one seat, managers included. An open invitation holds a seat until it is accepted, revoked or expires.`}
+      >
+        {viewer.role === "admin" ? <Link href="/team/billing">All organizations</Link> : null}
+      </PageTitle>
+      <div className="flex flex-col gap-10">
+        <SeatFigures s={o} />
+        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+          <BuySeatsForm plans={o.plans} currency={o.currency} org={viewer.role === "admin" ? o.orgId : undefined} enabled={paymentsConfigured()} />
+          <PriceTable plans={o.plans} currency={o.currency} />
+        </div>
+        {unfinished.length ? (
+          <section aria-labelledby="unfinished-h" className="flex flex-col gap-3">
+            <h2 id="unfinished-h" className="text-2xl">
+              Checkouts not paid
+            </h2>
+            <p className="max-w-prose text-sm text-muted">Started but not paid: nothing was charged for these and they added no seats.</p>
+            <ul className="flex flex-col gap-2" data-testid="unfinished-checkouts">
+              {unfinished.map((c) => (
+                <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 rounded border border-line bg-panel px-3 py-2">
+                  <span>
+                    {formatDayTime(c.createdAt)} · {plural(c.seats, "seat")} · <span className="font-mono">{formatMoney(c.amount, c.currency)}</span> · {c.boughtBy}
+                  </span>
+                  <span className="flex items-center gap-3">
+                    <span className="text-sm font-bold">{c.statusLabel}</span>
+                    {c.payUrl ? <a href={c.payUrl}>Continue to payment</a> : null}
+                  </span>
+                </li>
+              ))}
+            </ul>
+          </section>
+        ) : null}
+        <ReceiptsTable receipts={o.receipts} />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,91 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { BulkInvite } from "@/components/team/bulk-invite";
+import { InviteForm } from "@/components/team/invite-form";
+import { OrgPicker } from "@/components/team/org-picker";
+import { TeamNav } from "@/components/team/team-nav";
+import { PageTitle } from "@/components/ui/page-title";
+import { requireViewer } from "@/lib/access";
+import { openInvitations } from "@/lib/team/invites";
+import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
+import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
+import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
+
+export const metadata: Metadata = { title: "Invite people" };
+
+export default async function InvitePage({ searchParams }: { searchParams: Promise<{ org?: string }> }) {
+  const viewer = await requireViewer("manager", "/team/invite");
+  const { org } = await searchParams;
+  const scope = await pageScope(viewer, org);
+  const adminOrg = viewer.role === "admin" ? scope.orgId : null;
+  const head = (
+    <>
+      <PageTitle title="Invite people" lead="Invite one person, or a whole roster from a CSV file. Each invitation mail carries a single-use link that expires." />
+      <TeamNav current="/team/invite" org={adminOrg} />
+      {viewer.role === "admin" ? <OrgPicker orgs={await allOrganizations()} current={scope.orgId} allowAll={false} action="/team/invite" /> : null}
+    </>
+  );
+  if (!scope.orgId) {
+    return (
+      <>
+        {head}
+        <p>Choose the organization the invitations are for.</p>
+      </>
+    );
+  }
+  const [teams, usage, open] = await Promise.all([teamsInScope(scope), seatUsage(scope.orgId), openInvitations(scope.orgId)]);
+  const used = usage.members + usage.pending;
+  return (
+    <>
+      {head}
+      <p className="mb-6 rounded border border-line bg-panel px-3 py-2">
+        <strong>{scope.orgName}</strong>: {used} of {usage.seats} seats taken ({usage.members} members, {usage.pending} open invitations).{" "}
+        {used >= usage.seats ? <strong className="text-caution">All seats are taken. </strong> : null}
+        <Link href={BILLING_PATH}>Seats and billing</Link>
+      </p>
+      <div className="grid gap-10 lg:grid-cols-2">
+        <section aria-labelledby="one">
+          <h2 id="one" className="mb-3 text-2xl">One person</h2>
+          <InviteForm teams={teams.map((t) => ({ id: t.id, name: t.name }))} org={adminOrg} />
+        </section>
+        <section aria-labelledby="bulk">
+          <h2 id="bulk" className="mb-3 text-2xl">A roster from a CSV file</h2>
+          <BulkInvite org={adminOrg} />
+        </section>
+      </div>
+      <section aria-labelledby="open" className="mt-10">
+        <h2 id="open" className="mb-3 text-2xl">Open invitations</h2>
+        {open.length === 0 ? (
+          <p>No open invitations.</p>
+        ) : (
+          <div role="region" aria-label="Open invitations" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+            <table className="w-full border-collapse text-sm">
+              <thead>
+                <tr className="border-b border-line bg-paper text-left">
+                  <th scope="col" className="px-2 py-2">E-mail</th>
+                  <th scope="col" className="px-2 py-2">Name</th>
+                  <th scope="col" className="px-2 py-2">Role</th>
+                  <th scope="col" className="px-2 py-2">Team</th>
+                  <th scope="col" className="px-2 py-2">Sent</th>
+                  <th scope="col" className="px-2 py-2">Link expires</th>
+                </tr>
+              </thead>
+              <tbody>
+                {open.map((i) => (
+                  <tr key={i.id} className="border-b border-line last:border-0">
+                    <td className="px-2 py-2 break-all">{i.email}</td>
+                    <td className="px-2 py-2">{i.name ?? ""}</td>
+                    <td className="px-2 py-2">{ROLE_LABELS[i.role as InviteRole] ?? i.role}</td>
+                    <td className="px-2 py-2">{i.team ?? "No team"}</td>
+                    <td className="px-2 py-2 font-mono">{i.createdAt.toISOString().slice(0, 10)}</td>
+                    <td className="px-2 py-2 font-mono">{i.expiresAt.toISOString().slice(0, 10)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,52 @@
+import type { Metadata } from "next";
+import { TeamBoard, type BoardFilters } from "@/components/team/board";
+import { OrgPicker } from "@/components/team/org-picker";
+import { TeamSummary } from "@/components/team/summary";
+import { TeamNav } from "@/components/team/team-nav";
+import { PageTitle } from "@/components/ui/page-title";
+import { requireViewer } from "@/lib/access";
+import { boardModules } from "@/lib/team/board";
+import { parseBoardQuery } from "@/lib/team/schemas";
+import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
+
+export const metadata: Metadata = { title: "Team board" };
+
+export default async function TeamPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const viewer = await requireViewer("manager", "/team");
+  const raw = await searchParams;
+  const params = new URLSearchParams(Object.entries(raw).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
+  const parsed = parseBoardQuery(params);
+  const q = parsed.success ? parsed.data : parseBoardQuery(new URLSearchParams(params.get("org") ? { org: params.get("org")! } : {})).data!;
+  const scope = await pageScope(viewer, q.org);
+  const [teams, orgs] = await Promise.all([teamsInScope(scope), viewer.role === "admin" ? allOrganizations() : Promise.resolve([])]);
+  const initial: BoardFilters = {
+    team: q.team ?? "",
+    status: q.status ?? "",
+    module: q.module ?? "",
+    dueBefore: q.dueBefore ?? "",
+    q: q.q ?? "",
+    sort: q.sort,
+    dir: q.dir ?? "",
+    page: q.page,
+    pageSize: q.pageSize,
+  };
+  return (
+    <>
+      <PageTitle
+        title="Team board"
+        lead={`${scope.orgName ?? "All organizations"}: who has passed what, what is in progress, what is overdue, and which certificates run out soon.`}
+      />
+      <TeamNav current="/team" org={scope.orgId && viewer.role === "admin" ? scope.orgId : null} />
+      {viewer.role === "admin" ? <OrgPicker orgs={orgs} current={scope.orgId} action="/team" /> : null}
+      <TeamBoard
+        key={scope.orgId ?? "all"}
+        modules={boardModules().map(({ slug, title }) => ({ slug, title }))}
+        teams={teams}
+        org={viewer.role === "admin" ? scope.orgId : null}
+        showOrgNames={!scope.orgId}
+        initial={initial}
+      />
+      <TeamSummary org={viewer.role === "admin" ? scope.orgId : null} showOrgNames={!scope.orgId} />
+    </>
+  );
+}

@@ -1,0 +1,12 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { assertSameOrigin } from "@/lib/admin/http";
+import { renameOrganization } from "@/lib/admin/organizations";
+import { renameOrganizationSchema } from "@/lib/admin/schemas";
+
+/** POST /api/admin/organizations/:id { name } → renames it (audited: organization.rename). */
+export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {
+  assertSameOrigin(req);
+  const { name } = await readJson(req, renameOrganizationSchema);
+  await renameOrganization(viewer, params.id, name, clientIp(req));
+  return json({ ok: true });
+});

@@ -1,0 +1,15 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { createAssignments } from "@/lib/team/assignments";
+import { assignSchema } from "@/lib/team/schemas";
+import { resolveWriteOrg } from "@/lib/team/scope";
+
+/**
+ * POST /api/team/assignments { kind, slug, userIds, teamIds, dueAt: "YYYY-MM-DD", org? } → 201.
+ * Team assignments reach everyone in the team, including people who join it later.
+ */
+export const POST = route("manager", async ({ req, viewer }) => {
+  const input = await readJson(req, assignSchema);
+  const org = await resolveWriteOrg(viewer, input.org);
+  const r = await createAssignments(viewer, org, input, clientIp(req));
+  return json({ ok: true, ...r, message: `Assigned to ${r.assigned} ${r.assigned === 1 ? "target" : "targets"}, due ${r.dueAt.slice(0, 10)}.` }, 201);
+});

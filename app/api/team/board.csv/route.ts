@@ -1,0 +1,11 @@
+import { ApiError, fieldErrorsOf, route } from "@/lib/api";
+import { boardCsv } from "@/lib/team/export";
+import { parseBoardQuery } from "@/lib/team/schemas";
+import { resolveScope } from "@/lib/team/scope";
+
+/** GET /api/team/board.csv?(the board's filters) → every matching person, streamed as CSV. */
+export const GET = route("manager", async ({ req, viewer }) => {
+  const parsed = parseBoardQuery(new URL(req.url).searchParams);
+  if (!parsed.success) throw new ApiError(400, "Some filters are not valid.", fieldErrorsOf(parsed.error));
+  return boardCsv(await resolveScope(viewer, parsed.data.org), parsed.data);
+});

@@ -1,0 +1,8 @@
+import { route } from "@/lib/api";
+import { certificatesCsv } from "@/lib/team/export";
+import { resolveScope } from "@/lib/team/scope";
+
+/** GET /api/team/certificates.csv[?org= admins] → the organization's certificates, streamed as CSV. */
+export const GET = route("manager", async ({ req, viewer }) => {
+  return certificatesCsv(await resolveScope(viewer, new URL(req.url).searchParams.get("org")));
+});

@@ -1,0 +1,25 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { inviteOne } from "@/lib/team/invites";
+import { inviteSchema } from "@/lib/team/schemas";
+import { resolveWriteOrg } from "@/lib/team/scope";
+import { SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
+
+/**
+ * POST /api/team/invites { email, name?, role, teamId?, org? (admins) } → 201, and the mail with a
+ * single-use link goes out. A member's e-mail → 409 with a plain message, nothing changed; no free
+ * seat → 409 with the billing link.
+ */
+export const POST = route("manager", async ({ req, viewer }) => {
+  const input = await readJson(req, inviteSchema);
+  const org = await resolveWriteOrg(viewer, input.org);
+  try {
+    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null }, clientIp(req));
+    const message = r.replaced
+      ? `A new invitation went to ${r.email}; the earlier link no longer works.`
+      : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
+    return json({ ok: true, id: r.id, email: r.email, replaced: r.replaced > 0, mailed: r.mailed, message }, 201);
+  } catch (err) {
+    if (err instanceof SeatLimitError) return seatLimitResponse(err);
+    throw err;
+  }
+});

@@ -1,0 +1,16 @@
+import { route } from "@/lib/api";
+import { rosterTemplate } from "@/lib/team/roster";
+import { resolveScope, teamsInScope } from "@/lib/team/scope";
+
+/** GET /api/team/invites/template.csv → a roster template with the organization's team names. */
+export const GET = route("manager", async ({ req, viewer }) => {
+  const scope = await resolveScope(viewer, new URL(req.url).searchParams.get("org"));
+  const teams = scope.orgId ? await teamsInScope(scope) : [];
+  return new Response(`\uFEFF${rosterTemplate(teams.map((t) => t.name))}`, {
+    headers: {
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": 'attachment; filename="riser-roster-template.csv"',
+      "Cache-Control": "no-store",
+    },
+  });
+});

@@ -1,0 +1,19 @@
+import Link from "next/link";
+
+export default function CertificateNotFound() {
+  return (
+    <div className="max-w-prose" data-testid="certificate-not-found">
+      <h1 className="text-3xl">No certificate matches this code</h1>
+      <p className="mt-3">
+        Riser has no certificate with this verification code. Compare the address with the code printed under the QR code on the
+        certificate: every character counts, and capital and small letters differ.
+      </p>
+      <p className="mt-3">
+        A certificate that does not check out here should not be accepted as a Riser certificate. Ask its holder for a fresh copy.
+      </p>
+      <p className="mt-3">
+        <Link href="/verify">Type a code to check</Link>
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,127 @@
+"use client";
+import { useState } from "react";
+import type { AuditRow } from "@/lib/admin/audit-log";
+import { DataTable, When, type Column } from "./data-table";
+import { SelectField } from "./fields";
+import { useDebounced } from "./use-debounced";
+
+type Org = { id: string; name: string };
+
+function Details({ value }: { value: unknown }) {
+  if (value == null) return null;
+  const entries = typeof value === "object" && !Array.isArray(value) ? Object.entries(value as Record<string, unknown>) : [["value", value]];
+  if (!entries.length) return null;
+  return (
+    <ul className="mt-1 font-mono text-xs text-muted">
+      {entries.map(([k, v]) => (
+        <li key={String(k)} className="break-all">
+          {String(k)}: {typeof v === "object" ? JSON.stringify(v) : String(v)}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+export function AuditLog({ organizations }: { organizations: Org[] }) {
+  const [action, setAction] = useState("");
+  const [actor, setActor] = useState("");
+  const [organizationId, setOrganizationId] = useState("");
+  const [from, setFrom] = useState("");
+  const [to, setTo] = useState("");
+  const [actions, setActions] = useState<string[]>([]);
+  const actorSearch = useDebounced(actor.trim());
+  const filters = { action: action || undefined, actor: actorSearch || undefined, organizationId: organizationId || undefined, from: from || undefined, to: to || undefined };
+  const exportQs = new URLSearchParams(Object.entries(filters).filter((e): e is [string, string] => Boolean(e[1]))).toString();
+  const rangeError = from && to && from > to ? "The start date is after the end date." : null;
+
+  const columns: Column<AuditRow>[] = [
+    { key: "at", label: "Time", sort: "at", render: (r) => <When iso={r.at} /> },
+    { key: "action", label: "Action", sort: "action", render: (r) => <span className="font-mono">{r.action}</span> },
+    { key: "actor", label: "Who", sort: "actor", render: (r) => <span className="break-all">{r.actorEmail ?? <span className="text-muted">Riser itself</span>}</span> },
+    {
+      key: "target",
+      label: "What",
+      sort: "target",
+      render: (r) => (
+        <>
+          <span className="break-all">{r.targetLabel ?? r.targetId}</span>
+          <span className="block font-mono text-xs text-muted">{r.targetType}</span>
+          {r.organization ? <span className="block text-xs">{r.organization}</span> : null}
+        </>
+      ),
+    },
+    {
+      key: "reason",
+      label: "Reason and details",
+      render: (r) => (
+        <>
+          {r.reason ? <span>“{r.reason}”</span> : <span className="text-muted">no reason given</span>}
+          <Details value={r.details} />
+        </>
+      ),
+    },
+    { key: "ip", label: "Address", render: (r) => <span className="font-mono text-xs">{r.ip ?? "—"}</span> },
+  ];
+
+  return (
+    <div className="flex flex-col gap-4">
+      <form role="search" aria-label="Filter the audit log" onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
+        <SelectField label="Action" value={action} onChange={(e) => setAction(e.target.value)} options={[{ value: "", label: "Every action" }, ...actions.map((a) => ({ value: a, label: a }))]} />
+        <div className="flex min-w-0 flex-col gap-1">
+          <label htmlFor="audit-actor" className="font-bold">
+            Who (e-mail)
+          </label>
+          <input id="audit-actor" type="search" value={actor} onChange={(e) => setActor(e.target.value)} maxLength={200} autoComplete="off" className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
+        </div>
+        <SelectField
+          label="Organization"
+          value={organizationId}
+          onChange={(e) => setOrganizationId(e.target.value)}
+          options={[{ value: "", label: "Every organization" }, { value: "none", label: "None (instance-wide)" }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
+        />
+        <div className="flex min-w-0 flex-col gap-1">
+          <label htmlFor="audit-from" className="font-bold">
+            From (UTC day)
+          </label>
+          <input id="audit-from" type="date" value={from} onChange={(e) => setFrom(e.target.value)} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
+        </div>
+        <div className="flex min-w-0 flex-col gap-1">
+          <label htmlFor="audit-to" className="font-bold">
+            To (UTC day, included)
+          </label>
+          <input
+            id="audit-to"
+            type="date"
+            value={to}
+            onChange={(e) => setTo(e.target.value)}
+            aria-invalid={rangeError ? true : undefined}
+            aria-describedby={rangeError ? "audit-range-error" : undefined}
+            className={`min-h-11 w-full min-w-0 rounded border bg-panel px-3 py-2 ${rangeError ? "border-caution" : "border-ink/40"}`}
+          />
+          {rangeError ? (
+            <p id="audit-range-error" role="alert" className="text-sm font-bold text-caution">
+              {rangeError}
+            </p>
+          ) : null}
+        </div>
+      </form>
+      <p>
+        <a href={`/api/admin/audit/export${exportQs ? `?${exportQs}` : ""}`} download className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 font-bold text-ink no-underline hover:bg-paper">
+          Download these rows as CSV
+        </a>
+        <span className="ml-2 text-sm text-muted">The download itself is recorded in the audit log.</span>
+      </p>
+      <DataTable<AuditRow, { actions: string[] }>
+        endpoint="/api/admin/audit"
+        filters={filters}
+        columns={columns}
+        rowKey={(r) => String(r.id)}
+        initialSort={{ key: "at", dir: "desc" }}
+        caption="Audit log"
+        noun="audit entries"
+        emptyText="No audit entries match these filters."
+        onData={(d) => setActions((prev) => (prev.join() === d.actions.join() ? prev : d.actions))}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,111 @@
+"use client";
+import { useState } from "react";
+import { useSWRConfig } from "swr";
+import { FormNotice } from "@/components/ui/field";
+import { ROLES } from "@/lib/access/rules";
+import type { PersonRow } from "@/lib/admin/people";
+import { DataTable, tableKey, When, type Column } from "./data-table";
+import { Dialog } from "./dialog";
+import { SelectField } from "./fields";
+import { PersonActions, ROLE_LABEL } from "./person-actions";
+import { useDebounced } from "./use-debounced";
+
+type Org = { id: string; name: string };
+
+function Status({ p }: { p: PersonRow }) {
+  if (p.banned) return <span className="rounded bg-caution-light px-2 py-0.5 font-bold text-caution">Banned{p.banExpires ? ` to ${p.banExpires.slice(0, 10)}` : ""}</span>;
+  if (!p.emailVerified) return <span className="text-muted">E-mail not confirmed</span>;
+  return <span className="text-pass">Active</span>;
+}
+
+export function PeopleConsole({ organizations, viewerId }: { organizations: Org[]; viewerId: string }) {
+  const { mutate } = useSWRConfig();
+  const [q, setQ] = useState("");
+  const [role, setRole] = useState("");
+  const [organizationId, setOrganizationId] = useState("");
+  const [status, setStatus] = useState("");
+  const [selected, setSelected] = useState<PersonRow | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const search = useDebounced(q.trim());
+
+  const columns: Column<PersonRow>[] = [
+    {
+      key: "name",
+      label: "Name",
+      sort: "name",
+      render: (p) => (
+        <>
+          <span className="font-bold">{p.name}</span>
+          <br />
+          <span className="break-all text-muted">{p.email}</span>
+        </>
+      ),
+    },
+    { key: "role", label: "Role", sort: "role", render: (p) => ROLE_LABEL[p.role] ?? p.role },
+    { key: "organization", label: "Organization", sort: "organization", render: (p) => (p.organization ? <>{p.organization}{p.team ? <span className="block text-muted">{p.team}</span> : null}</> : <span className="text-muted">none</span>) },
+    { key: "status", label: "Status", render: (p) => <Status p={p} /> },
+    { key: "sessions", label: "Sessions", render: (p) => <span className="font-mono">{p.sessions}</span> },
+    { key: "createdAt", label: "Joined", sort: "createdAt", render: (p) => <When iso={p.createdAt} /> },
+    {
+      key: "manage",
+      label: "Actions",
+      render: (p) => (
+        <button type="button" onClick={() => setSelected(p)} className="min-h-11 rounded border border-ink/40 bg-panel px-3 font-bold">
+          Manage<span className="sr-only"> {p.name}</span>
+        </button>
+      ),
+    },
+  ];
+
+  function done(message: string) {
+    setSelected(null);
+    setNotice(message);
+    void mutate(tableKey("/api/admin/people"));
+  }
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div aria-live="polite">
+        <FormNotice message={notice} />
+      </div>
+      <form role="search" aria-label="Filter people" onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
+        <div className="flex min-w-0 flex-col gap-1">
+          <label htmlFor="people-q" className="font-bold">
+            Search name or e-mail
+          </label>
+          <input id="people-q" type="search" value={q} onChange={(e) => setQ(e.target.value)} maxLength={200} autoComplete="off" className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
+        </div>
+        <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value)} options={[{ value: "", label: "Every role" }, ...ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r]! }))]} />
+        <SelectField
+          label="Organization"
+          value={organizationId}
+          onChange={(e) => setOrganizationId(e.target.value)}
+          options={[{ value: "", label: "Every organization" }, { value: "none", label: "No organization" }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
+        />
+        <SelectField
+          label="Status"
+          value={status}
+          onChange={(e) => setStatus(e.target.value)}
+          options={[
+            { value: "", label: "Everyone" },
+            { value: "active", label: "Not banned" },
+            { value: "banned", label: "Banned" },
+          ]}
+        />
+      </form>
+      <DataTable<PersonRow>
+        endpoint="/api/admin/people"
+        filters={{ q: search || undefined, role: role || undefined, organizationId: organizationId || undefined, status: status || undefined }}
+        columns={columns}
+        rowKey={(p) => p.id}
+        initialSort={{ key: "name", dir: "asc" }}
+        caption="People across organizations"
+        noun="people"
+        emptyText="Nobody matches these filters. Clear a filter or search for part of a name."
+      />
+      <Dialog open={selected !== null} title={selected ? `Manage ${selected.name}` : "Manage"} onClose={() => setSelected(null)}>
+        {selected ? <PersonActions key={selected.id} person={selected} organizations={organizations} viewerId={viewerId} onDone={done} /> : null}
+      </Dialog>
+    </div>
+  );
+}

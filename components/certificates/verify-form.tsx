@@ -1,0 +1,46 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useForm } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/schemas";
+import { extractVerificationCode } from "@/lib/certificates/status";
+
+/**
+ * Type or paste a certificate's code (or its whole link). Works without JavaScript too: the form
+ * falls back to GET /verify?code=…, which the page redirects.
+ */
+export function VerifyForm({ initial, serverError }: { initial?: string; serverError?: string }) {
+  const router = useRouter();
+  const { register, handleSubmit, formState } = useForm<VerifyCodeInput>({
+    resolver: zodResolver(verifyCodeInput),
+    defaultValues: { code: initial ?? "" },
+  });
+  const error = formState.errors.code?.message ?? (formState.isSubmitted ? undefined : serverError);
+
+  return (
+    <form
+      action="/verify"
+      method="get"
+      noValidate
+      onSubmit={handleSubmit((v) => router.push(`/verify/${extractVerificationCode(v.code)}`))}
+      className="flex max-w-xl flex-col gap-4 rounded border border-line bg-panel p-4"
+    >
+      <Field
+        label="Verification code"
+        hint="24 letters, digits, - or _, printed under the QR code on the certificate. A pasted link works too."
+        autoComplete="off"
+        spellCheck={false}
+        className="font-mono"
+        {...register("code")}
+        error={error}
+      />
+      <div>
+        <Button type="submit" disabled={formState.isSubmitting}>
+          Check certificate
+        </Button>
+      </div>
+    </form>
+  );
+}

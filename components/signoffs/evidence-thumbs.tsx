@@ -1,0 +1,38 @@
+import Image from "next/image";
+import { evidenceUrl, type EvidenceItem } from "@/lib/signoffs/queries";
+import { formatBytes } from "@/lib/signoffs/schemas";
+
+/**
+ * Thumbnails of a submission's files, each opening the full file in a new tab. Every URL goes
+ * through the checking route (never straight to the store), so the browser's own session decides.
+ */
+export function EvidenceThumbs({ signOffId, items }: { signOffId: string; items: EvidenceItem[] }) {
+  if (!items.length) return <p className="text-sm text-muted">No files.</p>;
+  return (
+    <ul className="flex flex-wrap gap-3" aria-label="Evidence files">
+      {items.map((e, i) => (
+        <li key={e.id} className="w-40">
+          <a href={evidenceUrl(signOffId, e.id)} target="_blank" rel="noopener" className="block rounded border border-line bg-panel p-1 no-underline">
+            {e.thumbnail ? (
+              <Image
+                src={evidenceUrl(signOffId, e.id, true)}
+                alt={`Photo ${i + 1} of ${items.length}: ${e.name}`}
+                width={152}
+                height={114}
+                unoptimized
+                className="h-[114px] w-[152px] rounded-sm bg-paper object-cover"
+              />
+            ) : (
+              <span className="flex h-[114px] w-[152px] flex-col items-center justify-center rounded-sm bg-paper text-center font-bold text-ink">
+                <span aria-hidden="true" className="text-2xl">📄</span>
+                PDF
+              </span>
+            )}
+            <span className="mt-1 block truncate text-sm text-water underline">{e.name}</span>
+            <span className="block font-mono text-xs text-muted">{formatBytes(e.size)}</span>
+          </a>
+        </li>
+      ))}
+    </ul>
+  );
+}

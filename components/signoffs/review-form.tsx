@@ -1,0 +1,78 @@
+"use client";
+import { useId, useState } from "react";
+import { useForm } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { FormError, FormNotice } from "@/components/ui/field";
+import { postJson } from "@/lib/fetcher";
+import { reviewInput } from "@/lib/signoffs/schemas";
+
+type Decision = "approve" | "return";
+
+/** Approve, or return with a comment (required), one waiting sign-off. The server checks again. */
+export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learnerName: string; skillTitle: string }) {
+  const fieldId = useId();
+  const [problem, setProblem] = useState<string | null>(null);
+  const [outcome, setOutcome] = useState<string | null>(null);
+  const { register, getValues, setError, clearErrors, formState } = useForm<{ comment: string }>({ defaultValues: { comment: "" } });
+  const [busy, setBusy] = useState<Decision | null>(null);
+
+  async function decide(decision: Decision) {
+    setProblem(null);
+    clearErrors();
+    const parsed = reviewInput.safeParse({ decision, comment: getValues("comment") });
+    if (!parsed.success) {
+      const msg = parsed.error.issues.find((i) => i.path[0] === "comment")?.message;
+      if (msg) setError("comment", { message: msg });
+      else setProblem(parsed.error.issues[0]?.message ?? "Check the form.");
+      return;
+    }
+    setBusy(decision);
+    const res = await postJson<{ status: string; moduleCompleted: boolean }>(`/api/sign-offs/${id}/review`, parsed.data);
+    setBusy(null);
+    if (!res.ok) {
+      if (res.fieldErrors?.comment?.[0]) setError("comment", { message: res.fieldErrors.comment[0] });
+      else setProblem(res.error);
+      return;
+    }
+    setOutcome(
+      res.data.status === "approved"
+        ? `✓ Approved. ${learnerName} has been e-mailed.${res.data.moduleCompleted ? " This completed the module for them." : ""}`
+        : `Returned to ${learnerName} with your comment; they have been e-mailed.`,
+    );
+  }
+
+  if (outcome) return <FormNotice message={outcome} />;
+  const error = formState.errors.comment?.message;
+  return (
+    <form onSubmit={(e) => e.preventDefault()} noValidate className="flex flex-col gap-2" aria-label={`Review: ${skillTitle}, ${learnerName}`}>
+      <label htmlFor={fieldId} className="font-bold">
+        Comment for {learnerName}
+      </label>
+      <p id={`${fieldId}-hint`} className="text-sm text-muted">
+        Required when you return it: say what is missing or needs redoing.
+      </p>
+      <textarea
+        id={fieldId}
+        rows={2}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={`${fieldId}-hint${error ? ` ${fieldId}-error` : ""}`}
+        className={`rounded border bg-panel px-3 py-2 ${error ? "border-caution" : "border-ink/40"}`}
+        {...register("comment")}
+      />
+      {error ? (
+        <p id={`${fieldId}-error`} role="alert" className="text-sm font-bold text-caution">
+          {error}
+        </p>
+      ) : null}
+      <FormError message={problem} />
+      <div className="flex flex-wrap gap-2">
+        <Button type="button" onClick={() => decide("approve")} disabled={busy !== null}>
+          {busy === "approve" ? "Approving…" : "Approve sign-off"}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => decide("return")} disabled={busy !== null}>
+          {busy === "return" ? "Returning…" : "Return with comment"}
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,301 @@
+"use client";
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
+import Link from "next/link";
+import { useEffect, useMemo, useState } from "react";
+import useSWR from "swr";
+import { FormError } from "@/components/ui/field";
+import { getJson } from "@/lib/fetcher";
+import type { BoardPage, BoardRow } from "@/lib/team/board";
+import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
+import { StatusBadge } from "./status-badge";
+
+export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };
+
+type Props = {
+  modules: { slug: string; title: string }[];
+  teams: { id: string; name: string; orgName: string }[];
+  org: string | null;
+  showOrgNames: boolean;
+  initial: BoardFilters;
+};
+
+const PAGE_SIZES = [10, 25, 50, 100];
+/** table column id → the server's sort key */
+const SORT_OF: Record<string, BoardSort> = { name: "name", team: "team", passed: "progress", overdue: "overdue", nextDue: "due" };
+
+function queryString(f: BoardFilters, org: string | null, withPage = true): string {
+  const p = new URLSearchParams();
+  if (org) p.set("org", org);
+  for (const k of ["team", "status", "module", "dueBefore", "q", "dir"] as const) if (f[k]) p.set(k, f[k]);
+  if (f.sort !== "name") p.set("sort", f.sort);
+  if (withPage) {
+    if (f.page > 1) p.set("page", String(f.page));
+    if (f.pageSize !== 25) p.set("pageSize", String(f.pageSize));
+  }
+  return p.toString();
+}
+
+const shortDate = (iso: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
+
+const col = createColumnHelper<BoardRow>();
+
+export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props) {
+  const [f, setF] = useState<BoardFilters>(initial);
+  const [search, setSearch] = useState(initial.q);
+  const qs = queryString(f, org);
+  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(`/api/team/board?${qs}`, getJson, { keepPreviousData: true, revalidateOnFocus: false });
+
+  // Keep the address in step with the filters, so a view can be bookmarked or shared.
+  useEffect(() => {
+    const next = qs ? `?${qs}` : window.location.pathname;
+    window.history.replaceState(null, "", next);
+  }, [qs]);
+  // Search as one types, after a pause.
+  useEffect(() => {
+    const t = setTimeout(() => setF((old) => (old.q === search.trim() ? old : { ...old, q: search.trim(), page: 1 })), 300);
+    return () => clearTimeout(t);
+  }, [search]);
+
+  const set = (patch: Partial<BoardFilters>) => setF((old) => ({ ...old, page: 1, ...patch }));
+  const shownModules = f.module ? modules.filter((m) => m.slug === f.module) : modules;
+
+  const columns = useMemo(
+    () => [
+      col.accessor("name", {
+        header: "Person",
+        cell: (c) => (
+          <div className="min-w-40">
+            <Link href={`/team/people/${c.row.original.id}`} className="font-bold">
+              {c.getValue()}
+            </Link>
+            <div className="text-xs text-muted">{c.row.original.email}</div>
+          </div>
+        ),
+      }),
+      col.accessor("team", {
+        header: "Team",
+        cell: (c) => {
+          const t = c.getValue();
+          const orgName = showOrgNames ? teams.find((x) => x.id === c.row.original.teamId)?.orgName : null;
+          return <span className="whitespace-nowrap">{t ?? <span className="text-muted">No team</span>}{orgName ? <span className="block text-xs text-muted">{orgName}</span> : null}</span>;
+        },
+      }),
+      ...shownModules.map((m) =>
+        col.display({
+          id: `m:${m.slug}`,
+          header: () => <span className="block max-w-28 text-xs leading-tight">{m.title}</span>,
+          enableSorting: false,
+          cell: (c) => {
+            const cell = c.row.original.cells[m.slug];
+            if (!cell) return null;
+            const done = cell.status === "passed" || cell.status === "expiring";
+            return (
+              <div className="flex flex-col items-start gap-0.5" title={`${cell.lessonsDone} of ${cell.lessonsTotal} lessons · ${cell.attempts} attempt(s)${cell.bestScore !== null ? ` · best ${cell.bestScore}%` : ""}`}>
+                <StatusBadge status={cell.status} compact />
+                {!done && cell.dueAt ? <span className="whitespace-nowrap text-xs text-muted">due {shortDate(cell.dueAt)}</span> : null}
+                {(cell.status === "expiring" || cell.status === "expired") && cell.expiresAt ? (
+                  <span className="whitespace-nowrap text-xs text-muted">{cell.status === "expired" ? "ended" : "ends"} {shortDate(cell.expiresAt)}</span>
+                ) : null}
+              </div>
+            );
+          },
+        }),
+      ),
+      col.accessor("passed", {
+        header: "Passed",
+        cell: (c) => (
+          <span className="font-mono">
+            {c.getValue()}/{shownModules.length}
+          </span>
+        ),
+      }),
+      col.accessor("overdue", { header: "Overdue", cell: (c) => <span className={`font-mono ${c.getValue() ? "font-bold text-caution" : ""}`}>{c.getValue()}</span> }),
+      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{c.getValue()!.slice(0, 10)}</span> : <span className="text-muted">—</span>) }),
+    ],
+    [shownModules, showOrgNames, teams],
+  );
+
+  const sortColumn = Object.entries(SORT_OF).find(([, v]) => v === f.sort)?.[0] ?? "name";
+  const sorting: SortingState = [{ id: sortColumn, desc: f.dir ? f.dir === "desc" : f.sort === "progress" || f.sort === "overdue" }];
+  // TanStack Table returns fresh functions each render; the React Compiler skips this component.
+  // eslint-disable-next-line react-hooks/incompatible-library
+  const table = useReactTable({
+    data: data?.rows ?? [],
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    manualPagination: true,
+    manualSorting: true,
+    pageCount: data?.pages ?? -1,
+    state: { sorting },
+    onSortingChange: (updater) => {
+      const next = typeof updater === "function" ? updater(sorting) : updater;
+      const s = next[0];
+      if (!s) return set({ sort: "name", dir: "" });
+      set({ sort: SORT_OF[s.id] ?? "name", dir: s.desc ? "desc" : "asc" });
+    },
+  });
+
+  const filtered = Boolean(f.team || f.status || f.module || f.dueBefore || f.q);
+  const exportQs = queryString(f, org, false);
+  const from = data && data.total ? (data.page - 1) * data.pageSize + 1 : 0;
+  const to = data ? Math.min(data.total, data.page * data.pageSize) : 0;
+
+  return (
+    <section aria-labelledby="board-heading" className="mb-10">
+      <h2 id="board-heading" className="mb-3 text-2xl">
+        People and modules
+      </h2>
+      <form role="search" aria-label="Filter the board" className="mb-4 grid gap-3 rounded border border-line bg-panel p-3 sm:grid-cols-2 lg:grid-cols-6" onSubmit={(e) => e.preventDefault()}>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="board-team" className="text-sm font-bold">Team</label>
+          <select id="board-team" value={f.team} onChange={(e) => set({ team: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+            <option value="">All teams</option>
+            {teams.map((t) => (
+              <option key={t.id} value={t.id}>{showOrgNames ? `${t.orgName} · ${t.name}` : t.name}</option>
+            ))}
+            <option value="none">No team</option>
+          </select>
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="board-status" className="text-sm font-bold">Status</label>
+          <select id="board-status" value={f.status} onChange={(e) => set({ status: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+            <option value="">Any status</option>
+            {BOARD_STATUSES.map((s) => (
+              <option key={s} value={s}>{STATUS_LABELS[s]}</option>
+            ))}
+          </select>
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="board-module" className="text-sm font-bold">Module</label>
+          <select id="board-module" value={f.module} onChange={(e) => set({ module: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+            <option value="">All modules</option>
+            {modules.map((m) => (
+              <option key={m.slug} value={m.slug}>{m.title}</option>
+            ))}
+          </select>
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="board-due" className="text-sm font-bold">Open work due by</label>
+          <input id="board-due" type="date" value={f.dueBefore} onChange={(e) => set({ dueBefore: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2" />
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="board-q" className="text-sm font-bold">Name or e-mail</label>
+          <input id="board-q" type="search" value={search} onChange={(e) => setSearch(e.target.value)} className="min-h-11 rounded border border-ink/40 bg-panel px-2" />
+        </div>
+        <div className="flex items-end">
+          <button
+            type="button"
+            disabled={!filtered}
+            onClick={() => {
+              setSearch("");
+              set({ team: "", status: "", module: "", dueBefore: "", q: "" });
+            }}
+            className="min-h-11 w-full rounded border border-ink/40 bg-paper px-4 font-bold disabled:opacity-50"
+          >
+            Clear filters
+          </button>
+        </div>
+      </form>
+
+      <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
+        <p role="status" aria-live="polite" className="text-sm">
+          {isLoading && !data ? "Loading the board…" : data ? (data.total ? `Showing ${from}–${to} of ${data.total.toLocaleString("en-US")} people` : "No one to show") : ""}
+          {isValidating && data ? <span className="ml-2 text-muted">Updating…</span> : null}
+        </p>
+        <p className="flex flex-wrap gap-4 text-sm">
+          <a href={`/api/team/board.csv${exportQs ? `?${exportQs}` : ""}`} download>Download this view (CSV)</a>
+          <a href={`/api/team/certificates.csv${org ? `?org=${encodeURIComponent(org)}` : ""}`} download>Download certificates (CSV)</a>
+        </p>
+      </div>
+
+      {error ? (
+        <div className="mb-4 flex flex-col items-start gap-2">
+          <FormError message={`The board could not be loaded: ${(error as Error).message}`} />
+          <button type="button" onClick={() => mutate()} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold">
+            Try again
+          </button>
+        </div>
+      ) : null}
+
+      {isLoading && !data ? (
+        <div aria-hidden="true" className="h-64 animate-pulse rounded border border-line bg-panel" />
+      ) : data && data.rows.length === 0 ? (
+        <div className="rounded border border-line bg-panel p-6">
+          {filtered ? (
+            <p>No one matches these filters. Clear a filter to see more people.</p>
+          ) : (
+            <p>
+              Nobody is in this organization yet. <Link href={`/team/invite${org ? `?org=${encodeURIComponent(org)}` : ""}`}>Invite people</Link> to start.
+            </p>
+          )}
+        </div>
+      ) : data ? (
+        <div role="region" aria-label="Team board table" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+          <table className="w-full border-collapse text-sm" aria-busy={isValidating}>
+            <caption className="sr-only">Training status of each person in each module{f.status ? `, people with “${STATUS_LABELS[f.status as BoardStatus]}”` : ""}</caption>
+            <thead>
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id} className="border-b border-line bg-paper">
+                  {hg.headers.map((h, i) => {
+                    const sortable = h.column.getCanSort() && h.column.id in SORT_OF;
+                    const dir = h.column.getIsSorted();
+                    return (
+                      <th
+                        key={h.id}
+                        scope="col"
+                        aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}
+                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-10 bg-paper" : ""}`}
+                      >
+                        {sortable ? (
+                          <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-end gap-1 text-left font-bold underline decoration-dotted underline-offset-4">
+                            {flexRender(h.column.columnDef.header, h.getContext())}
+                            <span aria-hidden="true">{dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}</span>
+                          </button>
+                        ) : (
+                          flexRender(h.column.columnDef.header, h.getContext())
+                        )}
+                      </th>
+                    );
+                  })}
+                </tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((r) => (
+                <tr key={r.id} className="border-b border-line align-top last:border-0" data-person={r.original.name}>
+                  {r.getVisibleCells().map((c, i) => (
+                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 bg-panel" : ""}`}>
+                      {flexRender(c.column.columnDef.cell, c.getContext())}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+
+      {data && data.total > 0 ? (
+        <nav aria-label="Board pages" className="mt-3 flex flex-wrap items-center gap-3">
+          <button type="button" disabled={data.page <= 1} onClick={() => setF((o) => ({ ...o, page: o.page - 1 }))} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold disabled:opacity-50">
+            Previous
+          </button>
+          <span className="text-sm">
+            Page {data.page} of {data.pages}
+          </span>
+          <button type="button" disabled={data.page >= data.pages} onClick={() => setF((o) => ({ ...o, page: o.page + 1 }))} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold disabled:opacity-50">
+            Next
+          </button>
+          <label htmlFor="board-size" className="ml-auto text-sm font-bold">
+            Per page
+          </label>
+          <select id="board-size" value={f.pageSize} onChange={(e) => set({ pageSize: Number(e.target.value) })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+            {PAGE_SIZES.map((n) => (
+              <option key={n} value={n}>{n}</option>
+            ))}
+          </select>
+        </nav>
+      ) : null}
+    </section>
+  );
+}

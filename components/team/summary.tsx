@@ -1,0 +1,117 @@
+"use client";
+import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import useSWR from "swr";
+import { FormError } from "@/components/ui/field";
+import { getJson } from "@/lib/fetcher";
+import type { TeamTotal, WeekPoint } from "@/lib/team/board";
+
+type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
+
+const pct = (t: TeamTotal) => (t.cells ? Math.round((t.passed / t.cells) * 100) : 0);
+const weekLabel = (d: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", timeZone: "UTC" }).format(new Date(`${d}T00:00:00Z`));
+
+/** Totals per team and the two charts, fetched once per visit (they cover the whole organization). */
+export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrgNames: boolean }) {
+  const { data, error, isLoading, mutate } = useSWR<Summary>(`/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`, getJson, { revalidateOnFocus: false });
+  const label = (t: TeamTotal) => (showOrgNames ? `${t.orgName} · ${t.team}` : t.team);
+  return (
+    <section aria-labelledby="summary-heading" className="mb-10">
+      <h2 id="summary-heading" className="mb-3 text-2xl">
+        Totals per team
+      </h2>
+      {error ? (
+        <div className="flex flex-col items-start gap-2">
+          <FormError message={`The totals could not be loaded: ${(error as Error).message}`} />
+          <button type="button" onClick={() => mutate()} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold">
+            Try again
+          </button>
+        </div>
+      ) : isLoading || !data ? (
+        <p role="status">Loading the totals…</p>
+      ) : data.teams.length === 0 ? (
+        <p>No people yet, so there is nothing to total.</p>
+      ) : (
+        <>
+          <div role="region" aria-label="Totals per team" tabIndex={0} className="mb-6 overflow-x-auto rounded border border-line bg-panel">
+            <table className="w-full border-collapse text-sm">
+              <thead>
+                <tr className="border-b border-line bg-paper text-left">
+                  <th scope="col" className="px-2 py-2">Team</th>
+                  <th scope="col" className="px-2 py-2">People</th>
+                  <th scope="col" className="px-2 py-2">Modules passed</th>
+                  <th scope="col" className="px-2 py-2">Overdue</th>
+                  <th scope="col" className="px-2 py-2">Certificates expiring</th>
+                  <th scope="col" className="px-2 py-2">Expired</th>
+                  <th scope="col" className="px-2 py-2">Failed last attempt</th>
+                </tr>
+              </thead>
+              <tbody className="font-mono">
+                {data.teams.map((t) => (
+                  <tr key={`${t.orgName}/${t.teamId}`} className="border-b border-line last:border-0">
+                    <th scope="row" className="px-2 py-2 text-left font-sans">{label(t)}</th>
+                    <td className="px-2 py-2">{t.people}</td>
+                    <td className="px-2 py-2">
+                      {t.passed} of {t.cells} ({pct(t)}%)
+                    </td>
+                    <td className={`px-2 py-2 ${t.overdue ? "font-bold text-caution" : ""}`}>{t.overdue}</td>
+                    <td className="px-2 py-2">{t.expiring}</td>
+                    <td className="px-2 py-2">{t.expired}</td>
+                    <td className="px-2 py-2">{t.failed}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+          <div className="grid gap-6 lg:grid-cols-2">
+            <figure className="rounded border border-line bg-panel p-3">
+              <figcaption className="mb-2 font-bold">Modules completed per week (last 12 weeks)</figcaption>
+              <div className="h-60" aria-hidden="true">
+                <ResponsiveContainer width="100%" height="100%">
+                  <BarChart data={data.weeks.map((w) => ({ ...w, label: weekLabel(w.week) }))} margin={{ top: 8, right: 8, bottom: 0, left: -16 }} accessibilityLayer={false}>
+                    <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
+                    <XAxis dataKey="label" tick={{ fontSize: 11, fill: "#14202B" }} interval="preserveStartEnd" />
+                    <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <Tooltip />
+                    <Bar dataKey="completions" name="Completions" fill="#1B617A" />
+                  </BarChart>
+                </ResponsiveContainer>
+              </div>
+              <table className="sr-only">
+                <caption>Modules completed per week</caption>
+                <thead>
+                  <tr>
+                    <th scope="col">Week starting</th>
+                    <th scope="col">Completions</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {data.weeks.map((w) => (
+                    <tr key={w.week}>
+                      <td>{w.week}</td>
+                      <td>{w.completions}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </figure>
+            <figure className="rounded border border-line bg-panel p-3">
+              <figcaption className="mb-2 font-bold">Share of modules passed, by team</figcaption>
+              <div className="h-60" aria-hidden="true">
+                <ResponsiveContainer width="100%" height="100%">
+                  <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={{ top: 8, right: 16, bottom: 0, left: 8 }} accessibilityLayer={false}>
+                    <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
+                    <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <Tooltip />
+                    <Bar dataKey="passed" name="Passed (%)" fill="#9A4F12" />
+                  </BarChart>
+                </ResponsiveContainer>
+              </div>
+              <p className="mt-2 text-sm text-muted">The same figures are in the totals table above.</p>
+            </figure>
+          </div>
+        </>
+      )}
+    </section>
+  );
+}

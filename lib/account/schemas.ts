@@ -1,0 +1,17 @@
+/** Account settings forms: shared by the browser forms; better-auth checks the same rules on its side. */
+import { z } from "zod";
+import { email, password, personName } from "@/lib/auth/schemas";
+
+export const nameSchema = z.object({ name: personName });
+
+export const emailChangeSchema = z.object({ email });
+
+export const passwordChangeSchema = z
+  .object({
+    currentPassword: z.string().min(1, "Enter your current password"),
+    newPassword: password,
+    confirm: z.string(),
+    signOutOthers: z.boolean(),
+  })
+  .refine((v) => v.newPassword === v.confirm, { path: ["confirm"], message: "The two new passwords differ" })
+  .refine((v) => v.newPassword !== v.currentPassword, { path: ["newPassword"], message: "Choose a password different from the current one" });

@@ -1,0 +1,187 @@
+import "server-only";
+import { and, count, eq, isNull, like, or, sql, type SQL } from "drizzle-orm";
+import type { z } from "zod";
+import { APIError } from "better-auth/api";
+import { db } from "@/db/client";
+import { organization, session, team, user } from "@/db/schema";
+import type { Role, Viewer } from "@/lib/access";
+import { ApiError } from "@/lib/api";
+import { audit } from "@/lib/audit";
+import { auth } from "@/lib/auth";
+import { containing, iso, offsetOf, ordered } from "./paging";
+import type { Paged, peopleQuery } from "./schemas";
+
+export type PersonRow = {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  emailVerified: boolean;
+  banned: boolean;
+  banReason: string | null;
+  banExpires: string | null;
+  organizationId: string | null;
+  organization: string | null;
+  team: string | null;
+  sessions: number;
+  createdAt: string | null;
+};
+
+type Actor = Pick<Viewer, "id" | "email">;
+/** What an admin action needs from the request: the admin's own headers (better-auth checks them) and address. */
+export type RequestContext = { headers: Headers; ip: string };
+
+export async function listPeople(q: z.infer<typeof peopleQuery>): Promise<Paged<PersonRow>> {
+  const filters: (SQL | undefined)[] = [];
+  if (q.q) filters.push(or(like(user.name, containing(q.q)), like(user.email, containing(q.q))));
+  if (q.role) filters.push(eq(user.role, q.role));
+  if (q.organizationId === "none") filters.push(isNull(user.organizationId));
+  else if (q.organizationId) filters.push(eq(user.organizationId, q.organizationId));
+  if (q.status === "banned") filters.push(eq(user.banned, true));
+  if (q.status === "active") filters.push(or(eq(user.banned, false), isNull(user.banned)));
+  const where = and(...filters);
+
+  const live = db
+    .select({ userId: session.userId, n: count().as("live_n") })
+    .from(session)
+    .where(sql`${session.expiresAt} > now(3)`)
+    .groupBy(session.userId)
+    .as("live");
+  const sortColumn = { name: user.name, email: user.email, role: user.role, organization: organization.name, createdAt: user.createdAt }[q.sort];
+  const rows = await db
+    .select({
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      role: user.role,
+      emailVerified: user.emailVerified,
+      banned: user.banned,
+      banReason: user.banReason,
+      banExpires: user.banExpires,
+      organizationId: user.organizationId,
+      organization: organization.name,
+      team: team.name,
+      sessions: sql<number>`coalesce(${live.n}, 0)`,
+      createdAt: user.createdAt,
+    })
+    .from(user)
+    .leftJoin(organization, eq(organization.id, user.organizationId))
+    .leftJoin(team, eq(team.id, user.teamId))
+    .leftJoin(live, eq(live.userId, user.id))
+    .where(where)
+    .orderBy(ordered(sortColumn, q.dir), ordered(user.id, "asc"))
+    .limit(q.pageSize)
+    .offset(offsetOf(q));
+  const [total] = await db.select({ n: count() }).from(user).leftJoin(organization, eq(organization.id, user.organizationId)).where(where);
+  return {
+    rows: rows.map((r) => ({
+      ...r,
+      banned: Boolean(r.banned),
+      sessions: Number(r.sessions),
+      banExpires: iso(r.banExpires),
+      createdAt: iso(r.createdAt),
+    })),
+    total: total?.n ?? 0,
+    page: q.page,
+    pageSize: q.pageSize,
+  };
+}
+
+type Target = { id: string; name: string; email: string; role: string; organizationId: string | null; teamId: string | null; banned: boolean };
+
+async function findPerson(id: string): Promise<Target> {
+  const [row] = await db
+    .select({ id: user.id, name: user.name, email: user.email, role: user.role, organizationId: user.organizationId, teamId: user.teamId, banned: user.banned })
+    .from(user)
+    .where(eq(user.id, id));
+  if (!row) throw new ApiError(404, "No such person.");
+  return { ...row, banned: Boolean(row.banned) };
+}
+
+/**
+ * Runs one better-auth admin call and writes its audit row in one transaction: the audit row is
+ * written first and commits only if the call succeeded (a failed call rolls it back).
+ */
+async function auditedAuthCall(entry: Parameters<typeof audit>[0], call: () => Promise<unknown>): Promise<void> {
+  await db.transaction(async (tx) => {
+    await audit(entry, tx);
+    try {
+      await call();
+    } catch (err) {
+      if (err instanceof APIError) {
+        const status = err.statusCode >= 400 && err.statusCode < 500 ? err.statusCode : 502;
+        throw new ApiError(status, err.body?.message ?? err.message ?? "The sign-in service refused the change.");
+      }
+      throw err;
+    }
+  });
+}
+
+export async function changeRole(actor: Actor, personId: string, role: Role, reason: string, ctx: RequestContext): Promise<void> {
+  const person = await findPerson(personId);
+  if (person.id === actor.id) throw new ApiError(400, "You cannot change your own role; ask another admin.");
+  if (person.role === role) throw new ApiError(400, "Some fields need attention.", { role: [`${person.name} already has this role.`] });
+  if (role !== "admin" && !person.organizationId) {
+    throw new ApiError(400, "Some fields need attention.", { role: ["Move this person into an organization first: every role but admin belongs to one."] });
+  }
+  await auditedAuthCall(
+    { actor, organizationId: person.organizationId, action: "user.role", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { from: person.role, to: role } },
+    // better-auth types roles as its defaults ("user" | "admin"); Riser's roles are checked by changeRoleSchema.
+    () => auth.api.setRole({ body: { userId: person.id, role: role as "admin" }, headers: ctx.headers }),
+  );
+}
+
+export async function moveOrganization(actor: Actor, personId: string, organizationId: string, reason: string | undefined, ctx: RequestContext): Promise<void> {
+  const person = await findPerson(personId);
+  const [dest] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, organizationId));
+  if (!dest) throw new ApiError(400, "Some fields need attention.", { organizationId: ["No such organization."] });
+  if (person.organizationId === dest.id) throw new ApiError(400, "Some fields need attention.", { organizationId: [`${person.name} is already in ${dest.name}.`] });
+  await db.transaction(async (tx) => {
+    // Teams belong to one organization, so the person leaves their team.
+    await tx.update(user).set({ organizationId: dest.id, teamId: null }).where(eq(user.id, person.id));
+    await audit(
+      {
+        actor,
+        organizationId: dest.id,
+        action: "user.move",
+        targetType: "user",
+        targetId: person.id,
+        reason: reason ?? null,
+        ip: ctx.ip,
+        details: { from: person.organizationId, to: dest.id, teamCleared: person.teamId },
+      },
+      tx,
+    );
+  });
+}
+
+export async function banPerson(actor: Actor, personId: string, reason: string, days: number | null, ctx: RequestContext): Promise<void> {
+  const person = await findPerson(personId);
+  if (person.id === actor.id) throw new ApiError(400, "You cannot ban yourself.");
+  if (person.banned) throw new ApiError(400, `${person.name} is already banned.`);
+  await auditedAuthCall(
+    { actor, organizationId: person.organizationId, action: "user.ban", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { days } },
+    // better-auth sets the ban and deletes every session of the person.
+    () => auth.api.banUser({ body: { userId: person.id, banReason: reason, ...(days ? { banExpiresIn: days * 86_400 } : {}) }, headers: ctx.headers }),
+  );
+}
+
+export async function unbanPerson(actor: Actor, personId: string, reason: string | undefined, ctx: RequestContext): Promise<void> {
+  const person = await findPerson(personId);
+  if (!person.banned) throw new ApiError(400, `${person.name} is not banned.`);
+  await auditedAuthCall(
+    { actor, organizationId: person.organizationId, action: "user.unban", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip },
+    () => auth.api.unbanUser({ body: { userId: person.id }, headers: ctx.headers }),
+  );
+}
+
+export async function signOutPerson(actor: Actor, personId: string, reason: string | undefined, ctx: RequestContext): Promise<{ sessionsEnded: number }> {
+  const person = await findPerson(personId);
+  const [live] = await db.select({ n: count() }).from(session).where(and(eq(session.userId, person.id), sql`${session.expiresAt} > now(3)`));
+  const sessionsEnded = live?.n ?? 0;
+  await auditedAuthCall(
+    { actor, organizationId: person.organizationId, action: "user.sign-out", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip, details: { sessionsEnded } },
+    () => auth.api.revokeUserSessions({ body: { userId: person.id }, headers: ctx.headers }),
+  );
+  return { sessionsEnded };
+}

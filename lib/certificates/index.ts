@@ -1,0 +1,17 @@
+import "server-only";
+/**
+ * The certificates area's public face. Issuing is called by lib/completion.ts; the team board reads
+ * `certificatesOfOrganization` (status and expiringSoon computed at read time). Viewer-dependent
+ * actions (download, revoke) live in ./access, the PDF in ./pdf, the reminder job in ./reminders.
+ */
+export { issueCertificateForCompletion, type IssuedCertificate } from "./issue";
+export {
+  certificatesOfHolder,
+  certificatesOfOrganization,
+  verificationByCode,
+  type HolderCertificate,
+  type OrganizationCertificate,
+  type PublicVerification,
+} from "./queries";
+export { sendExpiryReminders, type ReminderRun } from "./reminders";
+export { certificateStatus, isExpiringSoon, EXPIRY_REMINDER_DAYS, type CertificateStatus, type CertificateKind } from "./status";

@@ -1,0 +1,16 @@
+import "server-only";
+import { env } from "@/lib/env";
+import { hitRateLimit, type RateLimitResult } from "./rate-limit";
+
+/** The client address as the proxy in front reports it (same rule as lib/api's clientIp). */
+export function ipFromHeaders(headers: Headers): string {
+  return headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+}
+
+/** One public look-up (page or JSON) by this client; both share one budget per window. */
+export function hitVerifyLimit(ip: string): Promise<RateLimitResult> {
+  return hitRateLimit(`verify:${ip}`, env.VERIFY_RATE_LIMIT_MAX, env.VERIFY_RATE_LIMIT_WINDOW_S);
+}
+
+export const tooManyLookupsMessage = (retryAfterSeconds: number) =>
+  `Too many certificate look-ups from your network. Wait ${retryAfterSeconds} second${retryAfterSeconds === 1 ? "" : "s"} and try again.`;

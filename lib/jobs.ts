@@ -1,0 +1,34 @@
+/**
+ * Every scheduled job, in one list: `npm run jobs:run` (scripts/jobs.ts) and
+ * `POST /api/jobs/run` (header x-jobs-secret) both run these. Each job must be safe to run twice
+ * and on two machines at once. Add a job: one entry here, importing its module lazily (so that
+ * the environment is set before any server module loads).
+ */
+export type Job = { name: string; run: () => Promise<unknown> };
+
+export const JOBS: Job[] = [
+  { name: "certificate-reminders", run: async () => (await import("@/lib/certificates/reminders")).sendExpiryReminders() },
+  { name: "certificate-backfill", run: async () => (await import("@/lib/certificates/issue")).issueMissingCertificates() },
+  { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
+  { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
+  { name: "assignment-reminders", run: async () => (await import("@/lib/team/reminders")).sendDueReminders() },
+  { name: "manager-digest", run: async () => (await import("@/lib/team/reminders")).sendManagerDigests() },
+];
+
+export type JobOutcome = { name: string; ok: boolean; ms: number; result?: unknown; error?: string };
+
+/** Runs the named jobs (all when none are named) one after another; a failing job does not stop the rest. */
+export async function runJobs(names: string[] = []): Promise<JobOutcome[]> {
+  const out: JobOutcome[] = [];
+  for (const job of JOBS.filter((j) => !names.length || names.includes(j.name))) {
+    const t0 = Date.now();
+    try {
+      out.push({ name: job.name, ok: true, ms: Date.now() - t0, result: await job.run() });
+      out[out.length - 1]!.ms = Date.now() - t0;
+    } catch (err) {
+      console.error(`[jobs] ${job.name} failed:`, err);
+      out.push({ name: job.name, ok: false, ms: Date.now() - t0, error: err instanceof Error ? err.message : String(err) });
+    }
+  }
+  return out;
+}

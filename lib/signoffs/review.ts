@@ -1,0 +1,79 @@
+import "server-only";
+/**
+ * A reviewer's decision on a waiting sign-off: approve, or return it with a comment. The change and
+ * its audit row commit together on the locked row; then the learner is mailed and, on approval,
+ * the module's completion is checked again (a required sign-off may be the last thing missing).
+ */
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { signOff, user } from "@/db/schema";
+import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
+import { ApiError } from "@/lib/api";
+import { audit } from "@/lib/audit";
+import { checkAndRecordCompletion } from "@/lib/completion";
+import { findModule } from "@/lib/content/load";
+import { env } from "@/lib/env";
+import { sendMail } from "@/lib/mail";
+
+export type ReviewResult = { id: string; status: "approved" | "returned"; reviewedAt: string; moduleCompleted: boolean };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
+
+export async function reviewSignOff(viewer: Viewer, id: string, input: { decision: "approve" | "return"; comment: string }, ip: string | null): Promise<ReviewResult> {
+  if (!UUID.test(id)) throw new ApiError(404, "No such sign-off.");
+  const status = input.decision === "approve" ? ("approved" as const) : ("returned" as const);
+  const comment = input.comment.trim() || null;
+  const reviewedAt = new Date();
+
+  const row = await db.transaction(async (tx) => {
+    const [so] = await tx.select().from(signOff).where(eq(signOff.id, id)).for("update");
+    if (!so) throw new ApiError(404, "No such sign-off.");
+    if (!canManageOrganization(viewer, so.organizationId)) throw new AccessError(403, "Only a manager of the learner's organization or an admin can review this sign-off.");
+    if (so.userId === viewer.id) throw new AccessError(403, "You cannot sign off your own skill: another manager or an admin reviews it.");
+    if (so.status !== "submitted") throw new ApiError(409, `This sign-off was already ${so.status}.`);
+    await tx
+      .update(signOff)
+      .set({ status, reviewerId: viewer.id, reviewComment: comment, reviewedAt, activeKey: status === "returned" ? null : so.activeKey })
+      .where(and(eq(signOff.id, id), eq(signOff.status, "submitted")));
+    await audit(
+      {
+        actor: viewer,
+        organizationId: so.organizationId,
+        action: status === "approved" ? "signoff.approve" : "signoff.return",
+        targetType: "sign-off",
+        targetId: so.id,
+        reason: comment,
+        ip,
+        details: { learnerId: so.userId, module: so.moduleSlug, skill: so.skillId },
+      },
+      tx,
+    );
+    return so;
+  });
+
+  const mod = findModule(row.moduleSlug);
+  const skillTitle = mod?.skills.find((s) => s.id === row.skillId)?.title ?? row.skillId;
+  const moduleTitle = mod?.meta.title ?? row.moduleSlug;
+  const moduleCompleted = status === "approved" ? (await checkAndRecordCompletion(row.userId, row.moduleSlug)) !== null : false;
+
+  const [learner] = await db.select({ email: user.email, name: user.name }).from(user).where(eq(user.id, row.userId));
+  if (learner) {
+    const link = `${env.APP_URL}/modules/${row.moduleSlug}/sign-offs`;
+    await sendMail(
+      status === "approved"
+        ? {
+            to: learner.email,
+            subject: `Signed off: ${skillTitle}`,
+            text: `Hello ${learner.name},\n\n${viewer.name} approved your practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}${comment ? `\nComment: ${comment}` : ""}${moduleCompleted ? `\n\nThis completes the module "${moduleTitle}".` : ""}\n\nYour sign-offs: ${link}\n`,
+            kind: "signoff-approved",
+          }
+        : {
+            to: learner.email,
+            subject: `Sign-off returned: ${skillTitle}`,
+            text: `Hello ${learner.name},\n\n${viewer.name} returned your practical sign-off with this comment:\n\n  ${comment}\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nSend new evidence when you are ready: ${link}\n`,
+            kind: "signoff-returned",
+          },
+    );
+  }
+  return { id: row.id, status, reviewedAt: reviewedAt.toISOString(), moduleCompleted };
+}

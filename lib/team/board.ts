@@ -1,0 +1,433 @@
+import "server-only";
+import { sql, type SQL } from "drizzle-orm";
+import { db } from "@/db/client";
+import { loadCatalog } from "@/lib/content/load";
+import type { BoardQuery, BoardStatus } from "./schemas";
+import type { OrgScope } from "./scope";
+import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status";
+
+/**
+ * The team board: people × modules with one status per cell (rule: lib/team/status.ts).
+ *
+ * Each source is aggregated per person × module in SQL with one plain GROUP BY over an indexed
+ * join (lesson progress, attempts, completions, certificates); assignments are read raw (a small
+ * table) and matched to people through their *current* team, so someone who joins a team later
+ * inherits its assignments without any copy. Pages are cut from the people first: with no status
+ * or due filter and a name or team sort only the page's people are aggregated; otherwise the
+ * scope is aggregated once, filtered and sorted, and the page cut from that.
+ */
+
+const DAY_MS = 86_400_000;
+
+export type BoardCell = {
+  status: BoardStatus;
+  dueAt: string | null;
+  lessonsDone: number;
+  lessonsTotal: number;
+  attempts: number;
+  bestScore: number | null;
+  completedAt: string | null;
+  expiresAt: string | null;
+};
+
+export type BoardRow = {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  teamId: string | null;
+  team: string | null;
+  organizationId: string;
+  passed: number;
+  overdue: number;
+  nextDue: string | null;
+  cells: Record<string, BoardCell>;
+};
+
+export type BoardPage = {
+  page: number;
+  pageSize: number;
+  total: number;
+  pages: number;
+  modules: { slug: string; title: string }[];
+  rows: BoardRow[];
+};
+
+export type Person = {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  teamId: string | null;
+  team: string | null;
+  organizationId: string;
+};
+
+async function rows<T>(query: SQL): Promise<T[]> {
+  const [result] = (await db.execute(query)) as unknown as [T[]];
+  return result;
+}
+
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+const date = (v: unknown): Date | null => (v === null || v === undefined ? null : v instanceof Date ? v : new Date(String(v)));
+
+type ModuleInfo = { slug: string; title: string; lessons: number; validityMonths: number };
+
+/** Modules on the board, in teaching order (optionally one). */
+export function boardModules(only?: string): ModuleInfo[] {
+  return loadCatalog()
+    .modules.filter((m) => !only || m.slug === only)
+    .map((m) => ({ slug: m.slug, title: m.meta.title, lessons: m.lessons.length, validityMonths: m.meta.validityMonths }));
+}
+
+/** item (module or path) → the module slugs it covers, from content. */
+export function itemModules(kind: string, slug: string): string[] {
+  if (kind === "module") return [slug];
+  return loadCatalog().paths.find((p) => p.slug === slug)?.modules ?? [];
+}
+
+export function itemTitle(kind: string, slug: string): string {
+  const c = loadCatalog();
+  if (kind === "module") return c.modules.find((m) => m.slug === slug)?.meta.title ?? slug;
+  return c.paths.find((p) => p.slug === slug)?.title ?? slug;
+}
+
+/** Who is on the board: the scope's members except admins and banned accounts, or explicit ids. */
+type PeopleFilter = { scope: OrgScope; team?: string; q?: string } | { ids: string[] };
+
+function peopleWhere(f: PeopleFilter): SQL {
+  if ("ids" in f) {
+    if (f.ids.length === 0) return sql`FALSE`;
+    return sql`u.id IN (${sql.join(
+      f.ids.map((id) => sql`${id}`),
+      sql`, `,
+    )})`;
+  }
+  const parts: SQL[] = [sql`u.role <> 'admin'`, sql`(u.banned IS NULL OR u.banned = 0)`];
+  parts.push(f.scope.orgId ? sql`u.organization_id = ${f.scope.orgId}` : sql`u.organization_id IS NOT NULL`);
+  if (f.team === "none") parts.push(sql`u.team_id IS NULL`);
+  else if (f.team) parts.push(sql`u.team_id = ${f.team}`);
+  if (f.q) {
+    const like = `%${f.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    parts.push(sql`(u.name LIKE ${like} OR u.email LIKE ${like})`);
+  }
+  return sql.join(parts, sql` AND `);
+}
+
+type PersonRow = { id: string; name: string; email: string; role: string; team_id: string | null; team_name: string | null; organization_id: string };
+const toPerson = (r: PersonRow): Person => ({
+  id: r.id,
+  name: r.name,
+  email: r.email,
+  role: r.role,
+  teamId: r.team_id,
+  team: r.team_name,
+  organizationId: r.organization_id,
+});
+
+function nameOrder(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): SQL {
+  const d = dir === "desc" ? sql`DESC` : sql`ASC`;
+  if (sort === "team") return sql`ORDER BY t.name IS NULL, t.name ${d}, u.name ASC, u.id ASC`;
+  return sql`ORDER BY u.name ${d}, u.id ASC`;
+}
+
+/** People matching the filter in the given order; with `limit`, one page plus the total count. */
+async function listPeople(f: PeopleFilter, order: SQL, limit?: { limit: number; offset: number }): Promise<{ people: Person[]; total: number }> {
+  const select = sql`SELECT u.id, u.name, u.email, u.role, u.team_id, t.name AS team_name, u.organization_id
+FROM user u LEFT JOIN team t ON t.id = u.team_id WHERE ${peopleWhere(f)} ${order}`;
+  if (!limit) {
+    const list = await rows<PersonRow>(select);
+    return { people: list.map(toPerson), total: list.length };
+  }
+  const [list, count] = await Promise.all([
+    rows<PersonRow>(sql`${select} LIMIT ${limit.limit} OFFSET ${limit.offset}`),
+    rows<{ n: number | string }>(sql`SELECT COUNT(*) AS n FROM user u WHERE ${peopleWhere(f)}`),
+  ]);
+  return { people: list.map(toPerson), total: Number(count[0]?.n ?? 0) };
+}
+
+/**
+ * Facts per person × module for the given people: one query per source, run side by side, each
+ * an index range scan whose rows are folded into person × module cells in one pass here.
+ * (Measured on MariaDB 10.11 with 5,000 people: streaming the rows and folding them is about
+ * three times faster than GROUP BY, which goes through a temporary table keyed by two strings.)
+ * Attempts and certificates count in the organization they were earned in (both rows record
+ * it); a whole-organization scope reads them by that column. Lesson counts only tell "in
+ * progress" from "not started", so a scope-wide aggregate that needs neither skips them.
+ */
+async function factsFor(people: Person[], f: PeopleFilter, only?: string, lessons = true): Promise<Map<string, Map<string, CellFacts>>> {
+  const out = new Map<string, Map<string, CellFacts>>();
+  if (people.length === 0) return out;
+  const orgOf = new Map(people.map((p) => [p.id, p.organizationId]));
+  const wholeOrg = !("ids" in f) && f.scope.orgId && !f.team && !f.q ? f.scope.orgId : null;
+  const byUser = (col: SQL) =>
+    "ids" in f
+      ? sql`${col} IN (${sql.join(
+          f.ids.map((id) => sql`${id}`),
+          sql`, `,
+        )})`
+      : sql`${col} IN (SELECT u.id FROM user u WHERE ${peopleWhere(f)})`;
+  const earned = (orgCol: SQL, userCol: SQL) => (wholeOrg ? sql`${orgCol} = ${wholeOrg}` : byUser(userCol));
+  const mod = (col: SQL) => (only ? sql`AND ${col} = ${only}` : sql``);
+  const orgIds = [...new Set(people.map((p) => p.organizationId))];
+  const [lp, qa, co, ce, asg, lessonModules] = await Promise.all([
+    lessons ? rows<{ user_id: string; lesson_id: number }>(sql`SELECT lp.user_id, lp.lesson_id FROM lesson_progress lp WHERE ${byUser(sql`lp.user_id`)}`) : Promise.resolve([]),
+    rows<{ user_id: string; organization_id: string | null; module_slug: string; status: string; score: number | null; passed: number | null; submitted_at: unknown }>(sql`
+SELECT a.user_id, a.organization_id, a.module_slug, a.status, a.score, a.passed, a.submitted_at FROM quiz_attempt a
+WHERE ${earned(sql`a.organization_id`, sql`a.user_id`)} ${mod(sql`a.module_slug`)}`),
+    rows<{ user_id: string; module_slug: string; completed_at: unknown }>(sql`
+SELECT c.user_id, c.module_slug, c.completed_at FROM module_completion c WHERE ${byUser(sql`c.user_id`)} ${mod(sql`c.module_slug`)}`),
+    rows<{ user_id: string; organization_id: string | null; subject_slug: string; expires_at: unknown; revoked_at: unknown }>(sql`
+SELECT c.user_id, c.organization_id, c.subject_slug, c.expires_at, c.revoked_at FROM certificate c
+WHERE ${earned(sql`c.organization_id`, sql`c.user_id`)} AND c.kind = 'module' ${mod(sql`c.subject_slug`)}`),
+    rows<{ kind: string; target_slug: string; user_id: string | null; team_id: string | null; due_at: unknown }>(sql`
+SELECT a.kind, a.target_slug, a.user_id, a.team_id, a.due_at FROM assignment a
+WHERE a.organization_id IN (${sql.join(
+      orgIds.map((id) => sql`${id}`),
+      sql`, `,
+    )})`),
+    lessons
+      ? rows<{ id: number; slug: string }>(sql`SELECT cl.id, cm.slug FROM catalog_lesson cl JOIN catalog_module cm ON cm.id = cl.module_id WHERE cl.retired_at IS NULL`)
+      : Promise.resolve([]),
+  ]);
+  const cell = (userId: string, slug: string): CellFacts | null => {
+    if (!orgOf.has(userId)) return null; // a row of someone outside the list (admin, banned, other team)
+    let m = out.get(userId);
+    if (!m) out.set(userId, (m = new Map()));
+    let c = m.get(slug);
+    if (!c) m.set(slug, (c = { ...NO_FACTS }));
+    return c;
+  };
+  const moduleOfLesson = new Map(lessonModules.map((l) => [Number(l.id), l.slug]));
+  for (const r of lp) {
+    const slug = moduleOfLesson.get(Number(r.lesson_id));
+    if (!slug || (only && slug !== only)) continue;
+    const c = cell(r.user_id, slug);
+    if (c) c.lessonsDone++;
+  }
+  for (const r of qa) {
+    if (r.organization_id !== orgOf.get(r.user_id)) continue;
+    const c = cell(r.user_id, r.module_slug);
+    if (!c) continue;
+    c.attempts++;
+    if (r.score !== null && (c.bestScore === null || Number(r.score) > c.bestScore)) c.bestScore = Number(r.score);
+    const at = r.status === "graded" ? date(r.submitted_at) : null;
+    if (at && (!c.lastGradedAt || at > c.lastGradedAt)) c.lastGradedAt = at;
+    if (at && Number(r.passed) === 1 && (!c.lastPassAt || at > c.lastPassAt)) c.lastPassAt = at;
+  }
+  for (const r of co) {
+    const c = cell(r.user_id, r.module_slug);
+    const at = date(r.completed_at);
+    if (c && at && (!c.completedAt || at > c.completedAt)) c.completedAt = at;
+  }
+  for (const r of ce) {
+    if (r.organization_id !== orgOf.get(r.user_id)) continue;
+    const c = cell(r.user_id, r.subject_slug);
+    if (!c) continue;
+    c.certificates++;
+    const exp = r.revoked_at ? null : date(r.expires_at);
+    if (exp && (!c.validUntil || exp > c.validUntil)) c.validUntil = exp;
+  }
+  // Effective assignments: direct ones, and those of the person's current team.
+  const direct = new Map<string, typeof asg>();
+  const ofTeam = new Map<string, typeof asg>();
+  for (const a of asg) {
+    if (a.user_id) direct.set(a.user_id, [...(direct.get(a.user_id) ?? []), a]);
+    if (a.team_id) ofTeam.set(a.team_id, [...(ofTeam.get(a.team_id) ?? []), a]);
+  }
+  for (const p of people) {
+    for (const a of [...(direct.get(p.id) ?? []), ...(p.teamId ? (ofTeam.get(p.teamId) ?? []) : [])]) {
+      const due = date(a.due_at)!;
+      for (const slug of itemModules(a.kind, a.target_slug)) {
+        if (only && slug !== only) continue;
+        const c = cell(p.id, slug);
+        if (c && (!c.dueAt || due < c.dueAt)) c.dueAt = due;
+      }
+    }
+  }
+  return out;
+}
+
+function toCells(facts: Map<string, CellFacts> | undefined, modules: ModuleInfo[], now: Date): Record<string, BoardCell> {
+  const cells: Record<string, BoardCell> = {};
+  for (const m of modules) {
+    const f = facts?.get(m.slug) ?? NO_FACTS;
+    cells[m.slug] = {
+      status: cellStatus(f, m.validityMonths, now),
+      dueAt: iso(f.dueAt),
+      lessonsDone: f.lessonsDone,
+      lessonsTotal: m.lessons,
+      attempts: f.attempts,
+      bestScore: f.bestScore,
+      completedAt: iso(f.completedAt),
+      expiresAt: iso(expiryOf(f, m.validityMonths)),
+    };
+  }
+  return cells;
+}
+
+function toRow(p: Person, cells: Record<string, BoardCell>): BoardRow {
+  let passed = 0;
+  let overdue = 0;
+  let nextDue: string | null = null;
+  for (const c of Object.values(cells)) {
+    if (isDone(c.status)) passed++;
+    else if (c.dueAt && (!nextDue || c.dueAt < nextDue)) nextDue = c.dueAt;
+    if (c.status === "overdue") overdue++;
+  }
+  return { ...p, passed, overdue, nextDue, cells };
+}
+
+/** Board rows (cells and summary) for an explicit list of people. */
+export async function rowsFor(people: Person[], now = new Date(), only?: string): Promise<BoardRow[]> {
+  const modules = boardModules(only);
+  const facts = await factsFor(people, { ids: people.map((p) => p.id) }, only);
+  return people.map((p) => toRow(p, toCells(facts.get(p.id), modules, now)));
+}
+
+export type BoardFilter = Pick<BoardQuery, "team" | "status" | "module" | "dueBefore" | "sort" | "dir" | "q">;
+
+const needsAggregate = (f: BoardFilter) => Boolean(f.status || f.dueBefore || f.sort === "progress" || f.sort === "overdue" || f.sort === "due");
+
+function compareRows(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): (a: BoardRow, b: BoardRow) => number {
+  const byName = (a: BoardRow, b: BoardRow) => a.name.localeCompare(b.name) || a.id.localeCompare(b.id);
+  const sign = dir === "asc" ? 1 : -1; // counts: most first unless asked otherwise
+  switch (sort) {
+    case "progress":
+      return (a, b) => sign * (a.passed - b.passed) || byName(a, b);
+    case "overdue":
+      return (a, b) => sign * (a.overdue - b.overdue) || (a.nextDue ?? "~").localeCompare(b.nextDue ?? "~") || byName(a, b);
+    case "due": {
+      const d = dir === "desc" ? -1 : 1;
+      return (a, b) => (a.nextDue === null ? 1 : 0) - (b.nextDue === null ? 1 : 0) || d * (a.nextDue ?? "").localeCompare(b.nextDue ?? "") || byName(a, b);
+    }
+    case "team": {
+      const d = dir === "desc" ? -1 : 1;
+      return (a, b) => (a.team === null ? 1 : 0) - (b.team === null ? 1 : 0) || d * (a.team ?? "").localeCompare(b.team ?? "") || byName(a, b);
+    }
+    default:
+      return dir === "desc" ? (a, b) => -byName(a, b) : byName;
+  }
+}
+
+/**
+ * Every matching person in board order (status or due filters, aggregate sorts). The scope is
+ * aggregated once, without lesson counts unless the filter needs them; the caller computes the
+ * full cells for the slice it shows.
+ */
+async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Date): Promise<BoardRow[]> {
+  const filter: PeopleFilter = { scope, team: f.team, q: f.q };
+  const { people } = await listPeople(filter, sql``);
+  const modules = boardModules(f.module);
+  const lessons = f.status === "in_progress" || f.status === "not_started";
+  const facts = await factsFor(people, filter, f.module, lessons);
+  const dueBefore = f.dueBefore ? `${f.dueBefore}T23:59:59.999Z` : null;
+  const out: BoardRow[] = [];
+  for (const p of people) {
+    const row = toRow(p, toCells(facts.get(p.id), modules, now));
+    if (f.status && !Object.values(row.cells).some((c) => c.status === f.status)) continue;
+    if (dueBefore && !(row.nextDue && row.nextDue <= dueBefore)) continue;
+    out.push(row);
+  }
+  return out.sort(compareRows(f.sort, f.dir));
+}
+
+const personOf = (r: BoardRow): Person => ({ id: r.id, name: r.name, email: r.email, role: r.role, teamId: r.teamId, team: r.team, organizationId: r.organizationId });
+
+/** GET /api/team/board: one page. */
+export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()): Promise<BoardPage> {
+  const offset = (q.page - 1) * q.pageSize;
+  let total: number;
+  let people: Person[];
+  if (needsAggregate(q)) {
+    const all = await aggregatedPeople(scope, q, now);
+    total = all.length;
+    people = all.slice(offset, offset + q.pageSize).map(personOf);
+  } else {
+    const filter: PeopleFilter = { scope, team: q.team, q: q.q };
+    const listed = await listPeople(filter, nameOrder(q.sort, q.dir), { limit: q.pageSize, offset });
+    total = listed.total;
+    people = listed.people;
+  }
+  return {
+    page: q.page,
+    pageSize: q.pageSize,
+    total,
+    pages: Math.max(1, Math.ceil(total / q.pageSize)),
+    modules: boardModules(q.module).map(({ slug, title }) => ({ slug, title })),
+    rows: await rowsFor(people, now, q.module),
+  };
+}
+
+/** Every matching row in board order, in chunks (CSV export). */
+export async function* boardRowsInChunks(scope: OrgScope, f: BoardFilter, chunk = 500, now = new Date()): AsyncGenerator<BoardRow[]> {
+  const people = needsAggregate(f)
+    ? (await aggregatedPeople(scope, f, now)).map(personOf)
+    : (await listPeople({ scope, team: f.team, q: f.q }, nameOrder(f.sort, f.dir))).people;
+  for (let i = 0; i < people.length; i += chunk) yield await rowsFor(people.slice(i, i + chunk), now, f.module);
+}
+
+export type TeamTotal = {
+  teamId: string | null;
+  team: string;
+  orgName: string;
+  people: number;
+  cells: number;
+  passed: number;
+  failed: number;
+  overdue: number;
+  expiring: number;
+  expired: number;
+};
+
+/**
+ * Totals per team over the whole scope (the board's summary and the "by team" chart). Without
+ * lesson counts: "in progress" and "not started" are not told apart here.
+ */
+export async function teamTotals(scope: OrgScope, now = new Date()): Promise<TeamTotal[]> {
+  const all = await aggregatedPeople(scope, { sort: "team" }, now);
+  const orgNames = new Map(
+    (await rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`)).map((o) => [o.id, o.name]),
+  );
+  const totals = new Map<string, TeamTotal>();
+  for (const r of all) {
+    const key = `${r.organizationId}/${r.teamId ?? ""}`;
+    let t = totals.get(key);
+    if (!t) {
+      t = { teamId: r.teamId, team: r.team ?? "No team", orgName: orgNames.get(r.organizationId) ?? "", people: 0, cells: 0, passed: 0, failed: 0, overdue: 0, expiring: 0, expired: 0 };
+      totals.set(key, t);
+    }
+    t.people++;
+    for (const c of Object.values(r.cells)) {
+      t.cells++;
+      if (isDone(c.status)) t.passed++;
+      if (c.status === "failed") t.failed++;
+      if (c.status === "overdue") t.overdue++;
+      if (c.status === "expiring") t.expiring++;
+      if (c.status === "expired") t.expired++;
+    }
+  }
+  return [...totals.values()].sort((a, b) => a.orgName.localeCompare(b.orgName) || (a.teamId === null ? 1 : 0) - (b.teamId === null ? 1 : 0) || a.team.localeCompare(b.team));
+}
+
+export type WeekPoint = { week: string; completions: number };
+
+/** Module completions per week (weeks start on Monday, UTC) over the last `weeks` weeks. */
+export async function completionsPerWeek(scope: OrgScope, weeks = 12, now = new Date()): Promise<WeekPoint[]> {
+  const monday = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
+  monday.setUTCDate(monday.getUTCDate() - ((monday.getUTCDay() + 6) % 7));
+  const start = new Date(monday.getTime() - (weeks - 1) * 7 * DAY_MS);
+  const orgFilter = scope.orgId ? sql`u.organization_id = ${scope.orgId}` : sql`u.organization_id IS NOT NULL`;
+  const result = await rows<{ wk: unknown; n: number | string }>(sql`
+SELECT DATE_FORMAT(DATE_SUB(DATE(c.completed_at), INTERVAL WEEKDAY(c.completed_at) DAY), '%Y-%m-%d') AS wk, COUNT(*) AS n
+FROM module_completion c JOIN user u ON u.id = c.user_id
+WHERE ${orgFilter} AND u.role <> 'admin' AND c.completed_at >= ${start} AND c.completed_at <= ${now}
+GROUP BY wk`);
+  const byWeek = new Map(result.map((r) => [String(r.wk), Number(r.n)]));
+  const out: WeekPoint[] = [];
+  for (let i = 0; i < weeks; i++) {
+    const d = new Date(start.getTime() + i * 7 * DAY_MS).toISOString().slice(0, 10);
+    out.push({ week: d, completions: byWeek.get(d) ?? 0 });
+  }
+  return out;
+}

@@ -1,0 +1,91 @@
+import "server-only";
+import { and, asc, eq, gt, sql } from "drizzle-orm";
+import { db } from "@/db/client";
+import { certificate, team, user } from "@/db/schema";
+import { certificateStatus } from "@/lib/certificates/status";
+import { boardModules, boardRowsInChunks, type BoardFilter } from "./board";
+import { csvResponse } from "./csv";
+import { STATUS_LABELS } from "./schemas";
+import type { OrgScope } from "./scope";
+import { EXPIRING_DAYS, isDone } from "./status";
+
+const day = (iso: string | null | undefined) => (iso ? iso.slice(0, 10) : "");
+const stamp = () => new Date().toISOString().slice(0, 10);
+
+/** The filtered board as CSV: one row per person, one column per module. */
+export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Response> {
+  const modules = boardModules(f.module);
+  const header = ["Name", "E-mail", "Team", ...modules.map((m) => m.title), "Modules passed", "Overdue", "Next due"];
+  return csvResponse(`riser-team-board-${stamp()}.csv`, header, async function* () {
+    for await (const chunk of boardRowsInChunks(scope, f)) {
+      yield chunk.map((r) => [
+        r.name,
+        r.email,
+        r.team ?? "",
+        ...modules.map((m) => {
+          const c = r.cells[m.slug];
+          if (!c) return "";
+          const label = STATUS_LABELS[c.status];
+          if (c.status === "expiring" || c.status === "expired") return `${label} (${day(c.expiresAt)})`;
+          if (!isDone(c.status) && c.dueAt) return `${label} (due ${day(c.dueAt)})`;
+          return label;
+        }),
+        r.passed,
+        r.overdue,
+        day(r.nextDue),
+      ]);
+    }
+  });
+}
+
+/** Certificates earned in the scope's organization(s), holder by holder, streamed in pages. */
+export async function certificatesCsv(scope: OrgScope): Promise<Response> {
+  const header = ["Serial", "Holder", "E-mail", "Team", ...(scope.orgId ? [] : ["Organization"]), "Kind", "Module or path", "CE hours", "Issued", "Expires", "Status"];
+  const now = new Date();
+  const soon = now.getTime() + EXPIRING_DAYS * 86_400_000;
+  return csvResponse(`riser-certificates-${stamp()}.csv`, header, async function* () {
+    let after = 0;
+    for (;;) {
+      const page = await db
+        .select({
+          id: certificate.id,
+          serial: certificate.serial,
+          holder: certificate.holderName,
+          email: user.email,
+          team: team.name,
+          org: certificate.organizationName,
+          kind: certificate.kind,
+          title: certificate.subjectTitle,
+          ceHours: certificate.ceHours,
+          issuedAt: certificate.issuedAt,
+          expiresAt: certificate.expiresAt,
+          revokedAt: certificate.revokedAt,
+        })
+        .from(certificate)
+        .leftJoin(user, eq(user.id, certificate.userId))
+        .leftJoin(team, eq(team.id, user.teamId))
+        .where(and(scope.orgId ? eq(certificate.organizationId, scope.orgId) : sql`${certificate.organizationId} IS NOT NULL`, gt(certificate.id, after)))
+        .orderBy(asc(certificate.id))
+        .limit(1000);
+      if (page.length === 0) return;
+      after = page[page.length - 1]!.id;
+      yield page.map((c) => {
+        const status = certificateStatus(c, now);
+        const label = status === "revoked" ? "Revoked" : status === "expired" ? "Expired" : c.expiresAt.getTime() <= soon ? "Valid, expiring soon" : "Valid";
+        return [
+          c.serial,
+          c.holder,
+          c.email ?? "",
+          c.team ?? "",
+          ...(scope.orgId ? [] : [c.org ?? ""]),
+          c.kind === "path" ? "Learning path" : "Module",
+          c.title,
+          c.ceHours,
+          c.issuedAt.toISOString().slice(0, 10),
+          c.expiresAt.toISOString().slice(0, 10),
+          label,
+        ];
+      });
+    }
+  });
+}

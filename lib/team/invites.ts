@@ -1,0 +1,237 @@
+import "server-only";
+import { createHash, randomBytes, randomUUID } from "node:crypto";
+import { and, eq, gt, inArray, isNull, sql } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { invitation, organization, team, user } from "@/db/schema";
+import type { Viewer } from "@/lib/access";
+import { createAccount } from "@/lib/accounts";
+import { ApiError } from "@/lib/api";
+import { audit } from "@/lib/audit";
+import { env } from "@/lib/env";
+import { sendMail } from "@/lib/mail";
+import { INVITE_DAYS, ROLE_LABELS, type AcceptInviteInput, type InviteRole } from "./schemas";
+import { assertSeatAvailable } from "./seats";
+
+const DAY_MS = 86_400_000;
+
+/** 256 random bits, URL-safe. Only its SHA-256 is stored: a database leak reveals no usable link. */
+export function newInviteToken(): string {
+  return randomBytes(32).toString("base64url");
+}
+export const hashInviteToken = (token: string) => createHash("sha256").update(token, "utf8").digest("hex");
+
+export const inviteUrl = (token: string) => `${env.APP_URL}/invite/${token}`;
+
+export type InviteRow = typeof invitation.$inferSelect;
+export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null };
+
+/**
+ * Writes one invitation inside the caller's transaction: earlier open invitations for the same
+ * e-mail in this organization are revoked (their links stop working), then the new one is stored
+ * with the hash of a fresh token. Returns the token for the mail (never stored).
+ */
+export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite, invitedBy: Viewer, now = new Date()): Promise<{ id: string; token: string; expiresAt: Date; replaced: number }> {
+  const [revoked] = await tx
+    .update(invitation)
+    .set({ revokedAt: now })
+    .where(and(eq(invitation.organizationId, orgId), eq(invitation.email, invite.email), isNull(invitation.acceptedAt), isNull(invitation.revokedAt)));
+  const token = newInviteToken();
+  const id = randomUUID();
+  const expiresAt = new Date(now.getTime() + INVITE_DAYS * DAY_MS);
+  await tx.insert(invitation).values({
+    id,
+    organizationId: orgId,
+    teamId: invite.teamId,
+    email: invite.email,
+    name: invite.name ?? null,
+    role: invite.role,
+    tokenHash: hashInviteToken(token),
+    invitedBy: invitedBy.id,
+    createdAt: now,
+    expiresAt,
+  });
+  return { id, token, expiresAt, replaced: revoked.affectedRows };
+}
+
+const dateText = (d: Date) => new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" }).format(d);
+
+export function inviteMail(p: { to: string; name?: string | null; orgName: string; inviterName: string; role: InviteRole; teamName?: string | null; token: string; expiresAt: Date }) {
+  const where = p.teamName ? ` (${p.teamName})` : "";
+  return {
+    to: p.to,
+    kind: "invite",
+    subject: `You are invited to train with ${p.orgName} on Riser`,
+    text: `Hello${p.name ? ` ${p.name}` : ""},
+
+${p.inviterName} has invited you to ${p.orgName}${where} on Riser, the training app for residential sprinkler work, as ${ROLE_LABELS[p.role].toLowerCase()}.
+
+Open this link to choose your password and start:
+
+${inviteUrl(p.token)}
+
+The link works once and expires on ${dateText(p.expiresAt)} (${INVITE_DAYS} days). If you did not expect this invitation, ignore this message; no account is created unless you open the link.`,
+  };
+}
+
+export class AlreadyMember extends ApiError {}
+
+/** Whether the e-mail already has an account: in this organization, elsewhere, or not at all. */
+export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string } | { state: "elsewhere" }> {
+  const [u] = await db.select({ name: user.name, org: user.organizationId }).from(user).where(eq(user.email, email)).limit(1);
+  if (!u) return { state: "none" };
+  return u.org === orgId ? { state: "member", name: u.name } : { state: "elsewhere" };
+}
+
+/** One invitation from the form. Re-inviting a member changes nothing and says so. */
+export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: string }, input: NewInvite, ip: string) {
+  let teamName: string | null = null;
+  if (input.teamId) {
+    const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId)));
+    if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
+    teamName = t.name;
+  }
+  const existing = await accountState(input.email, org.orgId);
+  if (existing.state === "member") {
+    throw new AlreadyMember(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
+  }
+  if (existing.state === "elsewhere") {
+    throw new AlreadyMember(409, `${input.email} already has a Riser account in another organization, so it cannot be invited here. Ask the person for another work address.`);
+  }
+  const created = await db.transaction(async (tx) => {
+    const row = await insertInvitation(tx, org.orgId, input, viewer);
+    // After revoking the earlier invitation (a re-send does not take a second seat) and writing the
+    // new one (counted once: `written`).
+    await assertSeatAvailable(org.orgId, 1, tx, { written: 1 });
+    await audit(
+      {
+        actor: viewer,
+        organizationId: org.orgId,
+        action: "invite.send",
+        targetType: "invitation",
+        targetId: row.id,
+        ip,
+        details: { email: input.email, role: input.role, teamId: input.teamId, replaced: row.replaced },
+      },
+      tx,
+    );
+    return row;
+  });
+  const mail = await sendMail(inviteMail({ to: input.email, name: input.name, orgName: org.orgName, inviterName: viewer.name, role: input.role, teamName, token: created.token, expiresAt: created.expiresAt }));
+  return { id: created.id, email: input.email, replaced: created.replaced, mailed: mail.ok, expiresAt: created.expiresAt };
+}
+
+export type InviteLookup =
+  | { state: "ok"; invite: InviteRow; orgName: string; teamName: string | null }
+  | { state: "unknown" | "used" | "revoked" }
+  | { state: "expired"; expiresAt: Date };
+
+/** What a link's token points to, and whether it can still be used. */
+export async function lookupInvite(token: string, now = new Date()): Promise<InviteLookup> {
+  if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return { state: "unknown" };
+  const [row] = await db
+    .select({ invite: invitation, orgName: organization.name, teamName: team.name })
+    .from(invitation)
+    .innerJoin(organization, eq(organization.id, invitation.organizationId))
+    .leftJoin(team, eq(team.id, invitation.teamId))
+    .where(eq(invitation.tokenHash, hashInviteToken(token)));
+  if (!row) return { state: "unknown" };
+  if (row.invite.acceptedAt) return { state: "used" };
+  if (row.invite.revokedAt) return { state: "revoked" };
+  if (row.invite.expiresAt.getTime() <= now.getTime()) return { state: "expired", expiresAt: row.invite.expiresAt };
+  return { state: "ok", invite: row.invite, orgName: row.orgName, teamName: row.teamName ?? null };
+}
+
+/** The refusal a person sees for a link that cannot be used (page and API say the same). */
+export function refusalText(l: Exclude<InviteLookup, { state: "ok" }>): { title: string; message: string } {
+  switch (l.state) {
+    case "used":
+      return {
+        title: "This invitation has been used",
+        message: "An account was already created with this link; each invitation works once. If it was you, sign in. If not, ask your training manager for a new invitation.",
+      };
+    case "revoked":
+      return {
+        title: "This invitation was replaced",
+        message: "A newer invitation was sent to the same address, or the invitation was withdrawn. Use the link in the most recent invitation mail, or ask your training manager.",
+      };
+    case "expired":
+      return {
+        title: "This invitation has expired",
+        message: `The link expired on ${dateText(l.expiresAt)}; invitation links work for ${INVITE_DAYS} days. Ask your training manager to send a new one.`,
+      };
+    default:
+      return {
+        title: "This invitation link is not valid",
+        message: "Check that the whole link from the mail was opened (mail programs sometimes break long links), or ask your training manager for a new invitation.",
+      };
+  }
+}
+
+/**
+ * Accepting: the invitation is claimed first with one conditional UPDATE (so a link used twice at
+ * the same moment creates one account), then the account is created through better-auth inside
+ * the organization; if that fails the claim is released. The e-mail is marked verified: opening
+ * the mailed link proved the address.
+ */
+export async function acceptInvite(input: AcceptInviteInput, headers: Headers, ip: string): Promise<{ email: string; userId: string }> {
+  const found = await lookupInvite(input.token);
+  if (found.state !== "ok") throw new ApiError(410, refusalText(found).message);
+  const inv = found.invite;
+  const [claim] = await db
+    .update(invitation)
+    .set({ acceptedAt: sql`CURRENT_TIMESTAMP(3)` })
+    .where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+  if (claim.affectedRows !== 1) throw new ApiError(410, refusalText({ state: "used" }).message);
+  const release = () => db.update(invitation).set({ acceptedAt: null }).where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedUserId)));
+  let userId: string;
+  try {
+    // The team may have been removed since the invitation was sent.
+    const teamId = inv.teamId ? ((await db.select({ id: team.id }).from(team).where(eq(team.id, inv.teamId)))[0]?.id ?? null) : null;
+    const result = await createAccount({ name: input.name, email: inv.email, password: input.password }, { organizationId: inv.organizationId, teamId, role: inv.role as InviteRole }, headers);
+    if (!result.ok) {
+      await release();
+      const emailProblem = result.fieldErrors?.email?.[0];
+      if (emailProblem) throw new ApiError(409, `${emailProblem} (${inv.email})`);
+      throw new ApiError(400, result.message, result.fieldErrors);
+    }
+    userId = result.userId;
+  } catch (err) {
+    if (!(err instanceof ApiError)) await release().catch(() => undefined);
+    throw err;
+  }
+  await db.transaction(async (tx) => {
+    await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
+    await tx.update(invitation).set({ acceptedUserId: userId }).where(eq(invitation.id, inv.id));
+    await audit(
+      { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "invite.accept", targetType: "invitation", targetId: inv.id, ip, details: { role: inv.role, teamId: inv.teamId } },
+      tx,
+    );
+  });
+  return { email: inv.email, userId };
+}
+
+/** Open invitations of an organization (for the invite page). */
+export async function openInvitations(orgId: string, now = new Date()) {
+  return db
+    .select({ id: invitation.id, email: invitation.email, name: invitation.name, role: invitation.role, team: team.name, createdAt: invitation.createdAt, expiresAt: invitation.expiresAt })
+    .from(invitation)
+    .leftJoin(team, eq(team.id, invitation.teamId))
+    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, now)))
+    .orderBy(sql`${invitation.createdAt} desc`)
+    .limit(200);
+}
+
+/** E-mails among `emails` with an open invitation in the organization. */
+export async function pendingEmails(orgId: string, emails: string[], tx: Tx | typeof db = db): Promise<Set<string>> {
+  const out = new Set<string>();
+  for (let i = 0; i < emails.length; i += 500) {
+    const chunk = emails.slice(i, i + 500);
+    if (!chunk.length) continue;
+    const rows = await tx
+      .select({ email: invitation.email })
+      .from(invitation)
+      .where(and(eq(invitation.organizationId, orgId), inArray(invitation.email, chunk), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+    for (const r of rows) out.add(r.email);
+  }
+  return out;
+}

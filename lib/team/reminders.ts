@@ -1,0 +1,173 @@
+import "server-only";
+import { and, eq, gte, inArray, lte, sql } from "drizzle-orm";
+import { db } from "@/db/client";
+import { assignment, moduleCompletion, organization, reminderLog, user } from "@/db/schema";
+import { env } from "@/lib/env";
+import { sendMail } from "@/lib/mail";
+import { itemModules, itemTitle, rowsFor, teamTotals, type Person } from "./board";
+import { isoWeek } from "./period";
+import { isDone } from "./status";
+
+export { isoWeek };
+
+/**
+ * Reminder jobs, safe to run any number of times: each mail is claimed in reminder_log first
+ * (INSERT IGNORE on a unique key naming the item and the period), and sent only by the run that
+ * won the claim. A failed send releases its claim so that the next run retries it.
+ *   overdue   once per ISO week per assignment, while it stays overdue
+ *   due-soon  once per assignment and due date, when it falls due within 3 days
+ *   digest    once per ISO week per manager
+ */
+
+const DAY_MS = 86_400_000;
+export const DUE_SOON_DAYS = 3;
+
+async function claim(kind: string, userId: string, periodKey: string, now: Date): Promise<boolean> {
+  const [res] = await db.insert(reminderLog).ignore().values({ kind, userId, periodKey, sentAt: now });
+  return res.affectedRows === 1;
+}
+async function release(kind: string, userId: string, keys: string[]) {
+  if (keys.length) await db.delete(reminderLog).where(and(eq(reminderLog.kind, kind), eq(reminderLog.userId, userId), inArray(reminderLog.periodKey, keys)));
+}
+
+const dayText = (d: Date) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "long", day: "numeric", year: "numeric", timeZone: "UTC" }).format(d);
+
+type Candidate = { assignmentId: number; kind: string; slug: string; dueAt: Date; person: Person };
+
+/** Effective assignments (direct and through the current team) due on or before `until`. */
+async function dueAssignments(until: Date): Promise<Candidate[]> {
+  const [rows] = (await db.execute(sql`
+SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id
+FROM assignment a JOIN user u ON u.id = a.user_id AND u.organization_id = a.organization_id
+WHERE a.user_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.banned = 0)
+UNION ALL
+SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id
+FROM assignment a JOIN user u ON u.team_id = a.team_id AND u.organization_id = a.organization_id
+WHERE a.team_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.banned = 0) AND u.role <> 'admin'`)) as unknown as [Record<string, unknown>[]];
+  return rows.map((r) => ({
+    assignmentId: Number(r.id),
+    kind: String(r.kind),
+    slug: String(r.target_slug),
+    dueAt: r.due_at instanceof Date ? r.due_at : new Date(String(r.due_at)),
+    person: {
+      id: String(r.user_id),
+      name: String(r.name),
+      email: String(r.email),
+      role: String(r.role),
+      teamId: (r.team_id as string | null) ?? null,
+      team: null,
+      organizationId: String(r.organization_id),
+    },
+  }));
+}
+
+/** Overdue and due-soon mails to learners. */
+export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}) {
+  const candidates = await dueAssignments(new Date(now.getTime() + DUE_SOON_DAYS * DAY_MS));
+  const people = new Map<string, Person>();
+  for (const c of candidates) people.set(c.person.id, c.person);
+  const list = [...people.values()];
+  const done = new Map<string, Set<string>>(); // person → modules passed
+  for (let i = 0; i < list.length; i += 500) {
+    for (const row of await rowsFor(list.slice(i, i + 500), now)) {
+      done.set(row.id, new Set(Object.entries(row.cells).filter(([, c]) => isDone(c.status)).map(([slug]) => slug)));
+    }
+  }
+  const week = isoWeek(now);
+  const claimed = new Map<string, { person: Person; kind: "overdue" | "due-soon"; items: (Candidate & { key: string })[] }>();
+  for (const c of candidates) {
+    const mods = itemModules(c.kind, c.slug);
+    const passed = done.get(c.person.id) ?? new Set();
+    if (mods.length > 0 && mods.every((m) => passed.has(m))) continue;
+    const kind = c.dueAt.getTime() < now.getTime() ? "overdue" : "due-soon";
+    const key = kind === "overdue" ? `a${c.assignmentId}:${week}` : `a${c.assignmentId}:${c.dueAt.toISOString().slice(0, 10)}`;
+    if (!(await claim(kind, c.person.id, key, now))) continue;
+    const k = `${c.person.id}/${kind}`;
+    const entry = claimed.get(k) ?? { person: c.person, kind, items: [] };
+    entry.items.push({ ...c, key });
+    claimed.set(k, entry);
+  }
+  let sent = 0;
+  let failed = 0;
+  for (const { person, kind, items } of claimed.values()) {
+    items.sort((a, b) => a.dueAt.getTime() - b.dueAt.getTime());
+    const lines = items.map((i) => {
+      const what = i.kind === "path" ? "learning path" : "module";
+      const link = i.kind === "module" ? `${env.APP_URL}/modules/${i.slug}` : `${env.APP_URL}/modules?path=${i.slug}`;
+      return `- ${itemTitle(i.kind, i.slug)} (${what}), ${kind === "overdue" ? "was due" : "due"} ${dayText(i.dueAt)}\n  ${link}`;
+    });
+    const subject =
+      kind === "overdue"
+        ? `Overdue training: ${items.length === 1 ? itemTitle(items[0]!.kind, items[0]!.slug) : `${items.length} items`}`
+        : `Training due soon: ${items.length === 1 ? itemTitle(items[0]!.kind, items[0]!.slug) : `${items.length} items`}`;
+    const intro =
+      kind === "overdue"
+        ? "This training assigned to you is past its due date:"
+        : `This training assigned to you is due within ${DUE_SOON_DAYS} days:`;
+    const res = await sendMail({
+      to: person.email,
+      kind: `reminder-${kind}`,
+      subject,
+      text: `Hello ${person.name},\n\n${intro}\n\n${lines.join("\n")}\n\nYour assigned work, in due-date order: ${env.APP_URL}/learn\n\nYour training manager sets these dates; if one looks wrong, ask them.`,
+    });
+    if (res.ok) sent++;
+    else {
+      failed++;
+      await release(
+        kind,
+        person.id,
+        items.map((i) => i.key),
+      );
+    }
+  }
+  return { candidates: candidates.length, sent, failed };
+}
+
+/** Weekly digest to each manager: totals per team, overdue and expiring counts, last week's completions. */
+export async function sendManagerDigests({ now = new Date() }: { now?: Date } = {}) {
+  const managers = await db
+    .select({ id: user.id, name: user.name, email: user.email, organizationId: user.organizationId, orgName: organization.name })
+    .from(user)
+    .innerJoin(organization, eq(organization.id, user.organizationId))
+    .where(and(eq(user.role, "manager"), sql`(${user.banned} IS NULL OR ${user.banned} = 0)`));
+  const week = isoWeek(now);
+  const byOrg = new Map<string, typeof managers>();
+  for (const m of managers) byOrg.set(m.organizationId!, [...(byOrg.get(m.organizationId!) ?? []), m]);
+  let sent = 0;
+  let failed = 0;
+  for (const [orgId, list] of byOrg) {
+    const mine: typeof list = [];
+    for (const m of list) if (await claim("digest", m.id, `digest:${week}`, now)) mine.push(m);
+    if (mine.length === 0) continue;
+    const totals = await teamTotals({ orgId, orgName: null }, now);
+    const weekAgo = new Date(now.getTime() - 7 * DAY_MS);
+    const [done] = await db
+      .select({ n: sql<number>`COUNT(*)` })
+      .from(moduleCompletion)
+      .innerJoin(user, eq(user.id, moduleCompletion.userId))
+      .where(and(eq(user.organizationId, orgId), gte(moduleCompletion.completedAt, weekAgo), lte(moduleCompletion.completedAt, now)));
+    const [openAssignments] = await db
+      .select({ n: sql<number>`COUNT(*)` })
+      .from(assignment)
+      .where(and(eq(assignment.organizationId, orgId), gte(assignment.dueAt, now), lte(assignment.dueAt, new Date(now.getTime() + 7 * DAY_MS))));
+    const sum = (k: "people" | "overdue" | "expiring" | "expired") => totals.reduce((n, t) => n + t[k], 0);
+    const lines = totals.map((t) => {
+      const pct = t.cells ? Math.round((t.passed / t.cells) * 100) : 0;
+      return `- ${t.team}: ${t.people} ${t.people === 1 ? "person" : "people"}, ${t.passed} of ${t.cells} modules passed (${pct}%), ${t.overdue} overdue, ${t.expiring} certificates expiring`;
+    });
+    for (const m of mine) {
+      const res = await sendMail({
+        to: m.email,
+        kind: "digest",
+        subject: `Weekly training summary for ${m.orgName} (${week})`,
+        text: `Hello ${m.name},\n\nWhere ${m.orgName} stands this week (${week}):\n\n${lines.join("\n") || "- No people yet."}\n\nOverdue modules: ${sum("overdue")}\nCertificates expiring within 30 days: ${sum("expiring")}\nExpired certificates: ${sum("expired")}\nModules completed in the last 7 days: ${Number(done?.n ?? 0)}\nAssignments falling due in the next 7 days: ${Number(openAssignments?.n ?? 0)}\n\nThe team board, with filters and exports: ${env.APP_URL}/team`,
+      });
+      if (res.ok) sent++;
+      else {
+        failed++;
+        await release("digest", m.id, [`digest:${week}`]);
+      }
+    }
+  }
+  return { managers: managers.length, sent, failed };
+}

@@ -1,0 +1,138 @@
+/**
+ * Roster CSV for bulk invitations: decoding, parsing (papaparse) and per-row checks, as pure
+ * functions (no database here: the caller passes what the checks need). The same code runs for
+ * the preview and again, against fresh data, when the manager confirms the import.
+ */
+import Papa from "papaparse";
+import { z } from "zod";
+import { INVITE_ROLES, ROSTER_COLUMNS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "./schemas";
+
+export type RosterFileProblem = { error: string };
+
+const kb = (n: number) => `${Math.round(n / 1024)} KB`;
+const LIMIT_TEXT = `${ROSTER_MAX_BYTES / (1024 * 1024)} MB`;
+
+/**
+ * Bytes → text. Refuses what is not a CSV (a spreadsheet workbook, a binary file), what is too
+ * large, and text that is not UTF-8 (invalid byte sequences are caught by a fatal decoder).
+ */
+export function decodeRoster(bytes: Uint8Array, fileName: string): { text: string } | RosterFileProblem {
+  if (bytes.byteLength === 0) return { error: "The file is empty. Use the template: a header row (email,name,role,team) and one row per person." };
+  if (bytes.byteLength > ROSTER_MAX_BYTES) return { error: `The file is ${kb(bytes.byteLength)}; the limit is ${LIMIT_TEXT} (about ${ROSTER_MAX_ROWS.toLocaleString("en-US")} rows). Split it into smaller files.` };
+  const name = fileName.toLowerCase();
+  const zip = bytes[0] === 0x50 && bytes[1] === 0x4b; // PK: xlsx, ods, zip
+  if (zip || /\.(xlsx|xlsm|xls|ods|numbers|zip)$/.test(name)) {
+    return { error: "This is a spreadsheet workbook, not a CSV file. In your spreadsheet choose Save as (or Download) → “CSV UTF-8”, then upload that file." };
+  }
+  if (!/\.(csv|txt)$/.test(name)) return { error: "Upload a .csv file (comma-separated values). Start from the template if unsure." };
+  if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
+    return { error: "The file is saved as UTF-16 text. Save it again as “CSV UTF-8” and upload that file." };
+  }
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+  } catch {
+    return { error: "The file is not UTF-8 text (it has bytes that are not valid UTF-8, as in a file saved as Windows-1252 or Latin-1). Save it again as “CSV UTF-8” and upload that file." };
+  }
+  if (text.includes("\u0000")) return { error: "The file contains binary data, so it is not a CSV file. Save your roster as “CSV UTF-8” and upload that file." };
+  return { text: text.replace(/^\uFEFF/, "") };
+}
+
+export type RawRosterRow = { line: number; email: string; name: string; role: string; team: string };
+
+/** Text → rows (header names are matched without case; empty lines are skipped). */
+export function parseRoster(text: string): { rows: RawRosterRow[] } | RosterFileProblem {
+  const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false });
+  const data = parsed.data;
+  const header = (data[0] ?? []).map((h) => h.trim().toLowerCase().replace(/^e-mail$/, "email"));
+  if (!header.includes("email")) {
+    return { error: `The first row must name the columns: ${ROSTER_COLUMNS.join(",")} (only email is required). Download the template to see the layout.` };
+  }
+  const col = (n: string) => header.indexOf(n);
+  const [ie, inm, ir, it] = [col("email"), col("name"), col("role"), col("team")];
+  const rows: RawRosterRow[] = [];
+  for (let i = 1; i < data.length; i++) {
+    const cells = data[i] ?? [];
+    if (cells.every((c) => c.trim() === "")) continue;
+    const at = (k: number) => (k >= 0 ? (cells[k] ?? "").trim() : "");
+    rows.push({ line: i + 1, email: at(ie), name: at(inm), role: at(ir), team: at(it) });
+  }
+  if (rows.length === 0) return { error: "The file has a header row but no people under it." };
+  if (rows.length > ROSTER_MAX_ROWS) {
+    return { error: `The file has ${rows.length.toLocaleString("en-US")} rows; the limit is ${ROSTER_MAX_ROWS.toLocaleString("en-US")} per upload. Split it into smaller files.` };
+  }
+  return { rows };
+}
+
+export type RosterContext = {
+  orgName: string;
+  /** lower-cased team name → team id */
+  teams: Map<string, { id: string; name: string }>;
+  /** lower-cased e-mails with an account in this organization */
+  members: Set<string>;
+  /** lower-cased e-mails with an account in another organization (or an admin account) */
+  elsewhere: Set<string>;
+  /** lower-cased e-mails with an open invitation in this organization */
+  pending: Set<string>;
+  seats: number;
+  /** seats taken now: active members + open invitations */
+  used: number;
+};
+
+export type CheckedRow = RawRosterRow & {
+  problems: string[];
+  notes: string[];
+  teamId: string | null;
+  roleValue: InviteRole | null;
+};
+
+const emailCheck = z.string().email();
+
+/** Names every problem of every row; rows without problems are the ones an import writes. */
+export function checkRoster(raw: RawRosterRow[], ctx: RosterContext): CheckedRow[] {
+  const firstLine = new Map<string, number>();
+  let free = Math.max(0, ctx.seats - ctx.used);
+  const teamList = [...ctx.teams.values()].map((t) => t.name);
+  return raw.map((r) => {
+    const problems: string[] = [];
+    const notes: string[] = [];
+    const email = r.email.toLowerCase();
+    if (!r.email) problems.push("E-mail is missing");
+    else if (email.length > 255 || !emailCheck.safeParse(email).success) problems.push(`Bad e-mail address: “${r.email}”`);
+    const roleText = r.role.toLowerCase();
+    const roleValue = roleText === "" ? "learner" : (INVITE_ROLES as readonly string[]).includes(roleText) ? (roleText as InviteRole) : null;
+    if (!roleValue) problems.push(`Unknown role “${r.role}”: use learner, sales or manager`);
+    let teamId: string | null = null;
+    if (r.team) {
+      const t = ctx.teams.get(r.team.toLowerCase());
+      if (t) teamId = t.id;
+      else problems.push(`Unknown team “${r.team}”${teamList.length ? `: teams are ${teamList.slice(0, 8).join(", ")}${teamList.length > 8 ? ", …" : ""}` : ": your organization has no teams yet"}`);
+    }
+    if (r.name.length > 200) problems.push("Name is longer than 200 characters");
+    if (email && !problems.some((p) => p.startsWith("Bad e-mail"))) {
+      const seen = firstLine.get(email);
+      if (seen !== undefined) problems.push(`Duplicate in file: the same e-mail is on line ${seen}`);
+      else firstLine.set(email, r.line);
+      if (ctx.members.has(email)) problems.push(`Already a member of ${ctx.orgName}: nothing will be sent`);
+      else if (ctx.elsewhere.has(email)) problems.push("Has a Riser account in another organization");
+    }
+    if (problems.length === 0) {
+      if (ctx.pending.has(email)) notes.push("Has an open invitation: a new link replaces it (no extra seat)");
+      else if (free > 0) free--;
+      else problems.push(`Over the seat count: your organization has ${ctx.seats} seats and all are taken; buy more on the billing page`);
+    }
+    return { ...r, email: r.email, problems, notes, teamId, roleValue };
+  });
+}
+
+/** Template CSV: header and two example rows with the organization's own team names. */
+export function rosterTemplate(teamNames: string[]): string {
+  const [a = "North crew", b = a] = teamNames;
+  const q = (s: string) => (/[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
+  return [
+    ROSTER_COLUMNS.join(","),
+    `new.installer@example.com,Ruel Tamberlin,learner,${q(a)}`,
+    `crew.lead@example.com,Odile Vassmer,manager,${q(b)}`,
+    "",
+  ].join("\r\n");
+}

@@ -1,0 +1,106 @@
+/**
+ * Team-management input schemas and plain rules shared by the browser (react-hook-form) and the
+ * server (route handlers). No server code here.
+ */
+import { z } from "zod";
+import { email, password, personName } from "@/lib/auth/schemas";
+import { slug } from "@/lib/content/schema";
+
+export const INVITE_ROLES = ["learner", "sales", "manager"] as const;
+export type InviteRole = (typeof INVITE_ROLES)[number];
+export const ROLE_LABELS: Record<InviteRole, string> = { learner: "Learner", sales: "Sales", manager: "Manager" };
+
+/** How long an invitation link works (Riser's own choice). */
+export const INVITE_DAYS = 7;
+
+/** Bulk upload limits, stated to the manager in the form and in every refusal. */
+export const ROSTER_MAX_ROWS = 2000;
+export const ROSTER_MAX_BYTES = 1024 * 1024;
+export const ROSTER_COLUMNS = ["email", "name", "role", "team"] as const;
+
+const optionalId = z
+  .string()
+  .trim()
+  .max(36)
+  .optional()
+  .transform((v) => (v ? v : undefined));
+
+export const inviteSchema = z.object({
+  email,
+  name: z
+    .string()
+    .trim()
+    .max(200, "At most 200 characters")
+    .optional()
+    .transform((v) => (v ? v : undefined)),
+  role: z.enum(INVITE_ROLES, { message: "Choose learner, sales or manager" }),
+  teamId: optionalId,
+  /** admins only: which organization the invitation is for */
+  org: optionalId,
+});
+export type InviteInput = z.input<typeof inviteSchema>;
+
+export const acceptInviteSchema = z
+  .object({ token: z.string().min(20).max(100), name: personName, password, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+export type AcceptInviteInput = z.infer<typeof acceptInviteSchema>;
+
+const isoDay = /^\d{4}-\d{2}-\d{2}$/;
+
+/** "2027-03-14" → the end of that day, UTC (due dates are whole days). */
+export function endOfDayUtc(day: string): Date {
+  return new Date(`${day}T23:59:59.000Z`);
+}
+
+export const assignSchema = z
+  .object({
+    kind: z.enum(["module", "path"], { message: "Choose a module or a learning path" }),
+    slug,
+    userIds: z.array(z.string().min(1).max(36)).max(500, "At most 500 people at once").default([]),
+    teamIds: z.array(z.string().min(1).max(36)).max(100).default([]),
+    dueAt: z
+      .string()
+      .regex(isoDay, "Pick a due date")
+      .refine((d) => !Number.isNaN(endOfDayUtc(d).getTime()), "Pick a real date")
+      .refine((d) => endOfDayUtc(d).getTime() >= Date.now(), "Pick today or a later date"),
+    org: optionalId,
+  })
+  .refine((v) => v.userIds.length + v.teamIds.length > 0, { path: ["targets"], message: "Choose at least one person or team" });
+export type AssignInput = z.input<typeof assignSchema>;
+
+/** Cell statuses of the team board, in the order the legend shows them. */
+export const BOARD_STATUSES = ["not_started", "in_progress", "passed", "failed", "expiring", "expired", "overdue"] as const;
+export type BoardStatus = (typeof BOARD_STATUSES)[number];
+export const STATUS_LABELS: Record<BoardStatus, string> = {
+  not_started: "Not started",
+  in_progress: "In progress",
+  passed: "Passed",
+  failed: "Failed last attempt",
+  expiring: "Certificate expiring",
+  expired: "Expired",
+  overdue: "Overdue",
+};
+
+export const BOARD_SORTS = ["name", "team", "progress", "overdue", "due"] as const;
+export type BoardSort = (typeof BOARD_SORTS)[number];
+
+export const boardQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(25),
+  team: z.string().max(36).optional(),
+  status: z.enum(BOARD_STATUSES).optional(),
+  module: slug.optional(),
+  dueBefore: z.string().regex(isoDay, "Use a date like 2027-03-14").optional(),
+  sort: z.enum(BOARD_SORTS).default("name"),
+  dir: z.enum(["asc", "desc"]).optional(),
+  q: z.string().trim().max(100).optional(),
+  org: z.string().max(36).optional(),
+});
+export type BoardQuery = z.infer<typeof boardQuerySchema>;
+
+/** Reads a board query from URL search params; empty values count as absent. */
+export function parseBoardQuery(params: URLSearchParams) {
+  const raw: Record<string, string> = {};
+  for (const [k, v] of params) if (v !== "") raw[k] = v;
+  return boardQuerySchema.safeParse(raw);
+}

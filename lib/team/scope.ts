@@ -1,0 +1,62 @@
+import "server-only";
+import { asc, eq } from "drizzle-orm";
+import { forbidden, notFound } from "next/navigation";
+import { db } from "@/db/client";
+import { organization, team } from "@/db/schema";
+import { AccessError, type Viewer } from "@/lib/access";
+import { ApiError } from "@/lib/api";
+
+/**
+ * Which organization's data a request may see. Managers: their own, always (asking for another
+ * one is a 403). Admins: the one named by `?org=`, or every organization when none is named.
+ * `orgId: null` therefore only ever happens for an admin.
+ */
+export type OrgScope = { orgId: string | null; orgName: string | null };
+
+export async function resolveScope(viewer: Viewer, orgParam?: string | null): Promise<OrgScope> {
+  if (viewer.role === "admin") {
+    if (!orgParam) return { orgId: null, orgName: null };
+    const [org] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, orgParam));
+    if (!org) throw new ApiError(404, "No such organization.");
+    return { orgId: org.id, orgName: org.name };
+  }
+  if (viewer.role !== "manager" || !viewer.organizationId) throw new AccessError(403, "Only training managers see team data.");
+  if (orgParam && orgParam !== viewer.organizationId) throw new AccessError(403, "That belongs to another organization.");
+  const [org] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, viewer.organizationId));
+  if (!org) throw new AccessError(403, "Your organization no longer exists.");
+  return { orgId: org.id, orgName: org.name };
+}
+
+/** For pages: another organization → the 403 page; an unknown one → the 404 page. */
+export async function pageScope(viewer: Viewer, orgParam?: string | null): Promise<OrgScope> {
+  try {
+    return await resolveScope(viewer, orgParam);
+  } catch (err) {
+    if (err instanceof AccessError) forbidden();
+    if (err instanceof ApiError && err.status === 404) notFound();
+    throw err;
+  }
+}
+
+/** For changes (invite, assign): one organization is required; admins must name it. */
+export async function resolveWriteOrg(viewer: Viewer, orgParam?: string | null): Promise<{ orgId: string; orgName: string }> {
+  const scope = await resolveScope(viewer, orgParam);
+  if (!scope.orgId || !scope.orgName) throw new ApiError(400, "Choose the organization first.", { org: ["Choose the organization"] });
+  return { orgId: scope.orgId, orgName: scope.orgName };
+}
+
+export type TeamOption = { id: string; name: string; organizationId: string; orgName: string };
+
+/** Teams in scope (all teams of all organizations for an admin without ?org=). */
+export async function teamsInScope(scope: OrgScope): Promise<TeamOption[]> {
+  const q = db
+    .select({ id: team.id, name: team.name, organizationId: team.organizationId, orgName: organization.name })
+    .from(team)
+    .innerJoin(organization, eq(organization.id, team.organizationId));
+  const rows = scope.orgId ? await q.where(eq(team.organizationId, scope.orgId)).orderBy(asc(team.name)) : await q.orderBy(asc(organization.name), asc(team.name));
+  return rows;
+}
+
+export async function allOrganizations(): Promise<{ id: string; name: string }[]> {
+  return db.select({ id: organization.id, name: organization.name }).from(organization).orderBy(asc(organization.name));
+}

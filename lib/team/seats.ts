@@ -1,0 +1,65 @@
+import "server-only";
+import { and, countDistinct, count, eq, gt, isNull, or, sql } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { invitation, organization, user } from "@/db/schema";
+import { ApiError, json } from "@/lib/api";
+import { seatAllowance, type TrialState } from "@/lib/billing/allowance";
+
+export const BILLING_PATH = "/team/billing";
+
+export class SeatLimitError extends ApiError {
+  constructor(
+    readonly seats: number,
+    readonly used: number,
+    readonly requested: number,
+    trialEndedAt?: Date | null,
+  ) {
+    super(
+      409,
+      trialEndedAt
+        ? `Your organization's trial ended on ${trialEndedAt.toISOString().slice(0, 10)}; buy seats on the billing page to invite more people.`
+        : `Your organization has ${seats} seats; buy more on the billing page.`,
+    );
+  }
+}
+
+/** The JSON a route answers for a seat refusal: the message, the figures and where to buy seats. */
+export function seatLimitResponse(err: SeatLimitError): Response {
+  return json({ error: err.message, seats: err.seats, used: err.used, requested: err.requested, billingUrl: BILLING_PATH }, 409);
+}
+
+export type SeatUsage = { seats: number; members: number; pending: number; trial: TrialState; trialEndsAt: Date | null };
+
+/**
+ * Seats the organization may fill now (lib/billing/allowance: bought seats, plus the trial's while
+ * it runs), active members (not banned) and open invitations (distinct e-mails).
+ */
+export async function seatUsage(orgId: string, tx: Tx | typeof db = db, lock = false): Promise<SeatUsage> {
+  const orgQuery = tx.select({ seats: organization.seats, trialEndsAt: organization.trialEndsAt }).from(organization).where(eq(organization.id, orgId));
+  const [org] = lock ? await orgQuery.for("update") : await orgQuery;
+  const [m] = await tx
+    .select({ n: count() })
+    .from(user)
+    .where(and(eq(user.organizationId, orgId), or(isNull(user.banned), eq(user.banned, false))));
+  const [p] = await tx
+    .select({ n: countDistinct(invitation.email) })
+    .from(invitation)
+    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+  const allowance = seatAllowance({ seats: org?.seats ?? 0, trialEndsAt: org?.trialEndsAt ?? null });
+  return { seats: allowance.seats, members: m?.n ?? 0, pending: p?.n ?? 0, trial: allowance.trial, trialEndsAt: allowance.trialEndsAt };
+}
+
+/**
+ * The one seat check for invitations: active members + open invitations + `count` new ones must
+ * fit in the seats the organization may fill (lib/billing/allowance: bought seats, plus the
+ * trial's while it runs). Call it inside the transaction that writes the invitations (it locks the
+ * organization row so two managers cannot both take the last seat). When the transaction has
+ * already written the new invitations, say how many with `written` (they are counted once, and the
+ * refusal reports the seats in use before them).
+ */
+export async function assertSeatAvailable(orgId: string, count: number, tx?: Tx, opts: { written?: number } = {}): Promise<SeatUsage> {
+  const usage = await seatUsage(orgId, tx ?? db, Boolean(tx));
+  const used = usage.members + usage.pending - (opts.written ?? 0);
+  if (used + count > usage.seats) throw new SeatLimitError(usage.seats, used, count, usage.trial === "ended" ? usage.trialEndsAt : null);
+  return usage;
+}
