@@ -3,7 +3,7 @@
 // every module, and team assignments with due dates. Fast: multi-row inserts, one password hash.
 //
 //   node_modules/.bin/tsx db/seed-scale.ts --profile=test-b      (or with DATABASE_URL set)
-//   … --replace    removes an earlier scale organization first
+//   … --replace    removes an earlier scale organization first; --remove only removes it
 //
 // Needs the catalog synced (run the normal seed first). Plain mysql2, no app modules, so it runs
 // without the react-server condition.
@@ -58,17 +58,20 @@ async function main() {
   const conn = await mysql.createConnection({ uri: await databaseUrl(), timezone: "Z" });
   try {
     const [existing] = await conn.query<mysql.RowDataPacket[]>("SELECT id FROM organization WHERE name = ?", [SCALE_ORG]);
-    if (existing.length) {
-      if (!process.argv.includes("--replace")) {
+    if (existing.length || process.argv.includes("--remove")) {
+      if (!existing.length) return console.log("[seed:scale] no scale organization to remove");
+      if (!process.argv.includes("--replace") && !process.argv.includes("--remove")) {
         console.log(`[seed:scale] "${SCALE_ORG}" exists: left as it is (pass --replace to rebuild it)`);
         return;
       }
       const orgId = existing[0]!.id as string;
       await conn.query("DELETE FROM certificate WHERE organization_id = ?", [orgId]);
       await conn.query("DELETE c FROM module_completion c JOIN user u ON u.id = c.user_id WHERE u.organization_id = ?", [orgId]);
+      await conn.query("DELETE r FROM reminder_log r JOIN user u ON u.id = r.user_id WHERE u.organization_id = ?", [orgId]);
       await conn.query("DELETE FROM user WHERE organization_id = ?", [orgId]); // cascades progress, attempts, sessions
       await conn.query("DELETE FROM organization WHERE id = ?", [orgId]); // cascades teams, assignments
       console.log("[seed:scale] removed the earlier scale organization");
+      if (process.argv.includes("--remove")) return;
     }
 
     const [modules] = await conn.query<mysql.RowDataPacket[]>(
@@ -227,10 +230,13 @@ async function main() {
   }
 }
 
-try {
-  await main();
-} catch (err) {
-  const e = err as { sqlMessage?: string; message?: string };
-  console.error(`[seed:scale] failed: ${e.sqlMessage ?? e.message}`);
-  process.exit(1);
+// Runs only as a script (bench/team-board.ts imports the names above).
+if (/seed-scale\.ts$/.test(process.argv[1] ?? "")) {
+  try {
+    await main();
+  } catch (err) {
+    const e = err as { sqlMessage?: string; message?: string };
+    console.error(`[seed:scale] failed: ${e.sqlMessage ?? e.message}`);
+    process.exit(1);
+  }
 }

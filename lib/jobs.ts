@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Every scheduled job, in one list: `npm run jobs:run` (scripts/jobs.ts) and
  * `POST /api/jobs/run` (header x-jobs-secret) both run these. Each job must be safe to run twice

@@ -53,7 +53,7 @@ export function EmailForm({ email }: { email: string }) {
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-3">
       <p>
-        Current address: <strong className="break-all">{email}</strong>
+        Current address: <strong className="wrap-anywhere">{email}</strong>
       </p>
       <FormError message={error} />
       <FormNotice message={notice} />

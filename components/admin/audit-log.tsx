@@ -14,7 +14,7 @@ function Details({ value }: { value: unknown }) {
   return (
     <ul className="mt-1 font-mono text-xs text-muted">
       {entries.map(([k, v]) => (
-        <li key={String(k)} className="break-all">
+        <li key={String(k)} className="wrap-anywhere">
           {String(k)}: {typeof v === "object" ? JSON.stringify(v) : String(v)}
         </li>
       ))}
@@ -37,14 +37,14 @@ export function AuditLog({ organizations }: { organizations: Org[] }) {
   const columns: Column<AuditRow>[] = [
     { key: "at", label: "Time", sort: "at", render: (r) => <When iso={r.at} /> },
     { key: "action", label: "Action", sort: "action", render: (r) => <span className="font-mono">{r.action}</span> },
-    { key: "actor", label: "Who", sort: "actor", render: (r) => <span className="break-all">{r.actorEmail ?? <span className="text-muted">Riser itself</span>}</span> },
+    { key: "actor", label: "Who", sort: "actor", render: (r) => <span className="whitespace-nowrap">{r.actorEmail ?? <span className="text-muted">Riser itself</span>}</span> },
     {
       key: "target",
       label: "What",
       sort: "target",
       render: (r) => (
         <>
-          <span className="break-all">{r.targetLabel ?? r.targetId}</span>
+          <span className="whitespace-nowrap">{r.targetLabel ?? r.targetId}</span>
           <span className="block font-mono text-xs text-muted">{r.targetType}</span>
           {r.organization ? <span className="block text-xs">{r.organization}</span> : null}
         </>

@@ -66,7 +66,7 @@ export function ContentStatus() {
             </ul>
           </div>
         ) : null}
-        <div className="overflow-x-auto rounded border border-line bg-panel" role="region" aria-label="Synced content counts" tabIndex={0}>
+        <div className="relative overflow-x-auto rounded border border-line bg-panel" role="region" aria-label="Synced content counts" tabIndex={0}>
           <table className="w-full border-collapse text-left text-sm">
             <caption className="sr-only">Content counts: in the database and in the repository</caption>
             <thead className="bg-paper">

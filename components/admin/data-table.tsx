@@ -82,7 +82,7 @@ export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, 
       {data && data.total === 0 ? <p className="rounded border border-line bg-panel px-3 py-4">{emptyText}</p> : null}
       {data && data.total > 0 ? (
         <>
-          <div className="overflow-x-auto rounded border border-line bg-panel" role="region" aria-label={caption} tabIndex={0}>
+          <div className="relative overflow-x-auto rounded border border-line bg-panel" role="region" aria-label={caption} tabIndex={0}>
             <table className="w-full border-collapse text-left text-sm">
               <caption className="sr-only">{caption}</caption>
               <thead className="bg-paper">

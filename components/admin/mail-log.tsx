@@ -11,7 +11,7 @@ export function MailLog({ bodiesVisible }: { bodiesVisible: boolean }) {
   const search = useDebounced(q.trim());
   const columns: Column<MailRow>[] = [
     { key: "at", label: "Time", sort: "at", render: (m) => <When iso={m.at} /> },
-    { key: "to", label: "Recipient", sort: "to", render: (m) => <span className="break-all">{m.to}</span> },
+    { key: "to", label: "Recipient", sort: "to", render: (m) => <span className="whitespace-nowrap">{m.to}</span> },
     {
       key: "subject",
       label: "Subject",

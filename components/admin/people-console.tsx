@@ -37,7 +37,7 @@ export function PeopleConsole({ organizations, viewerId }: { organizations: Org[
         <>
           <span className="font-bold">{p.name}</span>
           <br />
-          <span className="break-all text-muted">{p.email}</span>
+          <span className="whitespace-nowrap text-muted">{p.email}</span>
         </>
       ),
     },

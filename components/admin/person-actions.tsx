@@ -164,7 +164,7 @@ export function PersonActions({ person, organizations, viewerId, onDone }: { per
     <div className="flex flex-col gap-5">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="font-bold">E-mail</dt>
-        <dd className="break-all">{person.email}</dd>
+        <dd className="wrap-anywhere">{person.email}</dd>
         <dt className="font-bold">Role</dt>
         <dd>{ROLE_LABEL[person.role] ?? person.role}</dd>
         <dt className="font-bold">Organization</dt>

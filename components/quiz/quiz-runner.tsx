@@ -8,11 +8,24 @@ import { QuestionField } from "./question-field";
 import { QuizResults } from "./quiz-results";
 import type { AnswerValue, AttemptView, GradedAttempt, OpenAttempt } from "./types";
 
-function useCountdown(deadline: string | null) {
+/** Time left until the deadline, ticking each second; calls onExpire once when it reaches zero. */
+function useCountdown(deadline: string | null, onExpire: () => void) {
   const [left, setLeft] = useState<number | null>(null);
+  const expire = useRef(onExpire);
+  useEffect(() => {
+    expire.current = onExpire;
+  }, [onExpire]);
   useEffect(() => {
     if (!deadline) return;
-    const tick = () => setLeft(Math.max(0, new Date(deadline).getTime() - Date.now()));
+    let fired = false;
+    const tick = () => {
+      const ms = Math.max(0, new Date(deadline).getTime() - Date.now());
+      setLeft(ms);
+      if (ms === 0 && !fired) {
+        fired = true;
+        expire.current();
+      }
+    };
     tick();
     const t = setInterval(tick, 1000);
     return () => clearInterval(t);
@@ -34,7 +47,8 @@ export function QuizRunner({ module, canStart, blockedReason }: { module: string
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const dialog = useRef<HTMLDialogElement>(null);
   const open = attempt?.status === "open" ? (attempt as OpenAttempt) : null;
-  const left = useCountdown(open?.deadlineAt ?? null);
+  const submitRef = useRef<() => void>(() => {});
+  const left = useCountdown(open?.deadlineAt ?? null, () => submitRef.current());
 
   const flush = useCallback(async () => {
     if (!open || pending.current.size === 0) return true;
@@ -95,8 +109,8 @@ export function QuizRunner({ module, canStart, blockedReason }: { module: string
   }, [open, flush, router]);
 
   useEffect(() => {
-    if (left === 0 && open) void submit();
-  }, [left, open, submit]);
+    submitRef.current = () => void submit();
+  }, [submit]);
 
   useEffect(() => {
     const retry = () => saveState === "offline" && void flush();

@@ -230,7 +230,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
           )}
         </div>
       ) : data ? (
-        <div role="region" aria-label="Team board table" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+        <div role="region" aria-label="Team board table" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
           <table className="w-full border-collapse text-sm" aria-busy={isValidating}>
             <caption className="sr-only">Training status of each person in each module{f.status ? `, people with “${STATUS_LABELS[f.status as BoardStatus]}”` : ""}</caption>
             <thead>

@@ -83,7 +83,7 @@ export function BulkInvite({ org }: { org: string | null }) {
         .
       </p>
       <div className="flex flex-wrap items-end gap-3">
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 max-w-full flex-col gap-1">
           <label htmlFor={inputId} className="font-bold">Roster file (.csv)</label>
           <input
             ref={fileRef}
@@ -96,7 +96,7 @@ export function BulkInvite({ org }: { org: string | null }) {
               setResult(null);
               setError(null);
             }}
-            className="min-h-11 rounded border border-ink/40 bg-panel px-2 py-2"
+            className="min-h-11 w-full max-w-full rounded border border-ink/40 bg-panel px-2 py-2"
           />
         </div>
         <Button type="button" variant="secondary" onClick={check} disabled={busy || !file}>
@@ -118,7 +118,7 @@ export function BulkInvite({ org }: { org: string | null }) {
           <p className="text-sm text-muted">
             Seats: {preview.seats.used} of {preview.seats.seats} taken (members and open invitations).
           </p>
-          <div role="region" aria-label="Rows of the file" tabIndex={0} className="max-h-[32rem] overflow-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Rows of the file" tabIndex={0} className="relative max-h-[32rem] overflow-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <caption className="sr-only">Every row of the uploaded file with its problems</caption>
               <thead className="sticky top-0 bg-paper">

@@ -6,7 +6,7 @@ const STYLE: Record<BoardStatus, { cls: string; mark: string; short: string }> =
   in_progress: { cls: "border-water/40 bg-water-light text-water", mark: "◐", short: "In progress" },
   passed: { cls: "border-pass/40 bg-pass-light text-pass", mark: "✓", short: "Passed" },
   failed: { cls: "border-caution/40 bg-caution-light text-caution", mark: "✗", short: "Failed" },
-  expiring: { cls: "border-copper/40 bg-copper-light text-copper", mark: "⌛", short: "Expiring" },
+  expiring: { cls: "border-copper/40 bg-copper-light text-copper", mark: "◔", short: "Expiring" },
   expired: { cls: "border-caution/40 bg-caution-light text-caution", mark: "!", short: "Expired" },
   overdue: { cls: "border-caution bg-caution text-white", mark: "!", short: "Overdue" },
 };

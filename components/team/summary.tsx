@@ -32,7 +32,7 @@ export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrg
         <p>No people yet, so there is nothing to total.</p>
       ) : (
         <>
-          <div role="region" aria-label="Totals per team" tabIndex={0} className="mb-6 overflow-x-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Totals per team table" tabIndex={0} className="relative mb-6 overflow-x-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line bg-paper text-left">

@@ -413,6 +413,7 @@ ALTER TABLE `sign_off_evidence` ADD CONSTRAINT `sign_off_evidence_sign_off_id_si
 CREATE INDEX `account_user_idx` ON `account` (`user_id`);--> statement-breakpoint
 CREATE INDEX `session_user_idx` ON `session` (`user_id`);--> statement-breakpoint
 CREATE INDEX `user_org_idx` ON `user` (`organization_id`,`team_id`);--> statement-breakpoint
+CREATE INDEX `user_org_name_idx` ON `user` (`organization_id`,`name`);--> statement-breakpoint
 CREATE INDEX `verification_identifier_idx` ON `verification` (`identifier`);--> statement-breakpoint
 CREATE INDEX `audit_at_idx` ON `audit_log` (`at`);--> statement-breakpoint
 CREATE INDEX `audit_org_idx` ON `audit_log` (`organization_id`,`at`);--> statement-breakpoint

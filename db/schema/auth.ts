@@ -23,7 +23,8 @@ export const user = mysqlTable(
     organizationId: varchar("organization_id", { length: 36 }),
     teamId: varchar("team_id", { length: 36 }),
   },
-  (t) => [index("user_org_idx").on(t.organizationId, t.teamId)],
+  // user_org_name_idx: the team board pages an organization's people in name order (lib/team/board.ts)
+  (t) => [index("user_org_idx").on(t.organizationId, t.teamId), index("user_org_name_idx").on(t.organizationId, t.name)],
 );
 
 export const session = mysqlTable(

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, count, eq, isNull, like, or, sql, type SQL } from "drizzle-orm";
+import { and, count, eq, gt, isNull, like, or, sql, type SQL } from "drizzle-orm";
 import type { z } from "zod";
 import { APIError } from "better-auth/api";
 import { db } from "@/db/client";
@@ -44,7 +44,7 @@ export async function listPeople(q: z.infer<typeof peopleQuery>): Promise<Paged<
   const live = db
     .select({ userId: session.userId, n: count().as("live_n") })
     .from(session)
-    .where(sql`${session.expiresAt} > now(3)`)
+    .where(gt(session.expiresAt, new Date()))
     .groupBy(session.userId)
     .as("live");
   const sortColumn = { name: user.name, email: user.email, role: user.role, organization: organization.name, createdAt: user.createdAt }[q.sort];
@@ -177,7 +177,7 @@ export async function unbanPerson(actor: Actor, personId: string, reason: string
 
 export async function signOutPerson(actor: Actor, personId: string, reason: string | undefined, ctx: RequestContext): Promise<{ sessionsEnded: number }> {
   const person = await findPerson(personId);
-  const [live] = await db.select({ n: count() }).from(session).where(and(eq(session.userId, person.id), sql`${session.expiresAt} > now(3)`));
+  const [live] = await db.select({ n: count() }).from(session).where(and(eq(session.userId, person.id), gt(session.expiresAt, new Date())));
   const sessionsEnded = live?.n ?? 0;
   await auditedAuthCall(
     { actor, organizationId: person.organizationId, action: "user.sign-out", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip, details: { sessionsEnded } },

@@ -92,7 +92,10 @@ export function itemTitle(kind: string, slug: string): string {
   return c.paths.find((p) => p.slug === slug)?.title ?? slug;
 }
 
-/** Who is on the board: the scope's members except admins and banned accounts, or explicit ids. */
+/**
+ * Who is on the board: every member of the scope's organization(s) (admins belong to none), or
+ * explicit ids. Paged in name order through user_org_name_idx.
+ */
 type PeopleFilter = { scope: OrgScope; team?: string; q?: string } | { ids: string[] };
 
 function peopleWhere(f: PeopleFilter): SQL {
@@ -103,8 +106,7 @@ function peopleWhere(f: PeopleFilter): SQL {
       sql`, `,
     )})`;
   }
-  const parts: SQL[] = [sql`u.role <> 'admin'`, sql`(u.banned IS NULL OR u.banned = 0)`];
-  parts.push(f.scope.orgId ? sql`u.organization_id = ${f.scope.orgId}` : sql`u.organization_id IS NOT NULL`);
+  const parts: SQL[] = [f.scope.orgId ? sql`u.organization_id = ${f.scope.orgId}` : sql`u.organization_id IS NOT NULL`];
   if (f.team === "none") parts.push(sql`u.team_id IS NULL`);
   else if (f.team) parts.push(sql`u.team_id = ${f.team}`);
   if (f.q) {
@@ -278,6 +280,21 @@ function toRow(p: Person, cells: Record<string, BoardCell>): BoardRow {
   return { ...p, passed, overdue, nextDue, cells };
 }
 
+/** The modules each person has passed (valid certificate or completion), without lesson rows. */
+export async function passedModules(people: Person[], now = new Date()): Promise<Map<string, Set<string>>> {
+  const modules = boardModules();
+  const out = new Map<string, Set<string>>();
+  for (let i = 0; i < people.length; i += 1000) {
+    const chunk = people.slice(i, i + 1000);
+    const facts = await factsFor(chunk, { ids: chunk.map((p) => p.id) }, undefined, false);
+    for (const p of chunk) {
+      const f = facts.get(p.id);
+      out.set(p.id, new Set(modules.filter((m) => f?.get(m.slug) && isDone(cellStatus(f.get(m.slug)!, m.validityMonths, now))).map((m) => m.slug)));
+    }
+  }
+  return out;
+}
+
 /** Board rows (cells and summary) for an explicit list of people. */
 export async function rowsFor(people: Person[], now = new Date(), only?: string): Promise<BoardRow[]> {
   const modules = boardModules(only);
@@ -289,65 +306,94 @@ export type BoardFilter = Pick<BoardQuery, "team" | "status" | "module" | "dueBe
 
 const needsAggregate = (f: BoardFilter) => Boolean(f.status || f.dueBefore || f.sort === "progress" || f.sort === "overdue" || f.sort === "due");
 
-function compareRows(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): (a: BoardRow, b: BoardRow) => number {
-  const byName = (a: BoardRow, b: BoardRow) => a.name.localeCompare(b.name) || a.id.localeCompare(b.id);
-  const sign = dir === "asc" ? 1 : -1; // counts: most first unless asked otherwise
+/** A person's standing over the shown modules, without building cells (scope-wide work). */
+type Standing = { person: Person; facts: Map<string, CellFacts> | undefined; statuses: BoardStatus[]; passed: number; overdue: number; nextDue: number | null };
+
+function standingOf(person: Person, facts: Map<string, CellFacts> | undefined, modules: ModuleInfo[], now: Date): Standing {
+  let passed = 0;
+  let overdue = 0;
+  let nextDue: number | null = null;
+  const statuses: BoardStatus[] = [];
+  for (const m of modules) {
+    const f = facts?.get(m.slug) ?? NO_FACTS;
+    const s = cellStatus(f, m.validityMonths, now);
+    statuses.push(s);
+    if (isDone(s)) passed++;
+    else if (f.dueAt && (nextDue === null || f.dueAt.getTime() < nextDue)) nextDue = f.dueAt.getTime();
+    if (s === "overdue") overdue++;
+  }
+  return { person, facts, statuses, passed, overdue, nextDue };
+}
+
+const collator = new Intl.Collator("en", { sensitivity: "base" });
+
+function compareStandings(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): (a: Standing, b: Standing) => number {
+  const byName = (a: Standing, b: Standing) => collator.compare(a.person.name, b.person.name) || (a.person.id < b.person.id ? -1 : a.person.id > b.person.id ? 1 : 0);
+  const count = dir === "asc" ? 1 : -1; // counts: most first unless asked otherwise
+  const d = dir === "desc" ? -1 : 1;
+  const nulls = (x: unknown, y: unknown) => (x === null ? 1 : 0) - (y === null ? 1 : 0);
   switch (sort) {
     case "progress":
-      return (a, b) => sign * (a.passed - b.passed) || byName(a, b);
+      return (a, b) => count * (a.passed - b.passed) || byName(a, b);
     case "overdue":
-      return (a, b) => sign * (a.overdue - b.overdue) || (a.nextDue ?? "~").localeCompare(b.nextDue ?? "~") || byName(a, b);
-    case "due": {
-      const d = dir === "desc" ? -1 : 1;
-      return (a, b) => (a.nextDue === null ? 1 : 0) - (b.nextDue === null ? 1 : 0) || d * (a.nextDue ?? "").localeCompare(b.nextDue ?? "") || byName(a, b);
-    }
-    case "team": {
-      const d = dir === "desc" ? -1 : 1;
-      return (a, b) => (a.team === null ? 1 : 0) - (b.team === null ? 1 : 0) || d * (a.team ?? "").localeCompare(b.team ?? "") || byName(a, b);
-    }
+      return (a, b) => count * (a.overdue - b.overdue) || nulls(a.nextDue, b.nextDue) || (a.nextDue ?? 0) - (b.nextDue ?? 0) || byName(a, b);
+    case "due":
+      return (a, b) => nulls(a.nextDue, b.nextDue) || d * ((a.nextDue ?? 0) - (b.nextDue ?? 0)) || byName(a, b);
+    case "team":
+      return (a, b) => nulls(a.person.team, b.person.team) || d * collator.compare(a.person.team ?? "", b.person.team ?? "") || byName(a, b);
     default:
-      return dir === "desc" ? (a, b) => -byName(a, b) : byName;
+      return (a, b) => d * byName(a, b);
   }
 }
 
 /**
  * Every matching person in board order (status or due filters, aggregate sorts). The scope is
- * aggregated once, without lesson counts unless the filter needs them; the caller computes the
- * full cells for the slice it shows.
+ * aggregated once; lesson rows (the largest source) are read for a scope of up to a few hundred
+ * people (a team) or when the filter needs them, otherwise only for the page that is shown.
  */
-async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Date): Promise<BoardRow[]> {
+async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Date): Promise<{ list: Standing[]; complete: boolean; modules: ModuleInfo[] }> {
   const filter: PeopleFilter = { scope, team: f.team, q: f.q };
   const { people } = await listPeople(filter, sql``);
   const modules = boardModules(f.module);
-  const lessons = f.status === "in_progress" || f.status === "not_started";
+  const lessons = people.length <= SMALL_SCOPE || f.status === "in_progress" || f.status === "not_started";
   const facts = await factsFor(people, filter, f.module, lessons);
-  const dueBefore = f.dueBefore ? `${f.dueBefore}T23:59:59.999Z` : null;
-  const out: BoardRow[] = [];
+  const dueBefore = f.dueBefore ? new Date(`${f.dueBefore}T23:59:59.999Z`).getTime() : null;
+  const list: Standing[] = [];
   for (const p of people) {
-    const row = toRow(p, toCells(facts.get(p.id), modules, now));
-    if (f.status && !Object.values(row.cells).some((c) => c.status === f.status)) continue;
-    if (dueBefore && !(row.nextDue && row.nextDue <= dueBefore)) continue;
-    out.push(row);
+    const st = standingOf(p, facts.get(p.id), modules, now);
+    if (f.status && !st.statuses.includes(f.status)) continue;
+    if (dueBefore !== null && !(st.nextDue !== null && st.nextDue <= dueBefore)) continue;
+    list.push(st);
   }
-  return out.sort(compareRows(f.sort, f.dir));
+  return { list: list.sort(compareStandings(f.sort, f.dir)), complete: lessons, modules };
 }
 
-const personOf = (r: BoardRow): Person => ({ id: r.id, name: r.name, email: r.email, role: r.role, teamId: r.teamId, team: r.team, organizationId: r.organizationId });
+const SMALL_SCOPE = 1000;
+
+/** Full rows for a slice of standings: from the facts in hand, or read again with lessons. */
+async function rowsOfSlice(slice: Standing[], complete: boolean, modules: ModuleInfo[], now: Date, only?: string): Promise<BoardRow[]> {
+  if (complete) return slice.map((s) => toRow(s.person, toCells(s.facts, modules, now)));
+  return rowsFor(
+    slice.map((s) => s.person),
+    now,
+    only,
+  );
+}
 
 /** GET /api/team/board: one page. */
 export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()): Promise<BoardPage> {
   const offset = (q.page - 1) * q.pageSize;
   let total: number;
-  let people: Person[];
+  let pageRows: BoardRow[];
   if (needsAggregate(q)) {
     const all = await aggregatedPeople(scope, q, now);
-    total = all.length;
-    people = all.slice(offset, offset + q.pageSize).map(personOf);
+    total = all.list.length;
+    pageRows = await rowsOfSlice(all.list.slice(offset, offset + q.pageSize), all.complete, all.modules, now, q.module);
   } else {
     const filter: PeopleFilter = { scope, team: q.team, q: q.q };
     const listed = await listPeople(filter, nameOrder(q.sort, q.dir), { limit: q.pageSize, offset });
     total = listed.total;
-    people = listed.people;
+    pageRows = await rowsFor(listed.people, now, q.module);
   }
   return {
     page: q.page,
@@ -355,15 +401,18 @@ export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()
     total,
     pages: Math.max(1, Math.ceil(total / q.pageSize)),
     modules: boardModules(q.module).map(({ slug, title }) => ({ slug, title })),
-    rows: await rowsFor(people, now, q.module),
+    rows: pageRows,
   };
 }
 
 /** Every matching row in board order, in chunks (CSV export). */
 export async function* boardRowsInChunks(scope: OrgScope, f: BoardFilter, chunk = 500, now = new Date()): AsyncGenerator<BoardRow[]> {
-  const people = needsAggregate(f)
-    ? (await aggregatedPeople(scope, f, now)).map(personOf)
-    : (await listPeople({ scope, team: f.team, q: f.q }, nameOrder(f.sort, f.dir))).people;
+  if (needsAggregate(f)) {
+    const all = await aggregatedPeople(scope, f, now);
+    for (let i = 0; i < all.list.length; i += chunk) yield await rowsOfSlice(all.list.slice(i, i + chunk), all.complete, all.modules, now, f.module);
+    return;
+  }
+  const { people } = await listPeople({ scope, team: f.team, q: f.q }, nameOrder(f.sort, f.dir));
   for (let i = 0; i < people.length; i += chunk) yield await rowsFor(people.slice(i, i + chunk), now, f.module);
 }
 
@@ -385,26 +434,26 @@ export type TeamTotal = {
  * lesson counts: "in progress" and "not started" are not told apart here.
  */
 export async function teamTotals(scope: OrgScope, now = new Date()): Promise<TeamTotal[]> {
-  const all = await aggregatedPeople(scope, { sort: "team" }, now);
+  const { list } = await aggregatedPeople(scope, { sort: "team" }, now);
   const orgNames = new Map(
     (await rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`)).map((o) => [o.id, o.name]),
   );
   const totals = new Map<string, TeamTotal>();
-  for (const r of all) {
-    const key = `${r.organizationId}/${r.teamId ?? ""}`;
+  for (const { person: p, statuses } of list) {
+    const key = `${p.organizationId}/${p.teamId ?? ""}`;
     let t = totals.get(key);
     if (!t) {
-      t = { teamId: r.teamId, team: r.team ?? "No team", orgName: orgNames.get(r.organizationId) ?? "", people: 0, cells: 0, passed: 0, failed: 0, overdue: 0, expiring: 0, expired: 0 };
+      t = { teamId: p.teamId, team: p.team ?? "No team", orgName: orgNames.get(p.organizationId) ?? "", people: 0, cells: 0, passed: 0, failed: 0, overdue: 0, expiring: 0, expired: 0 };
       totals.set(key, t);
     }
     t.people++;
-    for (const c of Object.values(r.cells)) {
+    for (const s of statuses) {
       t.cells++;
-      if (isDone(c.status)) t.passed++;
-      if (c.status === "failed") t.failed++;
-      if (c.status === "overdue") t.overdue++;
-      if (c.status === "expiring") t.expiring++;
-      if (c.status === "expired") t.expired++;
+      if (isDone(s)) t.passed++;
+      if (s === "failed") t.failed++;
+      if (s === "overdue") t.overdue++;
+      if (s === "expiring") t.expiring++;
+      if (s === "expired") t.expired++;
     }
   }
   return [...totals.values()].sort((a, b) => a.orgName.localeCompare(b.orgName) || (a.teamId === null ? 1 : 0) - (b.teamId === null ? 1 : 0) || a.team.localeCompare(b.team));

@@ -73,8 +73,6 @@ The link works once and expires on ${dateText(p.expiresAt)} (${INVITE_DAYS} days
   };
 }
 
-export class AlreadyMember extends ApiError {}
-
 /** Whether the e-mail already has an account: in this organization, elsewhere, or not at all. */
 export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string } | { state: "elsewhere" }> {
   const [u] = await db.select({ name: user.name, org: user.organizationId }).from(user).where(eq(user.email, email)).limit(1);
@@ -92,10 +90,10 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
   }
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
-    throw new AlreadyMember(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
+    throw new ApiError(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
   }
   if (existing.state === "elsewhere") {
-    throw new AlreadyMember(409, `${input.email} already has a Riser account in another organization, so it cannot be invited here. Ask the person for another work address.`);
+    throw new ApiError(409, `${input.email} already has a Riser account in another organization, so it cannot be invited here. Ask the person for another work address.`);
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
@@ -177,10 +175,11 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
   const found = await lookupInvite(input.token);
   if (found.state !== "ok") throw new ApiError(410, refusalText(found).message);
   const inv = found.invite;
+  const now = new Date(); // application time, as everywhere dates are written (UTC)
   const [claim] = await db
     .update(invitation)
-    .set({ acceptedAt: sql`CURRENT_TIMESTAMP(3)` })
-    .where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+    .set({ acceptedAt: now })
+    .where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, now)));
   if (claim.affectedRows !== 1) throw new ApiError(410, refusalText({ state: "used" }).message);
   const release = () => db.update(invitation).set({ acceptedAt: null }).where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedUserId)));
   let userId: string;
@@ -230,7 +229,7 @@ export async function pendingEmails(orgId: string, emails: string[], tx: Tx | ty
     const rows = await tx
       .select({ email: invitation.email })
       .from(invitation)
-      .where(and(eq(invitation.organizationId, orgId), inArray(invitation.email, chunk), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+      .where(and(eq(invitation.organizationId, orgId), inArray(invitation.email, chunk), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, new Date())));
     for (const r of rows) out.add(r.email);
   }
   return out;

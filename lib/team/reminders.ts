@@ -4,9 +4,8 @@ import { db } from "@/db/client";
 import { assignment, moduleCompletion, organization, reminderLog, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { itemModules, itemTitle, rowsFor, teamTotals, type Person } from "./board";
+import { itemModules, itemTitle, passedModules, teamTotals, type Person } from "./board";
 import { isoWeek } from "./period";
-import { isDone } from "./status";
 
 export { isoWeek };
 
@@ -21,6 +20,17 @@ export { isoWeek };
 
 const DAY_MS = 86_400_000;
 export const DUE_SOON_DAYS = 3;
+/** Mails in flight at once (a large organization's first run can mean thousands). */
+const SEND_CONCURRENCY = 8;
+
+async function inParallel<T>(items: T[], fn: (item: T) => Promise<void>): Promise<void> {
+  let next = 0;
+  await Promise.all(
+    Array.from({ length: Math.min(SEND_CONCURRENCY, items.length) }, async () => {
+      for (let i = next++; i < items.length; i = next++) await fn(items[i]!);
+    }),
+  );
+}
 
 async function claim(kind: string, userId: string, periodKey: string, now: Date): Promise<boolean> {
   const [res] = await db.insert(reminderLog).ignore().values({ kind, userId, periodKey, sentAt: now });
@@ -66,30 +76,43 @@ export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}
   const candidates = await dueAssignments(new Date(now.getTime() + DUE_SOON_DAYS * DAY_MS));
   const people = new Map<string, Person>();
   for (const c of candidates) people.set(c.person.id, c.person);
-  const list = [...people.values()];
-  const done = new Map<string, Set<string>>(); // person → modules passed
-  for (let i = 0; i < list.length; i += 500) {
-    for (const row of await rowsFor(list.slice(i, i + 500), now)) {
-      done.set(row.id, new Set(Object.entries(row.cells).filter(([, c]) => isDone(c.status)).map(([slug]) => slug)));
-    }
-  }
+  const done = await passedModules([...people.values()], now);
   const week = isoWeek(now);
-  const claimed = new Map<string, { person: Person; kind: "overdue" | "due-soon"; items: (Candidate & { key: string })[] }>();
+  const open: (Candidate & { key: string; reminder: "overdue" | "due-soon" })[] = [];
   for (const c of candidates) {
     const mods = itemModules(c.kind, c.slug);
     const passed = done.get(c.person.id) ?? new Set();
     if (mods.length > 0 && mods.every((m) => passed.has(m))) continue;
-    const kind = c.dueAt.getTime() < now.getTime() ? "overdue" : "due-soon";
-    const key = kind === "overdue" ? `a${c.assignmentId}:${week}` : `a${c.assignmentId}:${c.dueAt.toISOString().slice(0, 10)}`;
-    if (!(await claim(kind, c.person.id, key, now))) continue;
-    const k = `${c.person.id}/${kind}`;
-    const entry = claimed.get(k) ?? { person: c.person, kind, items: [] };
-    entry.items.push({ ...c, key });
+    const reminder = c.dueAt.getTime() < now.getTime() ? "overdue" : "due-soon";
+    open.push({ ...c, reminder, key: reminder === "overdue" ? `a${c.assignmentId}:${week}` : `a${c.assignmentId}:${c.dueAt.toISOString().slice(0, 10)}` });
+  }
+  // Claims already taken (a repeat run skips them without an INSERT each).
+  const taken = new Set<string>();
+  for (let i = 0; i < open.length; i += 1000) {
+    const chunk = open.slice(i, i + 1000);
+    const rows = await db
+      .select({ kind: reminderLog.kind, userId: reminderLog.userId, periodKey: reminderLog.periodKey })
+      .from(reminderLog)
+      .where(
+        and(
+          inArray(reminderLog.kind, ["overdue", "due-soon"]),
+          inArray(reminderLog.userId, [...new Set(chunk.map((c) => c.person.id))]),
+          inArray(reminderLog.periodKey, [...new Set(chunk.map((c) => c.key))]),
+        ),
+      );
+    for (const r of rows) taken.add(`${r.kind}/${r.userId}/${r.periodKey}`);
+  }
+  const claimed = new Map<string, { person: Person; kind: "overdue" | "due-soon"; items: (Candidate & { key: string })[] }>();
+  for (const c of open) {
+    if (taken.has(`${c.reminder}/${c.person.id}/${c.key}`) || !(await claim(c.reminder, c.person.id, c.key, now))) continue;
+    const k = `${c.person.id}/${c.reminder}`;
+    const entry = claimed.get(k) ?? { person: c.person, kind: c.reminder, items: [] };
+    entry.items.push(c);
     claimed.set(k, entry);
   }
   let sent = 0;
   let failed = 0;
-  for (const { person, kind, items } of claimed.values()) {
+  await inParallel([...claimed.values()], async ({ person, kind, items }) => {
     items.sort((a, b) => a.dueAt.getTime() - b.dueAt.getTime());
     const lines = items.map((i) => {
       const what = i.kind === "path" ? "learning path" : "module";
@@ -119,7 +142,7 @@ export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}
         items.map((i) => i.key),
       );
     }
-  }
+  });
   return { candidates: candidates.length, sent, failed };
 }
 

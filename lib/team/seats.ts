@@ -1,5 +1,5 @@
 import "server-only";
-import { and, countDistinct, count, eq, gt, isNull, or, sql } from "drizzle-orm";
+import { and, countDistinct, count, eq, gt, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { invitation, organization, user } from "@/db/schema";
 import { ApiError, json } from "@/lib/api";
@@ -44,7 +44,7 @@ export async function seatUsage(orgId: string, tx: Tx | typeof db = db, lock = f
   const [p] = await tx
     .select({ n: countDistinct(invitation.email) })
     .from(invitation)
-    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, sql`CURRENT_TIMESTAMP(3)`)));
+    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, new Date())));
   const allowance = seatAllowance({ seats: org?.seats ?? 0, trialEndsAt: org?.trialEndsAt ?? null });
   return { seats: allowance.seats, members: m?.n ?? 0, pending: p?.n ?? 0, trial: allowance.trial, trialEndsAt: allowance.trialEndsAt };
 }

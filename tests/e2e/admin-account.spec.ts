@@ -19,14 +19,18 @@ async function newPage(browser: Browser, width = 1280) {
   return context.newPage();
 }
 
-/** A verified person in an organization, straight in the test database (invented name). */
+/**
+ * A verified person in an organization of the test's own (never a demo organization, whose people
+ * other tests count), straight in the test database. Invented names.
+ */
 async function createPerson(tag: string, role: string, organizationName: string, name: string) {
   const conn = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
   try {
     const id = randomUUID();
-    const email = `${tag}-${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}@test.example`;
-    const [orgs] = await conn.query("select id from organization where name = ?", [organizationName]);
-    const orgId = (orgs as { id: string }[])[0]!.id;
+    const suffix = `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+    const email = `${tag}-${suffix}@test.example`;
+    const orgId = randomUUID();
+    await conn.query("insert into organization (id, name, kind, seats, created_at) values (?, ?, 'contractor', 10, now(3))", [orgId, `${organizationName} ${suffix}`]);
     await conn.query("insert into user (id, name, email, email_verified, role, organization_id, created_at, updated_at) values (?, ?, ?, 1, ?, ?, now(3), now(3))", [id, name, email, role, orgId]);
     await conn.query("insert into account (id, account_id, provider_id, user_id, password, created_at, updated_at) values (?, ?, 'credential', ?, ?, now(3), now(3))", [randomUUID(), id, id, await hashPassword(PASSWORD)]);
     return { id, email, name };
@@ -50,7 +54,7 @@ async function axe(page: Page, what: string) {
 }
 
 test("an admin changes a person's role through the people screen", async ({ browser }) => {
-  const person = await createPerson("e2e-role", "learner", "Quillmoor Fire Protection", "Orrin Talbec");
+  const person = await createPerson("e2e-role", "learner", "Brindlecombe Sprinkler Co", "Orrin Talbec");
   const page = await newPage(browser);
   await signIn(page, "admin@riser.example", DEMO_PASSWORD);
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Admin" }).click();
@@ -134,7 +138,7 @@ test("the admin and account pages work at phone width (360 px) and desktop width
 });
 
 test("'sign out everywhere else' ends the session in another browser", async ({ browser }) => {
-  const person = await createPerson("e2e-others", "learner", "Quillmoor Fire Protection", "Linnea Sorvath");
+  const person = await createPerson("e2e-others", "learner", "Osterfield Fire Systems", "Linnea Sorvath");
   const office = await newPage(browser);
   const truck = await newPage(browser, 360);
   await signIn(office, person.email, PASSWORD);
@@ -161,7 +165,7 @@ test("'sign out everywhere else' ends the session in another browser", async ({ 
 });
 
 test("the password form asks for the current password and says when it is wrong", async ({ browser }) => {
-  const person = await createPerson("e2e-pw", "sales", "Larkhaven Homes", "Marisol Quenby");
+  const person = await createPerson("e2e-pw", "sales", "Wrenmoor Homes", "Marisol Quenby");
   const page = await newPage(browser);
   await signIn(page, person.email, PASSWORD);
   await page.goto("/account");

@@ -12,7 +12,9 @@ test("the demo manager filters the board to one team and sees its people", async
   await signInAs(page, demoByRole("manager", "quillmoor").email);
   await page.goto("/team");
   const table = page.getByRole("region", { name: "Team board table" });
-  await expect(table.getByRole("row")).toHaveCount(1 + 9); // header + Quillmoor's nine people
+  await expect(page.getByText(/^Showing 1–\d+ of \d+ people$/)).toBeVisible();
+  const everyone = await table.locator("tbody tr").count();
+  expect(everyone).toBeGreaterThanOrEqual(9); // Quillmoor's nine demo people (other tests may add more)
   await page.getByLabel("Team", { exact: true }).selectOption({ label: "South crew" });
   await expect(page).toHaveURL(/team=/);
   await expect(table.locator("tbody tr")).toHaveCount(southCrew.length);
@@ -25,14 +27,14 @@ test("the demo manager filters the board to one team and sees its people", async
   await expect(table.locator("tbody tr")).toHaveCount(1);
   await expect(table.locator("tbody tr")).toHaveAttribute("data-person", "Wendell Ashcombe");
   await page.getByRole("button", { name: "Clear filters" }).click();
-  await expect(table.locator("tbody tr")).toHaveCount(9);
+  await expect(table.locator("tbody tr")).toHaveCount(everyone);
 });
 
 test("axe finds no violations on /team", async ({ page }) => {
   await signInAs(page, demoByRole("manager", "quillmoor").email);
   await page.goto("/team");
   await expect(page.getByRole("region", { name: "Team board table" })).toBeVisible();
-  await expect(page.getByRole("region", { name: "Totals per team" })).toBeVisible();
+  await expect(page.getByRole("region", { name: "Totals per team table" })).toBeVisible();
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
   expect(results.violations.map((v) => `${v.id} (${v.nodes.length}) ${v.nodes[0]?.target} ${v.nodes[0]?.failureSummary ?? ""}`)).toEqual([]);
 });

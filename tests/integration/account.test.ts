@@ -9,11 +9,12 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, quizAttempt, signOff, user } from "@/db/schema";
 import { APP, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { createPerson, orgIdByName } from "../helpers/admin-people";
+import { createPerson, createTestOrganization } from "../helpers/admin-people";
 
-let quillmoor: string;
+// the tests' own organization: nobody is added to the demo organizations
+let org: { id: string; name: string };
 beforeAll(async () => {
-  quillmoor = await orgIdByName("Quillmoor Fire Protection");
+  org = await createTestOrganization("Ashgrove Fire Protection");
 });
 afterAll(() => pool.end());
 
@@ -28,7 +29,7 @@ const sessionOf = async (c: Client) => (await c.fetch("/api/auth/get-session")).
 
 describe("password change", () => {
   it("needs the current password; afterwards only the new one works", async () => {
-    const p = await createPerson({ tag: "pw", organizationId: quillmoor });
+    const p = await createPerson({ tag: "pw", organizationId: org.id });
     const client = await signIn(p.email, p.password);
     const next = "a-brand-new-pass-42";
 
@@ -48,7 +49,7 @@ describe("password change", () => {
 
 describe("sign out everywhere else", () => {
   it("ends the other sessions and keeps this one", async () => {
-    const p = await createPerson({ tag: "others", organizationId: quillmoor });
+    const p = await createPerson({ tag: "others", organizationId: org.id });
     const office = await signIn(p.email, p.password);
     const truck = await signIn(p.email, p.password);
     const list = await (await office.fetch("/api/account/sessions")).json();
@@ -67,7 +68,7 @@ describe("sign out everywhere else", () => {
 
 describe("name and e-mail", () => {
   it("saves a new name", async () => {
-    const p = await createPerson({ tag: "name", organizationId: quillmoor });
+    const p = await createPerson({ tag: "name", organizationId: org.id });
     const client = await signIn(p.email, p.password);
     expect((await postJson(client, "/api/auth/update-user", { name: "Perrin Galloway" })).status).toBe(200);
     expect((await sessionOf(client)).user.name).toBe("Perrin Galloway");
@@ -76,7 +77,7 @@ describe("name and e-mail", () => {
   });
 
   it("changes the e-mail only after the new address is confirmed, and tells the old address", async () => {
-    const p = await createPerson({ tag: "email", organizationId: quillmoor });
+    const p = await createPerson({ tag: "email", organizationId: org.id });
     const client = await signIn(p.email, p.password);
     const next = uniqueEmail("email-new");
     const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" });
@@ -101,8 +102,8 @@ describe("name and e-mail", () => {
 
 describe("download my records", () => {
   it("holds the person's own lessons and attempts and none of anyone else's", async () => {
-    const me = await createPerson({ tag: "rec-me", organizationId: quillmoor });
-    const other = await createPerson({ tag: "rec-other", organizationId: quillmoor });
+    const me = await createPerson({ tag: "rec-me", organizationId: org.id });
+    const other = await createPerson({ tag: "rec-other", organizationId: org.id });
     const mine = await signIn(me.email, me.password);
     const theirs = await signIn(other.email, other.password);
     expect((await postJson(mine, "/api/progress", { module: "freeze-protection", lesson: "where-homes-freeze" })).status).toBe(200);
@@ -112,8 +113,8 @@ describe("download my records", () => {
     const theirAttempt = randomUUID();
     const now = new Date();
     await db.insert(quizAttempt).values([
-      { id: myAttempt, userId: me.id, organizationId: quillmoor, moduleSlug: "freeze-protection", seed: 11, status: "graded", startedAt: now, submittedAt: now, score: 90, passed: true, passMark: 80 },
-      { id: theirAttempt, userId: other.id, organizationId: quillmoor, moduleSlug: "freeze-protection", seed: 12, status: "graded", startedAt: now, submittedAt: now, score: 40, passed: false, passMark: 80 },
+      { id: myAttempt, userId: me.id, organizationId: org.id, moduleSlug: "freeze-protection", seed: 11, status: "graded", startedAt: now, submittedAt: now, score: 90, passed: true, passMark: 80 },
+      { id: theirAttempt, userId: other.id, organizationId: org.id, moduleSlug: "freeze-protection", seed: 12, status: "graded", startedAt: now, submittedAt: now, score: 40, passed: false, passMark: 80 },
     ]);
 
     // a certificate and a sign-off each, stored the way their areas store them
@@ -125,8 +126,8 @@ describe("download my records", () => {
       verificationCode: randomUUID().replace(/-/g, ""),
       userId,
       holderName,
-      organizationId: quillmoor,
-      organizationName: "Quillmoor Fire Protection",
+      organizationId: org.id,
+      organizationName: org.name,
       kind: "module" as const,
       subjectSlug: "freeze-protection",
       subjectTitle: "Freeze protection",
@@ -139,15 +140,15 @@ describe("download my records", () => {
     const mySignOff = randomUUID();
     const theirSignOff = randomUUID();
     await db.insert(signOff).values([
-      { id: mySignOff, userId: me.id, organizationId: quillmoor, moduleSlug: "pipe-and-joining", skillId: "pj-cpvc-joint-and-cure", status: "submitted", submittedAt: now },
-      { id: theirSignOff, userId: other.id, organizationId: quillmoor, moduleSlug: "pipe-and-joining", skillId: "pj-cpvc-joint-and-cure", status: "submitted", submittedAt: now },
+      { id: mySignOff, userId: me.id, organizationId: org.id, moduleSlug: "pipe-and-joining", skillId: "pj-cpvc-joint-and-cure", status: "submitted", submittedAt: now },
+      { id: theirSignOff, userId: other.id, organizationId: org.id, moduleSlug: "pipe-and-joining", skillId: "pj-cpvc-joint-and-cure", status: "submitted", submittedAt: now },
     ]);
 
     const res = await mine.fetch("/api/account/records?format=json");
     expect(res.status).toBe(200);
     expect(res.headers.get("content-disposition")).toMatch(/attachment; filename="riser-my-records-/);
     const body = await res.json();
-    expect(body.person).toMatchObject({ id: me.id, email: me.email, organization: "Quillmoor Fire Protection" });
+    expect(body.person).toMatchObject({ id: me.id, email: me.email, organization: org.name, team: null });
     expect(body.lessons).toEqual([expect.objectContaining({ module: "freeze-protection", lesson: "where-homes-freeze" })]);
     expect(body.attempts.map((a: { id: string }) => a.id)).toEqual([myAttempt]);
     expect(body.attempts[0]).toMatchObject({ score: 90, passed: true, passMark: 80 });

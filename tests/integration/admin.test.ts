@@ -8,19 +8,22 @@ import { db, pool } from "@/db/client";
 import { auditLog, organization, user } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
 import { APP, anonymous, freshIp, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { createPerson, orgIdByName } from "../helpers/admin-people";
+import { createPerson, createTestOrganization, orgIdByName } from "../helpers/admin-people";
 
 let admin: Client;
 let adminId: string;
 let quillmoor: string;
-let larkhaven: string;
+// the tests' own organizations: nobody is added to or moved into the demo organizations
+let orgA: { id: string; name: string; teamId: string };
+let orgB: { id: string; name: string; teamId: string };
 
 beforeAll(async () => {
   admin = await signIn(demoByRole("admin").email);
   const [a] = await db.select({ id: user.id }).from(user).where(eq(user.email, demoByRole("admin").email));
   adminId = a!.id;
   quillmoor = await orgIdByName("Quillmoor Fire Protection");
-  larkhaven = await orgIdByName("Larkhaven Homes");
+  orgA = await createTestOrganization("Fenwick Ridge Sprinklers");
+  orgB = await createTestOrganization("Tamsworth Builders", "builder");
 });
 afterAll(() => pool.end());
 
@@ -118,7 +121,7 @@ describe("people", () => {
   });
 
   it("a role change needs a reason, goes through better-auth, and writes one audit row", async () => {
-    const p = await createPerson({ tag: "role", organizationId: quillmoor });
+    const p = await createPerson({ tag: "role", organizationId: orgA.id });
     const person = await signIn(p.email, p.password);
     const since = await lastAuditId();
     const noReason = await postJson(admin, `/api/admin/people/${p.id}/role`, { role: "manager" });
@@ -129,7 +132,7 @@ describe("people", () => {
     const ok = await postJson(admin, `/api/admin/people/${p.id}/role`, { role: "manager", reason: "Leads the South crew from January" });
     expect(ok.status).toBe(200);
     const row = expectOneRow(await auditSince(since, p.id), "user.role", admin);
-    expect(row).toMatchObject({ targetType: "user", organizationId: quillmoor, reason: "Leads the South crew from January", details: { from: "learner", to: "manager" } });
+    expect(row).toMatchObject({ targetType: "user", organizationId: orgA.id, reason: "Leads the South crew from January", details: { from: "learner", to: "manager" } });
     // The person's own session sees the new role at once.
     expect((await sessionOf(person)).user.role).toBe("manager");
     // An unknown role is refused.
@@ -143,21 +146,20 @@ describe("people", () => {
   });
 
   it("moving a person to another organization clears their team and writes one audit row", async () => {
-    const p = await createPerson({ tag: "move", organizationId: quillmoor });
-    const [t] = (await pool.query("select id from team where organization_id = ? limit 1", [quillmoor]))[0] as [{ id: string }];
-    await db.update(user).set({ teamId: t.id }).where(eq(user.id, p.id));
+    const p = await createPerson({ tag: "move", organizationId: orgA.id });
+    await db.update(user).set({ teamId: orgA.teamId }).where(eq(user.id, p.id));
     const since = await lastAuditId();
-    const res = await postJson(admin, `/api/admin/people/${p.id}/organization`, { organizationId: larkhaven, reason: "Joined the builder's sales office" });
+    const res = await postJson(admin, `/api/admin/people/${p.id}/organization`, { organizationId: orgB.id, reason: "Joined the builder's sales office" });
     expect(res.status).toBe(200);
     const [after] = await db.select({ org: user.organizationId, team: user.teamId }).from(user).where(eq(user.id, p.id));
-    expect(after).toEqual({ org: larkhaven, team: null });
+    expect(after).toEqual({ org: orgB.id, team: null });
     const row = expectOneRow(await auditSince(since, p.id), "user.move", admin);
-    expect(row.details).toMatchObject({ from: quillmoor, to: larkhaven });
+    expect(row.details).toMatchObject({ from: orgA.id, to: orgB.id, teamCleared: orgA.teamId });
     expect((await postJson(admin, `/api/admin/people/${p.id}/organization`, { organizationId: "no-such-org" })).status).toBe(400);
   });
 
   it("a ban signs the person out and keeps them out; lifted, they can sign in again", async () => {
-    const p = await createPerson({ tag: "ban", organizationId: quillmoor });
+    const p = await createPerson({ tag: "ban", organizationId: orgA.id });
     const person = await signIn(p.email, p.password);
     expect((await sessionOf(person))?.user.email).toBe(p.email);
 
@@ -183,7 +185,7 @@ describe("people", () => {
   });
 
   it("force sign-out ends every session of the person and writes one audit row", async () => {
-    const p = await createPerson({ tag: "signout", organizationId: larkhaven, role: "sales" });
+    const p = await createPerson({ tag: "signout", organizationId: orgB.id, role: "sales" });
     const phone = await signIn(p.email, p.password);
     const laptop = await signIn(p.email, p.password);
     const since = await lastAuditId();
@@ -197,7 +199,7 @@ describe("people", () => {
   });
 
   it("non-admins are refused and nothing changes or is recorded", async () => {
-    const p = await createPerson({ tag: "notadmin", organizationId: quillmoor });
+    const p = await createPerson({ tag: "notadmin", organizationId: orgA.id });
     const manager = await signIn(demoByRole("manager", "quillmoor").email);
     const learner = await signIn(demoByRole("learner").email);
     const since = await lastAuditId();
@@ -212,7 +214,7 @@ describe("people", () => {
   });
 
   it("better-auth's own admin endpoints are not reachable over HTTP, not even for an admin (no unaudited path)", async () => {
-    const p = await createPerson({ tag: "rawadmin", organizationId: quillmoor });
+    const p = await createPerson({ tag: "rawadmin", organizationId: orgA.id });
     const since = await lastAuditId();
     for (const [path, body] of [
       ["/api/auth/admin/ban-user", { userId: p.id }],
@@ -229,7 +231,7 @@ describe("people", () => {
   });
 
   it("refuses a change sent from another site's page", async () => {
-    const p = await createPerson({ tag: "csrf", organizationId: quillmoor });
+    const p = await createPerson({ tag: "csrf", organizationId: orgA.id });
     const res = await admin.fetch(`/api/admin/people/${p.id}/ban`, {
       method: "POST",
       headers: { "content-type": "application/json", origin: "https://elsewhere.example" },
@@ -264,7 +266,7 @@ describe("content", () => {
 
 describe("mail log", () => {
   it("lists recipient, subject, status and time, with bodies on a test instance", async () => {
-    const p = await createPerson({ tag: "maillog", organizationId: quillmoor });
+    const p = await createPerson({ tag: "maillog", organizationId: orgA.id });
     const r = await postJson(anonymous(), "/api/auth/request-password-reset", { email: p.email, redirectTo: "/reset-password" });
     expect(r.status).toBe(200);
     await waitForMail(p.email, /reset/i);
@@ -278,15 +280,15 @@ describe("mail log", () => {
 
 describe("audit log", () => {
   it("filters by action, actor, organization and date range", async () => {
-    const p = await createPerson({ tag: "auditfilter", organizationId: quillmoor });
+    const p = await createPerson({ tag: "auditfilter", organizationId: orgA.id });
     expect((await postJson(admin, `/api/admin/people/${p.id}/role`, { role: "sales", reason: "Moved to the showroom desk" })).status).toBe(200);
     const today = new Date().toISOString().slice(0, 10);
-    const r = await (await admin.fetch(`/api/admin/audit?action=user.role&actor=admin@riser&organizationId=${quillmoor}&from=${today}&to=${today}`)).json();
+    const r = await (await admin.fetch(`/api/admin/audit?action=user.role&actor=admin@riser&organizationId=${orgA.id}&from=${today}&to=${today}`)).json();
     expect(r.total).toBeGreaterThanOrEqual(1);
     for (const row of r.rows) {
       expect(row.action).toBe("user.role");
       expect(row.actorEmail).toContain("admin@riser");
-      expect(row.organizationId).toBe(quillmoor);
+      expect(row.organizationId).toBe(orgA.id);
       expect(row.at.slice(0, 10)).toBe(today);
     }
     expect(r.rows.map((row: { targetId: string }) => row.targetId)).toContain(p.id);
@@ -319,7 +321,7 @@ describe("audit log", () => {
 
 describe("account e-mail change goes out as mail the admin can see", () => {
   it("logs the verification mail to the new address", async () => {
-    const p = await createPerson({ tag: "mailchange", organizationId: quillmoor });
+    const p = await createPerson({ tag: "mailchange", organizationId: orgA.id });
     const client = await signIn(p.email, p.password);
     const next = uniqueEmail("mailchange-new");
     expect((await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" })).status).toBe(200);

@@ -53,7 +53,8 @@ describe("reminder jobs", () => {
       ["manager-digest", true],
     ]);
     const overdue = await waitForMail(learner.email, /^Overdue training: Freeze protection/);
-    expect(overdue.text).toContain("was due");
+    expect(overdue.text).toContain("- Freeze protection (module), was due");
+    expect(overdue.text).toContain("/modules/freeze-protection\n");
     const soon = await waitForMail(learner.email, /^Training due soon: How a home sprinkler system works/);
     expect(soon.text).toMatch(/due within 3 days/);
     const digest = await waitForMail(manager.email, /^Weekly training summary for Reminder Fixture/);

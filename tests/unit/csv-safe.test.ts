@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { toSafeCsv } from "@/lib/csv/safe";
 
-const parse = (csv: string) => Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
+const parse = (csv: string) => Papa.parse<string[]>(csv, { skipEmptyLines: true, delimiter: "," }).data;
 
 describe("toSafeCsv", () => {
   it("prefixes every formula-starting cell with a quote (OWASP CSV Injection list)", () => {
@@ -39,7 +39,7 @@ describe("toSafeCsv", () => {
       fc.property(fc.array(fc.string({ maxLength: 30 }), { minLength: 1, maxLength: 5 }), (values) => {
         const row = Object.fromEntries(values.map((v, i) => [`c${i}`, v]));
         const cols = values.map((_, i) => `c${i}`);
-        const back = Papa.parse<string[]>(toSafeCsv([row], cols), { newline: "\r\n" }).data[1] ?? [];
+        const back = Papa.parse<string[]>(toSafeCsv([row], cols), { newline: "\r\n", delimiter: "," }).data[1] ?? [];
         values.forEach((v, i) => {
           const expected = /^[=+\-@\t\r]/.test(v) ? `'${v}` : v;
           expect(back[i]).toBe(expected);

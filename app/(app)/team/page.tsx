@@ -6,7 +6,7 @@ import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { boardModules } from "@/lib/team/board";
-import { parseBoardQuery } from "@/lib/team/schemas";
+import { boardQuerySchema, parseBoardQuery } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 
 export const metadata: Metadata = { title: "Team board" };
@@ -16,7 +16,8 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   const raw = await searchParams;
   const params = new URLSearchParams(Object.entries(raw).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
   const parsed = parseBoardQuery(params);
-  const q = parsed.success ? parsed.data : parseBoardQuery(new URLSearchParams(params.get("org") ? { org: params.get("org")! } : {})).data!;
+  // Filters that do not parse are dropped (the board starts unfiltered); the organization stays.
+  const q = parsed.success ? parsed.data : boardQuerySchema.parse({ org: params.get("org")?.slice(0, 36) || undefined });
   const scope = await pageScope(viewer, q.org);
   const [teams, orgs] = await Promise.all([teamsInScope(scope), viewer.role === "admin" ? allOrganizations() : Promise.resolve([])]);
   const initial: BoardFilters = {

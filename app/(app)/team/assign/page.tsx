@@ -42,7 +42,7 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
         {assignments.length === 0 ? (
           <p>Nothing assigned yet.</p>
         ) : (
-          <div role="region" aria-label="Current assignments" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Current assignments" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line bg-paper text-left">

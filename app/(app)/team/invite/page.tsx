@@ -44,11 +44,11 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
         <Link href={BILLING_PATH}>Seats and billing</Link>
       </p>
       <div className="grid gap-10 lg:grid-cols-2">
-        <section aria-labelledby="one">
+        <section aria-labelledby="one" className="min-w-0">
           <h2 id="one" className="mb-3 text-2xl">One person</h2>
           <InviteForm teams={teams.map((t) => ({ id: t.id, name: t.name }))} org={adminOrg} />
         </section>
-        <section aria-labelledby="bulk">
+        <section aria-labelledby="bulk" className="min-w-0">
           <h2 id="bulk" className="mb-3 text-2xl">A roster from a CSV file</h2>
           <BulkInvite org={adminOrg} />
         </section>
@@ -58,7 +58,7 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
         {open.length === 0 ? (
           <p>No open invitations.</p>
         ) : (
-          <div role="region" aria-label="Open invitations" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Open invitations" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line bg-paper text-left">

@@ -57,7 +57,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
 
       <section aria-labelledby="modules" className="mb-8">
         <h2 id="modules" className="mb-3 text-2xl">Modules</h2>
-        <div role="region" aria-label="Modules of this person" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+        <div role="region" aria-label="Modules of this person" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
           <table className="w-full border-collapse text-sm">
             <thead>
               <tr className="border-b border-line bg-paper text-left">
@@ -95,7 +95,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
         {history.attempts.length === 0 ? (
           <p>No quiz attempts yet.</p>
         ) : (
-          <div role="region" aria-label="Quiz attempts" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Quiz attempts" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line bg-paper text-left">
@@ -149,7 +149,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
         {history.certificates.length === 0 ? (
           <p>No certificates yet.</p>
         ) : (
-          <div role="region" aria-label="Certificates" tabIndex={0} className="overflow-x-auto rounded border border-line bg-panel">
+          <div role="region" aria-label="Certificates" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line bg-paper text-left">

@@ -1,0 +1,91 @@
+// Team board at scale, through the API of a running `next start`: 5,000 learners in 20 teams
+// (db/seed-scale.ts, seeded here when missing) with lessons, attempts, completions and
+// certificates across all nine modules. Measures, sequentially after a warm-up:
+//   - the board's first page (GET /api/team/board, 25 people, name order)        target p95 < 150 ms
+//   - a filtered page (one crew, status "overdue")                               target p95 < 150 ms
+//   - for information: an organization-wide status filter and a deep page
+//   - the CSV export of all 5,001 rows (GET /api/team/board.csv)                target < 3 s
+// Run: npm run bench -- team-board (profile test-h), or by hand against a server on any profile:
+//   APP_URL=… DATABASE_URL=… node_modules/.bin/tsx --conditions=react-server bench/team-board.ts
+// Writes bench/results/team-board.json.
+import { spawnSync } from "node:child_process";
+import os from "node:os";
+import { performance } from "node:perf_hooks";
+import { eq } from "drizzle-orm";
+import { db, pool } from "@/db/client";
+import { organization, user } from "@/db/schema";
+import { SCALE_MANAGER, SCALE_ORG } from "../db/seed-scale";
+import { APP, record, sessionCookie, summary } from "./lib";
+
+const RUNS = Number(process.env.BENCH_RUNS ?? 100);
+const WARMUP = 10;
+
+async function scaleOrg() {
+  const [org] = await db.select({ id: organization.id }).from(organization).where(eq(organization.name, SCALE_ORG));
+  return org;
+}
+
+if (!(await scaleOrg())) {
+  console.log("[bench] seeding the scale organization (db/seed-scale.ts) …");
+  const r = spawnSync("node_modules/.bin/tsx", ["db/seed-scale.ts"], { stdio: "inherit", env: process.env });
+  if (r.status !== 0) throw new Error("scale seed failed");
+}
+const org = (await scaleOrg())!;
+const [manager] = await db.select({ id: user.id }).from(user).where(eq(user.email, SCALE_MANAGER.email));
+const cookie = await sessionCookie(manager!.id);
+const [learners] = (await pool.query("SELECT COUNT(*) AS n FROM user WHERE organization_id = ? AND role = 'learner'", [org.id])) as unknown as [{ n: number }[]];
+
+async function get(path: string): Promise<{ ms: number; status: number; body: string }> {
+  const s = performance.now();
+  const r = await fetch(`${APP}${path}`, { headers: { cookie, origin: APP } });
+  const body = await r.text();
+  return { ms: performance.now() - s, status: r.status, body };
+}
+
+async function measure(path: string, runs = RUNS) {
+  for (let i = 0; i < WARMUP; i++) await get(path);
+  const ms: number[] = [];
+  let body = "";
+  for (let i = 0; i < runs; i++) {
+    const r = await get(path);
+    if (r.status !== 200) throw new Error(`${path}: ${r.status} ${r.body.slice(0, 200)}`);
+    ms.push(r.ms);
+    body = r.body;
+  }
+  const page = JSON.parse(body) as { total: number; rows: unknown[] };
+  return { path, total: page.total, rows: page.rows.length, ...summary(ms) };
+}
+
+const teams = JSON.parse((await get("/api/team/summary")).body) as { teams: { teamId: string; team: string }[] };
+const crew = teams.teams.find((t) => t.team === "Crew 07")!;
+
+const firstPage = await measure("/api/team/board?page=1&pageSize=25");
+const filteredPage = await measure(`/api/team/board?page=1&pageSize=25&team=${crew.teamId}&status=overdue`);
+const deepPage = await measure("/api/team/board?page=150&pageSize=25", 30);
+const orgWideStatus = await measure("/api/team/board?page=1&pageSize=25&status=overdue", 30);
+const summaryRuns: number[] = [];
+for (let i = 0; i < 10; i++) summaryRuns.push((await get("/api/team/summary")).ms);
+
+const exports: { ms: number; bytes: number; lines: number }[] = [];
+for (let i = 0; i < 3; i++) {
+  const r = await get("/api/team/board.csv");
+  if (r.status !== 200) throw new Error(`export: ${r.status}`);
+  exports.push({ ms: +r.ms.toFixed(1), bytes: Buffer.byteLength(r.body), lines: r.body.trim().split("\r\n").length });
+}
+const exportMs = exports.map((e) => e.ms).sort((a, b) => a - b);
+
+record("team-board", {
+  app: APP,
+  machine: { cpus: os.cpus().length, loadavg: os.loadavg().map((l) => +l.toFixed(2)) },
+  data: { organization: SCALE_ORG, learners: Number(learners[0]!.n), teams: teams.teams.length, modules: 9 },
+  runs: RUNS,
+  targets: { boardPageP95Ms: 150, exportMs: 3000 },
+  firstPage,
+  filteredPage: { ...filteredPage, filter: "team Crew 07 + status overdue" },
+  orgWideStatusFilter: { ...orgWideStatus, note: "every person aggregated, then the page is cut" },
+  deepPage,
+  teamSummary: summary(summaryRuns),
+  export: { runs: exports, medianMs: exportMs[1] },
+  met: { firstPage: firstPage.p95 < 150, filteredPage: filteredPage.p95 < 150, export: exportMs[1]! < 3000 },
+});
+await pool.end();
