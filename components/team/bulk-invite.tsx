@@ -135,7 +135,7 @@ export function BulkInvite({ org }: { org: string | null }) {
                 {[...problemRows, ...shownValid].map((r) => (
                   <tr key={r.line} className={`border-b border-line align-top last:border-0 ${r.problems.length ? "bg-caution-light" : ""}`} data-line={r.line}>
                     <td className="px-2 py-2 font-mono">{r.line}</td>
-                    <td className="px-2 py-2 break-all">{r.email || <span className="text-muted">(empty)</span>}</td>
+                    <td className="px-2 py-2 [overflow-wrap:anywhere]">{r.email || <span className="text-muted">(empty)</span>}</td>
                     <td className="px-2 py-2">{r.name}</td>
                     <td className="px-2 py-2">{r.roleValue ? ROLE_LABELS[r.roleValue as InviteRole] : r.role}</td>
                     <td className="px-2 py-2">{r.team}</td>

@@ -45,7 +45,7 @@ function hashTree(h, dir) {
 function sourceHash() {
   const h = createHash("sha256");
   for (const d of ["app", "components", "content", "lib", "db/schema", "public"]) hashTree(h, path.join(root, d));
-  for (const f of ["next.config.mjs", "tailwind.config.ts", "mdx-components.tsx", "package-lock.json", "proxy.ts", "postcss.config.mjs"]) {
+  for (const f of ["next.config.mjs", "tailwind.config.ts", "mdx-components.tsx", "package-lock.json", "proxy.ts", "postcss.config.mjs", "instrumentation.ts", "mdx.d.ts"]) {
     if (existsSync(path.join(root, f))) h.update(readFileSync(path.join(root, f)));
   }
   return h.digest("hex");

@@ -120,11 +120,11 @@ describe("invite one person", () => {
   });
 
   it("re-inviting an existing member does nothing harmful and says so", async () => {
-    const member = await fixturePerson(org, { name: "Caspar Ludd", teamId: org.teams["Rough-in crew"] });
+    const member = await fixturePerson(org, { name: "Kaspar Ludd", teamId: org.teams["Rough-in crew"] });
     const before = (await mailsTo(member.email)).length;
     const res = await postJson(mgr, "/api/team/invites", { email: member.email, role: "manager", teamId: org.teams["Trim crew"] });
     expect(res.status).toBe(409);
-    expect(res.json.error).toBe(`Caspar Ludd (${member.email}) is already a member of ${org.name}. Nothing was sent and nothing changed.`);
+    expect(res.json.error).toBe(`Kaspar Ludd (${member.email}) is already a member of ${org.name}. Nothing was sent and nothing changed.`);
     const [u] = await db.select().from(user).where(eq(user.id, member.id));
     expect(u).toMatchObject({ role: "learner", teamId: org.teams["Rough-in crew"] });
     expect(await db.select().from(invitation).where(eq(invitation.email, member.email))).toEqual([]);

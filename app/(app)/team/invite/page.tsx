@@ -43,7 +43,7 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
         {used >= usage.seats ? <strong className="text-caution">All seats are taken. </strong> : null}
         <Link href={BILLING_PATH}>Seats and billing</Link>
       </p>
-      <div className="grid gap-10 lg:grid-cols-2">
+      <div className="grid gap-10">
         <section aria-labelledby="one" className="min-w-0">
           <h2 id="one" className="mb-3 text-2xl">One person</h2>
           <InviteForm teams={teams.map((t) => ({ id: t.id, name: t.name }))} org={adminOrg} />
