@@ -22,8 +22,12 @@ const step = (name) => console.log(`\n=== ${name} (${Math.round((Date.now() - t0
 let server = null;
 async function stopAll() {
   if (server && server.exitCode === null) {
+    // Next closes gracefully on SIGTERM but may wait on open connections: give it 5 s.
+    const exited = new Promise((r) => server.once("exit", r));
     server.kill("SIGTERM");
-    await new Promise((r) => server.once("exit", r));
+    const timer = setTimeout(() => server.kill("SIGKILL"), 5000);
+    await exited;
+    clearTimeout(timer);
   }
   try {
     for (const s of [...SERVICES].reverse()) node(s.script, ["stop", `--profile=${cfg.name}`]);
