@@ -4,13 +4,12 @@
 //   node scripts/mail-catcher.mjs start|stop|serve [--profile=dev|test]
 // HTTP: GET /messages · GET /messages/:id · DELETE /messages
 import { createServer } from "node:http";
-import { mkdirSync } from "node:fs";
 import path from "node:path";
 import { SMTPServer } from "smtp-server";
 import { simpleParser } from "mailparser";
 import { config } from "./lib/config.mjs";
-import { pidAlive, readPid, sleep, spawnDetached } from "./lib/proc.mjs";
-import { writeFileSync, rmSync } from "node:fs";
+import { daemon } from "./lib/daemon.mjs";
+import { rmSync } from "node:fs";
 
 const cfg = config();
 const pidFile = path.join(cfg.dir, "mail-catcher.pid");
@@ -84,32 +83,15 @@ async function healthy() {
   }
 }
 
-async function start() {
-  if (pidAlive(readPid(pidFile)) && (await healthy())) {
-    console.log(`[mail:${cfg.name}] already running`);
-    return;
-  }
-  mkdirSync(cfg.dir, { recursive: true });
-  const child = spawnDetached(process.execPath, [new URL(import.meta.url).pathname, "serve", `--profile=${cfg.name}`]);
-  writeFileSync(pidFile, String(child.pid));
-  for (let i = 0; i < 100; i++) {
-    if (await healthy()) {
-      console.log(`[mail:${cfg.name}] SMTP 127.0.0.1:${cfg.smtpPort}, messages at http://127.0.0.1:${cfg.mailHttpPort}/messages`);
-      return;
-    }
-    await sleep(100);
-  }
-  throw new Error("the mail catcher did not start");
-}
-
-async function stop() {
-  const pid = readPid(pidFile);
-  if (!pidAlive(pid)) return console.log(`[mail:${cfg.name}] not running`);
-  process.kill(pid, "SIGTERM");
-  for (let i = 0; i < 50 && pidAlive(pid); i++) await sleep(100);
-  rmSync(pidFile, { force: true });
-  console.log(`[mail:${cfg.name}] stopped`);
-}
+const { start, stop } = daemon({
+  tag: `mail:${cfg.name}`,
+  dir: cfg.dir,
+  pidFile,
+  script: new URL(import.meta.url).pathname,
+  profile: cfg.name,
+  healthy,
+  ready: `SMTP 127.0.0.1:${cfg.smtpPort}, messages at http://127.0.0.1:${cfg.mailHttpPort}/messages`,
+});
 
 const cmd = process.argv[2];
 if (cmd === "serve") serve();

@@ -15,7 +15,8 @@ import { mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from "node
 import path from "node:path";
 import Stripe from "stripe";
 import { config } from "./lib/config.mjs";
-import { pidAlive, readPid, sleep, spawnDetached } from "./lib/proc.mjs";
+import { daemon } from "./lib/daemon.mjs";
+import { sleep } from "./lib/proc.mjs";
 
 const cfg = config();
 const pidFile = path.join(cfg.dir, "payments-fake.pid");
@@ -388,35 +389,15 @@ async function healthy() {
   }
 }
 
-async function start() {
-  if (pidAlive(readPid(pidFile)) && (await healthy())) {
-    console.log(`[payments:${cfg.name}] already running`);
-    return;
-  }
-  mkdirSync(cfg.dir, { recursive: true });
-  const child = spawnDetached(process.execPath, [new URL(import.meta.url).pathname, "serve", `--profile=${cfg.name}`]);
-  writeFileSync(pidFile, String(child.pid));
-  for (let i = 0; i < 100; i++) {
-    if (await healthy()) {
-      console.log(`[payments:${cfg.name}] local payment service at ${BASE} (webhooks to ${WEBHOOK_URL})`);
-      return;
-    }
-    await sleep(100);
-  }
-  throw new Error("the payments fake did not start");
-}
-
-async function stop() {
-  const pid = readPid(pidFile);
-  if (!pidAlive(pid)) {
-    rmSync(pidFile, { force: true });
-    return console.log(`[payments:${cfg.name}] not running`);
-  }
-  process.kill(pid, "SIGTERM");
-  for (let i = 0; i < 50 && pidAlive(pid); i++) await sleep(100);
-  rmSync(pidFile, { force: true });
-  console.log(`[payments:${cfg.name}] stopped`);
-}
+const { start, stop } = daemon({
+  tag: `payments:${cfg.name}`,
+  dir: cfg.dir,
+  pidFile,
+  script: new URL(import.meta.url).pathname,
+  profile: cfg.name,
+  healthy,
+  ready: `local payment service at ${BASE} (webhooks to ${WEBHOOK_URL})`,
+});
 
 const cmd = process.argv[2];
 if (cmd === "serve") serve();

@@ -3,11 +3,11 @@
 // the profile's s3Port, data under .data/<profile>/s3, the profile's bucket created at start.
 //   node scripts/s3-fake.mjs start|stop|serve [--profile=dev|test|test-a …]
 // Test profiles start from an empty store, as their database is reset before each run.
-import { mkdirSync, openSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, rmSync } from "node:fs";
 import path from "node:path";
 import S3rver from "s3rver";
 import { config } from "./lib/config.mjs";
-import { pidAlive, readPid, sleep, spawnDetached } from "./lib/proc.mjs";
+import { daemon } from "./lib/daemon.mjs";
 
 const cfg = config();
 const dir = path.join(cfg.dir, "s3");
@@ -45,36 +45,18 @@ async function healthy() {
   }
 }
 
-async function start() {
-  if (pidAlive(readPid(pidFile)) && (await healthy())) {
-    console.log(`[s3:${cfg.name}] already running`);
-    return;
-  }
-  mkdirSync(cfg.dir, { recursive: true });
-  if (cfg.name.startsWith("test")) rmSync(dir, { recursive: true, force: true });
-  const child = spawnDetached(process.execPath, [new URL(import.meta.url).pathname, "serve", `--profile=${cfg.name}`], {
-    stdio: ["ignore", openSync(logFile, "a"), openSync(logFile, "a")],
-  });
-  writeFileSync(pidFile, String(child.pid));
-  for (let i = 0; i < 100; i++) {
-    if (await healthy()) {
-      console.log(`[s3:${cfg.name}] fake S3 at http://127.0.0.1:${cfg.s3Port}, bucket "${bucket}", data in ${path.relative(process.cwd(), dir) || dir}`);
-      return;
-    }
-    if (!pidAlive(child.pid)) break;
-    await sleep(100);
-  }
-  throw new Error(`the fake S3 server did not start on port ${cfg.s3Port} (is the port taken? see ${logFile})`);
-}
-
-async function stop() {
-  const pid = readPid(pidFile);
-  if (!pidAlive(pid)) return console.log(`[s3:${cfg.name}] not running`);
-  process.kill(pid, "SIGTERM");
-  for (let i = 0; i < 50 && pidAlive(pid); i++) await sleep(100);
-  rmSync(pidFile, { force: true });
-  console.log(`[s3:${cfg.name}] stopped`);
-}
+const { start, stop } = daemon({
+  tag: `s3:${cfg.name}`,
+  dir: cfg.dir,
+  pidFile,
+  logFile,
+  script: new URL(import.meta.url).pathname,
+  profile: cfg.name,
+  healthy,
+  // test profiles start with an empty store, like their freshly reset database
+  beforeStart: () => cfg.name.startsWith("test") && rmSync(dir, { recursive: true, force: true }),
+  ready: `fake S3 at http://127.0.0.1:${cfg.s3Port}, bucket "${bucket}", data in ${path.relative(process.cwd(), dir) || dir}`,
+});
 
 const cmd = process.argv[2];
 if (cmd === "serve") await serve();
