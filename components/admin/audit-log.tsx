@@ -2,7 +2,7 @@
 import { useState } from "react";
 import type { AuditRow } from "@/lib/admin/audit-log";
 import { DataTable, When, type Column } from "./data-table";
-import { SelectField } from "./fields";
+import { SelectField } from "@/components/ui/select-field";
 import { useDebounced } from "./use-debounced";
 
 type Org = { id: string; name: string };

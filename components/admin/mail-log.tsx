@@ -2,7 +2,7 @@
 import { useState } from "react";
 import type { MailRow } from "@/lib/admin/mail";
 import { DataTable, When, type Column } from "./data-table";
-import { SelectField } from "./fields";
+import { SelectField } from "@/components/ui/select-field";
 import { useDebounced } from "./use-debounced";
 
 export function MailLog({ bodiesVisible }: { bodiesVisible: boolean }) {

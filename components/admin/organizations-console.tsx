@@ -12,7 +12,7 @@ import { createOrganizationSchema, renameOrganizationSchema } from "@/lib/admin/
 import { postJson } from "@/lib/fetcher";
 import { DataTable, tableKey, When, type Column } from "./data-table";
 import { Dialog } from "./dialog";
-import { SelectField } from "./fields";
+import { SelectField } from "@/components/ui/select-field";
 import { useDebounced } from "./use-debounced";
 import { applyServerErrors } from "./server-errors";
 

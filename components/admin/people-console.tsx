@@ -6,7 +6,7 @@ import { ROLES } from "@/lib/access/rules";
 import type { PersonRow } from "@/lib/admin/people";
 import { DataTable, tableKey, When, type Column } from "./data-table";
 import { Dialog } from "./dialog";
-import { SelectField } from "./fields";
+import { SelectField } from "@/components/ui/select-field";
 import { PersonActions, ROLE_LABEL } from "./person-actions";
 import { useDebounced } from "./use-debounced";
 

@@ -9,7 +9,7 @@ import { ROLES } from "@/lib/access/rules";
 import { banSchema, changeRoleSchema, moveOrganizationSchema, signOutSchema, unbanSchema } from "@/lib/admin/schemas";
 import type { PersonRow } from "@/lib/admin/people";
 import { postJson } from "@/lib/fetcher";
-import { SelectField, TextAreaField } from "./fields";
+import { SelectField, TextAreaField } from "@/components/ui/select-field";
 import { applyServerErrors } from "./server-errors";
 
 export const ROLE_LABEL: Record<string, string> = { learner: "Learner", sales: "Sales", manager: "Manager", admin: "Admin" };

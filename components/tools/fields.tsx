@@ -3,6 +3,7 @@
 import { useId, type SelectHTMLAttributes } from "react";
 import { get, useFormContext } from "react-hook-form";
 import { Field } from "@/components/ui/field";
+import { SelectField as PlainSelectField } from "@/components/ui/select-field";
 
 /** a number typed as text (so a typo shows as a field error rather than vanishing), wired to the form */
 export function NumberField({
@@ -38,51 +39,17 @@ export function NumberField({
   );
 }
 
+/** the shared labelled select (components/ui/select-field), wired to the form with its error */
 export function SelectField({
   name,
-  label,
-  options,
-  hint,
   ...rest
 }: { name: string; label: string; options: { value: string; label: string }[]; hint?: string } & SelectHTMLAttributes<HTMLSelectElement>) {
   const {
     register,
     formState: { errors },
   } = useFormContext();
-  const id = useId();
   const error = (get(errors, name) as { message?: string } | undefined)?.message;
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="font-bold">
-        {label}
-      </label>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      ) : null}
-      <select
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={[error ? `${id}-error` : null, hint ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined}
-        className={`min-h-11 rounded border bg-panel px-3 py-2 text-ink ${error ? "border-caution" : "border-ink/40"}`}
-        data-field={name}
-        {...rest}
-        {...register(name)}
-      >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-bold text-caution" role="alert">
-          {error}
-        </p>
-      ) : null}
-    </div>
-  );
+  return <PlainSelectField data-field={name} error={error} {...rest} {...register(name)} />;
 }
 
 export function TextField({ name, label }: { name: string; label: string }) {
