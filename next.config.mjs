@@ -8,8 +8,12 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   pageExtensions: ["ts", "tsx", "md", "mdx"],
   poweredByHeader: false,
-  // npm test type-checks the whole project (tsc --noEmit) before building; no second pass here.
-  typescript: { ignoreBuildErrors: true },
+  // Type errors fail the build. npm test runs `tsc --noEmit` itself just before building and then
+  // sets RISER_TYPES_CHECKED so the same sources are not checked twice (scripts/lib/steps.mjs).
+  typescript: {
+    ignoreBuildErrors: process.env.RISER_TYPES_CHECKED === "1",
+    tsconfigPath: process.env.NEXT_TSCONFIG_PATH || "tsconfig.json",
+  },
   experimental: { authInterrupts: true },
   serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode"],
   async headers() {

@@ -45,14 +45,32 @@ function hashTree(h, dir) {
 function sourceHash() {
   const h = createHash("sha256");
   for (const d of ["app", "components", "content", "lib", "db/schema", "public"]) hashTree(h, path.join(root, d));
-  for (const f of ["next.config.mjs", "tailwind.config.ts", "mdx-components.tsx", "package-lock.json", "proxy.ts", "postcss.config.mjs", "instrumentation.ts", "mdx.d.ts"]) {
+  for (const f of ["next.config.mjs", "tailwind.config.ts", "mdx-components.tsx", "package-lock.json", "proxy.ts", "postcss.config.mjs", "instrumentation.ts", "mdx.d.ts", "tsconfig.json"]) {
     if (existsSync(path.join(root, f))) h.update(readFileSync(path.join(root, f)));
   }
   return h.digest("hex");
 }
 
-/** next build, skipped when nothing it depends on changed since the last successful build. */
-export function buildApp({ force = false, distDir = ".next" } = {}) {
+/**
+ * A profile that builds into its own folder (".next-test-a", …) type-checks with its own small
+ * tsconfig that adds that folder's generated route types, so that parallel builds never rewrite
+ * the committed tsconfig.json. Returns the file name Next should use.
+ */
+function tsconfigFor(distDir) {
+  if (distDir === ".next") return "tsconfig.json";
+  const file = `tsconfig.${distDir.replace(/^\./, "")}.json`;
+  const base = JSON.parse(readFileSync(path.join(root, "tsconfig.json"), "utf8"));
+  const include = [...base.include.filter((p) => !p.startsWith(".next/")), `${distDir}/types/**/*.ts`, `${distDir}/dev/types/**/*.ts`];
+  writeFileSync(path.join(root, file), `${JSON.stringify({ extends: "./tsconfig.json", include }, null, 2)}\n`);
+  return file;
+}
+
+/**
+ * next build, skipped when nothing it depends on changed since the last successful build.
+ * Type errors fail the build; `typesChecked` skips Next's own pass only when the caller has just
+ * run `tsc --noEmit` on the same sources (npm test does, so it does not type-check twice).
+ */
+export function buildApp({ force = false, distDir = ".next", env = process.env, typesChecked = false } = {}) {
   contentBuild();
   const stamp = path.join(root, distDir, "riser-source-hash");
   const hash = sourceHash();
@@ -60,6 +78,14 @@ export function buildApp({ force = false, distDir = ".next" } = {}) {
     console.log("[build] sources unchanged since the last build: reusing it");
     return;
   }
-  run(bin("next"), ["build"], { cwd: root, env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NEXT_DIST_DIR: distDir } });
+  const buildEnv = {
+    ...env,
+    NODE_ENV: "production",
+    NEXT_TELEMETRY_DISABLED: "1",
+    NEXT_DIST_DIR: distDir,
+    NEXT_TSCONFIG_PATH: tsconfigFor(distDir),
+    RISER_TYPES_CHECKED: typesChecked ? "1" : "",
+  };
+  run(bin("next"), ["build"], { cwd: root, env: buildEnv });
   writeFileSync(stamp, hash);
 }
