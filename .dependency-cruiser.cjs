@@ -49,6 +49,14 @@ module.exports = {
       from: { path: "^(lib|db|app|components)/" },
       to: { circular: true, viaOnly: { dependencyTypesNot: ["type-only"] } },
     },
+    {
+      name: "no-area-cycles",
+      severity: "error",
+      comment: "Areas depend on each other in one direction only: no cycle between lib/<area> folders or db.",
+      scope: "folder",
+      from: { path: "^(lib/[^/]+|db)$" },
+      to: { path: "^(lib/[^/]+|db)$", circular: true },
+    },
   ],
   options: {
     doNotFollow: { path: ["node_modules"] },

@@ -35,7 +35,7 @@ try {
     step("type-check");
     run(bin("tsc"), ["--noEmit"], { cwd: root });
     step("lint");
-    run(bin("eslint"), [".", "--max-warnings=0"], { cwd: root });
+    run("npm", ["run", "--silent", "lint"], { cwd: root });
   }
   if (want("unit")) {
     step("unit tests");
