@@ -37,19 +37,21 @@ export function proseBlocks(body: string): { text: string; inExample: boolean }[
     .replace(/<svg[\s\S]*?<\/svg>/g, " ")
     .replace(/<Calculator[^>]*\/>/g, " ")
     .replace(/\{\{[^}]*\}\}/g, " ");
-  const out: { text: string; inExample: boolean }[] = [];
-  let inExample = false;
+  const out: { text: string; inExample: boolean }[] = [];  let inExample = false;
+  let lead = "";
   for (const raw of cleaned.split(/\n\s*\n/)) {
     const starts = /<WorkedExample/.test(raw);
     const ends = /<\/WorkedExample>/.test(raw);
     const block = { text: raw, inExample: inExample || starts };
     // table rows are judged one by one, each with the table's header row
     if (/^\s*\|/m.test(raw)) {
-      const rows = raw.split("\n").filter((r) => r.trim().startsWith("|"));
-      for (const r of rows) out.push({ text: r, inExample: block.inExample });
+      const rows = raw.split("\n").filter((r) => r.trim().startsWith("|"));      // each row is read with the paragraph that introduces the table, where its source is named
+      for (const r of rows) out.push({ text: `${r}\n${lead}`, inExample: block.inExample });
       const rest = raw.split("\n").filter((r) => !r.trim().startsWith("|")).join("\n");
-      if (rest.trim()) out.push({ text: rest, inExample: block.inExample });
-    } else out.push(block);
+      if (rest.trim()) out.push({ text: rest, inExample: block.inExample });    } else {
+      out.push(block);
+      lead = raw;
+    }
     if (starts) inExample = true;
     if (ends) inExample = false;
   }
@@ -96,7 +98,8 @@ export function keyedNumbers(q: {
     const keys = Array.isArray(q.correct) ? (q.correct as string[]) : [];
     return (q.options ?? []).filter((o) => keys.includes(o.id)).flatMap((o) => nums(o.text));
   }
-  if (q.type === "numeric" && typeof q.answer === "number") return [String(q.answer)];
+  // a numeric answer worked from figures the prompt gives is computed, not recalled
+  if (q.type === "numeric" && typeof q.answer === "number") return nums(q.prompt).length >= 2 ? [] : [String(q.answer)];
   // parametric inputs are shown in the prompt; the learner computes the answer, so nothing is keyed from memory
   return [];
 }
