@@ -237,4 +237,26 @@ describe("facts the review corrected stay corrected", () => {
   it("ties the waterflow alarm to NFPA 72 smoke alarms", () => {
     for (const slug of ["from-water-service-to-sprinkler", "when-a-sprinkler-operates", "yearly-alarm-test"]) expect(text(slug), slug).toMatch(/NFPA 72/);
   });
+
+  it("keeps the other corrections: hydrostatic test, spares, extended coverage, multipurpose listing, omissions, antifreeze, lots, editions", () => {
+    expect(text("acceptance-testing")).toMatch(/no\s+edition of NFPA 13D asks for it/);
+    expect(text("spare-sprinklers")).toMatch(/not from NFPA 13D/);
+    expect(text("sprinkler-types")).toMatch(/does not make it an <Term id="extended-coverage">extended-coverage<\/Term> sprinkler/);
+    for (const d of docs) expect(d.body, d.name).not.toMatch(/listed for multipurpose use|multipurpose listing(?! to look for|")/);
+    const omitted = text("where-sprinklers-may-be-omitted");
+    expect(omitted).toMatch(/with or without storage/);
+    expect(omitted).toMatch(/above the equipment/);
+    expect(omitted).toMatch(/55 ft²/);
+    expect(omitted).toMatch(/24 ft²/);
+    const af = text("antifreeze-limits");
+    for (const fact of ["September 30, 2022", "48% glycerine", "38% propylene glycol", "30% propylene glycol"]) expect(af).toContain(fact);
+    expect(text("stand-alone-and-multipurpose")).not.toMatch(/Lot 40/);
+    expect(text("water-supplies-and-duration")).toMatch(/Lot 40 \(tank and pump\)/);
+    for (const d of [...lessons.map((l) => l.meta.edition), ...catalog.cards.map((c) => c.meta.edition)]) {
+      expect(d).toMatch(/2025/);
+      expect(d).toMatch(/2024/);
+    }
+    const warm = catalog.modules.flatMap((m) => m.questions).find((q) => q.id === "fp-warm-side")!;
+    expect(warm.prompt).toMatch(/between the ceiling joists/);
+  });
 });
