@@ -163,6 +163,3 @@ export function fittingsEquivalentLength(
   return { totalFt: items.reduce((sum, it) => sum + it.totalFt, 0), items };
 }
 
-/** the nominal sizes at which the chart has a value for a fitting */
-export const chartSizesFor = (kind: FittingKind): NominalSize[] =>
-  NOMINAL_SIZES.filter((s) => STEEL_40_EQUIVALENT_LENGTH_FT[kind][s] !== null);
