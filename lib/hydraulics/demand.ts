@@ -1,4 +1,7 @@
 /**
+ * (Over 300 lines on purpose: the walk back from the sprinklers, the balancing at the split point
+ * and the supply path share one segment calculation and one step format; split, they would drift.)
+ *
  * System demand: the flow and pressure needed at the water source to deliver the design sprinklers'
  * flows, following the path back from the sprinklers and adding, step by step, each segment's
  * friction (pipe plus fitting equivalent length), its elevation change and the device losses.

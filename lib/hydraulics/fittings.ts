@@ -13,7 +13,7 @@
  * pipe maker's listing, and the caller must pass them as `equivalentLengthFt`.
  */
 import { HydraulicsInputError, INPUT_LIMITS, requireInRange, requireInteger, requireNonNegative } from "./errors";
-import { NOMINAL_SIZES, PIPE_DATA, pipeDimensions, type NominalSize, type PipeMaterial } from "./pipe-data";
+import { PIPE_DATA, pipeDimensions, type NominalSize, type PipeMaterial } from "./pipe-data";
 
 export const FITTING_KINDS = [
   "elbow-45",

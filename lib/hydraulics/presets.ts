@@ -5,11 +5,11 @@ import type { CalculatorInputs, SystemDemandReportInput } from "./schemas";
 
 /**
  * An invented example system (Quillmoor Fire Protection on a Larkhaven Homes plan, Juniper Flats).
- * About 27 gpm runs through the meter, so the example uses a 1 in meter: AWWA C700 gives a 1 in
+ * About 27.4 gpm runs through the meter, so the example uses a 1 in meter: AWWA C700 gives a 1 in
  * displacement meter a safe maximum operating capacity of 50 gpm with at most 15 psi loss there
  * (a 5/8 × 3/4 in meter: 20 gpm — too small for this flow) (from memory — verify against the
  * adopted C700 edition and the meter maker's curve). Loss grows with flow squared, so at 27 gpm
- * the 1 in meter loses at most 15 × (27 ÷ 50)² ≈ 4.4 psi; the maker's curve governs.
+ * the 1 in meter loses at most 15 × (27.4 ÷ 50)² ≈ 4.5 psi, entered as 4.6 psi (rounded up); the maker's curve governs.
  */
 export const EXAMPLE_SYSTEM_DEMAND: SystemDemandReportInput = {
   units: "us",
@@ -34,7 +34,7 @@ export const EXAMPLE_SYSTEM_DEMAND: SystemDemandReportInput = {
     { label: "Riser and attic main", material: "cpvc", nominalSize: "1", length: 48, elevation: 14, listedFittingsLength: 19 },
   ],
   devices: [
-    { label: "Water meter (1 in; loss at the design flow, maker's curve)", loss: 4.4 },
+    { label: "Water meter (1 in; loss at the design flow, maker's curve)", loss: 4.6 },
     { label: "Backflow preventer (maker's curve)", loss: 4 },
   ],
   supply: { staticPressure: 68, residualPressure: 55, testFlow: 1000 },
