@@ -75,7 +75,7 @@ test("system demand at phone width keeps a result summary in view, and its chart
   expect(label.x + label.width).toBeLessThanOrEqual(wrapper.x + wrapper.width);
   expect(label.y).toBeGreaterThanOrEqual(wrapper.y);
   // … and over no axis tick label
-  const ticks = await page.locator(".recharts-cartesian-axis-tick text").all();
+  const ticks = await page.locator(".recharts-cartesian-axis-tick-value").all();
   expect(ticks.length).toBeGreaterThan(4);
   for (const t of ticks) {
     const b = (await t.boundingBox())!;
