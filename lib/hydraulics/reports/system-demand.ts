@@ -29,6 +29,13 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
     throw e;
   }
 
+  // NFPA 13D's density floor in the report's units: 0.05 gpm/ft² = 2.04 L/min/m²
+  const densityValue = fromUs("flow", CODE_FLOORS.minDensityGpmPerSqFt, units) / fromUs("area", 1, units);
+  const density = `${g(Number(densityValue.toPrecision(3)))} ${u.flow}/${u.area}`;
+  const governor = (note: string | undefined) => {
+    const m = /set by the (.+)$/.exec(note ?? "");
+    return m ? ` (set by the ${m[1]})` : "";
+  };
   const P = (psi: number, dir: RoundingDirection = "nearest") => f(fromUs("pressure", psi, units), u.pressure, dir);
   const Q = (gpm: number) => f(fromUs("flow", gpm, units), u.flow);
   const steps: ReportStep[] = result.steps.map((s) => {
@@ -49,12 +56,18 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
     if (s.kind === "sprinkler") {
       return {
         label: `${s.label}: ${Q(s.flowGpm)}`,
-        work: `larger of the listed flow, K√(listed pressure), 0.05 gpm/ft² × coverage and K√7 psi; P = (Q ÷ K)² ${s.note ? `(${s.note})` : ""}`,
+        work: `largest of the listed flow, K√(listed pressure), ${density} × coverage and K√(${P(CODE_FLOORS.minPressurePsi)}); P = (Q ÷ K)²${governor(s.note)}`,
         text: P(s.pressureRequiredPsi, "up"),
       };
     }
     if (s.kind === "balance") {
-      return { label: `${s.label}: ${Q(s.flowGpm)}`, work: s.note ?? "", text: P(s.pressureRequiredPsi, "up") };
+      // the library's note states psi; say it in the report's units
+      const node = result.steps.find((x) => x.kind === "junction")?.pressureRequiredPsi;
+      const work =
+        node === undefined
+          ? (s.note ?? "")
+          : `At the split point this branch sees ${P(node)}, more than its minimum needs, so it flows more than its listed minimum.`;
+      return { label: `${s.label}: ${Q(s.flowGpm)}`, work, text: P(s.pressureRequiredPsi, "up") };
     }
     if (s.kind === "additional-flow") {
       return {

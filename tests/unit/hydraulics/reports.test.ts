@@ -196,6 +196,14 @@ describe("the default system-demand example", () => {
   });
 });
 
+describe("SI reports speak SI", () => {
+  it.each(CALCULATOR_IDS)("no step or result of the SI %s report shows psi or gpm", (id) => {
+    const si = calculatorReport(id, convertInputUnits(inputFromPreset(id), "us", "si"));
+    for (const s of si.steps) expect(`${s.label} ${s.work} ${s.text}`).not.toMatch(/\b(psi|gpm)\b/);
+    for (const r of si.results) expect(`${r.label} ${r.text}`).not.toMatch(/\b(psi|gpm)\b/);
+  });
+});
+
 describe("errors name the form field", () => {
   it.each([
     ["flow-test", { units: "us", staticPressure: 50, residualPressure: 60, testFlow: 500, demandFlow: 20 }, "residualPressure"],
