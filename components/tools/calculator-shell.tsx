@@ -3,12 +3,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useMemo, type ReactNode } from "react";
 import { FormProvider, useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
-import type { z } from "zod";
 import {
   CALCULATOR_CAUTION_TEXT,
   CALCULATOR_INFO,
+  calculatorFormSchema,
   calculatorReport,
   convertInputUnits,
+  parseCalculatorInput,
   type CalculatorId,
   type CalculatorReport,
   type Units,
@@ -25,15 +26,13 @@ export interface CalculatorState<TValues extends FieldValues> {
 }
 
 /**
- * One calculator's form: react-hook-form with the zod schema as resolver. Every change re-validates
- * the whole form (so an error between two fields shows on the right one) and recomputes the report
- * when the inputs are valid.
+ * One calculator's form: react-hook-form whose resolver is built from the calculator's input schema
+ * (lib/hydraulics/schemas.ts, the same one the report and the PDF parse with). Every change
+ * re-validates the whole form (so an error between two fields shows on the right one) and
+ * recomputes the report when the inputs are valid.
  */
-export function useCalculator<TValues extends FieldValues>(
-  id: CalculatorId,
-  schema: z.ZodType<unknown, TValues>,
-  defaultValues: TValues,
-): CalculatorState<TValues> {
+export function useCalculator<TValues extends FieldValues>(id: CalculatorId, defaultValues: TValues): CalculatorState<TValues> {
+  const schema = useMemo(() => calculatorFormSchema(id), [id]);
   const form = useForm<TValues>({
     resolver: zodResolver(schema as never) as unknown as Resolver<TValues>,
     defaultValues: defaultValues as DefaultValues<TValues>,
@@ -42,14 +41,13 @@ export function useCalculator<TValues extends FieldValues>(
   const values = useWatch({ control: form.control });
   const key = JSON.stringify(values);
   const { report, input } = useMemo(() => {
-    const parsed = schema.safeParse(JSON.parse(key));
-    if (!parsed.success) return { report: null, input: null };
     try {
-      return { report: calculatorReport(id, parsed.data), input: parsed.data };
+      const parsed = parseCalculatorInput(id, JSON.parse(key));
+      return { report: calculatorReport(id, parsed), input: parsed as unknown };
     } catch {
       return { report: null, input: null };
     }
-  }, [id, schema, key]);
+  }, [id, key]);
   const { trigger, formState } = form;
   useEffect(() => {
     if (formState.isDirty || formState.submitCount > 0) void trigger();
@@ -122,7 +120,7 @@ export function CalculatorShell<TValues extends FieldValues>({
               Calculate
             </button>
           </form>
-          <div className="flex flex-col gap-4">
+          <div className="flex flex-col gap-4" id={`${id}-result`}>
             {report ? (
               <>
                 {report.chart ? <SupplyChart chart={report.chart} verdict={report.verdict?.result} /> : null}
@@ -140,7 +138,41 @@ export function CalculatorShell<TValues extends FieldValues>({
             )}
           </div>
         </div>
+        <SummaryBar id={id} report={report} />
       </section>
     </FormProvider>
+  );
+}
+
+/**
+ * At phone width the worked result sits far below the inputs: keep the headline figure (and the
+ * pass/short verdict) in view at the bottom of the screen while the inputs are edited.
+ */
+function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
+  const headline = report?.results[0];
+  const margin = report?.results.find((r) => r.label === "Margin" || r.label === "Shortfall");
+  return (
+    <div
+      className="sticky bottom-0 z-10 -mx-4 mt-4 flex items-center justify-between gap-3 border-t border-line bg-paper px-4 py-2 lg:hidden"
+      data-summary-bar
+    >
+      {headline ? (
+        <p className="min-w-0 text-sm">
+          <span className="text-muted">{headline.label}: </span>
+          <span className="font-mono font-bold">{headline.text}</span>
+          {report?.verdict ? (
+            <span className={`ml-2 font-bold ${report.verdict.result === "pass" ? "text-pass" : "text-caution"}`}>
+              {report.verdict.result === "pass" ? "Pass" : "Short"}
+              {margin ? ` (${margin.label.toLowerCase()} ${margin.text})` : ""}
+            </span>
+          ) : null}
+        </p>
+      ) : (
+        <p className="text-sm font-bold text-caution">Fix the highlighted fields to see the result.</p>
+      )}
+      <a href={`#${id}-result`} className="shrink-0 text-sm">
+        Full result
+      </a>
+    </div>
   );
 }

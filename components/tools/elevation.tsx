@@ -2,16 +2,16 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { elevationSchema, flatFormValues } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function ElevationCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("elevation", inputFromPreset("elevation", preset)), [preset]);
-  const state = useCalculator("elevation", elevationSchema, defaults);
+  const state = useCalculator("elevation", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
   return (
     <CalculatorShell id="elevation" state={state} embedded={embedded}>

@@ -2,16 +2,16 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { flatFormValues, flowTestSchema } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function FlowTestCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("flow-test", inputFromPreset("flow-test", preset)), [preset]);
-  const state = useCalculator("flow-test", flowTestSchema, defaults);
+  const state = useCalculator("flow-test", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
   const u = unitLabels(units);
   return (

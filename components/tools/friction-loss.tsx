@@ -2,10 +2,10 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
+import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
-import { flatFormValues, frictionLossSchema } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
@@ -17,7 +17,7 @@ export const sizeOptions = (material: string | undefined) =>
 
 export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("friction-loss", inputFromPreset("friction-loss", preset)), [preset]);
-  const state = useCalculator("friction-loss", frictionLossSchema, defaults);
+  const state = useCalculator("friction-loss", defaults);
   const [units, material] = useWatch({ control: state.form.control, name: ["units", "material"] });
   const u = unitLabels(units);
   const plastic = material === "cpvc" || material === "pex";
@@ -44,7 +44,17 @@ export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
       <details className="rounded border border-line bg-panel p-3">
         <summary className="cursor-pointer font-bold">Maker&apos;s listed values (optional)</summary>
         <div className="mt-3 flex flex-col gap-4">
-          <NumberField name="insideDiameter" label="Inside diameter" unit={u.diameter} optional hint="Leave blank to use the pipe standard's table." />
+          <NumberField
+            name="insideDiameter"
+            label="Listed inside diameter"
+            unit={u.diameter}
+            optional
+            hint={
+              plastic
+                ? "Blank uses the average bore of the pipe standard (OD minus twice the average wall), smaller than OD minus twice the minimum wall. Enter the pipe's listed value: it governs."
+                : "Blank uses the published ID of the pipe standard. A listed value you enter governs."
+            }
+          />
           <NumberField name="cFactor" label="C-factor" optional hint="Leave blank for the NFPA 13 table value." />
         </div>
       </details>

@@ -1,4 +1,4 @@
-import type { CalculatorReport } from "@/lib/hydraulics";
+import type { CalculatorReport } from "@/lib/hydraulics/shared";
 
 const statusStyle = {
   ok: "border-pass bg-pass-light text-pass",

@@ -2,16 +2,16 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { flatFormValues, roomCoverageSchema } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function RoomCoverageCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("room-coverage", inputFromPreset("room-coverage", preset)), [preset]);
-  const state = useCalculator("room-coverage", roomCoverageSchema, defaults);
+  const state = useCalculator("room-coverage", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
   const u = unitLabels(units);
   return (

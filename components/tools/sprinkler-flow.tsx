@@ -2,16 +2,16 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
-import { flatFormValues, sprinklerFlowSchema } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function SprinklerFlowCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("sprinkler-flow", inputFromPreset("sprinkler-flow", preset)), [preset]);
-  const state = useCalculator("sprinkler-flow", sprinklerFlowSchema, defaults);
+  const state = useCalculator("sprinkler-flow", defaults);
   const [units, solveFor] = useWatch({ control: state.form.control, name: ["units", "solveFor"] });
   const u = unitLabels(units);
   return (

@@ -2,16 +2,16 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { flatFormValues, storedWaterSchema } from "./schemas";
+import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function StoredWaterCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => flatFormValues("stored-water", inputFromPreset("stored-water", preset)), [preset]);
-  const state = useCalculator("stored-water", storedWaterSchema, defaults);
+  const state = useCalculator("stored-water", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
   return (
     <CalculatorShell id="stored-water" state={state} embedded={embedded}>

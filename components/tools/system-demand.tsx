@@ -1,13 +1,13 @@
 "use client";
 
-import { useMemo } from "react";
+import { useMemo, useRef, useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { inputFromPreset } from "@/lib/hydraulics";
+import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics/shared";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField, TextField } from "./fields";
 import { MATERIAL_OPTIONS, sizeOptions } from "./friction-loss";
-import { emptySegment, systemDemandFormValues, systemDemandSchema, type SystemDemandFormValues } from "./schemas";
+import { emptySegment, systemDemandFormValues, type SystemDemandFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
@@ -38,6 +38,17 @@ function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
         unit={u.length}
         optional
       />
+      <NumberField
+        name={`${prefix}.insideDiameter`}
+        label="Listed inside diameter"
+        unit={u.diameter}
+        optional
+        hint={
+          plastic
+            ? "Blank uses the average bore of the pipe standard (smaller than OD minus twice the minimum wall). The pipe's listed value governs."
+            : "Blank uses the published ID of the pipe standard."
+        }
+      />
     </fieldset>
   );
 }
@@ -47,7 +58,7 @@ function DemandFields() {
   const sprinklers = useFieldArray({ control, name: "sprinklers" });
   const segments = useFieldArray({ control, name: "segments" });
   const devices = useFieldArray({ control, name: "devices" });
-  const [units, useSupply] = useWatch({ control, name: ["units", "useSupply"] });
+  const units = useWatch({ control, name: "units" });
   const u = unitLabels(units);
   return (
     <>
@@ -59,6 +70,13 @@ function DemandFields() {
           <NumberField name={`sprinklers.${i}.k`} label="K-factor" unit={u.k} hint="From the sprinkler's listing." />
           <NumberField name={`sprinklers.${i}.minFlow`} label="Listed flow for the coverage" unit={u.flow} />
           <NumberField name={`sprinklers.${i}.minPressure`} label="Listed minimum pressure" unit={u.pressure} optional />
+          <NumberField
+            name={`sprinklers.${i}.coverageArea`}
+            label="Coverage area"
+            unit={u.area}
+            optional
+            hint="Checks NFPA 13D's minimum density of 0.05 gpm/ft². The 7 psi minimum pressure is always applied."
+          />
           <SegmentFields prefix={`sprinklers.${i}.branch`} title="Branch from the split point (length 0 if none)" />
           {sprinklers.fields.length > 1 ? (
             <Button type="button" variant="secondary" onClick={() => sprinklers.remove(i)}>
@@ -72,7 +90,7 @@ function DemandFields() {
           type="button"
           variant="secondary"
           onClick={() =>
-            sprinklers.append({ label: "Sprinkler B", k: "4.9", minFlow: "13", minPressure: "", branch: { ...emptySegment("Branch B"), length: "0" } })
+            sprinklers.append({ label: "Sprinkler B", k: "4.9", minFlow: "13", minPressure: "", coverageArea: "", branch: { ...emptySegment("Branch B"), length: "0" } })
           }
         >
           Add a second design sprinkler
@@ -89,7 +107,7 @@ function DemandFields() {
           </Button>
         </div>
       ))}
-      {segments.fields.length < 12 ? (
+      {segments.fields.length < INPUT_CAPS.pipeRuns ? (
         <Button type="button" variant="secondary" onClick={() => segments.append(emptySegment(`Pipe run ${segments.fields.length + 1}`))}>
           Add a pipe run
         </Button>
@@ -107,7 +125,7 @@ function DemandFields() {
           </Button>
         </fieldset>
       ))}
-      {devices.fields.length < 8 ? (
+      {devices.fields.length < INPUT_CAPS.devices ? (
         <Button type="button" variant="secondary" onClick={() => devices.append({ label: "", loss: "" })}>
           Add a device
         </Button>
@@ -121,8 +139,37 @@ function DemandFields() {
         hint="For example domestic flow, where the adopted code requires it."
       />
 
-      <SupplyToggle />
-      {useSupply ? (
+      <SupplyFields />
+    </>
+  );
+}
+
+/**
+ * The flow-test comparison. Unticking clears the three readings (blank readings mean "no supply" to
+ * the schema) and keeps them to put back if the box is ticked again.
+ */
+function SupplyFields() {
+  const { control, getValues, setValue } = useFormContext<SystemDemandFormValues>();
+  const units = useWatch({ control, name: "units" });
+  const u = unitLabels(units);
+  const [on, setOn] = useState(() => Object.values(getValues("supply")).some((v) => String(v ?? "").trim() !== ""));
+  const kept = useRef<SystemDemandFormValues["supply"] | null>(null);
+  function toggle(next: boolean) {
+    setOn(next);
+    if (!next) {
+      kept.current = getValues("supply");
+      setValue("supply", { staticPressure: "", residualPressure: "", testFlow: "" }, { shouldDirty: true });
+    } else if (kept.current) {
+      setValue("supply", kept.current, { shouldDirty: true });
+    }
+  }
+  return (
+    <>
+      <label className="inline-flex min-h-11 items-center gap-2">
+        <input type="checkbox" checked={on} onChange={(e) => toggle(e.target.checked)} />
+        Compare with a hydrant flow test
+      </label>
+      {on ? (
         <fieldset className="flex flex-col gap-3 rounded border border-line p-3">
           <legend className="px-1 font-bold">Water supply (flow test)</legend>
           <NumberField name="supply.staticPressure" label="Static pressure" unit={u.pressure} />
@@ -134,19 +181,9 @@ function DemandFields() {
   );
 }
 
-function SupplyToggle() {
-  const { register } = useFormContext<SystemDemandFormValues>();
-  return (
-    <label className="inline-flex min-h-11 items-center gap-2">
-      <input type="checkbox" {...register("useSupply")} />
-      Compare with a hydrant flow test
-    </label>
-  );
-}
-
 export function SystemDemandCalculator({ preset, embedded }: CalculatorProps) {
   const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset)), [preset]);
-  const state = useCalculator("system-demand", systemDemandSchema, defaults);
+  const state = useCalculator("system-demand", defaults);
   return (
     <CalculatorShell id="system-demand" state={state} embedded={embedded}>
       <DemandFields />

@@ -1,4 +1,4 @@
-import type { Units } from "@/lib/hydraulics";
+import type { Units } from "@/lib/hydraulics/shared";
 
 /** the unit names a form shows beside its fields */
 export function unitLabels(units: Units | undefined) {

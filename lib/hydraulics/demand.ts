@@ -1,4 +1,7 @@
 /**
+ * (Over 300 lines on purpose: the walk back from the sprinklers, the balancing at the split point
+ * and the supply path share one segment calculation and one step format; split, they would drift.)
+ *
  * System demand: the flow and pressure needed at the water source to deliver the design sprinklers'
  * flows, following the path back from the sprinklers and adding, step by step, each segment's
  * friction (pipe plus fitting equivalent length), its elevation change and the device losses.
@@ -13,13 +16,12 @@
  * The number of design sprinklers, their listed flows and pressures, and whether domestic flow must
  * be added all come from the sprinkler's listing and the adopted code — they are inputs here.
  */
-import { HydraulicsInputError, INPUT_LIMITS, requireNonNegative, requirePositive } from "./errors";
+import { HydraulicsInputError, INPUT_LIMITS, requireInRange, requireNonNegative, requirePositive } from "./errors";
 import { elevationChangePsi } from "./elevation";
-import { fittingsEquivalentLength, type FittingInput, type FittingKind, type FittingLengthItem } from "./fittings";
-import { frictionLossPsiPerFt } from "./friction";
+import { fittingsEquivalentLength, type FittingInput, type FittingLengthItem } from "./fittings";
+import { frictionLossPsiPerFt, pipeVelocityFtPerS } from "./friction";
 import { hazenWilliamsC, pipeDimensions, type NominalSize, type PipeMaterial } from "./pipe-data";
 import { designSprinklerPoint } from "./sprinkler";
-import { K_SI_PER_K_US, L_PER_GAL, M_PER_FT, MM_PER_IN, PSI_PER_BAR } from "./units";
 
 export interface PipeSegmentInput {
   label?: string;
@@ -45,6 +47,8 @@ export interface DesignSprinklerInput {
   minFlowGpm: number;
   /** listed minimum pressure, psi, if the listing gives one */
   minPressurePsi?: number;
+  /** the coverage area this sprinkler protects, ft² (for NFPA 13D's minimum density check) */
+  coverageAreaSqFt?: number;
   /** pipe from the split point to this sprinkler, in flow order */
   branch?: PipeSegmentInput[];
 }
@@ -70,8 +74,12 @@ export interface SegmentDetail {
   material: PipeMaterial;
   nominalSize: NominalSize;
   insideDiameterIn: number;
+  /** "entered" when the user gave the listed inside diameter, else the table's basis */
+  insideDiameterBasis: string;
   cFactor: number;
   lengthFt: number;
+  /** mean velocity at this segment's flow, ft/s */
+  velocityFtPerS: number;
   fittings: FittingLengthItem[];
   fittingsEquivalentFt: number;
   totalLengthFt: number;
@@ -105,6 +113,8 @@ export interface SystemDemandResult {
   clampedAtZero: boolean;
 }
 
+const round2 = (v: number) => String(Math.round(v * 100) / 100);
+
 interface SegmentCalc {
   detail: SegmentDetail;
   addedPsi: number;
@@ -114,7 +124,10 @@ interface SegmentCalc {
 function segmentLoss(seg: PipeSegmentInput, flowGpm: number, field: string): SegmentCalc {
   const dims = pipeDimensions(seg.material, seg.nominalSize, `${field}.`);
   const cFactor = seg.cFactor ?? hazenWilliamsC(seg.material, `${field}.material`);
-  const insideDiameterIn = seg.insideDiameterIn ?? dims.insideDiameterIn;
+  const insideDiameterIn =
+    seg.insideDiameterIn === undefined
+      ? dims.insideDiameterIn
+      : requireInRange(`${field}.insideDiameterIn`, seg.insideDiameterIn, INPUT_LIMITS.insideDiameterIn.min, INPUT_LIMITS.insideDiameterIn.max);
   const lengthFt = requireNonNegative(`${field}.lengthFt`, seg.lengthFt, INPUT_LIMITS.lengthFt);
   const fit = fittingsEquivalentLength(seg.material, seg.nominalSize, seg.fittings ?? [], {
     cFactor: seg.cFactor,
@@ -141,8 +154,10 @@ function segmentLoss(seg: PipeSegmentInput, flowGpm: number, field: string): Seg
       material: seg.material,
       nominalSize: seg.nominalSize,
       insideDiameterIn,
+      insideDiameterBasis: seg.insideDiameterIn === undefined ? dims.boreBasis : "entered from the pipe's listing",
       cFactor,
       lengthFt,
+      velocityFtPerS: pipeVelocityFtPerS(flowGpm, insideDiameterIn),
       fittings: fit.items,
       fittingsEquivalentFt: fit.totalFt,
       totalLengthFt,
@@ -203,7 +218,7 @@ export function systemDemand(input: SystemDemandInput): SystemDemandResult {
     const field = `sprinklers[${i}]`;
     let point;
     try {
-      point = designSprinklerPoint(s.kFactor, s.minFlowGpm, s.minPressurePsi);
+      point = designSprinklerPoint(s.kFactor, s.minFlowGpm, s.minPressurePsi, s.coverageAreaSqFt);
     } catch (e) {
       if (e instanceof HydraulicsInputError) throw new HydraulicsInputError(`${field}.${e.field}`, e.reason);
       throw e;
@@ -290,13 +305,14 @@ export function systemDemand(input: SystemDemandInput): SystemDemandResult {
       : requireNonNegative("additionalFlowGpm", input.additionalFlowGpm, INPUT_LIMITS.flowGpm);
   const totalFlow = sprinklerFlow + additional;
   if (additional > 0) {
+    // the step's flow is the ADDED flow; the total it makes is in the note and on the pipe steps that follow
     steps.push({
       kind: "additional-flow",
       label: "Additional flow",
-      flowGpm: totalFlow,
+      flowGpm: additional,
       pressureAddedPsi: 0,
       pressureRequiredPsi: nodePsi,
-      note: `${additional} gpm entered as drawn at the same time through the supply path.`,
+      note: `drawn at the same time through the supply path: sprinklers ${round2(sprinklerFlow)} + additional ${round2(additional)} = ${round2(totalFlow)} gpm`,
     });
   }
 
@@ -337,103 +353,3 @@ export function systemDemand(input: SystemDemandInput): SystemDemandResult {
   return { flowGpm: totalFlow, pressurePsi: p, sprinklers, steps, clampedAtZero };
 }
 
-/* ---------- SI entry point: metres, L/min, bar, K in L/min/bar^0.5 ---------- */
-
-export type FittingInputSi =
-  | { kind: FittingKind; count?: number }
-  | { label: string; equivalentLengthM: number; count?: number };
-
-export interface PipeSegmentInputSi {
-  label?: string;
-  material: PipeMaterial;
-  nominalSize: NominalSize;
-  lengthM: number;
-  fittings?: FittingInputSi[];
-  elevationChangeM?: number;
-  cFactor?: number;
-  insideDiameterMm?: number;
-  flowLpm?: number;
-}
-
-export interface DesignSprinklerInputSi {
-  label?: string;
-  kFactorSi: number;
-  minFlowLpm: number;
-  minPressureBar?: number;
-  branch?: PipeSegmentInputSi[];
-}
-
-export interface SystemDemandInputSi {
-  sprinklers: DesignSprinklerInputSi[];
-  supplyPath: PipeSegmentInputSi[];
-  deviceLosses?: { label: string; lossBar: number }[];
-  additionalFlowLpm?: number;
-}
-
-export interface SystemDemandResultSi {
-  flowLpm: number;
-  pressureBar: number;
-  /** the same calculation in US units, step by step */
-  us: SystemDemandResult;
-}
-
-const SI_FIELD_NAMES: Record<string, string> = {
-  lengthFt: "lengthM",
-  elevationChangeFt: "elevationChangeM",
-  kFactor: "kFactorSi",
-  minFlowGpm: "minFlowLpm",
-  minPressurePsi: "minPressureBar",
-  lossPsi: "lossBar",
-  flowGpm: "flowLpm",
-  insideDiameterIn: "insideDiameterMm",
-  equivalentLengthFt: "equivalentLengthM",
-  additionalFlowGpm: "additionalFlowLpm",
-};
-
-/** rename the last part of a US field path to its SI input name */
-export function siFieldName(field: string): string {
-  return field.replace(/([A-Za-z]+)$/, (name) => SI_FIELD_NAMES[name] ?? name);
-}
-
-const num = (v: unknown) => (typeof v === "number" ? v : Number.NaN);
-const optional = <T>(v: T | undefined, f: (x: T) => number) => (v === undefined ? undefined : f(v));
-
-function segmentToUs(seg: PipeSegmentInputSi): PipeSegmentInput {
-  return {
-    label: seg.label,
-    material: seg.material,
-    nominalSize: seg.nominalSize,
-    lengthFt: num(seg.lengthM) / M_PER_FT,
-    elevationChangeFt: optional(seg.elevationChangeM, (m) => num(m) / M_PER_FT),
-    cFactor: seg.cFactor,
-    insideDiameterIn: optional(seg.insideDiameterMm, (mm) => num(mm) / MM_PER_IN),
-    flowGpm: optional(seg.flowLpm, (l) => num(l) / L_PER_GAL),
-    fittings: seg.fittings?.map((f) =>
-      "equivalentLengthM" in f
-        ? { label: f.label, equivalentLengthFt: num(f.equivalentLengthM) / M_PER_FT, count: f.count }
-        : { kind: f.kind, count: f.count },
-    ),
-  };
-}
-
-export function systemDemandSi(input: SystemDemandInputSi): SystemDemandResultSi {
-  const us: SystemDemandInput = {
-    sprinklers: (input.sprinklers ?? []).map((s) => ({
-      label: s.label,
-      kFactor: num(s.kFactorSi) / K_SI_PER_K_US,
-      minFlowGpm: num(s.minFlowLpm) / L_PER_GAL,
-      minPressurePsi: optional(s.minPressureBar, (b) => num(b) * PSI_PER_BAR),
-      branch: s.branch?.map(segmentToUs),
-    })),
-    supplyPath: (input.supplyPath ?? []).map(segmentToUs),
-    deviceLosses: input.deviceLosses?.map((d) => ({ label: d.label, lossPsi: num(d.lossBar) * PSI_PER_BAR })),
-    additionalFlowGpm: optional(input.additionalFlowLpm, (l) => num(l) / L_PER_GAL),
-  };
-  try {
-    const result = systemDemand(us);
-    return { flowLpm: result.flowGpm * L_PER_GAL, pressureBar: result.pressurePsi / PSI_PER_BAR, us: result };
-  } catch (e) {
-    if (e instanceof HydraulicsInputError) throw new HydraulicsInputError(siFieldName(e.field), e.reason);
-    throw e;
-  }
-}

@@ -8,7 +8,7 @@
  * Colder water is very slightly heavier; the difference is far below the rounding of any gauge.
  */
 import { INPUT_LIMITS, requireInRange, requireNonNegative } from "./errors";
-import { CU_M_PER_CU_FT, KG_PER_LB, M_PER_FT, PA_PER_BAR, STANDARD_GRAVITY_M_PER_S2 } from "./units";
+import { CU_M_PER_CU_FT, KG_PER_LB, PA_PER_BAR, STANDARD_GRAVITY_M_PER_S2 } from "./units";
 
 export const WATER_DENSITY_LB_PER_CU_FT = 62.37;
 export const WATER_DENSITY_KG_PER_CU_M = (WATER_DENSITY_LB_PER_CU_FT * KG_PER_LB) / CU_M_PER_CU_FT;
@@ -19,11 +19,6 @@ export const BAR_PER_M_OF_WATER = (WATER_DENSITY_KG_PER_CU_M * STANDARD_GRAVITY_
 /** pressure in psi of a water column heightFt tall (height zero or more) */
 export function headPressurePsi(heightFt: number): number {
   return requireNonNegative("heightFt", heightFt, INPUT_LIMITS.elevationFt) * PSI_PER_FT_OF_WATER;
-}
-
-/** pressure in bar of a water column heightM tall */
-export function headPressureBar(heightM: number): number {
-  return requireNonNegative("heightM", heightM, INPUT_LIMITS.elevationFt * M_PER_FT) * BAR_PER_M_OF_WATER;
 }
 
 /**

@@ -13,7 +13,7 @@
  * pipe maker's listing, and the caller must pass them as `equivalentLengthFt`.
  */
 import { HydraulicsInputError, INPUT_LIMITS, requireInRange, requireInteger, requireNonNegative } from "./errors";
-import { NOMINAL_SIZES, PIPE_DATA, pipeDimensions, type NominalSize, type PipeMaterial } from "./pipe-data";
+import { PIPE_DATA, pipeDimensions, type NominalSize, type PipeMaterial } from "./pipe-data";
 
 export const FITTING_KINDS = [
   "elbow-45",
@@ -163,6 +163,3 @@ export function fittingsEquivalentLength(
   return { totalFt: items.reduce((sum, it) => sum + it.totalFt, 0), items };
 }
 
-/** the nominal sizes at which the chart has a value for a fitting */
-export const chartSizesFor = (kind: FittingKind): NominalSize[] =>
-  NOMINAL_SIZES.filter((s) => STEEL_40_EQUIVALENT_LENGTH_FT[kind][s] !== null);

@@ -13,7 +13,6 @@
  * gauge and the building is carried separately (a segment's elevation change in the demand).
  */
 import { HydraulicsInputError, INPUT_LIMITS, requireNonNegative, requirePositive } from "./errors";
-import { L_PER_GAL, PSI_PER_BAR } from "./units";
 
 export const FLOW_TEST_PRESSURE_EXPONENT = 1.85;
 export const FLOW_TEST_FLOW_EXPONENT = 0.54;
@@ -22,12 +21,6 @@ export interface FlowTest {
   staticPsi: number;
   residualPsi: number;
   testFlowGpm: number;
-}
-
-export interface FlowTestSi {
-  staticBar: number;
-  residualBar: number;
-  testFlowLpm: number;
 }
 
 function checkFlowTest(test: FlowTest): FlowTest {
@@ -70,48 +63,6 @@ export function flowAtResidualGpm(test: FlowTest, residualTargetPsi: number): nu
   const hR = t.staticPsi - target;
   const hF = t.staticPsi - t.residualPsi;
   return t.testFlowGpm * (hR / hF) ** FLOW_TEST_FLOW_EXPONENT;
-}
-
-const toUs = (t: FlowTestSi): FlowTest => ({
-  staticPsi: t.staticBar * PSI_PER_BAR,
-  residualPsi: t.residualBar * PSI_PER_BAR,
-  testFlowGpm: t.testFlowLpm / L_PER_GAL,
-});
-
-function checkSi(t: FlowTestSi): void {
-  requirePositive("staticBar", t.staticBar, INPUT_LIMITS.pressurePsi / PSI_PER_BAR);
-  requireNonNegative("residualBar", t.residualBar, INPUT_LIMITS.pressurePsi / PSI_PER_BAR);
-  if (t.residualBar >= t.staticBar) throw new HydraulicsInputError("residualBar", "must be below the static pressure");
-  requirePositive("testFlowLpm", t.testFlowLpm, INPUT_LIMITS.flowGpm * L_PER_GAL);
-}
-
-/** SI form of flowTestAvailablePsi: bar at a flow in L/min (the formula is unit-free) */
-export function flowTestAvailableBar(
-  test: FlowTestSi,
-  flowLpm: number,
-): { pressureBar: number; beyondSupply: boolean; extrapolated: boolean } {
-  checkSi(test);
-  const q = requireNonNegative("demandFlowLpm", flowLpm, INPUT_LIMITS.flowGpm * L_PER_GAL);
-  const r = flowTestAvailablePsi(toUs(test), q / L_PER_GAL);
-  return { pressureBar: r.pressurePsi / PSI_PER_BAR, beyondSupply: r.beyondSupply, extrapolated: r.extrapolated };
-}
-
-/** SI form of flowAtResidualGpm */
-export function flowAtResidualLpm(test: FlowTestSi, residualTargetBar: number): number {
-  checkSi(test);
-  const target = requireNonNegative("residualTargetBar", residualTargetBar, INPUT_LIMITS.pressurePsi / PSI_PER_BAR);
-  if (target >= test.staticBar) throw new HydraulicsInputError("residualTargetBar", "must be below the static pressure");
-  return flowAtResidualGpm(toUs(test), target * PSI_PER_BAR) * L_PER_GAL;
-}
-
-/** points on the supply curve from zero flow to maxFlowGpm, for a chart */
-export function supplyCurve(test: FlowTest, maxFlowGpm: number, points = 41): { flowGpm: number; pressurePsi: number }[] {
-  const max = requirePositive("maxFlowGpm", maxFlowGpm, INPUT_LIMITS.flowGpm);
-  const n = Math.max(2, Math.min(500, Math.floor(points)));
-  return Array.from({ length: n }, (_, i) => {
-    const flowGpm = (max * i) / (n - 1);
-    return { flowGpm, pressurePsi: flowTestAvailablePsi(test, flowGpm).pressurePsi };
-  });
 }
 
 export interface DemandPoint {

@@ -9,8 +9,7 @@
  * function uses its own standard's printed constant, so the two agree to about 0.1 %.
  */
 import { INPUT_LIMITS, requireFiniteResult, requireInRange, requireNonNegative } from "./errors";
-import { pipeDimensions, hazenWilliamsC, type NominalSize, type PipeMaterial } from "./pipe-data";
-import { L_PER_GAL, MM_PER_IN, M_PER_FT } from "./units";
+import { L_PER_GAL, MM_PER_IN } from "./units";
 
 export const HAZEN_WILLIAMS_US_CONSTANT = 4.52;
 export const HAZEN_WILLIAMS_SI_CONSTANT = 6.05e5;
@@ -63,58 +62,14 @@ export function frictionLossPsi(input: {
   );
 }
 
-/** total friction loss in bar over a length in metres */
-export function frictionLossBar(input: {
-  flowLpm: number;
-  lengthM: number;
-  cFactor: number;
-  insideDiameterMm: number;
-}): number {
-  const length = requireNonNegative("lengthM", input.lengthM, INPUT_LIMITS.lengthFt * M_PER_FT);
-  return requireFiniteResult(
-    "lossBar",
-    frictionLossBarPerM(input.flowLpm, input.cFactor, input.insideDiameterMm) * length,
-  );
-}
-
-export interface PipeFrictionResult {
-  material: PipeMaterial;
-  nominalSize: NominalSize;
-  insideDiameterIn: number;
-  cFactor: number;
-  flowGpm: number;
-  lengthFt: number;
-  lossPsiPerFt: number;
-  lossPsi: number;
-  /** where the ID and C came from */
-  insideDiameterSource: string;
-  cFactorSource: "table" | "entered";
-}
-
-/** friction loss in a run of a tabulated pipe, with optional overrides from the maker's listing */
-export function pipeFrictionLoss(input: {
-  material: PipeMaterial;
-  nominalSize: NominalSize;
-  flowGpm: number;
-  lengthFt: number;
-  cFactor?: number;
-  insideDiameterIn?: number;
-}): PipeFrictionResult {
-  const dims = pipeDimensions(input.material, input.nominalSize);
-  const cFactor = input.cFactor ?? hazenWilliamsC(input.material);
-  const insideDiameterIn = input.insideDiameterIn ?? dims.insideDiameterIn;
-  const lossPsiPerFt = frictionLossPsiPerFt(input.flowGpm, cFactor, insideDiameterIn);
-  const lengthFt = requireNonNegative("lengthFt", input.lengthFt, INPUT_LIMITS.lengthFt);
-  return {
-    material: input.material,
-    nominalSize: input.nominalSize,
-    insideDiameterIn,
-    cFactor,
-    flowGpm: input.flowGpm,
-    lengthFt,
-    lossPsiPerFt,
-    lossPsi: requireFiniteResult("lossPsi", lossPsiPerFt * lengthFt),
-    insideDiameterSource: input.insideDiameterIn === undefined ? dims.source : "entered (maker's listed ID)",
-    cFactorSource: input.cFactor === undefined ? "table" : "entered",
-  };
+/**
+ * Mean water velocity in a pipe, ft/s: flow (gpm × 231 in³ per gallon ÷ 60 s) over the bore's area
+ * (π d² ÷ 4 in²), turned into ft/s — about 0.4085 × Q ÷ d². Shown beside friction because a high
+ * velocity means noise, wear and water hammer in the pipe.
+ */
+export function pipeVelocityFtPerS(flowGpm: number, insideDiameterIn: number): number {
+  const q = requireNonNegative("flowGpm", flowGpm, INPUT_LIMITS.flowGpm);
+  const d = requireInRange("insideDiameterIn", insideDiameterIn, INPUT_LIMITS.insideDiameterIn.min, INPUT_LIMITS.insideDiameterIn.max);
+  const cubicInchesPerSecond = (q * 231) / 60;
+  return cubicInchesPerSecond / ((Math.PI * d * d) / 4) / 12;
 }

@@ -1,10 +1,12 @@
 /**
  * Riser's hydraulics library: the public face. Pure TypeScript (no React, no Node-only APIs), used
- * by the calculators in the browser, the quiz grader and the PDF summary on the server.
+ * by the calculators in the browser, the quiz grader and the PDF summary on the server. Forms and
+ * pages that need only the catalog, schemas and types import `@/lib/hydraulics/shared`.
  *
  * A teaching and checking aid, not a stamped design: the sprinkler's listing, the adopted code with
  * its local amendments and the authority having jurisdiction govern.
  */
+export * from "./shared";
 export { HydraulicsInputError, isHydraulicsInputError, INPUT_LIMITS } from "./errors";
 export {
   M_PER_FT,
@@ -17,55 +19,24 @@ export {
   PSI_PER_BAR,
   SQ_M_PER_SQ_FT,
   K_SI_PER_K_US,
-  gpmToLpm,
-  lpmToGpm,
-  galToL,
-  lToGal,
-  psiToBar,
-  barToPsi,
-  ftToM,
-  mToFt,
-  inToMm,
-  mmToIn,
-  sqFtToSqM,
-  sqMToSqFt,
-  psiPerFtToBarPerM,
-  barPerMToPsiPerFt,
-  kFactorUsToSi,
-  kFactorSiToUs,
+  toUs,
+  fromUs,
 } from "./units";
 export {
   sprinklerFlowGpm,
   sprinklerPressurePsi,
-  sprinklerFlowLpm,
-  sprinklerPressureBar,
   designSprinklerPoint,
+  designSprinklerPressurePsi,
+  type DesignPointGovernor,
 } from "./sprinkler";
-export {
-  PIPE_MATERIALS,
-  NOMINAL_SIZES,
-  PIPE_DATA,
-  isPipeMaterial,
-  isNominalSize,
-  pipeDimensions,
-  pipeInsideDiameterIn,
-  pipeInsideDiameterMm,
-  hazenWilliamsC,
-  sizesFor,
-  type PipeMaterial,
-  type NominalSize,
-  type PipeMaterialInfo,
-  type PipeDimensions,
-} from "./pipe-data";
+export { pipeDimensions, pipeInsideDiameterIn, hazenWilliamsC, type PipeMaterialInfo, type PipeDimensions } from "./pipe-data";
 export {
   HAZEN_WILLIAMS_US_CONSTANT,
   HAZEN_WILLIAMS_SI_CONSTANT,
   frictionLossPsiPerFt,
   frictionLossBarPerM,
   frictionLossPsi,
-  frictionLossBar,
-  pipeFrictionLoss,
-  type PipeFrictionResult,
+  pipeVelocityFtPerS,
 } from "./friction";
 export {
   FITTING_KINDS,
@@ -74,7 +45,6 @@ export {
   C_FACTOR_MULTIPLIERS,
   cFactorMultiplier,
   fittingsEquivalentLength,
-  chartSizesFor,
   type FittingKind,
   type FittingInput,
   type FittingLengthItem,
@@ -85,23 +55,18 @@ export {
   PSI_PER_FT_OF_WATER,
   BAR_PER_M_OF_WATER,
   headPressurePsi,
-  headPressureBar,
   elevationChangePsi,
 } from "./elevation";
 export {
   flowTestAvailablePsi,
-  flowTestAvailableBar,
   flowAtResidualGpm,
-  flowAtResidualLpm,
-  supplyCurve,
   supplyMargin,
   type FlowTest,
-  type FlowTestSi,
   type AvailablePressure,
   type DemandPoint,
   type SupplyMarginResult,
 } from "./flow-test";
-export { storedWaterGal, storedWaterL } from "./storage";
+export { storedWaterGal } from "./storage";
 export {
   roomCoverage,
   sprinklersNeeded,
@@ -112,8 +77,6 @@ export {
 } from "./coverage";
 export {
   systemDemand,
-  systemDemandSi,
-  siFieldName,
   type PipeSegmentInput,
   type DesignSprinklerInput,
   type DeviceLossInput,
@@ -121,49 +84,10 @@ export {
   type SystemDemandResult,
   type DemandStep,
   type SegmentDetail,
-  type PipeSegmentInputSi,
-  type DesignSprinklerInputSi,
-  type FittingInputSi,
-  type SystemDemandInputSi,
-  type SystemDemandResultSi,
 } from "./demand";
-export {
-  DISPLAY_STEPS,
-  displayDecimals,
-  roundForDisplay,
-  formatForDisplay,
-  type DisplayUnit,
-  type RoundingDirection,
-} from "./rounding";
+export { calculatorReport, parseCalculatorInput, FITTING_NAMES, NOMINAL_BORE_NOTE } from "./reports";
+export { shownMargin } from "./reports/common";
+export { calculatorFormSchema, fieldLabel } from "./form-schema";
 
 /** the caution every calculator shows */
-export { CALCULATOR_CAUTION_TEXT as CALCULATOR_CAUTION } from "./reports";
-
-export {
-  CALCULATOR_IDS,
-  CALCULATOR_INFO,
-  CALCULATOR_CAUTION_TEXT,
-  EXAMPLE_SYSTEM_DEMAND,
-  FITTING_NAMES,
-  calculatorReport,
-  inputFromPreset,
-  isCalculatorId,
-  convertInputUnits,
-  INPUT_QUANTITY,
-  type CalculatorId,
-  type CalculatorInputs,
-  type CalculatorReport,
-  type ReportChart,
-  type ReportLine,
-  type ReportResult,
-  type ReportStep,
-  type Units,
-  type SprinklerFlowReportInput,
-  type FrictionLossReportInput,
-  type ElevationReportInput,
-  type FlowTestReportInput,
-  type StoredWaterReportInput,
-  type RoomCoverageReportInput,
-  type SegmentReportInput,
-  type SystemDemandReportInput,
-} from "./reports";
+export { CALCULATOR_CAUTION_TEXT as CALCULATOR_CAUTION } from "./catalog";

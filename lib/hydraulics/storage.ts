@@ -4,7 +4,6 @@
  * check the adopted edition) — this only multiplies.
  */
 import { INPUT_LIMITS, requireFiniteResult, requirePositive } from "./errors";
-import { L_PER_GAL } from "./units";
 
 /** gallons = gpm × minutes */
 export function storedWaterGal(flowGpm: number, durationMin: number): number {
@@ -13,9 +12,3 @@ export function storedWaterGal(flowGpm: number, durationMin: number): number {
   return requireFiniteResult("volumeGal", q * t);
 }
 
-/** litres = L/min × minutes */
-export function storedWaterL(flowLpm: number, durationMin: number): number {
-  const q = requirePositive("flowLpm", flowLpm, INPUT_LIMITS.flowGpm * L_PER_GAL);
-  const t = requirePositive("durationMin", durationMin, INPUT_LIMITS.durationMin);
-  return requireFiniteResult("volumeL", q * t);
-}

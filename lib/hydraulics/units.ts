@@ -26,24 +26,27 @@ export const CU_M_PER_CU_FT = M_PER_FT ** 3;
  */
 export const K_SI_PER_K_US = L_PER_GAL * Math.sqrt(PSI_PER_BAR);
 
-export const gpmToLpm = (flowGpm: number, field = "flowGpm") => requireFinite(field, flowGpm) * L_PER_GAL;
-export const lpmToGpm = (flowLpm: number, field = "flowLpm") => requireFinite(field, flowLpm) / L_PER_GAL;
-export const galToL = (volumeGal: number, field = "volumeGal") => requireFinite(field, volumeGal) * L_PER_GAL;
-export const lToGal = (volumeL: number, field = "volumeL") => requireFinite(field, volumeL) / L_PER_GAL;
-export const psiToBar = (pressurePsi: number, field = "pressurePsi") =>
-  requireFinite(field, pressurePsi) / PSI_PER_BAR;
-export const barToPsi = (pressureBar: number, field = "pressureBar") =>
-  requireFinite(field, pressureBar) * PSI_PER_BAR;
-export const ftToM = (lengthFt: number, field = "lengthFt") => requireFinite(field, lengthFt) * M_PER_FT;
-export const mToFt = (lengthM: number, field = "lengthM") => requireFinite(field, lengthM) / M_PER_FT;
-export const inToMm = (lengthIn: number, field = "lengthIn") => requireFinite(field, lengthIn) * MM_PER_IN;
-export const mmToIn = (lengthMm: number, field = "lengthMm") => requireFinite(field, lengthMm) / MM_PER_IN;
-export const sqFtToSqM = (areaSqFt: number, field = "areaSqFt") => requireFinite(field, areaSqFt) * SQ_M_PER_SQ_FT;
-export const sqMToSqFt = (areaSqM: number, field = "areaSqM") => requireFinite(field, areaSqM) / SQ_M_PER_SQ_FT;
-export const psiPerFtToBarPerM = (lossPsiPerFt: number, field = "lossPsiPerFt") =>
-  requireFinite(field, lossPsiPerFt) / PSI_PER_BAR / M_PER_FT;
-export const barPerMToPsiPerFt = (lossBarPerM: number, field = "lossBarPerM") =>
-  requireFinite(field, lossBarPerM) * PSI_PER_BAR * M_PER_FT;
-export const kFactorUsToSi = (kFactorUs: number, field = "kFactor") => requireFinite(field, kFactorUs) * K_SI_PER_K_US;
-export const kFactorSiToUs = (kFactorSi: number, field = "kFactorSi") =>
-  requireFinite(field, kFactorSi) / K_SI_PER_K_US;
+/* ---------- the one conversion path: reports, the form's unit switch and the PDF all use it ---------- */
+
+export type Units = "us" | "si";
+export type Quantity = "pressure" | "flow" | "length" | "diameter" | "area" | "volume" | "k" | "lossPerLength" | "velocity";
+
+const US_PER_SI: Record<Quantity, number> = {
+  pressure: PSI_PER_BAR, // psi per bar
+  flow: 1 / L_PER_GAL, // gpm per L/min
+  length: 1 / M_PER_FT, // ft per m
+  diameter: 1 / MM_PER_IN, // in per mm
+  area: 1 / SQ_M_PER_SQ_FT, // ft² per m²
+  volume: 1 / L_PER_GAL, // gal per L
+  k: 1 / K_SI_PER_K_US, // K_US per K_SI
+  lossPerLength: PSI_PER_BAR * M_PER_FT, // psi/ft per bar/m
+  velocity: 1 / M_PER_FT, // ft/s per m/s
+};
+
+/** a value in `units` to US customary */
+export const toUs = (quantity: Quantity, value: number, units: Units): number =>
+  units === "si" ? requireFinite(quantity, value) * US_PER_SI[quantity] : requireFinite(quantity, value);
+
+/** a US customary value to `units` */
+export const fromUs = (quantity: Quantity, value: number, units: Units): number =>
+  units === "si" ? requireFinite(quantity, value) / US_PER_SI[quantity] : requireFinite(quantity, value);

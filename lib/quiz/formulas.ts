@@ -6,11 +6,11 @@
 import type { ParametricFormula } from "../content/schema";
 import {
   HydraulicsInputError,
+  designSprinklerPressurePsi,
   flowTestAvailablePsi,
   frictionLossPsi,
   headPressurePsi,
   sprinklerFlowGpm,
-  sprinklerPressurePsi,
   sprinklersNeeded,
   storedWaterGal,
 } from "../hydraulics";
@@ -28,7 +28,8 @@ function param(params: FormulaParams, name: string): number {
 
 export const formulas = {
   sprinklerFlowGpm: (p) => sprinklerFlowGpm(param(p, "kFactor"), param(p, "pressurePsi")),
-  sprinklerPressurePsi: (p) => sprinklerPressurePsi(param(p, "kFactor"), param(p, "flowGpm")),
+  // the pressure a design sprinkler needs: (Q/K)², never below NFPA 13D's 7 psi (CODE_FLOORS)
+  sprinklerPressurePsi: (p) => designSprinklerPressurePsi(param(p, "kFactor"), param(p, "flowGpm")),
   elevationPsi: (p) => headPressurePsi(param(p, "heightFt")),
   frictionLossPsi: (p) =>
     frictionLossPsi({

@@ -43,3 +43,58 @@ test("the flow-test calculator shows supply against demand with a pass or short 
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21aa"]).analyze();
   expect(results.violations.map((v) => `${v.id} ${v.nodes[0]?.target}`)).toEqual([]);
 });
+
+test("system demand at phone width keeps a result summary in view, and its chart shows the demand point clear of the axes", async ({ page }) => {
+  await signInAs(page, "callum@quillmoor.example");
+  await page.setViewportSize({ width: 360, height: 780 });
+  await page.goto("/tools/system-demand");
+  const bar = page.locator("[data-summary-bar]");
+  // at the top of the inputs, the summary bar is already on screen with the demand and the verdict
+  await expect(bar).toBeInViewport();
+  await expect(bar).toContainText("psi");
+  await expect(bar).toContainText(/Pass|Short/);
+  // editing an input far down the form: the bar is still on screen and follows the change
+  const additional = page.getByLabel(/^Additional flow at the same time/);
+  await additional.scrollIntoViewIfNeeded();
+  await expect(bar).toBeInViewport();
+  const before = await bar.innerText();
+  await additional.fill("5");
+  await expect(bar).not.toHaveText(before);
+  await expect(bar).toBeInViewport();
+  // the additional-flow step shows the flow added, not the total
+  await expect(page.getByText("Additional flow: 5.0 gpm")).toBeVisible();
+
+  await page.setViewportSize({ width: 1280, height: 900 });
+  const chart = page.locator(".recharts-wrapper");
+  await chart.scrollIntoViewIfNeeded();
+  await expect(chart).toBeVisible();
+  const wrapper = (await chart.boundingBox())!;
+  const label = (await page.locator(".recharts-wrapper text", { hasText: "Demand" }).first().boundingBox())!;
+  // the label sits wholly inside the chart …
+  expect(label.x).toBeGreaterThanOrEqual(wrapper.x);
+  expect(label.x + label.width).toBeLessThanOrEqual(wrapper.x + wrapper.width);
+  expect(label.y).toBeGreaterThanOrEqual(wrapper.y);
+  // … and over no axis tick label
+  const ticks = await page.locator(".recharts-cartesian-axis-tick-value").all();
+  expect(ticks.length).toBeGreaterThan(4);
+  for (const t of ticks) {
+    const b = (await t.boundingBox())!;
+    const overlaps = b.x < label.x + label.width && label.x < b.x + b.width && b.y < label.y + label.height && label.y < b.y + b.height;
+    expect(overlaps).toBe(false);
+  }
+  // the demand point sits well inside the flow axis (not squashed against 0)
+  await expect(page.locator('figure[aria-label="Demand versus supply"] figcaption')).toContainText(/shown up to/);
+});
+
+test("friction loss in 1 in CPVC uses the average bore and lets the listed inside diameter govern", async ({ page }) => {
+  await signInAs(page, "callum@quillmoor.example");
+  await page.goto("/tools/friction-loss");
+  await page.getByLabel("Pipe material").selectOption("cpvc");
+  await page.getByLabel("Nominal size").selectOption("1");
+  // ASTM F442 SDR 13.5, 1 in: OD 1.315 − 2 × (0.097 + 0.010) = 1.101 in average bore (tolerance from memory — verify)
+  await expect(page.locator('[data-report="friction-loss"]')).toContainText("1.101 in");
+  await page.getByText("Maker's listed values (optional)").click();
+  await page.getByLabel(/^Listed inside diameter/).fill("1.09");
+  await expect(page.locator('[data-report="friction-loss"]')).toContainText("1.090 in");
+  await expect(page.locator('[data-report="friction-loss"]')).toContainText(/nominal overstates loss/);
+});

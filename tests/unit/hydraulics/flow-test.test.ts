@@ -3,15 +3,9 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { evaluate, unit } from "mathjs";
-import {
-  HydraulicsInputError,
-  flowAtResidualGpm,
-  flowAtResidualLpm,
-  flowTestAvailableBar,
-  flowTestAvailablePsi,
-  supplyCurve,
-  supplyMargin,
-} from "../../../lib/hydraulics";
+import { HydraulicsInputError, calculatorReport, flowAtResidualGpm, flowTestAvailablePsi, supplyMargin } from "../../../lib/hydraulics";
+
+const result = (r: ReturnType<typeof calculatorReport>, label: string) => r.results.find((x) => x.label.startsWith(label))!.value;
 
 // An NFPA 291-style worked example with invented readings (Juniper Flats, hydrant on the test main):
 // static 72 psi, residual 58 psi while flowing 1,040 gpm. Expected values are computed here
@@ -96,28 +90,31 @@ describe("properties", () => {
       }),
     );
   });
-  it("US and SI agree after conversion (mathjs)", () => {
+  it("US and SI agree after conversion (mathjs), through the calculator's SI path", () => {
     fc.assert(
       fc.property(test, fc.double({ min: 0, max: 2000, noNaN: true }), (t, q) => {
-        const si = {
-          staticBar: unit(t.staticPsi, "psi").toNumber("bar"),
-          residualBar: unit(t.residualPsi, "psi").toNumber("bar"),
-          testFlowLpm: unit(t.testFlowGpm, "gal/min").toNumber("L/min"),
-        };
+        const si = calculatorReport("flow-test", {
+          units: "si",
+          staticPressure: unit(t.staticPsi, "psi").toNumber("bar"),
+          residualPressure: unit(t.residualPsi, "psi").toNumber("bar"),
+          testFlow: unit(t.testFlowGpm, "gal/min").toNumber("L/min"),
+          demandFlow: unit(q, "gal/min").toNumber("L/min"),
+          residualTarget: unit(t.residualPsi / 2, "psi").toNumber("bar"),
+        });
         const us = flowTestAvailablePsi(t, q).pressurePsi;
-        const bar = flowTestAvailableBar(si, unit(q, "gal/min").toNumber("L/min")).pressureBar;
+        const bar = result(si, "Pressure available");
         expect(Math.abs(unit(bar, "bar").toNumber("psi") - us)).toBeLessThan(1e-7 * Math.max(1, us));
         const qR = flowAtResidualGpm(t, t.residualPsi / 2);
-        const qRSi = flowAtResidualLpm(si, si.residualBar / 2);
+        const qRSi = result(si, "Flow available");
         expect(Math.abs(unit(qRSi, "L/min").toNumber("gal/min") - qR) / qR).toBeLessThan(1e-9);
       }),
     );
   });
-  it("the supply curve starts at static pressure and falls", () => {
-    const pts = supplyCurve(juniper, 2500, 11);
-    expect(pts).toHaveLength(11);
-    expect(pts[0]).toEqual({ flowGpm: 0, pressurePsi: 72 });
-    for (let i = 1; i < pts.length; i++) expect(pts[i]!.pressurePsi).toBeLessThanOrEqual(pts[i - 1]!.pressurePsi);
+  it("the chart's supply curve starts at static pressure and falls", () => {
+    const r = calculatorReport("flow-test", { units: "us", staticPressure: 72, residualPressure: 58, testFlow: 1040, demandFlow: 30, demandPressure: 50 });
+    const pts = r.chart!.supply;
+    expect(pts[0]).toEqual({ flow: 0, pressure: 72 });
+    for (let i = 1; i < pts.length; i++) expect(pts[i]!.pressure).toBeLessThanOrEqual(pts[i - 1]!.pressure);
   });
 });
 
@@ -129,7 +126,7 @@ describe("bad input", () => {
     [() => flowTestAvailablePsi({ staticPsi: 60, residualPsi: 40, testFlowGpm: 0 }, 10), "testFlowGpm"],
     [() => flowTestAvailablePsi({ staticPsi: 60, residualPsi: 40, testFlowGpm: 500 }, -3), "demandFlowGpm"],
     [() => flowAtResidualGpm({ staticPsi: 60, residualPsi: 40, testFlowGpm: 500 }, 65), "residualTargetPsi"],
-    [() => flowTestAvailableBar({ staticBar: 4, residualBar: 5, testFlowLpm: 2000 }, 100), "residualBar"],
+    [() => calculatorReport("flow-test", { units: "si", staticPressure: 4, residualPressure: 5, testFlow: 2000, demandFlow: 100 }), "residualPressure"],
     [() => supplyMargin({ flowGpm: Number.NaN, pressurePsi: 10 }, { availablePsi: 40 }), "demandFlowGpm"],
     [() => supplyMargin({ flowGpm: 20, pressurePsi: -1 }, { availablePsi: 40 }), "demandPressurePsi"],
   ])("throws HydraulicsInputError naming the field (%#)", (fn, field) => {

@@ -8,15 +8,31 @@ import {
   HAZEN_WILLIAMS_US_CONSTANT,
   HydraulicsInputError,
   PIPE_MATERIALS,
-  frictionLossBar,
+  calculatorReport,
   frictionLossBarPerM,
   frictionLossPsi,
   frictionLossPsiPerFt,
   hazenWilliamsC,
-  pipeFrictionLoss,
   pipeInsideDiameterIn,
+  pipeVelocityFtPerS,
   sizesFor,
+  type NominalSize,
+  type PipeMaterial,
 } from "../../../lib/hydraulics";
+
+// friction loss of a run as the calculator computes it (table bore and C, or the values entered)
+const runLoss = (input: { material: PipeMaterial; nominalSize: NominalSize; flowGpm: number; lengthFt: number; insideDiameterIn?: number }) => {
+  const r = calculatorReport("friction-loss", {
+    units: "us",
+    material: input.material,
+    nominalSize: input.nominalSize,
+    flow: input.flowGpm,
+    length: input.lengthFt,
+    insideDiameter: input.insideDiameterIn,
+  });
+  const v = (label: string) => r.results.find((x) => x.label === label)!.value;
+  return { lossPsi: v("Friction loss"), insideDiameterIn: v("Inside diameter used"), notes: r.notes.join(" ") };
+};
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -74,13 +90,27 @@ describe("friction loss values", () => {
   it("zero flow loses nothing", () => {
     expect(frictionLossPsiPerFt(0, 150, 1)).toBe(0);
   });
-  it("pipeFrictionLoss uses the table's ID and C, or the maker's values when given", () => {
-    const table = pipeFrictionLoss({ material: "copper-l", nominalSize: "1", flowGpm: 26, lengthFt: 50 });
+  it("the friction calculator uses the table's ID and C, or the listed ID when entered (it governs)", () => {
+    const table = runLoss({ material: "copper-l", nominalSize: "1", flowGpm: 26, lengthFt: 50 });
     expect(table.insideDiameterIn).toBeCloseTo(1.025, 9);
-    expect(table.cFactor).toBe(150);
-    const listed = pipeFrictionLoss({ material: "pex", nominalSize: "1", flowGpm: 26, lengthFt: 50, insideDiameterIn: 0.862 });
-    expect(listed.insideDiameterIn).toBe(0.862);
-    expect(listed.insideDiameterSource).toMatch(/entered/);
+    expect(table.lossPsi).toBeCloseTo(frictionLossPsiPerFt(26, 150, 1.025) * 50, 12);
+    expect(hazenWilliamsC("copper-l")).toBe(150);
+    const listed = runLoss({ material: "pex", nominalSize: "1", flowGpm: 26, lengthFt: 50, insideDiameterIn: 0.85 });
+    expect(listed.insideDiameterIn).toBe(0.85);
+    expect(listed.notes).toMatch(/entered/);
+  });
+  it("1 in CPVC SDR 13.5 uses the average bore 1.101 in, not OD − 2 × minimum wall (1.121 in): about 9% more loss", () => {
+    // 1.101 in: ASTM F442 SDR 13.5, OD 1.315 − 2 × (0.097 minimum wall + 0.010, half the +0.020 tolerance; from memory — verify)
+    const r = runLoss({ material: "cpvc", nominalSize: "1", flowGpm: 26, lengthFt: 100 });
+    expect(r.insideDiameterIn).toBeCloseTo(1.101, 9);
+    expect(r.lossPsi).toBeCloseTo(frictionLossPsiPerFt(26, 150, 1.101) * 100, 12);
+    expect(r.lossPsi / (frictionLossPsiPerFt(26, 150, 1.121) * 100)).toBeGreaterThan(1.08);
+  });
+  it("velocity = flow ÷ bore area: 26 gpm in a 1.025 in bore ≈ 10.1 ft/s (mathjs)", () => {
+    const inchesPerSecond = unit(26, "gal/min").toNumber("in^3/s") / ((Math.PI * 1.025 ** 2) / 4);
+    const expected = unit(inchesPerSecond, "in/s").toNumber("ft/s");
+    expect(pipeVelocityFtPerS(26, 1.025)).toBeCloseTo(expected, 9);
+    expect(pipeVelocityFtPerS(26, 1.025)).toBeCloseTo((0.4085 * 26) / 1.025 ** 2, 2);
   });
 });
 
@@ -103,7 +133,7 @@ describe("properties (fast-check)", () => {
     fc.assert(
       fc.property(fc.constantFrom(...PIPE_MATERIALS), flow, (material, q) => {
         const sizes = sizesFor(material);
-        const losses = sizes.map((s) => pipeFrictionLoss({ material, nominalSize: s, flowGpm: q, lengthFt: 100 }).lossPsi);
+        const losses = sizes.map((s) => runLoss({ material, nominalSize: s, flowGpm: q, lengthFt: 100 }).lossPsi);
         for (let i = 1; i < losses.length; i++) if (!(losses[i]! < losses[i - 1]!)) return false;
         return true;
       }),
@@ -120,12 +150,8 @@ describe("properties (fast-check)", () => {
     fc.assert(
       fc.property(flow, c, d, fc.double({ min: 1, max: 500, noNaN: true }), (q, cf, di, lengthFt) => {
         const us = frictionLossPsi({ flowGpm: q, lengthFt, cFactor: cf, insideDiameterIn: di });
-        const si = frictionLossBar({
-          flowLpm: unit(q, "gal/min").toNumber("L/min"),
-          lengthM: unit(lengthFt, "ft").toNumber("m"),
-          cFactor: cf,
-          insideDiameterMm: unit(di, "in").toNumber("mm"),
-        });
+        const si =
+          frictionLossBarPerM(unit(q, "gal/min").toNumber("L/min"), cf, unit(di, "in").toNumber("mm")) * unit(lengthFt, "ft").toNumber("m");
         expect(rel(unit(si, "bar").toNumber("psi"), us)).toBeLessThan(0.002);
       }),
     );

@@ -2,7 +2,11 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { unit } from "mathjs";
-import { HydraulicsInputError, storedWaterGal, storedWaterL } from "../../../lib/hydraulics";
+import { HydraulicsInputError, calculatorReport, storedWaterGal } from "../../../lib/hydraulics";
+
+// the SI figure as the calculator computes it
+const storedWaterL = (flowLpm: number, durationMin: number) =>
+  calculatorReport("stored-water", { units: "si", flow: flowLpm, duration: durationMin }).results[0]!.value;
 
 describe("stored water", () => {
   it("26 gpm for 10 minutes is 260 gal (rate × time)", () => {
@@ -25,5 +29,6 @@ describe("stored water", () => {
     expect(() => storedWaterGal(0, 10)).toThrowError(expect.objectContaining({ field: "flowGpm" }));
     expect(() => storedWaterGal(26, -10)).toThrowError(expect.objectContaining({ field: "durationMin" }));
     expect(() => storedWaterL(100, Number.NaN)).toThrowError(HydraulicsInputError);
+    expect(() => storedWaterL(100, Number.NaN)).toThrowError(expect.objectContaining({ field: "duration" }));
   });
 });

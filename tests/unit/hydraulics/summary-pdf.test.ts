@@ -2,7 +2,7 @@
 // dated as asked, and refusing bad input with the field named.
 import { describe, expect, it } from "vitest";
 import { PDFDocument } from "pdf-lib";
-import { CALCULATOR_IDS, CALCULATOR_INFO, HydraulicsInputError, inputFromPreset } from "../../../lib/hydraulics";
+import { CALCULATOR_IDS, CALCULATOR_INFO, HydraulicsInputError, INPUT_CAPS, calculatorReport, inputFromPreset } from "../../../lib/hydraulics";
 import { calculatorSummaryPdf, summaryPdfResponse } from "../../../lib/tools/summary-pdf";
 
 const date = new Date("2026-11-20T15:30:00Z");
@@ -48,6 +48,29 @@ describe("summaryPdfResponse (route handler body)", () => {
     const res = await summaryPdfResponse(post({ id: "stored-water", input: { units: "us", flow: 0, duration: 10 } }));
     expect(res.status).toBe(400);
     expect(await res.json()).toMatchObject({ field: "flow" });
+  });
+  it("returns 400 with a message for oversized input: more than 50 pipe runs, a label over 80 characters, number text over 32 characters", async () => {
+    const base = inputFromPreset("system-demand");
+    const run = base.segments[0]!;
+    const tooMany = await summaryPdfResponse(post({ id: "system-demand", input: { ...base, segments: Array.from({ length: 51 }, () => run) } }));
+    expect(tooMany.status).toBe(400);
+    expect(await tooMany.json()).toMatchObject({ field: "segments", error: expect.stringMatching(/50 pipe runs/) });
+    const longLabel = await summaryPdfResponse(post({ id: "system-demand", input: { ...base, segments: [{ ...run, label: "x".repeat(81) }] } }));
+    expect(longLabel.status).toBe(400);
+    expect(await longLabel.json()).toMatchObject({ field: "segments[0].label", error: expect.stringMatching(/80 characters/) });
+    const longNumber = await summaryPdfResponse(post({ id: "stored-water", input: { units: "us", flow: "1".repeat(40), duration: 10 } }));
+    expect(longNumber.status).toBe(400);
+    expect(await longNumber.json()).toMatchObject({ field: "flow" });
+    const threeHeads = await summaryPdfResponse(post({ id: "system-demand", input: { ...base, sprinklers: [...base.sprinklers, base.sprinklers[0]] } }));
+    expect(threeHeads.status).toBe(400);
+    expect(await threeHeads.json()).toMatchObject({ field: "sprinklers" });
+  });
+  it("accepts exactly 50 pipe runs (the cap, INPUT_CAPS.pipeRuns)", () => {
+    const base = inputFromPreset("system-demand");
+    const run = { ...base.segments[0]!, length: 2, elevation: 0, elbows: 0 };
+    expect(INPUT_CAPS.pipeRuns).toBe(50);
+    const r = calculatorReport("system-demand", { ...base, segments: Array.from({ length: 50 }, () => run) });
+    expect(r.steps.filter((s) => s.label.startsWith("Water service")).length).toBe(50);
   });
   it("returns 400 for an unknown calculator or a body that is not JSON", async () => {
     expect((await summaryPdfResponse(post({ id: "x", input: {} }))).status).toBe(400);

@@ -2,27 +2,12 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { unit } from "mathjs";
-import {
-  K_SI_PER_K_US,
-  L_PER_GAL,
-  PA_PER_PSI,
-  PSI_PER_BAR,
-  barPerMToPsiPerFt,
-  barToPsi,
-  ftToM,
-  galToL,
-  gpmToLpm,
-  inToMm,
-  kFactorSiToUs,
-  kFactorUsToSi,
-  lpmToGpm,
-  mToFt,
-  mmToIn,
-  psiPerFtToBarPerM,
-  psiToBar,
-  sqFtToSqM,
-  HydraulicsInputError,
-} from "../../../lib/hydraulics";
+import { K_SI_PER_K_US, L_PER_GAL, PA_PER_PSI, PSI_PER_BAR, fromUs, toUs, HydraulicsInputError, type Quantity } from "../../../lib/hydraulics";
+
+// the product's one conversion path (lib/hydraulics/units.ts toUs/fromUs), used by every report,
+// the unit switch and the PDF
+const kFactorUsToSi = (k: number) => fromUs("k", k, "si");
+const kFactorSiToUs = (k: number) => toUs("k", k, "si");
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
 
@@ -40,30 +25,32 @@ describe("unit constants against mathjs", () => {
 
 describe("conversions against mathjs (property)", () => {
   const value = fc.double({ min: -1e5, max: 1e5, noNaN: true });
-  const cases: [string, (v: number) => number, string, string][] = [
-    ["gpm → L/min", gpmToLpm, "gal/min", "L/min"],
-    ["L/min → gpm", lpmToGpm, "L/min", "gal/min"],
-    ["gal → L", galToL, "gal", "L"],
-    ["psi → bar", psiToBar, "psi", "bar"],
-    ["bar → psi", barToPsi, "bar", "psi"],
-    ["ft → m", ftToM, "ft", "m"],
-    ["m → ft", mToFt, "m", "ft"],
-    ["in → mm", inToMm, "in", "mm"],
-    ["mm → in", mmToIn, "mm", "in"],
-    ["ft² → m²", sqFtToSqM, "ft^2", "m^2"],
-    ["psi/ft → bar/m", psiPerFtToBarPerM, "psi/ft", "bar/m"],
-    ["bar/m → psi/ft", barPerMToPsiPerFt, "bar/m", "psi/ft"],
+  // [quantity, US unit, SI unit] in mathjs's names
+  const cases: [Quantity, string, string][] = [
+    ["flow", "gal/min", "L/min"],
+    ["volume", "gal", "L"],
+    ["pressure", "psi", "bar"],
+    ["length", "ft", "m"],
+    ["diameter", "in", "mm"],
+    ["area", "ft^2", "m^2"],
+    ["lossPerLength", "psi/ft", "bar/m"],
+    ["velocity", "ft/s", "m/s"],
   ];
-  for (const [name, fn, from, to] of cases) {
-    it(name, () => {
+  for (const [q, us, si] of cases) {
+    it(`${q}: ${us} → ${si} and back`, () => {
       fc.assert(
         fc.property(value, (v) => {
-          const expected = unit(v, from).toNumber(to);
-          expect(Math.abs(fn(v) - expected)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(expected)));
+          const toSi = unit(v, us).toNumber(si);
+          expect(Math.abs(fromUs(q, v, "si") - toSi)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(toSi)));
+          const toUsExpected = unit(v, si).toNumber(us);
+          expect(Math.abs(toUs(q, v, "si") - toUsExpected)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(toUsExpected)));
         }),
       );
     });
   }
+  it("US to US is the value itself", () => {
+    fc.assert(fc.property(value, (v) => toUs("pressure", v, "us") === v && fromUs("flow", v, "us") === v));
+  });
 });
 
 describe("K-factor conversion", () => {
@@ -100,12 +87,7 @@ describe("K-factor conversion", () => {
 
 describe("conversion input checks", () => {
   it("reject non-finite values naming the field", () => {
-    expect(() => gpmToLpm(Number.NaN)).toThrow(HydraulicsInputError);
-    try {
-      psiToBar(Number.POSITIVE_INFINITY, "staticPsi");
-    } catch (e) {
-      expect(e).toBeInstanceOf(HydraulicsInputError);
-      expect((e as HydraulicsInputError).field).toBe("staticPsi");
-    }
+    expect(() => fromUs("flow", Number.NaN, "si")).toThrow(HydraulicsInputError);
+    expect(() => toUs("pressure", Number.POSITIVE_INFINITY, "si")).toThrowError(expect.objectContaining({ field: "pressure" }));
   });
 });

@@ -1,0 +1,91 @@
+/**
+ * Form values from calculator inputs: numbers as the text a field shows, blanks for what the input
+ * leaves out. The values are the input type of the calculator's schema (lib/hydraulics/shared), so
+ * the same schema validates them.
+ */
+import type { CalculatorFormValues, CalculatorId, CalculatorInputs, SegmentReportInput } from "@/lib/hydraulics/shared";
+
+const text = (v: number | undefined) => (v === undefined ? "" : String(v));
+
+/** what one pipe run's fields hold */
+export interface SegmentFormValues {
+  label: string;
+  material: SegmentReportInput["material"];
+  nominalSize: SegmentReportInput["nominalSize"];
+  length: string;
+  elevation: string;
+  elbows: string;
+  teeBranches: string;
+  listedFittingsLength: string;
+  insideDiameter: string;
+}
+
+export interface SystemDemandFormValues {
+  units: "us" | "si";
+  sprinklers: { label: string; k: string; minFlow: string; minPressure: string; coverageArea: string; branch: SegmentFormValues }[];
+  segments: SegmentFormValues[];
+  devices: { label: string; loss: string }[];
+  additionalFlow: string;
+  supply: { staticPressure: string; residualPressure: string; testFlow: string };
+}
+
+function segmentValues(s: SegmentReportInput | undefined, fallbackLabel: string): SegmentFormValues {
+  return {
+    label: s?.label ?? fallbackLabel,
+    material: s?.material ?? "cpvc",
+    nominalSize: s?.nominalSize ?? "1",
+    length: text(s?.length ?? 0),
+    elevation: text(s?.elevation),
+    elbows: text(s?.elbows),
+    teeBranches: text(s?.teeBranches),
+    listedFittingsLength: text(s?.listedFittingsLength),
+    insideDiameter: text(s?.insideDiameter),
+  };
+}
+
+export const emptySegment = (label: string): SegmentFormValues => segmentValues(undefined, label);
+
+export function systemDemandFormValues(input: CalculatorInputs["system-demand"]): SystemDemandFormValues {
+  return {
+    units: input.units,
+    sprinklers: input.sprinklers.map((s, i) => ({
+      label: s.label ?? `Sprinkler ${String.fromCharCode(65 + i)}`,
+      k: text(s.k),
+      minFlow: text(s.minFlow),
+      minPressure: text(s.minPressure),
+      coverageArea: text(s.coverageArea),
+      branch: segmentValues(s.branch, `Branch ${String.fromCharCode(65 + i)}`),
+    })),
+    segments: input.segments.map((s, i) => segmentValues(s, `Pipe run ${i + 1}`)),
+    devices: (input.devices ?? []).map((d) => ({ label: d.label ?? "", loss: text(d.loss) })),
+    additionalFlow: text(input.additionalFlow),
+    supply: {
+      staticPressure: text(input.supply?.staticPressure),
+      residualPressure: text(input.supply?.residualPressure),
+      testFlow: text(input.supply?.testFlow),
+    },
+  };
+}
+
+/** every field each flat calculator's form holds */
+export const FLAT_FORM_FIELDS = {
+  "sprinkler-flow": ["units", "solveFor", "k", "pressure", "flow"],
+  "friction-loss": ["units", "material", "nominalSize", "flow", "length", "elbows", "teeBranches", "listedFittingsLength", "insideDiameter", "cFactor"],
+  elevation: ["units", "height"],
+  "flow-test": ["units", "staticPressure", "residualPressure", "testFlow", "demandFlow", "demandPressure", "residualTarget"],
+  "stored-water": ["units", "flow", "duration"],
+  "room-coverage": ["units", "length", "width", "maxSpacing", "maxArea", "minSpacing", "maxWallDistance"],
+} as const satisfies Partial<Record<CalculatorId, readonly string[]>>;
+
+export type FlatCalculatorId = keyof typeof FLAT_FORM_FIELDS;
+
+/** form values for a flat calculator: numbers as text, blanks for fields the input leaves out */
+export function flatFormValues<I extends FlatCalculatorId>(id: I, input: CalculatorInputs[I]): CalculatorFormValues[I] {
+  const out: Record<string, unknown> = {};
+  const raw = input as unknown as Record<string, unknown>;
+  for (const key of FLAT_FORM_FIELDS[id]) {
+    const v = raw[key];
+    out[key] = typeof v === "number" ? String(v) : v === undefined ? "" : v;
+  }
+  return out as CalculatorFormValues[I];
+}
