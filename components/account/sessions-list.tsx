@@ -6,8 +6,9 @@ import { FormError, FormNotice } from "@/components/ui/field";
 import type { OwnSession } from "@/lib/account/sessions";
 import { authClient } from "@/lib/auth/client";
 import { getJson } from "@/lib/fetcher";
+import { utcStamp } from "@/lib/dates";
 
-const when = (iso: string) => `${iso.slice(0, 16).replace("T", " ")} UTC`;
+const when = (iso: string) => utcStamp(iso);
 
 /** Where the person is signed in, with "sign out everywhere else" (better-auth revokeOtherSessions). */
 export function SessionsList() {

@@ -3,6 +3,7 @@ import { useState, type ReactNode } from "react";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
 import type { Paged } from "@/lib/admin/schemas";
+import { utcStamp } from "@/lib/dates";
 
 export type Column<R> = {
   key: string;
@@ -153,7 +154,7 @@ export function When({ iso }: { iso: string | null }) {
   const d = new Date(iso);
   return (
     <time dateTime={iso} className="font-mono text-xs whitespace-nowrap" suppressHydrationWarning>
-      {d.toISOString().slice(0, 16).replace("T", " ")} UTC
+      {utcStamp(d)}
     </time>
   );
 }

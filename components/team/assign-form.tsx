@@ -9,12 +9,13 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { getJson, postJson } from "@/lib/fetcher";
 import { assignSchema, type AssignInput } from "@/lib/team/schemas";
+import { isoDay } from "@/lib/dates";
 
 type Out = z.output<typeof assignSchema>;
 type PersonHit = { id: string; name: string; email: string; team: string | null };
 type Item = { slug: string; title: string };
 
-const today = () => new Date().toISOString().slice(0, 10);
+const today = () => isoDay(new Date());
 
 /** Assign a module or a learning path to people and/or whole teams, with a due date. */
 export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; paths: Item[]; teams: { id: string; name: string }[]; org: string | null }) {

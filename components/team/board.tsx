@@ -8,6 +8,7 @@ import { getJson } from "@/lib/fetcher";
 import type { BoardPage, BoardRow } from "@/lib/team/board";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
 import { StatusBadge } from "./status-badge";
+import { isoDay, shortDate } from "@/lib/dates";
 
 export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };
 
@@ -35,7 +36,6 @@ function queryString(f: BoardFilters, org: string | null, withPage = true): stri
   return p.toString();
 }
 
-const shortDate = (iso: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
 
 const col = createColumnHelper<BoardRow>();
 
@@ -110,7 +110,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
         ),
       }),
       col.accessor("overdue", { header: "Overdue", cell: (c) => <span className={`font-mono ${c.getValue() ? "font-bold text-caution" : ""}`}>{c.getValue()}</span> }),
-      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{c.getValue()!.slice(0, 10)}</span> : <span className="text-muted">—</span>) }),
+      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{isoDay(c.getValue())}</span> : <span className="text-muted">—</span>) }),
     ],
     [shownModules, showOrgNames, teams],
   );

@@ -4,11 +4,12 @@ import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
 import { getJson } from "@/lib/fetcher";
 import type { TeamTotal, WeekPoint } from "@/lib/team/board";
+import { monthDay, startOfIsoDay } from "@/lib/dates";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
 const pct = (t: TeamTotal) => (t.cells ? Math.round((t.passed / t.cells) * 100) : 0);
-const weekLabel = (d: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", timeZone: "UTC" }).format(new Date(`${d}T00:00:00Z`));
+const weekLabel = (d: string) => monthDay(startOfIsoDay(d));
 
 /** Totals per team and the two charts, fetched once per visit (they cover the whole organization). */
 export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrgNames: boolean }) {

@@ -17,6 +17,7 @@ import {
   type CalculatorId,
   type CalculatorReport,
 } from "@/lib/hydraulics";
+import { utcStamp } from "@/lib/dates";
 
 const PAGE = { width: 612, height: 792, margin: 40 }; // US Letter, points
 
@@ -65,7 +66,7 @@ async function row(l: Layout, label: string, value: string, work?: string) {
 }
 
 async function drawReport(l: Layout, report: CalculatorReport, date: Date) {
-  const stamp = `${date.toISOString().slice(0, 10)} ${date.toISOString().slice(11, 16)} UTC`;
+  const stamp = utcStamp(date);
   await text(l, "Riser · calculation summary", { face: "bold", size: l.size * 0.9, color: C.muted });
   await text(l, report.title, { face: "bold", size: l.size * 1.8, gap: 2 });
   await text(l, `${report.units === "si" ? "SI units (bar, L/min, m)" : "US units (psi, gpm, ft)"} · computed ${stamp}`, {

@@ -10,6 +10,7 @@ import { openInvitations } from "@/lib/team/invites";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
+import { isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Invite people" };
 
@@ -77,8 +78,8 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
                     <td className="px-2 py-2">{i.name ?? ""}</td>
                     <td className="px-2 py-2">{ROLE_LABELS[i.role as InviteRole] ?? i.role}</td>
                     <td className="px-2 py-2">{i.team ?? "No team"}</td>
-                    <td className="px-2 py-2 font-mono">{i.createdAt.toISOString().slice(0, 10)}</td>
-                    <td className="px-2 py-2 font-mono">{i.expiresAt.toISOString().slice(0, 10)}</td>
+                    <td className="px-2 py-2 font-mono">{isoDay(i.createdAt)}</td>
+                    <td className="px-2 py-2 font-mono">{isoDay(i.expiresAt)}</td>
                   </tr>
                 ))}
               </tbody>

@@ -10,10 +10,11 @@ import { assignedWork } from "@/lib/team/assignments";
 import { boardModules } from "@/lib/team/board";
 import { personForViewer, personHistory } from "@/lib/team/people";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
+import { isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Person" };
 
-const day = (d: Date | string | null) => (d ? new Date(d).toISOString().slice(0, 10) : "—");
+const day = (d: Date | string | null) => isoDay(d, "—");
 
 export default async function PersonPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
