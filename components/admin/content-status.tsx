@@ -2,7 +2,7 @@
 import useSWR from "swr";
 import type { ContentStatus as Status } from "@/lib/admin/content";
 import { getJson } from "@/lib/fetcher";
-import { When } from "./data-table";
+import { When } from "@/components/ui/data-table";
 import { SyncButton } from "./sync-button";
 
 const KINDS = [

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
+import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { BoardPage, BoardRow } from "@/lib/team/board";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
@@ -51,10 +52,12 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
     window.history.replaceState(null, "", next);
   }, [qs]);
   // Search as one types, after a pause.
-  useEffect(() => {
-    const t = setTimeout(() => setF((old) => (old.q === search.trim() ? old : { ...old, q: search.trim(), page: 1 })), 300);
-    return () => clearTimeout(t);
-  }, [search]);
+  const settledSearch = useDebounced(search.trim(), 300);
+  const [seenSearch, setSeenSearch] = useState(settledSearch);
+  if (settledSearch !== seenSearch) {
+    setSeenSearch(settledSearch);
+    setF((old) => (old.q === settledSearch ? old : { ...old, q: settledSearch, page: 1 }));
+  }
 
   const set = (patch: Partial<BoardFilters>) => setF((old) => ({ ...old, page: 1, ...patch }));
   const shownModules = f.module ? modules.filter((m) => m.slug === f.module) : modules;

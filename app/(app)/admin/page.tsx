@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { When } from "@/components/admin/data-table";
+import { When } from "@/components/ui/data-table";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { adminOverview } from "@/lib/admin/overview";

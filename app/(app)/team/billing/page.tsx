@@ -10,6 +10,8 @@ import { requireViewer } from "@/lib/access";
 import { billingOverview, organizationSeatList, paymentsConfigured } from "@/lib/billing";
 import { billingPageScope } from "@/lib/billing/page-scope";
 import { formatMoney } from "@/lib/billing/pricing";
+import { Table } from "@/components/ui/table";
+import { isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Seats and billing" };
 
@@ -19,43 +21,18 @@ async function AllOrganizations() {
   return (
     <>
       <PageTitle title="Seats and billing" lead="Every organization's seats. Open one to see its receipts or to buy seats for it." />
-      <div className="overflow-x-auto rounded border border-line bg-panel">
-        <table className="w-full border-collapse text-left text-sm">
-          <caption className="sr-only">Organizations and their seats</caption>
-          <thead>
-            <tr className="border-b border-line bg-paper">
-              <th scope="col" className="px-3 py-2">
-                Organization
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                Seats
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                In use
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                Free
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Trial
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {list.map((o) => (
-              <tr key={o.orgId} className="border-b border-line last:border-b-0">
-                <td className="px-3 py-2">
-                  <Link href={`/team/billing?org=${o.orgId}`}>{o.orgName}</Link>
-                </td>
-                <td className="px-3 py-2 text-right font-mono">{o.seats}</td>
-                <td className="px-3 py-2 text-right font-mono">{o.used}</td>
-                <td className="px-3 py-2 text-right font-mono">{o.free}</td>
-                <td className="px-3 py-2">{o.trial === "none" ? "—" : `${o.trial === "active" ? "until" : "ended"} ${o.trialEndsAt?.slice(0, 10)}`}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <Table
+        label="Organizations and their seats"
+        rows={list}
+        rowKey={(o) => o.orgId}
+        columns={[
+          { key: "org", header: "Organization", cell: (o) => <Link href={`/team/billing?org=${o.orgId}`}>{o.orgName}</Link> },
+          { key: "seats", header: "Seats", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.seats },
+          { key: "used", header: "In use", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.used },
+          { key: "free", header: "Free", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.free },
+          { key: "trial", header: "Trial", cell: (o) => (o.trial === "none" ? "—" : `${o.trial === "active" ? "until" : "ended"} ${isoDay(o.trialEndsAt)}`) },
+        ]}
+      />
     </>
   );
 }
