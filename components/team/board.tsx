@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
+import { serverFirst } from "@/components/ui/server-first";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { BoardPage, BoardRow } from "@/lib/team/board";
@@ -19,6 +20,8 @@ type Props = {
   org: string | null;
   showOrgNames: boolean;
   initial: BoardFilters;
+  /** the page of the board the server already rendered for `initial` (not fetched again on mount) */
+  initialPage?: BoardPage;
 };
 
 const PAGE_SIZES = [10, 25, 50, 100];
@@ -40,11 +43,13 @@ function queryString(f: BoardFilters, org: string | null, withPage = true): stri
 
 const col = createColumnHelper<BoardRow>();
 
-export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props) {
+export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialPage }: Props) {
   const [f, setF] = useState<BoardFilters>(initial);
   const [search, setSearch] = useState(initial.q);
   const qs = queryString(f, org);
-  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(`/api/team/board?${qs}`, getJson, { keepPreviousData: true, revalidateOnFocus: false });
+  const key = `/api/team/board?${qs}`;
+  const [first] = useState(() => (initialPage ? { key: `/api/team/board?${queryString(initial, org)}`, data: initialPage } : undefined));
+  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(key, getJson, { keepPreviousData: true, revalidateOnFocus: false, ...serverFirst(key, first) });
 
   // Keep the address in step with the filters, so a view can be bookmarked or shared.
   useEffect(() => {

@@ -6,6 +6,7 @@ import { getJson } from "@/lib/fetcher";
 import type { TeamTotal, WeekPoint } from "@/lib/team/board";
 import { monthDay, startOfIsoDay } from "@/lib/dates";
 import { chartColors } from "@/lib/theme/tokens";
+import { serverFirst } from "@/components/ui/server-first";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
@@ -13,8 +14,9 @@ const pct = (t: TeamTotal) => (t.cells ? Math.round((t.passed / t.cells) * 100) 
 const weekLabel = (d: string) => monthDay(startOfIsoDay(d));
 
 /** Totals per team and the two charts, fetched once per visit (they cover the whole organization). */
-export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrgNames: boolean }) {
-  const { data, error, isLoading, mutate } = useSWR<Summary>(`/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`, getJson, { revalidateOnFocus: false });
+export function TeamSummary({ org, showOrgNames, initial }: { org: string | null; showOrgNames: boolean; initial?: Summary }) {
+  const key = `/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`;
+  const { data, error, isLoading, mutate } = useSWR<Summary>(key, getJson, { revalidateOnFocus: false, ...serverFirst(key, initial && { key, data: initial }) });
   const label = (t: TeamTotal) => (showOrgNames ? `${t.orgName} · ${t.team}` : t.team);
   return (
     <section aria-labelledby="summary-heading" className="mb-10">
