@@ -1,5 +1,12 @@
 "use client";
-/** The loading and error states of route segments (the loading.tsx and error.tsx files use these). */
+/**
+ * The loading and error states of route segments (the loading.tsx and error.tsx files use these).
+ *
+ * A loading.tsx streams its segment, and a redirect, 403 or 404 decided inside a streamed page can
+ * then no longer change the HTTP status (Next.js sends a 200 with a client-side redirect instead).
+ * So loading.tsx only sits where the access check happens above it, in a layout (admin). Elsewhere
+ * a page checks access first and may wrap its slow part in <Suspense fallback={<LoadingState />}>.
+ */
 import Link from "next/link";
 import { useEffect } from "react";
 
