@@ -7,36 +7,14 @@ import { ReceiptsTable } from "@/components/billing/receipts-table";
 import { SeatFigures } from "@/components/billing/seat-summary";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { billingOverview, organizationSeatList, paymentsConfigured } from "@/lib/billing";
+import { billingOverview, paymentsConfigured } from "@/lib/billing";
 import { billingPageScope } from "@/lib/billing/page-scope";
 import { formatMoney } from "@/lib/billing/pricing";
-import { Table } from "@/components/ui/table";
-import { isoDay } from "@/lib/dates";
+import { AllOrganizations } from "@/components/billing/all-organizations";
 
 export const metadata: Metadata = { title: "Seats and billing" };
 
 /** Admins without ?org=: every organization's seats, each linking to its billing page. */
-async function AllOrganizations() {
-  const list = await organizationSeatList();
-  return (
-    <>
-      <PageTitle title="Seats and billing" lead="Every organization's seats. Open one to see its receipts or to buy seats for it." />
-      <Table
-        label="Organizations and their seats"
-        rows={list}
-        rowKey={(o) => o.orgId}
-        columns={[
-          { key: "org", header: "Organization", cell: (o) => <Link href={`/team/billing?org=${o.orgId}`}>{o.orgName}</Link> },
-          { key: "seats", header: "Seats", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.seats },
-          { key: "used", header: "In use", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.used },
-          { key: "free", header: "Free", headerClassName: "px-3 py-2 text-right", className: "text-right font-mono", cell: (o) => o.free },
-          { key: "trial", header: "Trial", cell: (o) => (o.trial === "none" ? "—" : `${o.trial === "active" ? "until" : "ended"} ${isoDay(o.trialEndsAt)}`) },
-        ]}
-      />
-    </>
-  );
-}
-
 export default async function BillingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireViewer("manager", "/team/billing");
   const scope = await billingPageScope(viewer, (await searchParams).org);
