@@ -1,5 +1,4 @@
 import Link from "next/link";
-import { RevokeForm } from "@/components/certificates/revoke-form";
 import { ShareLink } from "@/components/certificates/share-link";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { buttonLinkClass } from "@/components/ui/button";

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { RevokeForm } from "@/components/certificates/revoke-form";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
