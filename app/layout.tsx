@@ -3,13 +3,14 @@ import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { bodyFont, monoFont } from "./fonts";
 import "./globals.css";
+import { palette } from "@/lib/theme/tokens";
 
 export const metadata: Metadata = {
   title: { default: "Riser — training for residential sprinkler work", template: "%s · Riser" },
   description: "Lessons, quizzes, certificates, code-reference cards and field calculators for the residential fire-sprinkler trade.",
 };
 
-export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#14202B" };
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: palette.ink };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (

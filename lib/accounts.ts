@@ -8,6 +8,7 @@ import { auth } from "@/lib/auth";
 import { TRIAL } from "@/lib/billing/plans";
 import { signupContext, type SignupPlacement } from "@/lib/auth/signup-context";
 import type { SignUpInput } from "@/lib/auth/schemas";
+import { addDays } from "@/lib/dates";
 
 /** The trial allowance is set with the seat prices, in lib/billing/plans.ts. */
 export const TRIAL_SEATS = TRIAL.seats;
@@ -57,7 +58,7 @@ export async function createOrganizationWithManager(input: SignUpInput, headers:
     name: input.organizationName,
     kind: "contractor",
     seats: TRIAL_SEATS,
-    trialEndsAt: new Date(Date.now() + TRIAL_DAYS * 86_400_000),
+    trialEndsAt: addDays(new Date(), TRIAL_DAYS),
   });
   try {
     const result = await createAccount(input, { organizationId, teamId: null, role: "manager" }, headers);

@@ -52,24 +52,24 @@ export default function HomePage() {
 function HeroDiagram() {
   return (
     <svg viewBox="0 0 320 220" role="img" aria-label="A house cross-section with a water service, a riser and two sprinklers spraying in one room" className="w-full max-w-md">
-      <rect x="0" y="0" width="320" height="220" fill="#FFFFFF" />
-      <path d="M40 90 L160 30 L280 90" fill="none" stroke="#14202B" strokeWidth="4" />
-      <rect x="50" y="90" width="220" height="110" fill="none" stroke="#14202B" strokeWidth="4" />
-      <line x1="50" y1="150" x2="270" y2="150" stroke="#14202B" strokeWidth="2" />
-      <line x1="0" y1="212" x2="90" y2="212" stroke="#1B617A" strokeWidth="6" />
-      <line x1="88" y1="212" x2="88" y2="100" stroke="#B5651D" strokeWidth="6" />
-      <line x1="88" y1="102" x2="250" y2="102" stroke="#B5651D" strokeWidth="4" />
-      <line x1="88" y1="158" x2="250" y2="158" stroke="#B5651D" strokeWidth="4" />
+      <rect className="fill-panel" x="0" y="0" width="320" height="220" />
+      <path className="stroke-ink" d="M40 90 L160 30 L280 90" fill="none" strokeWidth="4" />
+      <rect className="stroke-ink" x="50" y="90" width="220" height="110" fill="none" strokeWidth="4" />
+      <line className="stroke-ink" x1="50" y1="150" x2="270" y2="150" strokeWidth="2" />
+      <line className="stroke-water" x1="0" y1="212" x2="90" y2="212" strokeWidth="6" />
+      <line className="stroke-copper-bright" x1="88" y1="212" x2="88" y2="100" strokeWidth="6" />
+      <line className="stroke-copper-bright" x1="88" y1="102" x2="250" y2="102" strokeWidth="4" />
+      <line className="stroke-copper-bright" x1="88" y1="158" x2="250" y2="158" strokeWidth="4" />
       {[140, 220].map((x) => (
         <g key={x}>
-          <line x1={x} y1="158" x2={x} y2="166" stroke="#B5651D" strokeWidth="4" />
-          <path d={`M${x - 8} 168 L${x + 8} 168`} stroke="#14202B" strokeWidth="3" />
+          <line className="stroke-copper-bright" x1={x} y1="158" x2={x} y2="166" strokeWidth="4" />
+          <path className="stroke-ink" d={`M${x - 8} 168 L${x + 8} 168`} strokeWidth="3" />
         </g>
       ))}
-      <path d="M132 170 Q140 190 120 200 M148 170 Q140 190 160 200 M212 170 Q220 190 200 200 M228 170 Q220 190 240 200" fill="none" stroke="#1B617A" strokeWidth="2" strokeDasharray="4 3" />
-      <circle cx="100" cy="190" r="6" fill="none" stroke="#14202B" strokeWidth="2" />
-      <text x="8" y="206" fontSize="11" fill="#14202B">water service</text>
-      <text x="96" y="125" fontSize="11" fill="#14202B">riser</text>
+      <path className="stroke-water" d="M132 170 Q140 190 120 200 M148 170 Q140 190 160 200 M212 170 Q220 190 200 200 M228 170 Q220 190 240 200" fill="none" strokeWidth="2" strokeDasharray="4 3" />
+      <circle className="stroke-ink" cx="100" cy="190" r="6" fill="none" strokeWidth="2" />
+      <text className="fill-ink" x="8" y="206" fontSize="11">water service</text>
+      <text className="fill-ink" x="96" y="125" fontSize="11">riser</text>
     </svg>
   );
 }

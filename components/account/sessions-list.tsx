@@ -6,12 +6,17 @@ import { FormError, FormNotice } from "@/components/ui/field";
 import type { OwnSession } from "@/lib/account/sessions";
 import { authClient } from "@/lib/auth/client";
 import { getJson } from "@/lib/fetcher";
+import { serverFirst } from "@/components/ui/server-first";
+import { utcStamp } from "@/lib/dates";
 
-const when = (iso: string) => `${iso.slice(0, 16).replace("T", " ")} UTC`;
+const when = (iso: string) => utcStamp(iso);
 
 /** Where the person is signed in, with "sign out everywhere else" (better-auth revokeOtherSessions). */
-export function SessionsList() {
-  const { data, error, isLoading, mutate } = useSWR<{ sessions: OwnSession[] }>("/api/account/sessions", getJson);
+const KEY = "/api/account/sessions";
+
+/** `initial`: the sessions the server page already listed (not fetched again on mount). */
+export function SessionsList({ initial }: { initial?: { sessions: OwnSession[] } }) {
+  const { data, error, isLoading, mutate } = useSWR<{ sessions: OwnSession[] }>(KEY, getJson, serverFirst(KEY, initial && { key: KEY, data: initial }));
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const [actionError, setActionError] = useState<string | null>(null);

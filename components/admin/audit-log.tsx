@@ -1,9 +1,9 @@
 "use client";
 import { useState } from "react";
 import type { AuditRow } from "@/lib/admin/audit-log";
-import { DataTable, When, type Column } from "./data-table";
+import { DataTable, When, type Column } from "@/components/ui/data-table";
 import { SelectField } from "@/components/ui/select-field";
-import { useDebounced } from "./use-debounced";
+import { useDebounced } from "@/components/ui/use-debounced";
 
 type Org = { id: string; name: string };
 

@@ -2,7 +2,8 @@
 import useSWR from "swr";
 import type { ContentStatus as Status } from "@/lib/admin/content";
 import { getJson } from "@/lib/fetcher";
-import { When } from "./data-table";
+import { serverFirst } from "@/components/ui/server-first";
+import { When } from "@/components/ui/data-table";
 import { SyncButton } from "./sync-button";
 
 const KINDS = [
@@ -13,8 +14,11 @@ const KINDS = [
   { key: "questions", label: "Quiz questions" },
 ] as const;
 
-export function ContentStatus() {
-  const { data, error, isLoading, mutate } = useSWR<Status>("/api/admin/content", getJson);
+const KEY = "/api/admin/content";
+
+/** `initial`: the status the server page already loaded (not fetched again on mount; the sync button refreshes it). */
+export function ContentStatus({ initial }: { initial?: Status }) {
+  const { data, error, isLoading, mutate } = useSWR<Status>(KEY, getJson, serverFirst(KEY, initial && { key: KEY, data: initial }));
   if (error) {
     return (
       <div role="alert" className="flex flex-wrap items-center gap-3 rounded border border-caution bg-caution-light px-3 py-2 text-caution">

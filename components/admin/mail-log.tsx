@@ -1,9 +1,9 @@
 "use client";
 import { useState } from "react";
 import type { MailRow } from "@/lib/admin/mail";
-import { DataTable, When, type Column } from "./data-table";
+import { DataTable, When, type Column } from "@/components/ui/data-table";
 import { SelectField } from "@/components/ui/select-field";
-import { useDebounced } from "./use-debounced";
+import { useDebounced } from "@/components/ui/use-debounced";
 
 export function MailLog({ bodiesVisible }: { bodiesVisible: boolean }) {
   const [q, setQ] = useState("");

@@ -10,10 +10,10 @@ import { Field, FormError, FormNotice } from "@/components/ui/field";
 import type { OrganizationRow } from "@/lib/admin/organizations";
 import { createOrganizationSchema, renameOrganizationSchema } from "@/lib/admin/schemas";
 import { postJson } from "@/lib/fetcher";
-import { DataTable, tableKey, When, type Column } from "./data-table";
-import { Dialog } from "./dialog";
+import { DataTable, tableKey, When, type Column } from "@/components/ui/data-table";
+import { Dialog } from "@/components/ui/dialog";
 import { SelectField } from "@/components/ui/select-field";
-import { useDebounced } from "./use-debounced";
+import { useDebounced } from "@/components/ui/use-debounced";
 import { applyServerErrors } from "./server-errors";
 
 const KIND_LABEL: Record<string, string> = { contractor: "Sprinkler contractor", builder: "Home builder" };

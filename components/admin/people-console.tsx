@@ -4,11 +4,11 @@ import { useSWRConfig } from "swr";
 import { FormNotice } from "@/components/ui/field";
 import { ROLES } from "@/lib/access/rules";
 import type { PersonRow } from "@/lib/admin/people";
-import { DataTable, tableKey, When, type Column } from "./data-table";
-import { Dialog } from "./dialog";
+import { DataTable, tableKey, When, type Column } from "@/components/ui/data-table";
+import { Dialog } from "@/components/ui/dialog";
 import { SelectField } from "@/components/ui/select-field";
 import { PersonActions, ROLE_LABEL } from "./person-actions";
-import { useDebounced } from "./use-debounced";
+import { useDebounced } from "@/components/ui/use-debounced";
 
 type Org = { id: string; name: string };
 

@@ -1,7 +1,6 @@
 /** Dates as the billing pages print them (UTC, so server and browser agree). */
-const day = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
-const dayTime = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", timeZone: "UTC", hour12: false });
+import { receiptDate, receiptDateTime } from "@/lib/dates";
 
-export const formatDay = (iso: string) => day.format(new Date(iso));
-export const formatDayTime = (iso: string) => `${dayTime.format(new Date(iso))} UTC`;
+export const formatDay = (iso: string) => receiptDate(iso);
+export const formatDayTime = (iso: string) => `${receiptDateTime(iso)} UTC`;
 export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;

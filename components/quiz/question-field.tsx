@@ -29,7 +29,7 @@ export function QuestionField({ q, value, onChange }: { q: PublicQuestion; value
                   else next.delete(o.id);
                   onChange([...next]);
                 }}
-                className="mt-1 h-5 w-5 accent-[#1B617A]"
+                className="mt-1 h-5 w-5 accent-water"
               />
               <span>{o.text}</span>
             </label>
@@ -45,7 +45,7 @@ export function QuestionField({ q, value, onChange }: { q: PublicQuestion; value
         <div className="flex flex-wrap gap-2">
           {[true, false].map((b) => (
             <label key={String(b)} className="flex min-h-11 cursor-pointer items-center gap-3 rounded border border-line bg-paper px-4 py-2 has-[:checked]:border-water has-[:checked]:bg-water-light">
-              <input type="radio" name={name} checked={value === b} onChange={() => onChange(b)} className="h-5 w-5 accent-[#1B617A]" />
+              <input type="radio" name={name} checked={value === b} onChange={() => onChange(b)} className="h-5 w-5 accent-water" />
               <span>{b ? "True" : "False"}</span>
             </label>
           ))}

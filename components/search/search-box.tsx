@@ -3,19 +3,11 @@ import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useState } from "react";
 import useSWR from "swr";
+import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { SearchHit } from "@/lib/search/browser";
 
 const KIND_LABEL = { lesson: "Lesson", card: "Code card", term: "Glossary" } as const;
-
-function useDebounced(value: string, ms: number) {
-  const [v, setV] = useState(value);
-  useEffect(() => {
-    const t = setTimeout(() => setV(value), ms);
-    return () => clearTimeout(t);
-  }, [value, ms]);
-  return v;
-}
 
 export function SearchBox() {
   const params = useSearchParams();

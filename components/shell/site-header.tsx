@@ -19,11 +19,11 @@ export function SiteHeader() {
 function RiserMark() {
   return (
     <svg width="28" height="28" viewBox="0 0 28 28" aria-hidden="true" focusable="false">
-      <rect x="12" y="6" width="4" height="20" fill="#B5651D" />
-      <circle cx="20" cy="15" r="3.5" fill="none" stroke="#F7F4EE" strokeWidth="2" />
-      <line x1="16" y1="15" x2="16.5" y2="15" stroke="#F7F4EE" strokeWidth="2" />
-      <path d="M6 5 L22 5" stroke="#F7F4EE" strokeWidth="2.5" strokeLinecap="round" />
-      <path d="M14 5 L14 2" stroke="#F7F4EE" strokeWidth="2" />
+      <rect className="fill-copper-bright" x="12" y="6" width="4" height="20" />
+      <circle className="stroke-paper" cx="20" cy="15" r="3.5" fill="none" strokeWidth="2" />
+      <line className="stroke-paper" x1="16" y1="15" x2="16.5" y2="15" strokeWidth="2" />
+      <path className="stroke-paper" d="M6 5 L22 5" strokeWidth="2.5" strokeLinecap="round" />
+      <path className="stroke-paper" d="M14 5 L14 2" strokeWidth="2" />
     </svg>
   );
 }

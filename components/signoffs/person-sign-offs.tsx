@@ -3,8 +3,9 @@ import type { Viewer } from "@/lib/access";
 import { signOffsOfPerson } from "@/lib/signoffs/queries";
 import { EvidenceThumbs } from "./evidence-thumbs";
 import { SignOffBadge } from "./status-badge";
+import { isoDay } from "@/lib/dates";
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+const day = (d: Date) => isoDay(d);
 
 /**
  * A person's practical sign-offs, for the person page of the team area (server component; the

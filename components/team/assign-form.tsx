@@ -7,14 +7,16 @@ import useSWR from "swr";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
+import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson, postJson } from "@/lib/fetcher";
 import { assignSchema, type AssignInput } from "@/lib/team/schemas";
+import { isoDay } from "@/lib/dates";
 
 type Out = z.output<typeof assignSchema>;
 type PersonHit = { id: string; name: string; email: string; team: string | null };
 type Item = { slug: string; title: string };
 
-const today = () => new Date().toISOString().slice(0, 10);
+const today = () => isoDay(new Date());
 
 /** Assign a module or a learning path to people and/or whole teams, with a due date. */
 export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; paths: Item[]; teams: { id: string; name: string }[]; org: string | null }) {
@@ -23,7 +25,6 @@ export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; pa
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
   const [search, setSearch] = useState("");
-  const [q, setQ] = useState("");
   const [chosen, setChosen] = useState<PersonHit[]>([]);
   const { register, handleSubmit, setValue, control, formState, setError: setFieldError, clearErrors } = useForm<AssignInput, unknown, Out>({
     resolver: zodResolver(assignSchema),
@@ -34,10 +35,7 @@ export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; pa
   useEffect(() => {
     setValue("slug", (kind === "module" ? modules : paths)[0]?.slug ?? "");
   }, [kind, modules, paths, setValue]);
-  useEffect(() => {
-    const t = setTimeout(() => setQ(search.trim()), 250);
-    return () => clearTimeout(t);
-  }, [search]);
+  const q = useDebounced(search.trim(), 250);
   const people = useSWR<{ people: PersonHit[] }>(q ? `/api/team/people?q=${encodeURIComponent(q)}${org ? `&org=${encodeURIComponent(org)}` : ""}` : null, getJson);
 
   function choose(p: PersonHit) {

@@ -4,10 +4,13 @@ import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
+import { serverFirst } from "@/components/ui/server-first";
+import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { BoardPage, BoardRow } from "@/lib/team/board";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
 import { StatusBadge } from "./status-badge";
+import { isoDay, shortDate } from "@/lib/dates";
 
 export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };
 
@@ -17,6 +20,8 @@ type Props = {
   org: string | null;
   showOrgNames: boolean;
   initial: BoardFilters;
+  /** the page of the board the server already rendered for `initial` (not fetched again on mount) */
+  initialPage?: BoardPage;
 };
 
 const PAGE_SIZES = [10, 25, 50, 100];
@@ -35,15 +40,16 @@ function queryString(f: BoardFilters, org: string | null, withPage = true): stri
   return p.toString();
 }
 
-const shortDate = (iso: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
 
 const col = createColumnHelper<BoardRow>();
 
-export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props) {
+export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialPage }: Props) {
   const [f, setF] = useState<BoardFilters>(initial);
   const [search, setSearch] = useState(initial.q);
   const qs = queryString(f, org);
-  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(`/api/team/board?${qs}`, getJson, { keepPreviousData: true, revalidateOnFocus: false });
+  const key = `/api/team/board?${qs}`;
+  const [first] = useState(() => (initialPage ? { key: `/api/team/board?${queryString(initial, org)}`, data: initialPage } : undefined));
+  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(key, getJson, { keepPreviousData: true, revalidateOnFocus: false, ...serverFirst(key, first) });
 
   // Keep the address in step with the filters, so a view can be bookmarked or shared.
   useEffect(() => {
@@ -51,10 +57,12 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
     window.history.replaceState(null, "", next);
   }, [qs]);
   // Search as one types, after a pause.
-  useEffect(() => {
-    const t = setTimeout(() => setF((old) => (old.q === search.trim() ? old : { ...old, q: search.trim(), page: 1 })), 300);
-    return () => clearTimeout(t);
-  }, [search]);
+  const settledSearch = useDebounced(search.trim(), 300);
+  const [seenSearch, setSeenSearch] = useState(settledSearch);
+  if (settledSearch !== seenSearch) {
+    setSeenSearch(settledSearch);
+    setF((old) => (old.q === settledSearch ? old : { ...old, q: settledSearch, page: 1 }));
+  }
 
   const set = (patch: Partial<BoardFilters>) => setF((old) => ({ ...old, page: 1, ...patch }));
   const shownModules = f.module ? modules.filter((m) => m.slug === f.module) : modules;
@@ -110,7 +118,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
         ),
       }),
       col.accessor("overdue", { header: "Overdue", cell: (c) => <span className={`font-mono ${c.getValue() ? "font-bold text-caution" : ""}`}>{c.getValue()}</span> }),
-      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{c.getValue()!.slice(0, 10)}</span> : <span className="text-muted">—</span>) }),
+      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{isoDay(c.getValue())}</span> : <span className="text-muted">—</span>) }),
     ],
     [shownModules, showOrgNames, teams],
   );

@@ -4,15 +4,19 @@ import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
 import { getJson } from "@/lib/fetcher";
 import type { TeamTotal, WeekPoint } from "@/lib/team/board";
+import { monthDay, startOfIsoDay } from "@/lib/dates";
+import { chartColors } from "@/lib/theme/tokens";
+import { serverFirst } from "@/components/ui/server-first";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
 const pct = (t: TeamTotal) => (t.cells ? Math.round((t.passed / t.cells) * 100) : 0);
-const weekLabel = (d: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", timeZone: "UTC" }).format(new Date(`${d}T00:00:00Z`));
+const weekLabel = (d: string) => monthDay(startOfIsoDay(d));
 
 /** Totals per team and the two charts, fetched once per visit (they cover the whole organization). */
-export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrgNames: boolean }) {
-  const { data, error, isLoading, mutate } = useSWR<Summary>(`/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`, getJson, { revalidateOnFocus: false });
+export function TeamSummary({ org, showOrgNames, initial }: { org: string | null; showOrgNames: boolean; initial?: Summary }) {
+  const key = `/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`;
+  const { data, error, isLoading, mutate } = useSWR<Summary>(key, getJson, { revalidateOnFocus: false, ...serverFirst(key, initial && { key, data: initial }) });
   const label = (t: TeamTotal) => (showOrgNames ? `${t.orgName} · ${t.team}` : t.team);
   return (
     <section aria-labelledby="summary-heading" className="mb-10">
@@ -68,11 +72,11 @@ export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrg
               <div className="h-60" aria-hidden="true">
                 <ResponsiveContainer width="100%" height="100%">
                   <BarChart data={data.weeks.map((w) => ({ ...w, label: weekLabel(w.week) }))} margin={{ top: 8, right: 8, bottom: 0, left: -16 }} accessibilityLayer={false}>
-                    <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
-                    <XAxis dataKey="label" tick={{ fontSize: 11, fill: "#14202B" }} interval="preserveStartEnd" />
-                    <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <CartesianGrid strokeDasharray="3 3" stroke={chartColors.grid} />
+                    <XAxis dataKey="label" tick={{ fontSize: 11, fill: chartColors.axis }} interval="preserveStartEnd" />
+                    <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
-                    <Bar dataKey="completions" name="Completions" fill="#1B617A" />
+                    <Bar dataKey="completions" name="Completions" fill={chartColors.primary} />
                   </BarChart>
                 </ResponsiveContainer>
               </div>
@@ -99,11 +103,11 @@ export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrg
               <div className="h-60" aria-hidden="true">
                 <ResponsiveContainer width="100%" height="100%">
                   <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={{ top: 8, right: 16, bottom: 0, left: 8 }} accessibilityLayer={false}>
-                    <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
-                    <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: "#14202B" }} />
-                    <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <CartesianGrid strokeDasharray="3 3" stroke={chartColors.grid} />
+                    <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: chartColors.axis }} />
+                    <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
-                    <Bar dataKey="passed" name="Passed (%)" fill="#9A4F12" />
+                    <Bar dataKey="passed" name="Passed (%)" fill={chartColors.secondary} />
                   </BarChart>
                 </ResponsiveContainer>
               </div>

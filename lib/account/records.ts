@@ -4,7 +4,7 @@ import { MySqlTable, type AnyMySqlColumn } from "drizzle-orm/mysql-core";
 import { db } from "@/db/client";
 import * as schema from "@/db/schema";
 import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, organization, quizAttempt, team, user } from "@/db/schema";
-import { toSafeCsv, type CsvValue } from "@/lib/csv/safe";
+import { toSafeCsv, type CsvValue } from "@/lib/csv";
 
 export type RecordRow = Record<string, string | number | boolean | null>;
 

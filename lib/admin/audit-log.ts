@@ -4,9 +4,10 @@ import { alias } from "drizzle-orm/mysql-core";
 import type { z } from "zod";
 import { db } from "@/db/client";
 import { auditLog, organization, user } from "@/db/schema";
-import { toSafeCsv } from "@/lib/csv/safe";
+import { toSafeCsv } from "@/lib/csv";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { auditQuery, Paged } from "./schemas";
+import { addDays, startOfIsoDay } from "@/lib/dates";
 
 export type AuditRow = {
   id: number;
@@ -26,7 +27,7 @@ export type AuditRow = {
 
 type Filters = Omit<z.infer<typeof auditQuery>, "page" | "pageSize" | "sort" | "dir">;
 
-const dayStart = (day: string) => new Date(`${day}T00:00:00.000Z`);
+const dayStart = startOfIsoDay;
 
 function whereOf(f: Filters): SQL | undefined {
   const parts: (SQL | undefined)[] = [];
@@ -36,7 +37,7 @@ function whereOf(f: Filters): SQL | undefined {
   else if (f.organizationId) parts.push(eq(auditLog.organizationId, f.organizationId));
   if (f.from) parts.push(gte(auditLog.at, dayStart(f.from)));
   // "to" is inclusive: everything before the start of the next day (UTC).
-  if (f.to) parts.push(lt(auditLog.at, new Date(dayStart(f.to).getTime() + 86_400_000)));
+  if (f.to) parts.push(lt(auditLog.at, addDays(dayStart(f.to), 1)));
   return and(...parts);
 }
 

@@ -3,6 +3,7 @@ import { and, count, desc, eq, gte } from "drizzle-orm";
 import { db } from "@/db/client";
 import { contentSync, mailLog, organization, user } from "@/db/schema";
 import { listAudit, type AuditRow } from "./audit-log";
+import { addDays } from "@/lib/dates";
 
 export type AdminOverview = {
   organizations: number;
@@ -15,7 +16,7 @@ export type AdminOverview = {
 
 /** The figures on the admin overview: one small query each. */
 export async function adminOverview(): Promise<AdminOverview> {
-  const weekAgo = new Date(Date.now() - 7 * 86_400_000);
+  const weekAgo = addDays(new Date(), -7);
   const [[orgs], [people], [banned], [failed], [sync], recent] = await Promise.all([
     db.select({ n: count() }).from(organization),
     db.select({ n: count() }).from(user),

@@ -10,6 +10,7 @@ import { isDuplicateKey } from "./checkout";
 import { PLANS } from "./plans";
 import { formatMoney } from "./pricing";
 import type { ProviderEvent, ProviderSession } from "./provider";
+import { receiptLongDate } from "@/lib/dates";
 
 export type WebhookOutcome = PaymentOutcome | "duplicate" | "unknown" | "unhandled";
 export type WebhookResult = { outcome: WebhookOutcome; seatsAdded: number };
@@ -155,7 +156,7 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
   return { outcome: applied.outcome, seatsAdded: applied.seatsAdded };
 }
 
-const dateText = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+const dateText = (d: Date) => receiptLongDate(d);
 
 /** The receipt mail: to whoever bought, and to every manager of the organization. */
 async function mailReceipt(checkoutId: string, applied: Applied): Promise<void> {

@@ -2,18 +2,16 @@ import "server-only";
 /**
  * The certificate as a one-page PDF (US Letter, landscape), drawn with pdf-lib.
  *
- * Fonts are TTF files from npm packages (pdf-lib's fontkit embeds TTF reliably; see STACK.md):
- * Atkinson Hyperlegible, the app's body face, for everything it covers, and DejaVu Sans for any run
- * of characters it lacks (Greek, Cyrillic, symbols), so that any Latin, Greek or Cyrillic name prints.
- * DejaVu is embedded only when a text needs it. Every font is subset, which keeps a page near 40 kB.
+ * Fonts, font fallback, wrapping and colours come from lib/pdf: Atkinson Hyperlegible with DejaVu Sans
+ * for any run of characters it lacks, so that any Latin, Greek or Cyrillic name prints. DejaVu is
+ * embedded only when a text needs it. Every font is subset, which keeps a page near 40 kB.
  *
  * This module needs no database or environment: callers pass the data and the verification URL.
  */
-import { readFileSync } from "node:fs";
-import path from "node:path";
-import fontkit from "@pdf-lib/fontkit";
-import { PDFDocument, degrees, rgb, setCharacterSpacing, type PDFFont, type PDFPage, type RGB } from "pdf-lib";
+import { degrees, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
+import { C, createPdf, defaultFontDir } from "@/lib/pdf";
+import { palette } from "@/lib/theme/tokens";
 import { formatCertificateDate, formatHours, type CertificateKind } from "./status";
 
 export type CertificatePdfData = {
@@ -41,200 +39,14 @@ export type CertificatePdfOptions = {
   fontDir?: string;
 };
 
-const FONT_FILES = {
-  regular: "@expo-google-fonts/atkinson-hyperlegible/400Regular/AtkinsonHyperlegible_400Regular.ttf",
-  bold: "@expo-google-fonts/atkinson-hyperlegible/700Bold/AtkinsonHyperlegible_700Bold.ttf",
-  fallback: "dejavu-fonts-ttf/ttf/DejaVuSans.ttf",
-  fallbackBold: "dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf",
-  mono: "dejavu-fonts-ttf/ttf/DejaVuSansMono.ttf",
-} as const;
-type FontFile = keyof typeof FONT_FILES;
-type Face = "regular" | "bold" | "mono";
-
-// Read once per process; a few hundred kB in memory.
-const bytesCache = new Map<string, Uint8Array>();
-function fontBytes(dir: string, key: FontFile): Uint8Array {
-  // the fonts live in node_modules, which the server keeps; no output tracing needed
-  const file = path.join(/*turbopackIgnore: true*/ dir, FONT_FILES[key]);
-  let b = bytesCache.get(file);
-  if (!b) {
-    b = new Uint8Array(readFileSync(/*turbopackIgnore: true*/ file));
-    bytesCache.set(file, b);
-  }
-  return b;
-}
-
-/**
- * Parsed fonts, reused by every document: pdf-lib parses the font file for each embed, and most of
- * a page's time went into decoding the same tables again. A parsed fontkit font is read-only to
- * pdf-lib (each document makes its own subset), so one instance per file serves all documents.
- */
-const parsedCache = new Map<Uint8Array, ReturnType<typeof fontkit.create>>();
-const cachingFontkit: Parameters<PDFDocument["registerFontkit"]>[0] = {
-  create(buffer: Uint8Array) {
-    let f = parsedCache.get(buffer);
-    if (!f) {
-      f = memoizeLayout(fontkit.create(buffer as Buffer));
-      parsedCache.set(buffer, f);
-    }
-    return f;
-  },
-};
-
-/**
- * Shaping (fontkit's layout) was the largest cost left, and most of a page's strings are the same in
- * every document. pdf-lib only reads the glyphs of a layout, never changes them, so a bounded memo
- * per font is safe.
- */
-function memoizeLayout<F extends { layout: (text: string, features?: never) => unknown }>(font: F): F {
-  const layout = font.layout.bind(font);
-  const memo = new Map<string, unknown>();
-  font.layout = ((text: string, features?: never) => {
-    const key = `${JSON.stringify(features ?? null)}\u0000${text}`;
-    let run = memo.get(key);
-    if (run === undefined) {
-      run = layout(text, features);
-      if (memo.size >= 4000) memo.clear();
-      memo.set(key, run);
-    }
-    return run;
-  }) as F["layout"];
-  return font;
-}
-
-// Code points Atkinson Hyperlegible has (regular and bold share a character set).
-const coverageCache = new Map<string, Set<number>>();
-function primaryCoverage(dir: string): Set<number> {
-  let s = coverageCache.get(dir);
-  if (!s) {
-    s = new Set(cachingFontkit.create(fontBytes(dir, "regular")).characterSet);
-    coverageCache.set(dir, s);
-  }
-  return s;
-}
-
-// Palette: the named tokens of tailwind.config.ts.
-const hex = (h: string): RGB => rgb(parseInt(h.slice(1, 3), 16) / 255, parseInt(h.slice(3, 5), 16) / 255, parseInt(h.slice(5, 7), 16) / 255);
-const C = {
-  ink: hex("#14202B"),
-  paper: hex("#F7F4EE"),
-  panel: hex("#FFFFFF"),
-  line: hex("#D5CFC3"),
-  muted: hex("#56616B"),
-  copper: hex("#9A4F12"),
-  copperBright: hex("#B5651D"),
-  copperLight: hex("#F3E3D3"),
-  water: hex("#1B617A"),
-  waterLight: hex("#DCECF1"),
-  caution: hex("#B42318"),
-  cautionLight: hex("#FBE4E1"),
-};
-
 const PAGE = { width: 792, height: 612 }; // US Letter landscape, points
 const BAND = 196; // dark band on the left
 const LEFT = BAND + 44; // text column
 const RIGHT = PAGE.width - 48;
 
-/** Text drawing with per-run font fallback, lazily embedding DejaVu only when a run needs it. */
-class Typesetter {
-  private fonts = new Map<FontFile, Promise<PDFFont>>();
-  constructor(
-    private doc: PDFDocument,
-    private dir: string,
-    private coverage: Set<number>,
-  ) {}
-
-  private font(key: FontFile): Promise<PDFFont> {
-    let f = this.fonts.get(key);
-    if (!f) {
-      // no ligatures (text extraction stays letter by letter); no kerning, which pdf-lib does not apply
-      f = this.doc.embedFont(fontBytes(this.dir, key), { subset: true, features: { liga: false, kern: false } });
-      this.fonts.set(key, f);
-    }
-    return f;
-  }
-
-  /** Splits text into runs of one font each. */
-  async runs(text: string, face: Face): Promise<{ text: string; font: PDFFont }[]> {
-    const clean = text.replace(/[\u0000-\u001f\u007f]/g, " ");
-    if (face === "mono") return [{ text: clean, font: await this.font("mono") }];
-    const out: { text: string; key: FontFile }[] = [];
-    for (const ch of clean) {
-      const key: FontFile = this.coverage.has(ch.codePointAt(0)!) ? face : face === "bold" ? "fallbackBold" : "fallback";
-      const last = out[out.length - 1];
-      if (last && last.key === key) last.text += ch;
-      else out.push({ text: ch, key });
-    }
-    return Promise.all(out.map(async (r) => ({ text: r.text, font: await this.font(r.key) })));
-  }
-
-  // widths scale with size: lay each run out once (shaping is the costly part of a page)
-  private unitWidths = new Map<PDFFont, Map<string, number>>();
-  private runWidth(font: PDFFont, text: string, size: number): number {
-    let m = this.unitWidths.get(font);
-    if (!m) this.unitWidths.set(font, (m = new Map()));
-    let w = m.get(text);
-    if (w === undefined) m.set(text, (w = font.widthOfTextAtSize(text, 1000) / 1000));
-    return w * size;
-  }
-
-  async width(text: string, face: Face, size: number, spacing = 0): Promise<number> {
-    let w = 0;
-    for (const r of await this.runs(text, face)) w += this.runWidth(r.font, r.text, size);
-    return w + spacing * Math.max(0, [...text].length - 1);
-  }
-
-  /** Largest size ≤ `size` (down to `min`) at which the text fits `maxWidth`. */
-  async fit(text: string, face: Face, size: number, maxWidth: number, min = size * 0.5): Promise<number> {
-    let s = size;
-    while (s > min && (await this.width(text, face, s)) > maxWidth) s -= 0.5;
-    return s;
-  }
-
-  async draw(page: PDFPage, text: string, o: { x: number; y: number; size: number; face?: Face; color?: RGB; align?: "left" | "center" | "right"; spacing?: number }) {
-    const face = o.face ?? "regular";
-    const runs = await this.runs(text, face);
-    let x = o.x;
-    if (o.align && o.align !== "left") {
-      const w = await this.width(text, face, o.size, o.spacing);
-      x = o.align === "center" ? o.x - w / 2 : o.x - w;
-    }
-    // letter-spaced small capitals use the PDF's own character spacing (Tc)
-    if (o.spacing) page.pushOperators(setCharacterSpacing(o.spacing));
-    for (const r of runs) {
-      page.drawText(r.text, { x, y: o.y, size: o.size, font: r.font, color: o.color ?? C.ink });
-      x += this.runWidth(r.font, r.text, o.size) + (o.spacing ?? 0) * [...r.text].length;
-    }
-    if (o.spacing) page.pushOperators(setCharacterSpacing(0));
-    return x;
-  }
-
-  /** Greedy word wrap into at most `maxLines` lines (the last one shortened with an ellipsis). */
-  async wrap(text: string, face: Face, size: number, maxWidth: number, maxLines: number): Promise<string[]> {
-    const words = text.split(/\s+/).filter(Boolean);
-    const lines: string[] = [];
-    let line = "";
-    for (const w of words) {
-      const next = line ? `${line} ${w}` : w;
-      if (!line || (await this.width(next, face, size)) <= maxWidth) line = next;
-      else {
-        lines.push(line);
-        line = w;
-      }
-    }
-    if (line) lines.push(line);
-    if (lines.length <= maxLines) return lines;
-    const kept = lines.slice(0, maxLines);
-    let last = `${kept[maxLines - 1]} ${lines.slice(maxLines).join(" ")}`;
-    while (last.length > 1 && (await this.width(`${last}…`, face, size)) > maxWidth) last = last.slice(0, -1);
-    kept[maxLines - 1] = `${last.trimEnd()}…`;
-    return kept;
-  }
-}
-
 /** Riser's mark, large: a vertical pipe with its deflector at the top and a gauge beside it. */
 function drawMark(page: PDFPage, x: number, y: number, scale: number) {
-  page.drawRectangle({ x: x + 12 * scale, y: y - 26 * scale, width: 4 * scale, height: 20 * scale, color: C.copperBright });
+  page.drawRectangle({ x: x + 12 * scale, y: y - 26 * scale, width: 4 * scale, height: 20 * scale, color: C["copper-bright"] });
   page.drawLine({ start: { x: x + 6 * scale, y: y - 5 * scale }, end: { x: x + 22 * scale, y: y - 5 * scale }, thickness: 2.5 * scale, color: C.paper });
   page.drawLine({ start: { x: x + 14 * scale, y: y - 5 * scale }, end: { x: x + 14 * scale, y: y - 2 * scale }, thickness: 2 * scale, color: C.paper });
   page.drawCircle({ x: x + 20 * scale, y: y - 15 * scale, size: 3.5 * scale, borderColor: C.paper, borderWidth: 2 * scale });
@@ -243,11 +55,8 @@ function drawMark(page: PDFPage, x: number, y: number, scale: number) {
 
 /** The certificate PDF's bytes. */
 export async function renderCertificatePdf(data: CertificatePdfData, options: CertificatePdfOptions): Promise<Uint8Array> {
-  const dir = options.fontDir ?? path.join(/*turbopackIgnore: true*/ process.cwd(), "node_modules");
   const generatedAt = options.generatedAt ?? new Date();
-  const doc = await PDFDocument.create();
-  doc.registerFontkit(cachingFontkit);
-  const t = new Typesetter(doc, dir, primaryCoverage(dir));
+  const { doc, t } = await createPdf(options.fontDir ?? defaultFontDir());
   const kindWord = data.kind === "path" ? "learning path" : "module";
 
   doc.setTitle(`Riser certificate ${data.serial}`, { showInWindowTitleBar: true });
@@ -265,7 +74,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
 
   // ----- the band: mark, name, QR code -----
   page.drawRectangle({ x: 0, y: 0, width: BAND, height: PAGE.height, color: C.ink });
-  page.drawRectangle({ x: BAND, y: 0, width: 5, height: PAGE.height, color: C.copperBright });
+  page.drawRectangle({ x: BAND, y: 0, width: 5, height: PAGE.height, color: C["copper-bright"] });
   drawMark(page, 34, PAGE.height - 40, 2.2);
   await t.draw(page, "Riser", { x: 34, y: PAGE.height - 128, size: 30, face: "bold", color: C.paper });
   await t.draw(page, "Training for residential", { x: 34, y: PAGE.height - 150, size: 10.5, color: C.line });
@@ -279,7 +88,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
     errorCorrectionLevel: "M",
     margin: 3,
     scale: 4,
-    color: { dark: "#14202BFF", light: "#FFFFFFFF" },
+    color: { dark: `${palette.ink}FF`, light: `${palette.panel}FF` },
     // RGB without alpha and no filter search: a smaller image that pdf-lib embeds without a mask
     rendererOpts: { deflateLevel: 6, filterType: 0, colorType: 2 } as { deflateLevel: number },
   });
@@ -299,14 +108,14 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   const serialW = await t.width(data.serial, "mono", serialSize);
   await t.draw(page, "Serial", { x: serialEnd - serialW - 8, y, size: 9, color: C.muted, align: "right" });
   y -= 14;
-  page.drawLine({ start: { x: LEFT, y }, end: { x: LEFT + 64, y }, thickness: 3, color: C.copperBright });
+  page.drawLine({ start: { x: LEFT, y }, end: { x: LEFT + 64, y }, thickness: 3, color: C["copper-bright"] });
 
   y -= 44;
   await t.draw(page, "This certifies that", { x: LEFT, y, size: 13, color: C.muted });
   y -= 42;
   // a name shrinks to 22 pt, then takes two lines (each shrunk further only if one word is too long)
   const nameSize = await t.fit(data.holderName, "bold", 36, width, 22);
-  const nameLines = (await t.width(data.holderName, "bold", nameSize)) <= width ? [data.holderName] : await t.wrap(data.holderName, "bold", 22, width, 2);
+  const nameLines = (await t.width(data.holderName, "bold", nameSize)) <= width ? [data.holderName] : await t.wrap(data.holderName, "bold", 22, width, { maxLines: 2 });
   for (const [i, line] of nameLines.entries()) {
     if (i > 0) y -= 26;
     const size = nameLines.length > 1 ? await t.fit(line, "bold", 22, width, 10) : nameSize;
@@ -321,12 +130,12 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   const lead = data.kind === "path" ? "completed every module of the Riser learning path" : "completed the Riser training module, its lessons and its graded quiz:";
   await t.draw(page, lead, { x: LEFT, y, size: 13, color: C.muted });
   y -= 30;
-  for (const line of await t.wrap(data.subjectTitle, "bold", 24, width, 2)) {
+  for (const line of await t.wrap(data.subjectTitle, "bold", 24, width, { maxLines: 2 })) {
     await t.draw(page, line, { x: LEFT, y, size: 24, face: "bold", color: C.water });
     y -= 29;
   }
   if (data.parts?.length) {
-    const partLines = await t.wrap(`Modules: ${data.parts.join(" · ")}`, "regular", 9.5, width, 3);
+    const partLines = await t.wrap(`Modules: ${data.parts.join(" · ")}`, "regular", 9.5, width, { maxLines: 3 });
     for (const line of partLines) {
       await t.draw(page, line, { x: LEFT, y: y + 6, size: 9.5, color: C.muted });
       y -= 12.5;
@@ -394,7 +203,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
       rotate: a,
     });
     const note = `Revoked on ${formatCertificateDate(data.revokedAt)}. This certificate is not valid.`;
-    page.drawRectangle({ x: LEFT, y: PAGE.height - 46, width, height: 26, color: C.cautionLight });
+    page.drawRectangle({ x: LEFT, y: PAGE.height - 46, width, height: 26, color: C["caution-light"] });
     await t.draw(page, note, { x: LEFT + 10, y: PAGE.height - 37, size: 11, face: "bold", color: C.caution });
   }
 

@@ -5,7 +5,8 @@ import { db } from "@/db/client";
 import { certificate, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { EXPIRY_REMINDER_DAYS, daysUntil, formatCertificateDate } from "./status";
+import { expiringHorizon } from "@/lib/expiring";
+import { daysUntil, formatCertificateDate } from "./status";
 
 export type ReminderRun = { due: number; sent: number; failed: number; skipped: number };
 
@@ -19,7 +20,7 @@ const renewal = alias(certificate, "renewal");
  */
 export async function sendExpiryReminders(opts: { now?: Date; limit?: number } = {}): Promise<ReminderRun> {
   const now = opts.now ?? new Date();
-  const horizon = new Date(now.getTime() + EXPIRY_REMINDER_DAYS * 24 * 60 * 60 * 1000);
+  const horizon = expiringHorizon(now);
   const due = await db
     .select({
       id: certificate.id,

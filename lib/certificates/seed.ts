@@ -17,8 +17,8 @@ import { findModule, loadCatalog } from "@/lib/content/load";
 import { issueCertificateForCompletion } from "./issue";
 import { revokeWithAudit } from "./revoke";
 import { addMonthsUtc } from "./status";
+import { DAY_MS } from "@/lib/dates";
 
-const DAY = 24 * 60 * 60 * 1000;
 
 async function completeModule(person: { id: string; organizationId: string | null }, moduleSlug: string, completedAt: Date) {
   const mod = findModule(moduleSlug);
@@ -70,18 +70,18 @@ export async function seedCertificates(now: Date = new Date()): Promise<void> {
   let count = 0;
   const installer = loadCatalog().paths.find((p) => p.slug === "new-installer");
   for (const [i, slug] of (installer?.modules ?? []).entries()) {
-    count += (await completeModule(kasimir, slug, new Date(now.getTime() - (45 - i * 4) * DAY))).length;
+    count += (await completeModule(kasimir, slug, new Date(now.getTime() - (45 - i * 4) * DAY_MS))).length;
   }
 
   const freeze = findModule("freeze-protection")!;
-  const expiringAt = new Date(now.getTime() + 18 * DAY);
+  const expiringAt = new Date(now.getTime() + 18 * DAY_MS);
   count += (await completeModule(rafaela, "freeze-protection", addMonthsUtc(expiringAt, -freeze.meta.validityMonths))).length;
 
   const hydraulics = findModule("hydraulics-and-permits")!;
-  const expiredAt = new Date(now.getTime() - 61 * DAY);
+  const expiredAt = new Date(now.getTime() - 61 * DAY_MS);
   count += (await completeModule(callum, "hydraulics-and-permits", addMonthsUtc(expiredAt, -hydraulics.meta.validityMonths))).length;
 
-  const [revoked] = await completeModule(callum, "fire-and-water-officials", new Date(now.getTime() - 70 * DAY));
+  const [revoked] = await completeModule(callum, "fire-and-water-officials", new Date(now.getTime() - 70 * DAY_MS));
   if (revoked) {
     count++;
     await revokeWithAudit(

@@ -3,12 +3,16 @@
  * status computed from dates, serial format, verification-code format, dates and file names.
  */
 
+import { addMonthsUtc, daysUntil, longDate } from "@/lib/dates";
+import { EXPIRING_DAYS, isExpiring } from "@/lib/expiring";
+
+export { addMonthsUtc, daysUntil };
+
 export type CertificateStatus = "valid" | "expired" | "revoked";
 export type CertificateKind = "module" | "path";
 
-/** The expiry reminder goes out this many days before a certificate expires (Riser's own choice). */
-export const EXPIRY_REMINDER_DAYS = 30;
-const DAY_MS = 24 * 60 * 60 * 1000;
+/** The expiry reminder goes out this many days before a certificate expires: the "expiring" window (lib/expiring). */
+export const EXPIRY_REMINDER_DAYS = EXPIRING_DAYS;
 
 /**
  * valid / expired / revoked at `now`. Revocation wins over expiry; a certificate is expired from
@@ -21,12 +25,7 @@ export function certificateStatus(cert: { expiresAt: Date; revokedAt: Date | nul
 
 /** Valid now, and expiring within the reminder window. */
 export function isExpiringSoon(cert: { expiresAt: Date; revokedAt: Date | null }, now: Date = new Date()): boolean {
-  return certificateStatus(cert, now) === "valid" && cert.expiresAt.getTime() - now.getTime() <= EXPIRY_REMINDER_DAYS * DAY_MS;
-}
-
-/** Whole days from `now` until `date` (rounded up; 0 or less once it has passed). */
-export function daysUntil(date: Date, now: Date = new Date()): number {
-  return Math.ceil((date.getTime() - now.getTime()) / DAY_MS);
+  return certificateStatus(cert, now) === "valid" && isExpiring(cert.expiresAt, now);
 }
 
 export const SERIAL_PREFIX = "RSR";
@@ -60,20 +59,9 @@ export function extractVerificationCode(input: string): string | null {
   return isVerificationCode(code) ? code : null;
 }
 
-/** `date` plus whole calendar months in UTC; the day is clamped (Jan 31 + 1 month = Feb 28/29). */
-export function addMonthsUtc(date: Date, months: number): Date {
-  const y = date.getUTCFullYear();
-  const m = date.getUTCMonth() + months;
-  const target = new Date(Date.UTC(y, m, 1, date.getUTCHours(), date.getUTCMinutes(), date.getUTCSeconds(), date.getUTCMilliseconds()));
-  const lastDay = new Date(Date.UTC(target.getUTCFullYear(), target.getUTCMonth() + 1, 0)).getUTCDate();
-  target.setUTCDate(Math.min(date.getUTCDate(), lastDay));
-  return target;
-}
-
 /** "December 1, 2026" in UTC, the way dates are printed on certificates and pages. */
-const dateFormat = new Intl.DateTimeFormat("en-US", { year: "numeric", month: "long", day: "numeric", timeZone: "UTC" });
 export function formatCertificateDate(date: Date): string {
-  return dateFormat.format(date);
+  return longDate(date);
 }
 
 /** Hours as printed: "1.5", "2", "8.25". */

@@ -9,6 +9,7 @@ import { checkAndRecordCompletion } from "@/lib/completion";
 import { findModule } from "@/lib/content/load";
 import type { Question } from "@/lib/content/schema";
 import { answerProblem, correctAnswerText, drawAttempt, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
+import { utcStamp } from "@/lib/dates";
 
 /** Answers sent after the time limit plus this grace are refused; the attempt is graded as saved. */
 const GRACE_MS = 15_000;
@@ -146,7 +147,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
       .orderBy(asc(quizAttempt.startedAt));
     if (recent.length >= rules.attemptsPerPeriod) {
       const next = new Date(recent[0]!.startedAt.getTime() + rules.periodHours * 3_600_000);
-      throw new ApiError(409, `You have used ${rules.attemptsPerPeriod} attempts in ${rules.periodHours} hours. Your next attempt opens at ${next.toISOString().slice(0, 16).replace("T", " ")} UTC.`);
+      throw new ApiError(409, `You have used ${rules.attemptsPerPeriod} attempts in ${rules.periodHours} hours. Your next attempt opens at ${utcStamp(next)}.`);
     }
     const last = recent.at(-1)?.submittedAt;
     if (last && rules.waitMinutes > 0 && now < last.getTime() + rules.waitMinutes * 60_000) {

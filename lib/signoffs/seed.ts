@@ -17,8 +17,8 @@ import { signOff, signOffEvidence, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { putObject } from "@/lib/storage";
 import { evidenceKeys } from "./keys";
+import { DAY_MS } from "@/lib/dates";
 
-const DAY = 24 * 60 * 60 * 1000;
 
 /** A drawn stand-in for a job-site photo: two pipe runs meeting at a fitting, with a caption band. */
 async function demoPicture(caption: string, hue: string): Promise<{ body: Buffer; thumb: Buffer }> {
@@ -120,7 +120,7 @@ export async function seedSignOffs(now: Date = new Date()): Promise<void> {
     if (!learner || (d.reviewer && !reviewer)) continue;
     const id = randomUUID();
     const evidenceId = randomUUID();
-    const submittedAt = new Date(now.getTime() - d.daysAgo * DAY);
+    const submittedAt = new Date(now.getTime() - d.daysAgo * DAY_MS);
     const pic = await demoPicture(d.caption, d.module === "pipe-and-joining" ? "#e9e4d0" : "#b42318");
     const keys = evidenceKeys(learner.id, id, evidenceId, "jpg", true);
     await putObject(keys.objectKey, pic.body, "image/jpeg");
@@ -138,7 +138,7 @@ export async function seedSignOffs(now: Date = new Date()): Promise<void> {
         submittedAt,
         reviewerId: reviewer?.id ?? null,
         reviewComment: d.comment ?? null,
-        reviewedAt: reviewer ? new Date(submittedAt.getTime() + DAY) : null,
+        reviewedAt: reviewer ? new Date(submittedAt.getTime() + DAY_MS) : null,
       });
       await tx.insert(signOffEvidence).values({ id: evidenceId, signOffId: id, position: 0, ...keys, contentType: "image/jpeg", size: pic.body.byteLength, originalName: d.fileName, createdAt: submittedAt });
     });

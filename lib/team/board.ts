@@ -5,6 +5,7 @@ import { loadCatalog } from "@/lib/content/load";
 import type { BoardQuery, BoardStatus } from "./schemas";
 import type { OrgScope } from "./scope";
 import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status";
+import { addDays, isoDay } from "@/lib/dates";
 
 /**
  * The team board: people × modules with one status per cell (rule: lib/team/status.ts).
@@ -17,7 +18,6 @@ import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status
  * scope is aggregated once, filtered and sorted, and the page cut from that.
  */
 
-const DAY_MS = 86_400_000;
 
 export type BoardCell = {
   status: BoardStatus;
@@ -465,7 +465,7 @@ export type WeekPoint = { week: string; completions: number };
 export async function completionsPerWeek(scope: OrgScope, weeks = 12, now = new Date()): Promise<WeekPoint[]> {
   const monday = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   monday.setUTCDate(monday.getUTCDate() - ((monday.getUTCDay() + 6) % 7));
-  const start = new Date(monday.getTime() - (weeks - 1) * 7 * DAY_MS);
+  const start = addDays(monday, -(weeks - 1) * 7);
   const orgFilter = scope.orgId ? sql`u.organization_id = ${scope.orgId}` : sql`u.organization_id IS NOT NULL`;
   const result = await rows<{ wk: unknown; n: number | string }>(sql`
 SELECT DATE_FORMAT(DATE_SUB(DATE(c.completed_at), INTERVAL WEEKDAY(c.completed_at) DAY), '%Y-%m-%d') AS wk, COUNT(*) AS n
@@ -475,7 +475,7 @@ GROUP BY wk`);
   const byWeek = new Map(result.map((r) => [String(r.wk), Number(r.n)]));
   const out: WeekPoint[] = [];
   for (let i = 0; i < weeks; i++) {
-    const d = new Date(start.getTime() + i * 7 * DAY_MS).toISOString().slice(0, 10);
+    const d = isoDay(addDays(start, i * 7));
     out.push({ week: d, completions: byWeek.get(d) ?? 0 });
   }
   return out;

@@ -4,13 +4,15 @@ import { db } from "@/db/client";
 import { certificate, team, user } from "@/db/schema";
 import { certificateStatus } from "@/lib/certificates/status";
 import { boardModules, boardRowsInChunks, type BoardFilter } from "./board";
-import { csvResponse } from "./csv";
+import { csvResponse } from "@/lib/csv";
 import { STATUS_LABELS } from "./schemas";
 import type { OrgScope } from "./scope";
-import { EXPIRING_DAYS, isDone } from "./status";
+import { isDone } from "./status";
+import { isoDay } from "@/lib/dates";
+import { isExpiring } from "@/lib/expiring";
 
-const day = (iso: string | null | undefined) => (iso ? iso.slice(0, 10) : "");
-const stamp = () => new Date().toISOString().slice(0, 10);
+const day = (iso: string | null | undefined) => isoDay(iso);
+const stamp = () => isoDay(new Date());
 
 /** The filtered board as CSV: one row per person, one column per module. */
 export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Response> {
@@ -42,7 +44,6 @@ export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Respons
 export async function certificatesCsv(scope: OrgScope): Promise<Response> {
   const header = ["Serial", "Holder", "E-mail", "Team", ...(scope.orgId ? [] : ["Organization"]), "Kind", "Module or path", "CE hours", "Issued", "Expires", "Status"];
   const now = new Date();
-  const soon = now.getTime() + EXPIRING_DAYS * 86_400_000;
   return csvResponse(`riser-certificates-${stamp()}.csv`, header, async function* () {
     let after = 0;
     for (;;) {
@@ -71,7 +72,7 @@ export async function certificatesCsv(scope: OrgScope): Promise<Response> {
       after = page[page.length - 1]!.id;
       yield page.map((c) => {
         const status = certificateStatus(c, now);
-        const label = status === "revoked" ? "Revoked" : status === "expired" ? "Expired" : c.expiresAt.getTime() <= soon ? "Valid, expiring soon" : "Valid";
+        const label = status === "revoked" ? "Revoked" : status === "expired" ? "Expired" : isExpiring(c.expiresAt, now) ? "Valid, expiring soon" : "Valid";
         return [
           c.serial,
           c.holder,
@@ -81,8 +82,8 @@ export async function certificatesCsv(scope: OrgScope): Promise<Response> {
           c.kind === "path" ? "Learning path" : "Module",
           c.title,
           c.ceHours,
-          c.issuedAt.toISOString().slice(0, 10),
-          c.expiresAt.toISOString().slice(0, 10),
+          isoDay(c.issuedAt),
+          isoDay(c.expiresAt),
           label,
         ];
       });

@@ -11,8 +11,8 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { INVITE_DAYS, ROLE_LABELS, type AcceptInviteInput, type InviteRole } from "./schemas";
 import { assertSeatAvailable } from "./seats";
+import { addDays, longDate } from "@/lib/dates";
 
-const DAY_MS = 86_400_000;
 
 /** 256 random bits, URL-safe. Only its SHA-256 is stored: a database leak reveals no usable link. */
 export function newInviteToken(): string {
@@ -37,7 +37,7 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
     .where(and(eq(invitation.organizationId, orgId), eq(invitation.email, invite.email), isNull(invitation.acceptedAt), isNull(invitation.revokedAt)));
   const token = newInviteToken();
   const id = randomUUID();
-  const expiresAt = new Date(now.getTime() + INVITE_DAYS * DAY_MS);
+  const expiresAt = addDays(now, INVITE_DAYS);
   await tx.insert(invitation).values({
     id,
     organizationId: orgId,
@@ -53,7 +53,7 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
   return { id, token, expiresAt, replaced: revoked.affectedRows };
 }
 
-const dateText = (d: Date) => new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" }).format(d);
+const dateText = (d: Date) => longDate(d);
 
 export function inviteMail(p: { to: string; name?: string | null; orgName: string; inviterName: string; role: InviteRole; teamName?: string | null; token: string; expiresAt: Date }) {
   const where = p.teamName ? ` (${p.teamName})` : "";

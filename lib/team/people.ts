@@ -5,7 +5,7 @@ import { catalogLesson, catalogModule, certificate, lessonProgress, organization
 import { canManageOrganization, type Viewer } from "@/lib/access";
 import { certificateStatus } from "@/lib/certificates/status";
 import type { Person } from "./board";
-import { EXPIRING_DAYS } from "./status";
+import { isExpiring } from "@/lib/expiring";
 
 /** A person as the board sees them, or null. */
 export async function personById(id: string): Promise<(Person & { orgName: string }) | null> {
@@ -71,13 +71,12 @@ export async function personHistory(personId: string, now = new Date()) {
       .orderBy(desc(certificate.issuedAt))
       .limit(100),
   ]);
-  const soon = now.getTime() + EXPIRING_DAYS * 86_400_000;
   return {
     attempts,
     lessons,
     certificates: certs.map((c) => {
       const status = certificateStatus(c, now);
-      return { ...c, status: status === "valid" && c.expiresAt.getTime() <= soon ? ("expiring" as const) : status };
+      return { ...c, status: status === "valid" && isExpiring(c.expiresAt, now) ? ("expiring" as const) : status };
     }),
   };
 }

@@ -1,5 +1,5 @@
+import { DAY_MS } from "@/lib/dates";
 /** Reminder periods (pure). */
-const DAY_MS = 86_400_000;
 
 /** ISO 8601 week of a date (UTC), e.g. "2027-W03". */
 export function isoWeek(d: Date): string {

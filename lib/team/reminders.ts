@@ -6,6 +6,7 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { itemModules, itemTitle, passedModules, teamTotals, type Person } from "./board";
 import { isoWeek } from "./period";
+import { addDays, isoDay, weekdayLongDate } from "@/lib/dates";
 
 export { isoWeek };
 
@@ -18,7 +19,6 @@ export { isoWeek };
  *   digest    once per ISO week per manager
  */
 
-const DAY_MS = 86_400_000;
 export const DUE_SOON_DAYS = 3;
 /** Mails in flight at once (a large organization's first run can mean thousands). */
 const SEND_CONCURRENCY = 8;
@@ -40,7 +40,7 @@ async function release(kind: string, userId: string, keys: string[]) {
   if (keys.length) await db.delete(reminderLog).where(and(eq(reminderLog.kind, kind), eq(reminderLog.userId, userId), inArray(reminderLog.periodKey, keys)));
 }
 
-const dayText = (d: Date) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "long", day: "numeric", year: "numeric", timeZone: "UTC" }).format(d);
+const dayText = (d: Date) => weekdayLongDate(d);
 
 type Candidate = { assignmentId: number; kind: string; slug: string; dueAt: Date; person: Person };
 
@@ -73,7 +73,7 @@ WHERE a.team_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.
 
 /** Overdue and due-soon mails to learners. */
 export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}) {
-  const candidates = await dueAssignments(new Date(now.getTime() + DUE_SOON_DAYS * DAY_MS));
+  const candidates = await dueAssignments(addDays(now, DUE_SOON_DAYS));
   const people = new Map<string, Person>();
   for (const c of candidates) people.set(c.person.id, c.person);
   const done = await passedModules([...people.values()], now);
@@ -84,7 +84,7 @@ export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}
     const passed = done.get(c.person.id) ?? new Set();
     if (mods.length > 0 && mods.every((m) => passed.has(m))) continue;
     const reminder = c.dueAt.getTime() < now.getTime() ? "overdue" : "due-soon";
-    open.push({ ...c, reminder, key: reminder === "overdue" ? `a${c.assignmentId}:${week}` : `a${c.assignmentId}:${c.dueAt.toISOString().slice(0, 10)}` });
+    open.push({ ...c, reminder, key: reminder === "overdue" ? `a${c.assignmentId}:${week}` : `a${c.assignmentId}:${isoDay(c.dueAt)}` });
   }
   // Claims already taken (a repeat run skips them without an INSERT each).
   const taken = new Set<string>();
@@ -163,7 +163,7 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
     for (const m of list) if (await claim("digest", m.id, `digest:${week}`, now)) mine.push(m);
     if (mine.length === 0) continue;
     const totals = await teamTotals({ orgId, orgName: null }, now);
-    const weekAgo = new Date(now.getTime() - 7 * DAY_MS);
+    const weekAgo = addDays(now, -7);
     const [done] = await db
       .select({ n: sql<number>`COUNT(*)` })
       .from(moduleCompletion)
@@ -172,7 +172,7 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
     const [openAssignments] = await db
       .select({ n: sql<number>`COUNT(*)` })
       .from(assignment)
-      .where(and(eq(assignment.organizationId, orgId), gte(assignment.dueAt, now), lte(assignment.dueAt, new Date(now.getTime() + 7 * DAY_MS))));
+      .where(and(eq(assignment.organizationId, orgId), gte(assignment.dueAt, now), lte(assignment.dueAt, addDays(now, 7))));
     const sum = (k: "people" | "overdue" | "expiring" | "expired") => totals.reduce((n, t) => n + t[k], 0);
     const lines = totals.map((t) => {
       const pct = t.cells ? Math.round((t.passed / t.cells) * 100) : 0;

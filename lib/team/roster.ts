@@ -4,6 +4,7 @@
  * the preview and again, against fresh data, when the manager confirms the import.
  */
 import Papa from "papaparse";
+import { csvLines } from "@/lib/csv";
 import { z } from "zod";
 import { INVITE_ROLES, ROSTER_COLUMNS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "./schemas";
 
@@ -128,11 +129,5 @@ export function checkRoster(raw: RawRosterRow[], ctx: RosterContext): CheckedRow
 /** Template CSV: header and two example rows with the organization's own team names. */
 export function rosterTemplate(teamNames: string[]): string {
   const [a = "North crew", b = a] = teamNames;
-  const q = (s: string) => (/[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
-  return [
-    ROSTER_COLUMNS.join(","),
-    `new.installer@example.com,Ruel Tamberlin,learner,${q(a)}`,
-    `crew.lead@example.com,Odile Vassmer,manager,${q(b)}`,
-    "",
-  ].join("\r\n");
+  return csvLines([[...ROSTER_COLUMNS], ["new.installer@example.com", "Ruel Tamberlin", "learner", a], ["crew.lead@example.com", "Odile Vassmer", "manager", b]]);
 }

@@ -4,6 +4,7 @@ import { db, type Tx } from "@/db/client";
 import { invitation, organization, user } from "@/db/schema";
 import { ApiError, json } from "@/lib/api";
 import { seatAllowance, type TrialState } from "@/lib/billing/allowance";
+import { isoDay } from "@/lib/dates";
 
 export const BILLING_PATH = "/team/billing";
 
@@ -17,7 +18,7 @@ export class SeatLimitError extends ApiError {
     super(
       409,
       trialEndedAt
-        ? `Your organization's trial ended on ${trialEndedAt.toISOString().slice(0, 10)}; buy seats on the billing page to invite more people.`
+        ? `Your organization's trial ended on ${isoDay(trialEndedAt)}; buy seats on the billing page to invite more people.`
         : `Your organization has ${seats} seats; buy more on the billing page.`,
     );
   }

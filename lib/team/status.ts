@@ -13,11 +13,11 @@
  * A completion that has no certificate row (yet) counts for the module's validity period; a
  * revoked certificate counts as none.
  */
-import { addMonthsUtc, EXPIRY_REMINDER_DAYS } from "@/lib/certificates/status";
+import { addMonthsUtc } from "@/lib/dates";
+import { EXPIRING_DAYS, isExpiring } from "@/lib/expiring";
 import type { BoardStatus } from "./schemas";
 
-export const EXPIRING_DAYS = EXPIRY_REMINDER_DAYS;
-const DAY_MS = 86_400_000;
+export { EXPIRING_DAYS };
 
 export type CellFacts = {
   lessonsDone: number;
@@ -54,7 +54,7 @@ export function cellStatus(f: CellFacts, validityMonths: number, now: Date): Boa
   const t = now.getTime();
   const expires = expiryOf(f, validityMonths);
   if (expires && expires.getTime() > t) {
-    return expires.getTime() - t <= EXPIRING_DAYS * DAY_MS ? "expiring" : "passed";
+    return isExpiring(expires, now) ? "expiring" : "passed";
   }
   if (f.dueAt && f.dueAt.getTime() < t) return "overdue";
   if (expires) return "expired";

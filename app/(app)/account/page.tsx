@@ -1,24 +1,15 @@
 import type { Metadata } from "next";
 import { EmailForm, NameForm } from "@/components/account/profile-forms";
 import { PasswordForm } from "@/components/account/password-form";
+import { Section } from "@/components/account/section";
 import { SessionsList } from "@/components/account/sessions-list";
+import { asJson } from "@/components/ui/server-first";
+import { listOwnSessions } from "@/lib/account/sessions";
 import { FormError, FormNotice } from "@/components/ui/field";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 
 export const metadata: Metadata = { title: "Account" };
-
-function Section({ id, title, lead, children }: { id: string; title: string; lead?: string; children: React.ReactNode }) {
-  return (
-    <section aria-labelledby={id} className="flex flex-col gap-3 border-t border-line pt-6">
-      <h2 id={id} className="text-2xl">
-        {title}
-      </h2>
-      {lead ? <p className="max-w-prose text-muted">{lead}</p> : null}
-      {children}
-    </section>
-  );
-}
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireViewer("signed-in", "/account");
@@ -44,7 +35,7 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
           <PasswordForm />
         </Section>
         <Section id="sessions-h" title="Where you are signed in" lead="Each browser or device you signed in with. Sign out the others if you used a shared computer or lost a phone.">
-          <SessionsList />
+          <SessionsList initial={asJson({ sessions: await listOwnSessions(viewer.id, viewer.sessionId) })} />
         </Section>
         <Section
           id="records-h"

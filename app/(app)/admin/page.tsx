@@ -1,22 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { When } from "@/components/admin/data-table";
+import { When } from "@/components/ui/data-table";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { adminOverview } from "@/lib/admin/overview";
+import { Figure } from "@/components/admin/figure";
 
 export const metadata: Metadata = { title: "Admin" };
-
-function Figure({ label, value, href, warn }: { label: string; value: React.ReactNode; href: string; warn?: boolean }) {
-  return (
-    <li className="rounded border border-line bg-panel p-4">
-      <Link href={href} className="block text-ink no-underline hover:underline">
-        <span className="block text-sm text-muted">{label}</span>
-        <span className={`block font-mono text-3xl ${warn ? "text-caution" : ""}`}>{value}</span>
-      </Link>
-    </li>
-  );
-}
 
 export default async function AdminPage() {
   await requireViewer("admin", "/admin");

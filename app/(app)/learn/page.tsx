@@ -8,10 +8,11 @@ import { findModule } from "@/lib/content/load";
 import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team/assignments";
 import type { BoardCell } from "@/lib/team/board";
+import { isoDay, weekdayShortDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "My training" };
 
-const day = (iso: string) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
+const day = (iso: string) => weekdayShortDate(iso);
 
 /** Where "continue" leads: the lesson after the last one done, else that module's quiz, else the next assigned module. */
 function continueTarget(last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number): { href: string; label: string } | null {
@@ -87,7 +88,7 @@ export default async function LearnPage() {
           <ul className="mb-2 flex flex-col gap-1">
             {shownCerts.map((c) => (
               <li key={c.id}>
-                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? "expired" : c.expiringSoon ? "expires soon," : "valid until"} <span className="font-mono">{c.expiresAt.toISOString().slice(0, 10)}</span></span>
+                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? "expired" : c.expiringSoon ? "expires soon," : "valid until"} <span className="font-mono">{isoDay(c.expiresAt)}</span></span>
               </li>
             ))}
           </ul>

@@ -4,8 +4,9 @@ import { OrgPicker } from "@/components/team/org-picker";
 import { TeamSummary } from "@/components/team/summary";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
+import { asJson } from "@/components/ui/server-first";
 import { requireViewer } from "@/lib/access";
-import { boardModules } from "@/lib/team/board";
+import { boardModules, boardPage, completionsPerWeek, teamTotals } from "@/lib/team/board";
 import { boardQuerySchema, parseBoardQuery } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 
@@ -19,7 +20,14 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   // Filters that do not parse are dropped (the board starts unfiltered); the organization stays.
   const q = parsed.success ? parsed.data : boardQuerySchema.parse({ org: params.get("org")?.slice(0, 36) || undefined });
   const scope = await pageScope(viewer, q.org);
-  const [teams, orgs] = await Promise.all([teamsInScope(scope), viewer.role === "admin" ? allOrganizations() : Promise.resolve([])]);
+  // The board's first page and the summary come with the page, so the client does not fetch them again on mount.
+  const [teams, orgs, firstPage, teamsTotals, weeks] = await Promise.all([
+    teamsInScope(scope),
+    viewer.role === "admin" ? allOrganizations() : Promise.resolve([]),
+    boardPage(scope, q),
+    teamTotals(scope),
+    completionsPerWeek(scope),
+  ]);
   const initial: BoardFilters = {
     team: q.team ?? "",
     status: q.status ?? "",
@@ -46,8 +54,9 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
         org={viewer.role === "admin" ? scope.orgId : null}
         showOrgNames={!scope.orgId}
         initial={initial}
+        initialPage={asJson(firstPage)}
       />
-      <TeamSummary org={viewer.role === "admin" ? scope.orgId : null} showOrgNames={!scope.orgId} />
+      <TeamSummary org={viewer.role === "admin" ? scope.orgId : null} showOrgNames={!scope.orgId} initial={asJson({ teams: teamsTotals, weeks })} />
     </>
   );
 }

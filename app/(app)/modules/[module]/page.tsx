@@ -6,6 +6,7 @@ import { requireViewer } from "@/lib/access";
 import { findModule, loadCatalog } from "@/lib/content/load";
 import { progressByModule } from "@/lib/progress";
 import { moduleStatus } from "@/lib/completion";
+import { isoDay } from "@/lib/dates";
 
 type Params = { params: Promise<{ module: string }> };
 
@@ -34,7 +35,7 @@ export default async function ModulePage({ params }: Params) {
       </header>
       {status.completedAt ? (
         <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">
-          ✓ Module complete on {status.completedAt.toISOString().slice(0, 10)}
+          ✓ Module complete on {isoDay(status.completedAt)}
         </p>
       ) : null}
       <section aria-labelledby="lessons-h">

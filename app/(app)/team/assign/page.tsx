@@ -8,6 +8,8 @@ import { requireViewer } from "@/lib/access";
 import { loadCatalog } from "@/lib/content/load";
 import { listAssignments } from "@/lib/team/assignments";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
+import { Table } from "@/components/ui/table";
+import { isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Assign work" };
 
@@ -39,41 +41,28 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
       )}
       <section aria-labelledby="current" className="mt-10">
         <h2 id="current" className="mb-3 text-2xl">Current assignments</h2>
-        {assignments.length === 0 ? (
-          <p>Nothing assigned yet.</p>
-        ) : (
-          <div role="region" aria-label="Current assignments" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
-            <table className="w-full border-collapse text-sm">
-              <thead>
-                <tr className="border-b border-line bg-paper text-left">
-                  <th scope="col" className="px-2 py-2">Due</th>
-                  <th scope="col" className="px-2 py-2">Module or path</th>
-                  <th scope="col" className="px-2 py-2">Assigned to</th>
-                  <th scope="col" className="px-2 py-2"><span className="sr-only">Actions</span></th>
-                </tr>
-              </thead>
-              <tbody>
-                {assignments.map((a) => (
-                  <tr key={a.id} className="border-b border-line last:border-0">
-                    <td className={`px-2 py-2 font-mono ${a.past ? "font-bold text-caution" : ""}`}>
-                      {a.dueAt.slice(0, 10)}
-                      {a.past ? " (past)" : ""}
-                    </td>
-                    <td className="px-2 py-2">
-                      {a.title} <span className="text-muted">({a.kind === "path" ? "learning path" : "module"})</span>
-                    </td>
-                    <td className="px-2 py-2">
-                      {a.target} <span className="text-muted">({a.targetType === "team" ? "whole team" : "person"})</span>
-                    </td>
-                    <td className="px-2 py-2 text-right">
-                      <RemoveAssignment id={a.id} label={`${a.title} for ${a.target}`} />
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
+        <Table
+          label="Current assignments"
+          density="compact"
+          rows={assignments}
+          rowKey={(a) => a.id}
+          empty={<p>Nothing assigned yet.</p>}
+          columns={[
+            {
+              key: "due",
+              header: "Due",
+              cell: (a) => (
+                <span className={`font-mono ${a.past ? "font-bold text-caution" : ""}`}>
+                  {isoDay(a.dueAt)}
+                  {a.past ? " (past)" : ""}
+                </span>
+              ),
+            },
+            { key: "what", header: "Module or path", cell: (a) => <>{a.title} <span className="text-muted">({a.kind === "path" ? "learning path" : "module"})</span></> },
+            { key: "who", header: "Assigned to", cell: (a) => <>{a.target} <span className="text-muted">({a.targetType === "team" ? "whole team" : "person"})</span></> },
+            { key: "actions", header: <span className="sr-only">Actions</span>, className: "text-right", cell: (a) => <RemoveAssignment id={a.id} label={`${a.title} for ${a.target}`} /> },
+          ]}
+        />
       </section>
     </>
   );

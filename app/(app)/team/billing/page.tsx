@@ -7,59 +7,14 @@ import { ReceiptsTable } from "@/components/billing/receipts-table";
 import { SeatFigures } from "@/components/billing/seat-summary";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { billingOverview, organizationSeatList, paymentsConfigured } from "@/lib/billing";
+import { billingOverview, paymentsConfigured } from "@/lib/billing";
 import { billingPageScope } from "@/lib/billing/page-scope";
 import { formatMoney } from "@/lib/billing/pricing";
+import { AllOrganizations } from "@/components/billing/all-organizations";
 
 export const metadata: Metadata = { title: "Seats and billing" };
 
 /** Admins without ?org=: every organization's seats, each linking to its billing page. */
-async function AllOrganizations() {
-  const list = await organizationSeatList();
-  return (
-    <>
-      <PageTitle title="Seats and billing" lead="Every organization's seats. Open one to see its receipts or to buy seats for it." />
-      <div className="overflow-x-auto rounded border border-line bg-panel">
-        <table className="w-full border-collapse text-left text-sm">
-          <caption className="sr-only">Organizations and their seats</caption>
-          <thead>
-            <tr className="border-b border-line bg-paper">
-              <th scope="col" className="px-3 py-2">
-                Organization
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                Seats
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                In use
-              </th>
-              <th scope="col" className="px-3 py-2 text-right">
-                Free
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Trial
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {list.map((o) => (
-              <tr key={o.orgId} className="border-b border-line last:border-b-0">
-                <td className="px-3 py-2">
-                  <Link href={`/team/billing?org=${o.orgId}`}>{o.orgName}</Link>
-                </td>
-                <td className="px-3 py-2 text-right font-mono">{o.seats}</td>
-                <td className="px-3 py-2 text-right font-mono">{o.used}</td>
-                <td className="px-3 py-2 text-right font-mono">{o.free}</td>
-                <td className="px-3 py-2">{o.trial === "none" ? "—" : `${o.trial === "active" ? "until" : "ended"} ${o.trialEndsAt?.slice(0, 10)}`}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-    </>
-  );
-}
-
 export default async function BillingPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireViewer("manager", "/team/billing");
   const scope = await billingPageScope(viewer, (await searchParams).org);

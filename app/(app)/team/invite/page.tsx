@@ -10,6 +10,8 @@ import { openInvitations } from "@/lib/team/invites";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
+import { isoDay } from "@/lib/dates";
+import { Table } from "@/components/ui/table";
 
 export const metadata: Metadata = { title: "Invite people" };
 
@@ -55,36 +57,21 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
       </div>
       <section aria-labelledby="open" className="mt-10">
         <h2 id="open" className="mb-3 text-2xl">Open invitations</h2>
-        {open.length === 0 ? (
-          <p>No open invitations.</p>
-        ) : (
-          <div role="region" aria-label="Open invitations" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
-            <table className="w-full border-collapse text-sm">
-              <thead>
-                <tr className="border-b border-line bg-paper text-left">
-                  <th scope="col" className="px-2 py-2">E-mail</th>
-                  <th scope="col" className="px-2 py-2">Name</th>
-                  <th scope="col" className="px-2 py-2">Role</th>
-                  <th scope="col" className="px-2 py-2">Team</th>
-                  <th scope="col" className="px-2 py-2">Sent</th>
-                  <th scope="col" className="px-2 py-2">Link expires</th>
-                </tr>
-              </thead>
-              <tbody>
-                {open.map((i) => (
-                  <tr key={i.id} className="border-b border-line last:border-0">
-                    <td className="px-2 py-2 break-all">{i.email}</td>
-                    <td className="px-2 py-2">{i.name ?? ""}</td>
-                    <td className="px-2 py-2">{ROLE_LABELS[i.role as InviteRole] ?? i.role}</td>
-                    <td className="px-2 py-2">{i.team ?? "No team"}</td>
-                    <td className="px-2 py-2 font-mono">{i.createdAt.toISOString().slice(0, 10)}</td>
-                    <td className="px-2 py-2 font-mono">{i.expiresAt.toISOString().slice(0, 10)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
+        <Table
+          label="Open invitations"
+          density="compact"
+          rows={open}
+          rowKey={(i) => i.id}
+          empty={<p>No open invitations.</p>}
+          columns={[
+            { key: "email", header: "E-mail", className: "break-all", cell: (i) => i.email },
+            { key: "name", header: "Name", cell: (i) => i.name ?? "" },
+            { key: "role", header: "Role", cell: (i) => ROLE_LABELS[i.role as InviteRole] ?? i.role },
+            { key: "team", header: "Team", cell: (i) => i.team ?? "No team" },
+            { key: "sent", header: "Sent", className: "font-mono", cell: (i) => isoDay(i.createdAt) },
+            { key: "expires", header: "Link expires", className: "font-mono", cell: (i) => isoDay(i.expiresAt) },
+          ]}
+        />
       </section>
     </>
   );

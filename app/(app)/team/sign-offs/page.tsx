@@ -7,6 +7,7 @@ import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { reviewQueue, waitingCount, type QueueFilter } from "@/lib/signoffs/queries";
+import { daysSince, isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Sign-offs to review" };
 
@@ -16,9 +17,9 @@ const TABS: { key: QueueFilter; label: string }[] = [
   { key: "returned", label: "Returned" },
 ];
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+const day = (d: Date) => isoDay(d);
 function waited(d: Date): string {
-  const days = Math.max(0, Math.floor((Date.now() - d.getTime()) / 86_400_000));
+  const days = daysSince(d);
   return days === 0 ? "today" : days === 1 ? "1 day ago" : `${days} days ago`;
 }
 

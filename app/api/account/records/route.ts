@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { ApiError, json, route } from "@/lib/api";
 import { collectMyRecords, recordsCsv } from "@/lib/account/records";
+import { csvDownload } from "@/lib/csv";
 
 const format = z.enum(["json", "csv"]);
 
@@ -14,7 +15,5 @@ export const GET = route("signed-in", async ({ req, viewer }) => {
   if (parsed.data === "json") {
     return json(records, { headers: { "content-disposition": `attachment; filename="${filename}"` } });
   }
-  return new Response(`\uFEFF${recordsCsv(records)}`, {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${filename}"`, "cache-control": "no-store" },
-  });
+  return csvDownload(filename, recordsCsv(records));
 });

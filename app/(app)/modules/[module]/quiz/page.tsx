@@ -6,6 +6,8 @@ import { requireViewer } from "@/lib/access";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
 import { findModule } from "@/lib/content/load";
 import { listAttempts } from "@/lib/quiz/attempts";
+import { isoDay, isoMinute } from "@/lib/dates";
+import { Table } from "@/components/ui/table";
 
 type Params = { params: Promise<{ module: string }> };
 
@@ -29,7 +31,7 @@ export default async function QuizPage({ params }: Params) {
           {r.questionsPerAttempt} questions drawn for you, pass mark {mod.meta.passMark}%{r.timeLimitMinutes ? `, ${r.timeLimitMinutes} minutes` : ", no time limit"}. Up to {r.attemptsPerPeriod} attempts in {r.periodHours} hours{r.waitMinutes ? `, ${r.waitMinutes} minutes apart` : ""}. Numeric answers state their unit and the tolerance accepted.
         </p>
       </header>
-      {status.completedAt ? <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">✓ Module complete on {status.completedAt.toISOString().slice(0, 10)}</p> : null}
+      {status.completedAt ? <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">✓ Module complete on {isoDay(status.completedAt)}</p> : null}
       {!status.completedAt && status.lastPassed && missing.length ? (
         <p className="rounded border border-line bg-panel p-3">You passed the quiz. To complete the module, finish: {missing.join("; ")}.</p>
       ) : null}
@@ -37,18 +39,17 @@ export default async function QuizPage({ params }: Params) {
       {attempts.length ? (
         <section aria-labelledby="past-h">
           <h2 id="past-h" className="text-xl">Your attempts</h2>
-          <table className="mt-2 w-full max-w-xl border-collapse text-sm">
-            <thead><tr className="text-left"><th className="border-b border-line p-2">Started</th><th className="border-b border-line p-2">Score</th><th className="border-b border-line p-2">Result</th></tr></thead>
-            <tbody>
-              {attempts.map((a) => (
-                <tr key={a.id}>
-                  <td className="border-b border-line p-2 font-mono">{a.startedAt.toISOString().slice(0, 16).replace("T", " ")}</td>
-                  <td className="border-b border-line p-2 font-mono">{a.score ?? "—"}{a.score !== null ? "%" : ""}</td>
-                  <td className="border-b border-line p-2">{a.status === "open" ? "in progress" : a.passed ? "passed" : "not passed"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <Table
+            label="Your attempts"
+            className="mt-2 max-w-xl"
+            rows={attempts}
+            rowKey={(a) => a.id}
+            columns={[
+              { key: "started", header: "Started", className: "font-mono", cell: (a) => isoMinute(a.startedAt) },
+              { key: "score", header: "Score", className: "font-mono", cell: (a) => (a.score !== null ? `${a.score}%` : "—") },
+              { key: "result", header: "Result", cell: (a) => (a.status === "open" ? "in progress" : a.passed ? "passed" : "not passed") },
+            ]}
+          />
         </section>
       ) : null}
     </div>

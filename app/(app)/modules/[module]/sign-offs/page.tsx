@@ -7,6 +7,7 @@ import { UploadForm } from "@/components/signoffs/upload-form";
 import { requireViewer } from "@/lib/access";
 import { findModule } from "@/lib/content/load";
 import { signOffsOf, type SignOffItem } from "@/lib/signoffs/queries";
+import { isoDay } from "@/lib/dates";
 
 type Params = { params: Promise<{ module: string }> };
 
@@ -14,7 +15,7 @@ export async function generateMetadata({ params }: Params): Promise<Metadata> {
   return { title: `Sign-offs: ${findModule((await params).module)?.meta.title ?? "module"}` };
 }
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+const day = (d: Date) => isoDay(d);
 
 function Decision({ s }: { s: SignOffItem }) {
   if (s.status === "submitted") return <p>Sent on {day(s.submittedAt)}; waiting for a manager of your organization to review it.</p>;

@@ -3,6 +3,8 @@ import { auditCsv } from "@/lib/admin/audit-log";
 import { queryOf } from "@/lib/admin/http";
 import { auditQuery } from "@/lib/admin/schemas";
 import { audit } from "@/lib/audit";
+import { csvDownload } from "@/lib/csv";
+import { isoDay } from "@/lib/dates";
 
 /** GET /api/admin/audit/export?<same filters> → CSV download (audited: audit.export, since the log leaves Riser). */
 export const GET = route("admin", async ({ req, viewer }) => {
@@ -10,13 +12,5 @@ export const GET = route("admin", async ({ req, viewer }) => {
   const { csv, rows, truncated } = await auditCsv(filters);
   const { action, actor, organizationId, from, to } = filters;
   await audit({ actor: viewer, organizationId: null, action: "audit.export", targetType: "audit_log", targetId: "export", ip: clientIp(req), details: { rows, truncated, filters: { action, actor, organizationId, from, to } } });
-  const day = new Date().toISOString().slice(0, 10);
-  return new Response(`\uFEFF${csv}`, {
-    headers: {
-      "content-type": "text/csv; charset=utf-8",
-      "content-disposition": `attachment; filename="riser-audit-log-${day}.csv"`,
-      "cache-control": "no-store",
-      ...(truncated ? { "x-riser-truncated": "1" } : {}),
-    },
-  });
+  return csvDownload(`riser-audit-log-${isoDay(new Date())}.csv`, csv, truncated ? { "x-riser-truncated": "1" } : {});
 });

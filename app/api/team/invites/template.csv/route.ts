@@ -1,4 +1,5 @@
 import { route } from "@/lib/api";
+import { csvDownload } from "@/lib/csv";
 import { rosterTemplate } from "@/lib/team/roster";
 import { resolveScope, teamsInScope } from "@/lib/team/scope";
 
@@ -6,11 +7,5 @@ import { resolveScope, teamsInScope } from "@/lib/team/scope";
 export const GET = route("manager", async ({ req, viewer }) => {
   const scope = await resolveScope(viewer, new URL(req.url).searchParams.get("org"));
   const teams = scope.orgId ? await teamsInScope(scope) : [];
-  return new Response(`\uFEFF${rosterTemplate(teams.map((t) => t.name))}`, {
-    headers: {
-      "Content-Type": "text/csv; charset=utf-8",
-      "Content-Disposition": 'attachment; filename="riser-roster-template.csv"',
-      "Cache-Control": "no-store",
-    },
-  });
+  return csvDownload("riser-roster-template.csv", rosterTemplate(teams.map((t) => t.name)));
 });

@@ -3,6 +3,8 @@ import { useState, type ReactNode } from "react";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
 import type { Paged } from "@/lib/admin/schemas";
+import { utcStamp } from "@/lib/dates";
+import { Table } from "./table";
 
 export type Column<R> = {
   key: string;
@@ -43,7 +45,7 @@ function queryString(filters: Record<string, string | undefined>, page: number, 
   return qs.toString();
 }
 
-/** A server-paginated, sortable table fetched with SWR, with loading, empty and error states. */
+/** A server-paginated, sortable table fetched with SWR, with loading, empty and error states (markup: ./table). */
 export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, initialSort, caption, noun, emptyText, pageSize = 25, onData }: Props<R, X>) {
   const [page, setPage] = useState(1);
   const [sort, setSort] = useState<Sort>(initialSort);
@@ -82,49 +84,32 @@ export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, 
       {data && data.total === 0 ? <p className="rounded border border-line bg-panel px-3 py-4">{emptyText}</p> : null}
       {data && data.total > 0 ? (
         <>
-          <div className="relative overflow-x-auto rounded border border-line bg-panel" role="region" aria-label={caption} tabIndex={0}>
-            <table className="w-full border-collapse text-left text-sm">
-              <caption className="sr-only">{caption}</caption>
-              <thead className="bg-paper">
-                <tr>
-                  {columns.map((c) => {
-                    const active = c.sort && sort.key === c.sort;
-                    return (
-                      <th
-                        key={c.key}
-                        scope="col"
-                        aria-sort={active ? (sort.dir === "asc" ? "ascending" : "descending") : undefined}
-                        className={`border-b border-line px-3 py-1 align-middle font-bold whitespace-nowrap ${c.className ?? ""}`}
-                      >
-                        {c.sort ? (
-                          <button type="button" onClick={() => toggleSort(c.sort!)} className="inline-flex min-h-11 items-center gap-1 font-bold text-water underline-offset-2 hover:underline">
-                            {c.label}
-                            <span aria-hidden="true" className="font-mono text-xs">
-                              {active ? (sort.dir === "asc" ? "▲" : "▼") : "↕"}
-                            </span>
-                            <span className="sr-only">{active ? `, sorted ${sort.dir === "asc" ? "ascending" : "descending"}; sort the other way` : ", sort by this column"}</span>
-                          </button>
-                        ) : (
-                          c.label
-                        )}
-                      </th>
-                    );
-                  })}
-                </tr>
-              </thead>
-              <tbody>
-                {data.rows.map((r) => (
-                  <tr key={rowKey(r)} className="border-b border-line last:border-b-0 even:bg-paper/50">
-                    {columns.map((c) => (
-                      <td key={c.key} className={`px-3 py-2 align-top ${c.className ?? ""}`}>
-                        {c.render(r)}
-                      </td>
-                    ))}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <Table
+            label={caption}
+            rows={data.rows}
+            rowKey={rowKey}
+            columns={columns.map((c) => {
+              const active = c.sort && sort.key === c.sort;
+              return {
+                key: c.key,
+                className: c.className,
+                headerClassName: `px-3 py-1 align-middle whitespace-nowrap ${c.className ?? ""}`,
+                headerProps: { "aria-sort": active ? (sort.dir === "asc" ? "ascending" : "descending") : undefined },
+                cell: c.render,
+                header: c.sort ? (
+                  <button type="button" onClick={() => toggleSort(c.sort!)} className="inline-flex min-h-11 items-center gap-1 font-bold text-water underline-offset-2 hover:underline">
+                    {c.label}
+                    <span aria-hidden="true" className="font-mono text-xs">
+                      {active ? (sort.dir === "asc" ? "▲" : "▼") : "↕"}
+                    </span>
+                    <span className="sr-only">{active ? `, sorted ${sort.dir === "asc" ? "ascending" : "descending"}; sort the other way` : ", sort by this column"}</span>
+                  </button>
+                ) : (
+                  c.label
+                ),
+              };
+            })}
+          />
           <nav aria-label={`Pages of ${noun}`} className="flex flex-wrap items-center justify-between gap-3 text-sm">
             <p>
               <span className="font-mono">
@@ -153,7 +138,7 @@ export function When({ iso }: { iso: string | null }) {
   const d = new Date(iso);
   return (
     <time dateTime={iso} className="font-mono text-xs whitespace-nowrap" suppressHydrationWarning>
-      {d.toISOString().slice(0, 16).replace("T", " ")} UTC
+      {utcStamp(d)}
     </time>
   );
 }
