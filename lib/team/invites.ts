@@ -73,27 +73,26 @@ The link works once and expires on ${dateText(p.expiresAt)} (${INVITE_DAYS} days
   };
 }
 
-/** Whether the e-mail already has an account: in this organization, elsewhere, or not at all. */
-export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string } | { state: "elsewhere" }> {
-  const [u] = await db.select({ name: user.name, org: user.organizationId }).from(user).where(eq(user.email, email)).limit(1);
-  if (!u) return { state: "none" };
-  return u.org === orgId ? { state: "member", name: u.name } : { state: "elsewhere" };
+/**
+ * Whether the e-mail is already a member of this organization. Whether it has an account anywhere
+ * else is deliberately not asked: a manager must not learn that (acceptance resolves it).
+ */
+export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string }> {
+  const [u] = await db.select({ name: user.name }).from(user).where(and(eq(user.email, email), eq(user.organizationId, orgId))).limit(1);
+  return u ? { state: "member", name: u.name } : { state: "none" };
 }
 
 /** One invitation from the form. Re-inviting a member changes nothing and says so. */
 export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: string }, input: NewInvite, ip: string) {
   let teamName: string | null = null;
   if (input.teamId) {
-    const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId)));
+    const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId), isNull(team.archivedAt)));
     if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
     teamName = t.name;
   }
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
     throw new ApiError(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
-  }
-  if (existing.state === "elsewhere") {
-    throw new ApiError(409, `${input.email} already has a Riser account in another organization, so it cannot be invited here. Ask the person for another work address.`);
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
@@ -175,6 +174,17 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
   const found = await lookupInvite(input.token);
   if (found.state !== "ok") throw new ApiError(410, refusalText(found).message);
   const inv = found.invite;
+  // Resolved here, not when inviting: an address that already has an account (in another
+  // organization, or none) is told so by its owner's own link; the manager never learns it.
+  const [holder] = await db.select({ org: user.organizationId }).from(user).where(eq(user.email, inv.email)).limit(1);
+  if (holder) {
+    throw new ApiError(
+      409,
+      holder.org === inv.organizationId
+        ? `${inv.email} is already a member of ${found.orgName}. Sign in with your password.`
+        : `${inv.email} already has a Riser account, and a Riser account belongs to one organization. Sign in with it, or ask your training manager to invite another address.`,
+    );
+  }
   const now = new Date(); // application time, as everywhere dates are written (UTC)
   const [claim] = await db
     .update(invitation)
@@ -186,7 +196,7 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
   try {
     // The team may have been removed since the invitation was sent.
     const teamId = inv.teamId ? ((await db.select({ id: team.id }).from(team).where(eq(team.id, inv.teamId)))[0]?.id ?? null) : null;
-    const result = await createAccount({ name: input.name, email: inv.email, password: input.password }, { organizationId: inv.organizationId, teamId, role: inv.role as InviteRole }, headers);
+    const result = await createAccount({ name: input.name, email: inv.email, password: input.password }, { organizationId: inv.organizationId, teamId, role: inv.role as InviteRole, emailVerified: true }, headers);
     if (!result.ok) {
       await release();
       const emailProblem = result.fieldErrors?.email?.[0];

@@ -40,6 +40,23 @@ export const inviteSchema = z.object({
 });
 export type InviteInput = z.input<typeof inviteSchema>;
 
+const teamName = z.string().trim().min(1, "Name the team").max(120, "At most 120 characters");
+export const createTeamSchema = z.object({ name: teamName, org: optionalId });
+export const updateTeamSchema = z
+  .object({ name: teamName.optional(), archived: z.boolean().optional(), org: optionalId })
+  .refine((v) => v.name !== undefined || v.archived !== undefined, { path: ["name"], message: "Give a new name, or archive or restore the team" });
+
+/** A manager's change to a person: team (null = no team) and/or role; admin is never offered. */
+export const updatePersonSchema = z
+  .object({
+    teamId: z.string().trim().max(36).nullable().optional().transform((v) => (v === "" ? null : v)),
+    role: z.enum(INVITE_ROLES, { message: "Choose learner, sales or manager" }).optional(),
+  })
+  .refine((v) => v.teamId !== undefined || v.role !== undefined, { path: ["role"], message: "Choose a team or a role" });
+
+/** Roster previews per manager per window (DB-backed; the preview is where addresses are checked). */
+export const ROSTER_PREVIEW_LIMIT = { max: 20, windowSeconds: 600 };
+
 export const acceptInviteSchema = z
   .object({ token: z.string().min(20).max(100), name: personName, password, confirm: z.string() })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
