@@ -5,6 +5,7 @@ import { useEffect, useState } from "react";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
 import type { SearchHit } from "@/lib/search/browser";
+import { plural } from "@/lib/plural";
 
 const KIND_LABEL = { lesson: "Lesson", card: "Code card", term: "Glossary" } as const;
 
@@ -50,7 +51,7 @@ export function SearchBox() {
         {debounced && data && data.hits.length === 0 ? <p>No results for “{debounced}”. Try a shorter word or a trade term.</p> : null}
         {debounced && data && data.hits.length > 0 ? (
           <>
-            <p className="sr-only">{data.hits.length} results</p>
+            <p className="sr-only">{plural(data.hits.length, "result")}</p>
             <ol className="flex flex-col gap-3">
               {data.hits.map((h) => (
                 <li key={h.id} className="rounded border border-line bg-panel p-3">

@@ -2,8 +2,9 @@ import Link from "next/link";
 
 const TABS = [
   { href: "/team", label: "Board" },
-  { href: "/team/assign", label: "Assign work" },
+  { href: "/team/teams", label: "Teams" },
   { href: "/team/invite", label: "Invite people" },
+  { href: "/team/assign", label: "Assign work" },
   { href: "/team/sign-offs", label: "Sign-offs" },
 ];
 
