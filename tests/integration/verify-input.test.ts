@@ -8,8 +8,8 @@ import { formatVerificationCode, newVerificationCode } from "@/lib/certificates/
 import { anonymous } from "../helpers/http";
 import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, getJson } from "../helpers/team";
 
-let oldCert: typeof certificate.$inferSelect;
-let newCert: typeof certificate.$inferSelect;
+let oldCert: typeof certificate.$inferSelect | undefined;
+let newCert: typeof certificate.$inferSelect | undefined;
 
 beforeAll(async () => {
   const org = await fixtureOrg("Wyndle Sprinkler");
