@@ -5,9 +5,10 @@ import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
 import { getJson } from "@/lib/fetcher";
-import type { BoardPage, BoardRow } from "@/lib/team/board";
+import type { BoardPage } from "@/lib/team/board";
+import type { RichRow } from "@/lib/team/board-extras";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
-import { StatusBadge } from "./status-badge";
+import { BoardCellView } from "./board-cell";
 
 export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };
 
@@ -35,15 +36,15 @@ function queryString(f: BoardFilters, org: string | null, withPage = true): stri
   return p.toString();
 }
 
-const shortDate = (iso: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(iso));
 
-const col = createColumnHelper<BoardRow>();
+const col = createColumnHelper<RichRow>();
+type RichPage = Omit<BoardPage, "rows"> & { rows: RichRow[] };
 
 export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props) {
   const [f, setF] = useState<BoardFilters>(initial);
   const [search, setSearch] = useState(initial.q);
   const qs = queryString(f, org);
-  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(`/api/team/board?${qs}`, getJson, { keepPreviousData: true, revalidateOnFocus: false });
+  const { data, error, isLoading, isValidating, mutate } = useSWR<RichPage>(`/api/team/board?${qs}`, getJson, { keepPreviousData: true, revalidateOnFocus: false });
 
   // Keep the address in step with the filters, so a view can be bookmarked or shared.
   useEffect(() => {
@@ -88,16 +89,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
           cell: (c) => {
             const cell = c.row.original.cells[m.slug];
             if (!cell) return null;
-            const done = cell.status === "passed" || cell.status === "expiring";
-            return (
-              <div className="flex flex-col items-start gap-0.5" title={`${cell.lessonsDone} of ${cell.lessonsTotal} lessons · ${cell.attempts} attempt(s)${cell.bestScore !== null ? ` · best ${cell.bestScore}%` : ""}`}>
-                <StatusBadge status={cell.status} compact />
-                {!done && cell.dueAt ? <span className="whitespace-nowrap text-xs text-muted">due {shortDate(cell.dueAt)}</span> : null}
-                {(cell.status === "expiring" || cell.status === "expired") && cell.expiresAt ? (
-                  <span className="whitespace-nowrap text-xs text-muted">{cell.status === "expired" ? "ended" : "ends"} {shortDate(cell.expiresAt)}</span>
-                ) : null}
-              </div>
-            );
+            return <BoardCellView cell={cell} person={c.row.original.name} module={m.title} personId={c.row.original.id} />;
           },
         }),
       ),
@@ -231,7 +223,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
         </div>
       ) : data ? (
         <div role="region" aria-label="Team board table" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
-          <table className="w-full border-collapse text-sm" aria-busy={isValidating}>
+          <table className="w-full min-w-max border-collapse text-sm" aria-busy={isValidating}>
             <caption className="sr-only">Training status of each person in each module{f.status ? `, people with “${STATUS_LABELS[f.status as BoardStatus]}”` : ""}</caption>
             <thead>
               {table.getHeaderGroups().map((hg) => (
@@ -244,7 +236,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
                         key={h.id}
                         scope="col"
                         aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}
-                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-10 bg-paper" : ""}`}
+                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-30 bg-paper shadow-[2px_0_0_0_#D5CFC3]" : ""}`}
                       >
                         {sortable ? (
                           <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-end gap-1 text-left font-bold underline decoration-dotted underline-offset-4">
@@ -264,7 +256,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial }: Props)
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id} className="border-b border-line align-top last:border-0" data-person={r.original.name}>
                   {r.getVisibleCells().map((c, i) => (
-                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 bg-panel" : ""}`}>
+                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 z-10 bg-panel shadow-[2px_0_0_0_#D5CFC3]" : ""}`}>
                       {flexRender(c.column.columnDef.cell, c.getContext())}
                     </td>
                   ))}

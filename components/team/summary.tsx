@@ -4,6 +4,7 @@ import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
 import { getJson } from "@/lib/fetcher";
 import type { TeamTotal, WeekPoint } from "@/lib/team/board";
+import { PERCENT_AXIS, PERCENT_CHART_MARGIN, WEEK_AXIS } from "@/lib/team/chart";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
@@ -69,7 +70,7 @@ export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrg
                 <ResponsiveContainer width="100%" height="100%">
                   <BarChart data={data.weeks.map((w) => ({ ...w, label: weekLabel(w.week) }))} margin={{ top: 8, right: 8, bottom: 0, left: -16 }} accessibilityLayer={false}>
                     <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
-                    <XAxis dataKey="label" tick={{ fontSize: 11, fill: "#14202B" }} interval="preserveStartEnd" />
+                    <XAxis dataKey="label" tick={{ fontSize: WEEK_AXIS.fontSize, fill: "#14202B", angle: WEEK_AXIS.angle, textAnchor: WEEK_AXIS.textAnchor }} interval={WEEK_AXIS.interval} height={WEEK_AXIS.height} />
                     <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: "#14202B" }} />
                     <Tooltip />
                     <Bar dataKey="completions" name="Completions" fill="#1B617A" />
@@ -98,9 +99,9 @@ export function TeamSummary({ org, showOrgNames }: { org: string | null; showOrg
               <figcaption className="mb-2 font-bold">Share of modules passed, by team</figcaption>
               <div className="h-60" aria-hidden="true">
                 <ResponsiveContainer width="100%" height="100%">
-                  <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={{ top: 8, right: 16, bottom: 0, left: 8 }} accessibilityLayer={false}>
+                  <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={PERCENT_CHART_MARGIN} accessibilityLayer={false}>
                     <CartesianGrid strokeDasharray="3 3" stroke="#D5CFC3" />
-                    <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: "#14202B" }} />
+                    <XAxis type="number" domain={[0, 100]} ticks={[...PERCENT_AXIS.ticks]} unit="%" tick={{ fontSize: PERCENT_AXIS.fontSize, fill: "#14202B" }} />
                     <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: "#14202B" }} />
                     <Tooltip />
                     <Bar dataKey="passed" name="Passed (%)" fill="#9A4F12" />
