@@ -38,7 +38,12 @@ export class SearchIndex {
   private lengths: Record<Field, number[]> = { title: [], headings: [], context: [], text: [] };
   private avg: Record<Field, number> = { title: 1, headings: 1, context: 1, text: 1 };
   private df = new Map<string, number>();
-  private vocab: string[] = [];
+  /** every document holding the term, in any field */
+  private docsWith = new Map<string, number[]>();
+  /** known words (no digits) by length, for typo look-ups */
+  private byLength = new Map<number, string[]>();
+  /** every term, sorted, for completing a prefix */
+  private sorted: string[] = [];
 
   constructor(docs: SearchDoc[]) {
     this.docs = docs;
@@ -54,10 +59,36 @@ export class SearchIndex {
           seen.add(t);
         }
       }
-      for (const t of seen) this.df.set(t, (this.df.get(t) ?? 0) + 1);
+      for (const t of seen) {
+        this.df.set(t, (this.df.get(t) ?? 0) + 1);
+        let list = this.docsWith.get(t);
+        if (!list) this.docsWith.set(t, (list = []));
+        list.push(i);
+      }
     });
     for (const f of FIELDS) this.avg[f] = Math.max(1, this.lengths[f].reduce((a, b) => a + b, 0) / Math.max(1, docs.length));
-    this.vocab = [...this.df.keys()];
+    this.sorted = [...this.df.keys()].sort();
+    this.surface = this.buildSurface();
+    for (const t of this.sorted) {
+      if (/\d/.test(t)) continue;
+      let list = this.byLength.get(t.length);
+      if (!list) this.byLength.set(t.length, (list = []));
+      list.push(t);
+    }
+  }
+
+  /** Terms that start with `prefix` (binary search in the sorted list), at most `max`. */
+  private completions(prefix: string, max: number): string[] {
+    let lo = 0;
+    let hi = this.sorted.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.sorted[mid]! < prefix) lo = mid + 1;
+      else hi = mid;
+    }
+    const out: string[] = [];
+    for (let i = lo; i < this.sorted.length && out.length < max && this.sorted[i]!.startsWith(prefix); i++) out.push(this.sorted[i]!);
+    return out;
   }
 
   private idf(term: string): number {
@@ -69,17 +100,18 @@ export class SearchIndex {
   private correct(word: string, others: string[]): string | null {
     const budget = typoBudget(word.length);
     if (!budget || /\d/.test(word)) return null;
+    const near = new Set<number>();
+    for (const o of others) for (const i of this.docsWith.get(o) ?? []) near.add(i);
     let best: { t: string; d: number; co: number; df: number } | null = null;
-    for (const t of this.vocab) {
-      if (Math.abs(t.length - word.length) > budget || /\d/.test(t)) continue;
-      const d = editDistance(word, t, budget);
-      if (d > budget) continue;
-      const docsOf = (x: string) => new Set(FIELDS.flatMap((f) => [...(this.postings[f].get(x)?.keys() ?? [])]));
-      const mine = docsOf(t);
-      let co = 0;
-      for (const o of others) for (const i of docsOf(o)) if (mine.has(i)) co++;
-      const df = this.df.get(t) ?? 0;
-      if (!best || d < best.d || (d === best.d && (co > best.co || (co === best.co && df > best.df)))) best = { t, d, co, df };
+    for (let len = word.length - budget; len <= word.length + budget; len++) {
+      for (const t of this.byLength.get(len) ?? []) {
+        const d = editDistance(word, t, budget);
+        if (d > budget) continue;
+        let co = 0;
+        for (const i of this.docsWith.get(t) ?? []) if (near.has(i)) co++;
+        const df = this.df.get(t) ?? 0;
+        if (!best || d < best.d || (d === best.d && (co > best.co || (co === best.co && df > best.df)))) best = { t, d, co, df };
+      }
     }
     return best?.t ?? null;
   }
@@ -105,14 +137,7 @@ export class SearchIndex {
       for (const syn of synonymsOf(s)) if (this.df.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
       // The last word may be unfinished (search as you type): complete it.
       if (k === words.length - 1 && s.length >= 3 && !/\d/.test(s)) {
-        let added = 0;
-        for (const t of this.vocab) {
-          if (added >= 12) break;
-          if (t !== s && t.startsWith(word.length > s.length ? word.slice(0, Math.max(3, s.length)) : s) && !variants.has(t)) {
-            variants.set(t, 0.5);
-            added++;
-          }
-        }
+        for (const t of this.completions(s, 12)) if (!variants.has(t)) variants.set(t, 0.5);
       }
       return { word, variants, corrected };
     });
@@ -125,13 +150,13 @@ export class SearchIndex {
       const best = new Map<number, { s: number; title: boolean }>();
       for (const [term, w] of slot.variants) {
         const idf = this.idf(term);
-        const docs = new Set<number>();
-        for (const f of FIELDS) for (const i of this.postings[f].get(term)?.keys() ?? []) docs.add(i);
-        for (const i of docs) {
+        const maps = FIELDS.map((f) => this.postings[f].get(term));
+        for (const i of this.docsWith.get(term) ?? []) {
           let tf = 0;
           let inTitle = false;
-          for (const f of FIELDS) {
-            const n = this.postings[f].get(term)?.get(i) ?? 0;
+          for (let k = 0; k < FIELDS.length; k++) {
+            const f = FIELDS[k]!;
+            const n = maps[k]?.get(i) ?? 0;
             if (!n) continue;
             if (f === "title") inTitle = true;
             tf += (WEIGHT[f] * n) / (1 - B + (B * (this.lengths[f][i] ?? 0)) / this.avg[f]);
@@ -184,10 +209,9 @@ export class SearchIndex {
 
   /** A stem as a reader would type it: the shortest word of the corpus with that stem. */
   private display(term: string): string {
-    this.surface ??= this.buildSurface();
     return this.surface.get(term) ?? term;
   }
-  private surface: Map<string, string> | null = null;
+  private surface = new Map<string, string>();
   private buildSurface(): Map<string, string> {
     const out = new Map<string, string>();
     for (const d of this.docs) {
@@ -215,8 +239,8 @@ export function snippet(text: string, terms: string[], width = 160): Segment[] {
   const end = Math.min(text.length, start + width);
   const slice = text.slice(start, end);
   const matches = (w: string) => {
-    const s = tokens(w)[0];
-    return !!s && terms.some((t) => s.startsWith(t) || (t.startsWith(s) && s.length >= 3));
+    const s = stem(w.toLowerCase());
+    return terms.some((t) => s.startsWith(t) || (t.startsWith(s) && s.length >= 3));
   };
   const out: Segment[] = [];
   let last = 0;

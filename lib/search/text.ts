@@ -86,23 +86,24 @@ export function synonymsOf(term: string): string[] {
 }
 
 /** Optimal string alignment distance (Damerau–Levenshtein with adjacent swaps), stopping past `max`. */
+const rows = [new Int32Array(64), new Int32Array(64), new Int32Array(64)];
 export function editDistance(a: string, b: string, max = 2): number {
   if (Math.abs(a.length - b.length) > max) return max + 1;
-  const prev2 = new Array<number>(b.length + 1).fill(0);
-  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  if (b.length >= 63) return max + 1;
+  let [prev2, prev, cur] = rows as [Int32Array, Int32Array, Int32Array];
+  for (let j = 0; j <= b.length; j++) prev[j] = j;
   for (let i = 1; i <= a.length; i++) {
-    const cur = [i];
+    cur[0] = i;
     let rowMin = i;
     for (let j = 1; j <= b.length; j++) {
-      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      const cost = a.charCodeAt(i - 1) === b.charCodeAt(j - 1) ? 0 : 1;
       let v = Math.min(prev[j]! + 1, cur[j - 1]! + 1, prev[j - 1]! + cost);
       if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) v = Math.min(v, prev2[j - 2]! + 1);
-      cur.push(v);
-      rowMin = Math.min(rowMin, v);
+      cur[j] = v;
+      if (v < rowMin) rowMin = v;
     }
     if (rowMin > max) return max + 1;
-    for (let j = 0; j <= b.length; j++) prev2[j] = prev[j]!;
-    prev = cur;
+    [prev2, prev, cur] = [prev, cur, prev2];
   }
   return prev[b.length]!;
 }
