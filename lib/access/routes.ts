@@ -128,5 +128,6 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/team/people/[id]/remove", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000/remove", method: "POST", okStatus: 404 },
   { route: "/api/team/invites", rule: "manager" },
   { route: "/api/team/invites/[id]/resend", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/resend", method: "POST", okStatus: 404 },
+  { route: "/api/team/invites/[id]/assign", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/assign", method: "POST", okStatus: 400 },
   { route: "/api/team/invites/[id]/revoke", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/revoke", method: "POST", okStatus: 404 },
 ];

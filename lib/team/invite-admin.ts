@@ -6,8 +6,8 @@ import { canManageOrganization, type Viewer } from "@/lib/access";
 import { ApiError } from "@/lib/api";
 import { audit } from "@/lib/audit";
 import { sendMail } from "@/lib/mail";
-import { hashInviteToken, inviteMail, newInviteToken } from "./invites";
-import { INVITE_DAYS, type InviteRole } from "./schemas";
+import { checkAssignItems, hashInviteToken, inviteMail, newInviteToken } from "./invites";
+import { INVITE_DAYS, type AssignItem, type InviteRole } from "./schemas";
 import { assertSeatAvailable } from "./seats";
 
 /**
@@ -115,4 +115,27 @@ export async function resendInvitation(viewer: Viewer, id: string, ip: string) {
   const [t] = row.teamId ? await db.select({ name: team.name }).from(team).where(eq(team.id, row.teamId)) : [];
   const mail = await sendMail(inviteMail({ to: row.email, name: row.name, orgName: org?.name ?? "", inviterName: viewer.name, role: row.role as InviteRole, teamName: t?.name ?? null, token, expiresAt }));
   return { email: row.email, expiresAt, mailed: mail.ok };
+}
+
+/**
+ * Adds work (modules or a path with due dates) to an open invitation; it becomes the person's
+ * assignments when they accept. An item already carried is updated (new due date), not doubled.
+ */
+export async function addInvitationWork(viewer: Viewer, id: string, items: AssignItem[], ip: string) {
+  const row = await invitationFor(viewer, id);
+  if (inviteStatus(row) !== "pending") throw new ApiError(409, "Only an open invitation can carry work; send a new invitation first.");
+  checkAssignItems(items);
+  const merged = new Map((row.assignOnAccept ?? []).map((i) => [`${i.kind}:${i.slug}`, i]));
+  for (const i of items) merged.set(`${i.kind}:${i.slug}`, i);
+  const list = [...merged.values()];
+  if (list.length > 10) throw new ApiError(400, "Some fields need attention.", { items: ["At most 10 items per invitation"] });
+  await db.transaction(async (tx) => {
+    const [r] = await tx
+      .update(invitation)
+      .set({ assignOnAccept: list })
+      .where(and(eq(invitation.id, id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt)));
+    if (r.affectedRows !== 1) throw new ApiError(409, "This invitation was accepted or withdrawn a moment ago; reload the page.");
+    await audit({ actor: viewer, organizationId: row.organizationId, action: "invite.assign", targetType: "invitation", targetId: id, ip, details: { email: row.email, items } }, tx);
+  });
+  return { email: row.email, items: list };
 }

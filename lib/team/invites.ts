@@ -2,14 +2,17 @@ import "server-only";
 import { createHash, randomBytes, randomUUID } from "node:crypto";
 import { and, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
-import { invitation, organization, team, user } from "@/db/schema";
+import { assignment, invitation, organization, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { createAccount } from "@/lib/accounts";
 import { ApiError } from "@/lib/api";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { INVITE_DAYS, ROLE_LABELS, type AcceptInviteInput, type InviteRole } from "./schemas";
+import { INVITE_DAYS, ROLE_LABELS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
+import { mailAssigned } from "./assigned-mail";
+import { after } from "next/server";
+import { loadCatalog } from "@/lib/content/load";
 import { assertSeatAvailable } from "./seats";
 
 const DAY_MS = 86_400_000;
@@ -23,7 +26,7 @@ export const hashInviteToken = (token: string) => createHash("sha256").update(to
 export const inviteUrl = (token: string) => `${env.APP_URL}/invite/${token}`;
 
 export type InviteRow = typeof invitation.$inferSelect;
-export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null };
+export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null; assign?: AssignItem[] };
 
 /**
  * Writes one invitation inside the caller's transaction: earlier open invitations for the same
@@ -45,6 +48,7 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
     email: invite.email,
     name: invite.name ?? null,
     role: invite.role,
+    assignOnAccept: invite.assign?.length ? invite.assign : null,
     tokenHash: hashInviteToken(token),
     invitedBy: invitedBy.id,
     createdAt: now,
@@ -82,6 +86,16 @@ export async function accountState(email: string, orgId: string): Promise<{ stat
   return u ? { state: "member", name: u.name } : { state: "none" };
 }
 
+/** Each module or path carried by an invitation must exist (400 with the field named otherwise). */
+export function checkAssignItems(items: AssignItem[] | undefined) {
+  if (!items?.length) return;
+  const catalog = loadCatalog();
+  for (const i of items) {
+    const ok = i.kind === "module" ? catalog.modules.some((m) => m.slug === i.slug) : catalog.paths.some((p) => p.slug === i.slug);
+    if (!ok) throw new ApiError(400, "Some fields need attention.", { assign: [`No ${i.kind === "module" ? "module" : "learning path"} “${i.slug}”`] });
+  }
+}
+
 /** One invitation from the form. Re-inviting a member changes nothing and says so. */
 export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: string }, input: NewInvite, ip: string) {
   let teamName: string | null = null;
@@ -90,6 +104,7 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
     if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
     teamName = t.name;
   }
+  checkAssignItems(input.assign);
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
     throw new ApiError(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
@@ -215,7 +230,28 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
       { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "invite.accept", targetType: "invitation", targetId: inv.id, ip, details: { role: inv.role, teamId: inv.teamId } },
       tx,
     );
+    // Work the manager attached to the invitation becomes the person's own assignments now.
+    for (const item of inv.assignOnAccept ?? []) {
+      const dueAt = endOfDayUtc(item.dueAt);
+      await tx
+        .insert(assignment)
+        .values({ organizationId: inv.organizationId, kind: item.kind, targetSlug: item.slug, userId, teamId: null, targetKey: `u:${userId}`, dueAt, createdBy: inv.invitedBy, createdAt: now })
+        .onDuplicateKeyUpdate({ set: { dueAt } });
+      await audit(
+        { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "assignment.set", targetType: "user", targetId: userId, ip, details: { kind: item.kind, slug: item.slug, dueAt: dueAt.toISOString(), via: "invitation", invitationId: inv.id } },
+        tx,
+      );
+    }
   });
+  const items = inv.assignOnAccept ?? [];
+  if (items.length) {
+    const [inviter] = inv.invitedBy ? await db.select({ name: user.name }).from(user).where(eq(user.id, inv.invitedBy)) : [];
+    after(async () => {
+      for (const item of items) {
+        await mailAssigned({ orgId: inv.organizationId, userIds: [userId], teamIds: [], kind: item.kind, slug: item.slug, dueAt: endOfDayUtc(item.dueAt), assignedBy: inviter?.name ?? "Your training manager" });
+      }
+    });
+  }
   return { email: inv.email, userId };
 }
 

@@ -37,8 +37,23 @@ export const inviteSchema = z.object({
   teamId: optionalId,
   /** admins only: which organization the invitation is for */
   org: optionalId,
+  /** work assigned when the invitation is accepted */
+  assign: z.array(z.lazy(() => assignItemSchema)).max(10, "At most 10 items per invitation").optional(),
 });
 export type InviteInput = z.input<typeof inviteSchema>;
+
+/** One module or path with a due date, carried by an invitation until it is accepted. */
+export const assignItemSchema = z.object({
+  kind: z.enum(["module", "path"], { message: "Choose a module or a learning path" }),
+  slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "Choose a module or a learning path").max(80),
+  dueAt: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, "Pick a due date")
+    .refine((d) => !Number.isNaN(new Date(`${d}T23:59:59.000Z`).getTime()), "Pick a real date")
+    .refine((d) => new Date(`${d}T23:59:59.000Z`).getTime() >= Date.now(), "Pick today or a later date"),
+});
+export type AssignItem = z.infer<typeof assignItemSchema>;
+export const inviteAssignSchema = z.object({ items: z.array(assignItemSchema).min(1, "Choose at least one module or path").max(10, "At most 10 items per invitation") });
 
 const teamName = z.string().trim().min(1, "Name the team").max(120, "At most 120 characters");
 export const createTeamSchema = z.object({ name: teamName, org: optionalId });

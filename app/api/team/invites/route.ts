@@ -14,7 +14,7 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, inviteSchema);
   const org = await resolveWriteOrg(viewer, input.org);
   try {
-    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null }, clientIp(req));
+    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign }, clientIp(req));
     const message = r.replaced
       ? `A new invitation went to ${r.email}; the earlier link no longer works.`
       : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
