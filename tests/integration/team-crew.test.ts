@@ -226,3 +226,16 @@ describe("invitations", () => {
     expect(statuses[20]).toBe(429);
   });
 });
+
+describe("first day", () => {
+  it("a new manager with no team lands on the checklist, not an empty “My training”", async () => {
+    const fresh = await fixtureOrg("Nettlecombe Fire");
+    const boss = await fixturePerson(fresh, { name: "Ottoline Brack", role: "manager" });
+    const html = await (await (await clientOf(boss.id)).fetch("/learn")).text();
+    expect(html).toContain("Get your crew started");
+    for (const step of ["Create your teams", "Invite your people", "Assign work", "Watch the board"]) expect(html).toContain(step);
+    // A learner never sees it.
+    const learner = await fixturePerson(fresh, { name: "Piers Lumley" });
+    expect(await (await (await clientOf(learner.id)).fetch("/learn")).text()).not.toContain("Get your crew started");
+  });
+});
