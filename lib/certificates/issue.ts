@@ -7,7 +7,7 @@ import { catalogModule, certificate, certificateSerialCounter, moduleCompletion,
 import { findModule, loadCatalog } from "@/lib/content/load";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl, VERIFICATION_CODE_BYTES } from "./status";
+import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
 
 export type IssuedCertificate = Pick<Certificate, "id" | "serial" | "kind" | "subjectSlug" | "subjectTitle" | "verificationCode" | "expiresAt">;
 

@@ -5,7 +5,6 @@
  * typo correction ("did you mean") and completion of the last word as one types; sizes with units
  * are terms of their own ("1 inch" finds "1 in"). Documents whose title matches rank first, then
  * by a BM25F score that rewards covering every term of the question.
- * Over 300 lines: one index, its scoring and the snippet belong together.
  */
 import type { SearchDoc } from "./docs";
 import { editDistance, normalize, stem, STOP, synonymsOf, tokens, typoBudget } from "./text";
