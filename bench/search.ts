@@ -7,6 +7,7 @@ import { demoByRole } from "@/db/demo";
 import { loadCatalogFrom } from "@/lib/content/load";
 import { buildSearchDocs } from "@/lib/search/docs";
 import { SearchIndex } from "@/lib/search";
+import { RELEVANCE } from "../tests/unit/search-relevance.fixture";
 import { APP, record, sessionCookie, summary } from "./lib";
 import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
@@ -15,8 +16,12 @@ import { user } from "@/db/schema";
 const catalog = loadCatalogFrom("content");
 const docs = buildSearchDocs(catalog);
 const base = ["sidewall", "antifreeze", "friction loss", "k-factor", "cpvc cement", "insulate attic", "flow test", "backflow", "rough-in", "trim", "escutcheon", "hydrostatic", "meter size", "coverage area", "sloped ceiling", "painted sprinkler", "test connection", "homebuyer insurance", "pex", "copper type l"];
-const queries = Array.from({ length: 200 }, (_, i) => {
-  const q = base[i % base.length]!;
+// Plus the job-site questions of the relevance test (typos, synonyms, sizes): the budget is an
+// in-process p95 under 5 ms.
+const jobSite = RELEVANCE.map(([q]) => q);
+const pool2 = [...base, ...jobSite];
+const queries = Array.from({ length: 400 }, (_, i) => {
+  const q = pool2[i % pool2.length]!;
   return i % 3 === 0 ? q.slice(0, Math.max(3, Math.ceil(q.length / 2))) : q; // some as-you-type prefixes
 });
 

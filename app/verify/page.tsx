@@ -2,19 +2,19 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { VerifyForm } from "@/components/certificates/verify-form";
 import { PageTitle } from "@/components/ui/page-title";
-import { extractVerificationCode } from "@/lib/certificates/status";
+import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_ERROR } from "@/lib/certificates/verify-code";
 
 export const metadata: Metadata = { title: "Check a certificate" };
 
-/** Public: type a certificate's code to check it (the QR code on the certificate opens the result directly). */
+/** Public: type a certificate's code or serial to check it (the QR code on the certificate opens the result directly). */
 export default async function VerifyPage({ searchParams }: { searchParams: Promise<{ code?: string | string[] }> }) {
   const { code } = await searchParams;
   const typed = typeof code === "string" ? code : undefined;
   let error: string | undefined;
   if (typed?.trim()) {
-    const found = extractVerificationCode(typed);
-    if (found) redirect(`/verify/${found}`);
-    error = "That is not a Riser verification code: it has 24 letters, digits, - or _.";
+    const found = parseVerifyInput(typed);
+    if (found) redirect(`/verify/${encodeURIComponent(verifyPathSegment(found))}`);
+    error = VERIFY_INPUT_ERROR;
   }
   return (
     <>

@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { signInSchema } from "@/lib/auth/schemas";
+import { ResendConfirmation } from "./resend-confirmation";
 
 type Values = z.infer<typeof signInSchema>;
 
@@ -22,13 +23,17 @@ export function SignInForm() {
   const params = useSearchParams();
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(signInSchema) });
+  const [unconfirmed, setUnconfirmed] = useState<string | null>(null);
 
   async function onSubmit(values: Values) {
     setError(null);
     const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
       if (error.code === "BANNED_USER") setError("This account is banned from Riser. If you think this is a mistake, ask your training manager.");
-      else if (error.status === 403) setError("Confirm your e-mail address first: open the link we sent you.");
+      else if (error.status === 403) {
+        setError("Confirm your e-mail address first: open the link we sent you.");
+        setUnconfirmed(values.email);
+      }
       else if (error.status === 429) setError("Too many sign-in attempts. Wait a minute and try again.");
       else if (error.status === 401) setError("That e-mail and password do not match an account.");
       else setError(error.message ?? "Sign-in failed. Try again.");
@@ -40,9 +45,13 @@ export function SignInForm() {
 
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
-      {params.get("verified") ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
+      {verifiedNotice(params.get("verified"), params.get("error"), error) ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
+      {params.get("verified") && params.get("error") ? (
+        <FormError message={params.get("error") === "TOKEN_EXPIRED" ? "That confirmation link has expired. Sign in below; if your address still needs confirming, you can send yourself a new link." : "That confirmation link is not valid. Sign in below; if your address still needs confirming, you can send yourself a new link."} />
+      ) : null}
       {params.get("reset") ? <FormNotice message="Your password is changed. Sign in with the new one." /> : null}
       <FormError message={error} />
+      {unconfirmed && error ? <ResendConfirmation email={unconfirmed} /> : null}
       <Field label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
       <Field label="Password" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>
@@ -53,4 +62,12 @@ export function SignInForm() {
       </p>
     </form>
   );
+}
+
+/**
+ * "E-mail confirmed" only when the confirmation really succeeded (no `error` from the link) and no
+ * sign-in error is on screen beside it.
+ */
+export function verifiedNotice(verified: string | null, linkError: string | null, signInError: string | null): boolean {
+  return Boolean(verified) && !linkError && !signInError;
 }

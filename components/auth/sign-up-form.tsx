@@ -6,10 +6,11 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
 import { postJson } from "@/lib/fetcher";
+import { ResendConfirmation } from "./resend-confirmation";
 
 export function SignUpForm() {
   const [error, setError] = useState<string | null>(null);
-  const [done, setDone] = useState<string | null>(null);
+  const [done, setDone] = useState<{ message: string; email: string } | null>(null);
   const { register, handleSubmit, formState, setError: setFieldError } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
 
   async function onSubmit(values: SignUpInput) {
@@ -22,10 +23,18 @@ export function SignUpForm() {
       setError(res.error);
       return;
     }
-    setDone(res.data.message);
+    setDone({ message: res.data.message, email: values.email });
   }
 
-  if (done) return <FormNotice message={done} />;
+  if (done) {
+    return (
+      <div className="flex max-w-md flex-col gap-3" data-testid="sign-up-done">
+        <FormNotice message={`Check your e-mail: we sent a link to ${done.email} to confirm the address. Open it within 24 hours, then sign in.`} />
+        <p className="text-sm text-muted">Nothing arrived after a few minutes? Look in the spam folder, or send the link again. A wrong address? Reload this page and sign up with the right one.</p>
+        <ResendConfirmation email={done.email} />
+      </div>
+    );
+  }
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <FormError message={error} />

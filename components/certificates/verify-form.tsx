@@ -5,7 +5,7 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/schemas";
-import { extractVerificationCode } from "@/lib/certificates/status";
+import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/certificates/verify-code";
 
 /**
  * Type or paste a certificate's code (or its whole link). Works without JavaScript too: the form
@@ -24,12 +24,12 @@ export function VerifyForm({ initial, serverError }: { initial?: string; serverE
       action="/verify"
       method="get"
       noValidate
-      onSubmit={handleSubmit((v) => router.push(`/verify/${extractVerificationCode(v.code)}`))}
+      onSubmit={handleSubmit((v) => router.push(`/verify/${encodeURIComponent(verifyPathSegment(parseVerifyInput(v.code)!))}`))}
       className="flex max-w-xl flex-col gap-4 rounded border border-line bg-panel p-4"
     >
       <Field
         label="Verification code"
-        hint="24 letters, digits, - or _, printed under the QR code on the certificate. A pasted link works too."
+        hint={VERIFY_INPUT_HINT}
         autoComplete="off"
         spellCheck={false}
         className="font-mono"

@@ -35,7 +35,7 @@ function useCountdown(deadline: string | null, onExpire: () => void) {
 
 const isAnswered = (v: AnswerValue | undefined) => v !== undefined && v !== null && !(Array.isArray(v) && v.length === 0);
 
-export function QuizRunner({ module, canStart, blockedReason }: { module: string; canStart: boolean; blockedReason: string | null }) {
+export function QuizRunner({ module, canStart, blockedReason, startLabel = "Start the quiz" }: { module: string; canStart: boolean; blockedReason: string | null; startLabel?: string }) {
   const router = useRouter();
   const [attempt, setAttempt] = useState<AttemptView | null>(null);
   const [answers, setAnswers] = useState<Record<string, AnswerValue>>({});
@@ -126,7 +126,7 @@ export function QuizRunner({ module, canStart, blockedReason }: { module: string
         {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
         {blockedReason ? <p className="rounded border border-line bg-panel p-3">{blockedReason}</p> : null}
         <div>
-          <Button onClick={start} disabled={busy || !canStart}>{busy ? "Preparing…" : "Start the quiz"}</Button>
+          <Button onClick={start} disabled={busy || !canStart}>{busy ? "Preparing…" : startLabel}</Button>
         </div>
       </div>
     );

@@ -6,6 +6,7 @@ import useSWR from "swr";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { SearchHit } from "@/lib/search/browser";
+import { plural } from "@/lib/plural";
 
 const KIND_LABEL = { lesson: "Lesson", card: "Code card", term: "Glossary" } as const;
 
@@ -14,7 +15,7 @@ export function SearchBox() {
   const router = useRouter();
   const [q, setQ] = useState(params.get("q") ?? "");
   const debounced = useDebounced(q.trim(), 150);
-  const { data, error, isLoading } = useSWR<{ hits: SearchHit[] }>(debounced ? `/api/search?q=${encodeURIComponent(debounced)}&limit=20` : null, getJson, { keepPreviousData: true });
+  const { data, error, isLoading } = useSWR<{ hits: SearchHit[]; didYouMean?: string | null }>(debounced ? `/api/search?q=${encodeURIComponent(debounced)}&limit=20` : null, getJson, { keepPreviousData: true });
 
   useEffect(() => {
     router.replace(debounced ? `/search?q=${encodeURIComponent(debounced)}` : "/search", { scroll: false });
@@ -39,10 +40,19 @@ export function SearchBox() {
         {!debounced ? <p className="text-muted">Type a word to search. Results appear as you type.</p> : null}
         {error ? <p role="alert" className="text-caution">Search is not available right now: {error.message}</p> : null}
         {debounced && isLoading && !data ? <p className="text-muted">Searching…</p> : null}
+        {debounced && data?.didYouMean && data.didYouMean !== debounced.toLowerCase() ? (
+          <p className="mb-2" data-testid="did-you-mean">
+            Did you mean{" "}
+            <button type="button" className="font-bold text-water underline" onClick={() => setQ(data.didYouMean!)}>
+              {data.didYouMean}
+            </button>
+            ?
+          </p>
+        ) : null}
         {debounced && data && data.hits.length === 0 ? <p>No results for “{debounced}”. Try a shorter word or a trade term.</p> : null}
         {debounced && data && data.hits.length > 0 ? (
           <>
-            <p className="sr-only">{data.hits.length} results</p>
+            <p className="sr-only">{plural(data.hits.length, "result")}</p>
             <ol className="flex flex-col gap-3">
               {data.hits.map((h) => (
                 <li key={h.id} className="rounded border border-line bg-panel p-3">

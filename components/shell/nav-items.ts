@@ -17,3 +17,13 @@ export const NAV_ITEMS: NavItem[] = [
 export function navFor(role: Role): NavItem[] {
   return NAV_ITEMS.filter((i) => i.rule === "signed-in" || (i.rule === "manager" ? role === "manager" || role === "admin" : role === "admin"));
 }
+
+/**
+ * Links for someone signed out. An invitation page offers no "Create an account": the invited
+ * person's account comes from the invitation, and a separate sign-up would make a second company.
+ */
+export function signedOutLinks(pathname: string | null): { href: string; label: string }[] {
+  const links = [{ href: "/sign-in", label: "Sign in" }];
+  if (!pathname?.startsWith("/invite/")) links.push({ href: "/sign-up", label: "Create an account" });
+  return links;
+}

@@ -4,7 +4,7 @@ import { usePathname, useRouter } from "next/navigation";
 import { useState } from "react";
 import { authClient } from "@/lib/auth/client";
 import { isRole } from "@/lib/access/rules";
-import { navFor } from "./nav-items";
+import { navFor, signedOutLinks } from "./nav-items";
 
 export function SiteNav() {
   const { data, isPending } = authClient.useSession();
@@ -58,8 +58,9 @@ export function SiteNav() {
         </>
       ) : (
         <ul className="flex gap-4">
-          <li><Link href="/sign-in" className="text-paper">Sign in</Link></li>
-          <li><Link href="/sign-up" className="text-paper">Create an account</Link></li>
+          {signedOutLinks(pathname).map((l) => (
+            <li key={l.href}><Link href={l.href} className="text-paper">{l.label}</Link></li>
+          ))}
         </ul>
       )}
     </nav>

@@ -1,5 +1,6 @@
 "use client";
-import { useId, useState } from "react";
+import { useRouter } from "next/navigation";
+import { useEffect, useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
@@ -15,6 +16,14 @@ export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learne
   const [outcome, setOutcome] = useState<string | null>(null);
   const { register, getValues, setError, clearErrors, formState } = useForm<{ comment: string }>({ defaultValues: { comment: "" } });
   const [busy, setBusy] = useState<Decision | null>(null);
+  const router = useRouter();
+  // After a decision the queue and the Sign-offs tab's count update without a reload; the
+  // confirmation stays readable for a moment first.
+  useEffect(() => {
+    if (!outcome) return;
+    const t = setTimeout(() => router.refresh(), 1500);
+    return () => clearTimeout(t);
+  }, [outcome, router]);
 
   async function decide(decision: Decision) {
     setProblem(null);

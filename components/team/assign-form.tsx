@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useEffect, useId, useState } from "react";
@@ -100,7 +101,11 @@ export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; pa
           name="teamIds"
           render={({ field }) => (
             <div className="flex flex-wrap gap-x-6 gap-y-2">
-              {teams.length === 0 ? <span className="text-muted">No teams yet.</span> : null}
+              {teams.length === 0 ? (
+                <span className="text-muted">
+                  No teams yet: <Link href={`/team/teams${org ? `?org=${org}` : ""}`}>create your crews or offices</Link>, then assign to whole teams here. People can be chosen one by one meanwhile.
+                </span>
+              ) : null}
               {teams.map((t) => (
                 <label key={t.id} className="flex min-h-11 items-center gap-2">
                   <input

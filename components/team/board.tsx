@@ -7,10 +7,12 @@ import { FormError } from "@/components/ui/field";
 import { serverFirst } from "@/components/ui/server-first";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
-import type { BoardPage, BoardRow } from "@/lib/team/board";
+import type { BoardPage } from "@/lib/team/board";
+import type { RichRow } from "@/lib/team/board-extras";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
 import { StatusBadge } from "./status-badge";
 import { isoDay, shortDate } from "@/lib/dates";
+import { BoardCellView } from "./board-cell";
 
 export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };
 
@@ -21,7 +23,7 @@ type Props = {
   showOrgNames: boolean;
   initial: BoardFilters;
   /** the page of the board the server already rendered for `initial` (not fetched again on mount) */
-  initialPage?: BoardPage;
+  initialPage?: RichPage;
 };
 
 const PAGE_SIZES = [10, 25, 50, 100];
@@ -41,7 +43,8 @@ function queryString(f: BoardFilters, org: string | null, withPage = true): stri
 }
 
 
-const col = createColumnHelper<BoardRow>();
+const col = createColumnHelper<RichRow>();
+type RichPage = Omit<BoardPage, "rows"> & { rows: RichRow[] };
 
 export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialPage }: Props) {
   const [f, setF] = useState<BoardFilters>(initial);
@@ -49,7 +52,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
   const qs = queryString(f, org);
   const key = `/api/team/board?${qs}`;
   const [first] = useState(() => (initialPage ? { key: `/api/team/board?${queryString(initial, org)}`, data: initialPage } : undefined));
-  const { data, error, isLoading, isValidating, mutate } = useSWR<BoardPage>(key, getJson, { keepPreviousData: true, revalidateOnFocus: false, ...serverFirst(key, first) });
+  const { data, error, isLoading, isValidating, mutate } = useSWR<RichPage>(key, getJson, { keepPreviousData: true, revalidateOnFocus: false, ...serverFirst(key, first) });
 
   // Keep the address in step with the filters, so a view can be bookmarked or shared.
   useEffect(() => {
@@ -96,16 +99,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
           cell: (c) => {
             const cell = c.row.original.cells[m.slug];
             if (!cell) return null;
-            const done = cell.status === "passed" || cell.status === "expiring";
-            return (
-              <div className="flex flex-col items-start gap-0.5" title={`${cell.lessonsDone} of ${cell.lessonsTotal} lessons · ${cell.attempts} attempt(s)${cell.bestScore !== null ? ` · best ${cell.bestScore}%` : ""}`}>
-                <StatusBadge status={cell.status} compact />
-                {!done && cell.dueAt ? <span className="whitespace-nowrap text-xs text-muted">due {shortDate(cell.dueAt)}</span> : null}
-                {(cell.status === "expiring" || cell.status === "expired") && cell.expiresAt ? (
-                  <span className="whitespace-nowrap text-xs text-muted">{cell.status === "expired" ? "ended" : "ends"} {shortDate(cell.expiresAt)}</span>
-                ) : null}
-              </div>
-            );
+            return <BoardCellView cell={cell} person={c.row.original.name} module={m.title} personId={c.row.original.id} />;
           },
         }),
       ),
@@ -239,7 +233,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
         </div>
       ) : data ? (
         <div role="region" aria-label="Team board table" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
-          <table className="w-full border-collapse text-sm" aria-busy={isValidating}>
+          <table className="w-full min-w-max border-collapse text-sm" aria-busy={isValidating}>
             <caption className="sr-only">Training status of each person in each module{f.status ? `, people with “${STATUS_LABELS[f.status as BoardStatus]}”` : ""}</caption>
             <thead>
               {table.getHeaderGroups().map((hg) => (
@@ -252,7 +246,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
                         key={h.id}
                         scope="col"
                         aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}
-                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-10 bg-paper" : ""}`}
+                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-30 bg-paper shadow-[2px_0_0_0_#D5CFC3]" : ""}`}
                       >
                         {sortable ? (
                           <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-end gap-1 text-left font-bold underline decoration-dotted underline-offset-4">
@@ -272,7 +266,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id} className="border-b border-line align-top last:border-0" data-person={r.original.name}>
                   {r.getVisibleCells().map((c, i) => (
-                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 bg-panel" : ""}`}>
+                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 z-10 bg-panel shadow-[2px_0_0_0_#D5CFC3]" : ""}`}>
                       {flexRender(c.column.columnDef.cell, c.getContext())}
                     </td>
                   ))}

@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import type { RosterPreview } from "@/lib/team/bulk";
 import { ROLE_LABELS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/schemas";
+import { plural } from "@/lib/plural";
 
 type ImportResult = { imported: number; skipped: number; message: string };
 
@@ -113,7 +114,7 @@ export function BulkInvite({ org }: { org: string | null }) {
       {preview ? (
         <div className="flex flex-col gap-3" aria-live="polite">
           <p role="status" className="font-bold">
-            {preview.total} rows in {preview.fileName}: {preview.valid} ready to invite, {preview.invalid} with problems. Nothing has been written yet.
+            {plural(preview.total, "row")} in {preview.fileName}: {preview.valid} ready to invite, {preview.invalid} with problems. Nothing has been written yet.
           </p>
           <p className="text-sm text-muted">
             Seats: {preview.seats.used} of {preview.seats.seats} taken (members and open invitations).

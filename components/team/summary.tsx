@@ -7,6 +7,7 @@ import type { TeamTotal, WeekPoint } from "@/lib/team/board";
 import { monthDay, startOfIsoDay } from "@/lib/dates";
 import { chartColors } from "@/lib/theme/tokens";
 import { serverFirst } from "@/components/ui/server-first";
+import { PERCENT_AXIS, PERCENT_CHART_MARGIN, WEEK_AXIS } from "@/lib/team/chart";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
@@ -73,7 +74,7 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
                 <ResponsiveContainer width="100%" height="100%">
                   <BarChart data={data.weeks.map((w) => ({ ...w, label: weekLabel(w.week) }))} margin={{ top: 8, right: 8, bottom: 0, left: -16 }} accessibilityLayer={false}>
                     <CartesianGrid strokeDasharray="3 3" stroke={chartColors.grid} />
-                    <XAxis dataKey="label" tick={{ fontSize: 11, fill: chartColors.axis }} interval="preserveStartEnd" />
+                    <XAxis dataKey="label" tick={{ fontSize: WEEK_AXIS.fontSize, fill: chartColors.axis, angle: WEEK_AXIS.angle, textAnchor: WEEK_AXIS.textAnchor }} interval={WEEK_AXIS.interval} height={WEEK_AXIS.height} />
                     <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
                     <Bar dataKey="completions" name="Completions" fill={chartColors.primary} />
@@ -102,9 +103,9 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
               <figcaption className="mb-2 font-bold">Share of modules passed, by team</figcaption>
               <div className="h-60" aria-hidden="true">
                 <ResponsiveContainer width="100%" height="100%">
-                  <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={{ top: 8, right: 16, bottom: 0, left: 8 }} accessibilityLayer={false}>
+                  <BarChart data={data.teams.map((t) => ({ team: label(t), passed: pct(t) }))} layout="vertical" margin={PERCENT_CHART_MARGIN} accessibilityLayer={false}>
                     <CartesianGrid strokeDasharray="3 3" stroke={chartColors.grid} />
-                    <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: chartColors.axis }} />
+                    <XAxis type="number" domain={[0, 100]} ticks={[...PERCENT_AXIS.ticks]} unit="%" tick={{ fontSize: PERCENT_AXIS.fontSize, fill: chartColors.axis }} />
                     <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
                     <Bar dataKey="passed" name="Passed (%)" fill={chartColors.secondary} />

@@ -1,15 +1,21 @@
+import "server-only";
 import Link from "next/link";
+import { getViewer } from "@/lib/access";
+import { waitingCount } from "@/lib/signoffs/queries";
 
 const TABS = [
   { href: "/team", label: "Board" },
-  { href: "/team/assign", label: "Assign work" },
+  { href: "/team/teams", label: "Teams" },
   { href: "/team/invite", label: "Invite people" },
+  { href: "/team/assign", label: "Assign work" },
   { href: "/team/sign-offs", label: "Sign-offs" },
 ];
 
-/** Sub-navigation of the manager's pages; keeps ?org= for admins. */
-export function TeamNav({ current, org }: { current: string; org?: string | null }) {
+/** Sub-navigation of the manager's pages; keeps ?org= for admins; the Sign-offs tab counts what waits for review. */
+export async function TeamNav({ current, org }: { current: string; org?: string | null }) {
   const q = org ? `?org=${encodeURIComponent(org)}` : "";
+  const viewer = await getViewer();
+  const waiting = viewer ? await waitingCount(viewer, org ?? null) : 0;
   return (
     <nav aria-label="Team pages" className="mb-6 flex flex-wrap gap-2 border-b border-line pb-2">
       {TABS.map((t) => (
@@ -20,6 +26,12 @@ export function TeamNav({ current, org }: { current: string; org?: string | null
           className={`rounded px-3 py-2 font-bold no-underline ${current === t.href ? "bg-ink text-paper" : "text-ink hover:bg-panel"}`}
         >
           {t.label}
+          {t.href === "/team/sign-offs" && waiting > 0 ? (
+            <span className="ml-1.5 inline-flex min-w-6 items-center justify-center rounded-full bg-copper px-1.5 text-xs text-white" data-testid="sign-offs-waiting">
+              {waiting}
+              <span className="sr-only"> waiting for review</span>
+            </span>
+          ) : null}
         </Link>
       ))}
     </nav>

@@ -19,6 +19,8 @@ export const team = mysqlTable(
       .references(() => organization.id, { onDelete: "cascade" }),
     name: varchar("name", { length: 120 }).notNull(),
     createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
+    /** archived teams keep their people's history but leave pickers, filters and new invitations */
+    archivedAt: datetime("archived_at", { fsp: 3 }),
   },
   (t) => [uniqueIndex("team_org_name_uq").on(t.organizationId, t.name)],
 );

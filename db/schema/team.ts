@@ -3,7 +3,7 @@
  * assignments of a module or a learning path to one person or a whole team, and the reminder log
  * that makes reminder mail idempotent per period.
  */
-import { datetime, index, int, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { datetime, index, int, json, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { user } from "./auth";
 import { organization, team } from "./org";
 
@@ -26,6 +26,13 @@ export const invitation = mysqlTable(
     acceptedAt: datetime("accepted_at", { fsp: 3 }),
     acceptedUserId: varchar("accepted_user_id", { length: 36 }),
     revokedAt: datetime("revoked_at", { fsp: 3 }),
+    /** who withdrew it (null when a newer invitation replaced it) */
+    revokedBy: varchar("revoked_by", { length: 36 }),
+    /** when the mail last went out (a resend keeps the row and issues a new token) */
+    lastSentAt: datetime("last_sent_at", { fsp: 3 }),
+    sendCount: int("send_count").notNull().default(1),
+    /** work to assign on acceptance: [{ kind: "module" | "path", slug, dueAt: "YYYY-MM-DD" }] */
+    assignOnAccept: json("assign_on_accept").$type<{ kind: "module" | "path"; slug: string; dueAt: string }[]>(),
   },
   (t) => [
     uniqueIndex("invitation_token_uq").on(t.tokenHash),

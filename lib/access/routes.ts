@@ -118,4 +118,16 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/team/people", rule: "manager", sample: "/api/team/people?q=a" },
   { route: "/api/team/summary", rule: "manager" },
   { route: "/api/jobs/run", rule: "public", method: "POST", okStatus: 401 },
+  // running a crew: teams, people, invitations. POST {} → 400 (nothing to change); ids in samples
+  // do not exist → 404 for managers and admins (admins without ?org= get 400: choose the organization).
+  { route: "/team/teams", rule: "manager" },
+  { route: "/api/team/teams", rule: "manager", sample: "/api/team/teams", okStatus: 200 },
+  { route: "/api/team/teams", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/teams/[id]", rule: "manager", sample: "/api/team/teams/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },
+  { route: "/api/team/people/[id]", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },
+  { route: "/api/team/people/[id]/remove", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000/remove", method: "POST", okStatus: 404 },
+  { route: "/api/team/invites", rule: "manager" },
+  { route: "/api/team/invites/[id]/resend", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/resend", method: "POST", okStatus: 404 },
+  { route: "/api/team/invites/[id]/assign", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/assign", method: "POST", okStatus: 400 },
+  { route: "/api/team/invites/[id]/revoke", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/revoke", method: "POST", okStatus: 404 },
 ];

@@ -64,6 +64,8 @@ export const auth = betterAuth({
         });
         return;
       }
+      // Accounts created from an invitation are verified at creation (the link proved the address).
+      if (user.emailVerified) return;
       await sendMail({
         to: user.email,
         kind: "verify-email",

@@ -7,5 +7,11 @@ import { AsyncLocalStorage } from "node:async_hooks";
  * better-auth's raw endpoint without it is refused, so nobody can place themselves in an
  * organization or pick a role.
  */
-export type SignupPlacement = { organizationId: string; teamId: string | null; role: "learner" | "sales" | "manager" };
+export type SignupPlacement = {
+  organizationId: string;
+  teamId: string | null;
+  role: "learner" | "sales" | "manager";
+  /** true only for invite acceptance: opening the mailed link proved the address (no confirm mail) */
+  emailVerified?: true;
+};
 export const signupContext = new AsyncLocalStorage<SignupPlacement>();

@@ -1,16 +1,18 @@
 import "server-only";
 import { randomBytes } from "node:crypto";
+import { newVerificationCode as newCode } from "./verify-code";
 import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { catalogModule, certificate, certificateSerialCounter, moduleCompletion, organization, user, type Certificate } from "@/db/schema";
 import { findModule, loadCatalog } from "@/lib/content/load";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl, VERIFICATION_CODE_BYTES } from "./status";
+import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
 
 export type IssuedCertificate = Pick<Certificate, "id" | "serial" | "kind" | "subjectSlug" | "subjectTitle" | "verificationCode" | "expiresAt">;
 
-const newVerificationCode = () => randomBytes(VERIFICATION_CODE_BYTES).toString("base64url");
+// New codes: Crockford base32, grouped when shown (lib/certificates/verify-code.ts); old codes still verify.
+const newVerificationCode = () => newCode(randomBytes);
 
 /**
  * `count` consecutive serials of `year`, taken under the counter row's lock, which the transaction

@@ -2,7 +2,8 @@ import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { certificate, type Certificate } from "@/db/schema";
-import { certificateStatus, isExpiringSoon, isVerificationCode, type CertificateKind, type CertificateStatus } from "./status";
+import { parseVerifyInput } from "./verify-code";
+import { certificateStatus, isExpiringSoon, type CertificateKind, type CertificateStatus } from "./status";
 
 /** What the holder's own list shows (no verification secrets of others, no audit detail). */
 export type HolderCertificate = {
@@ -61,8 +62,10 @@ export type PublicVerification = {
   status: CertificateStatus;
 };
 
-export async function verificationByCode(code: string, now: Date = new Date()): Promise<PublicVerification | null> {
-  if (!isVerificationCode(code)) return null;
+export async function verificationByCode(input: string, now: Date = new Date()): Promise<PublicVerification | null> {
+  // A code (new grouped form, old base64url form, or a pasted link) or the certificate's serial.
+  const lookup = parseVerifyInput(input);
+  if (!lookup) return null;
   const [c] = await db
     .select({
       serial: certificate.serial,
@@ -76,8 +79,9 @@ export async function verificationByCode(code: string, now: Date = new Date()): 
       code: certificate.verificationCode,
     })
     .from(certificate)
-    .where(eq(certificate.verificationCode, code));
-  if (!c || c.code !== code) return null;
+    .where(lookup.kind === "code" ? eq(certificate.verificationCode, lookup.code) : eq(certificate.serial, lookup.serial))
+    .limit(1);
+  if (!c || (lookup.kind === "code" && c.code !== lookup.code)) return null;
   return {
     serial: c.serial,
     holderName: c.holderName,

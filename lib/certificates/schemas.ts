@@ -1,6 +1,6 @@
 /** Input schemas shared by the certificate forms (browser) and route handlers (server). */
 import { z } from "zod";
-import { extractVerificationCode } from "./status";
+import { parseVerifyInput, VERIFY_INPUT_ERROR } from "./verify-code";
 
 export const revokeInput = z.object({
   reason: z
@@ -15,7 +15,7 @@ export const verifyCodeInput = z.object({
   code: z
     .string()
     .trim()
-    .min(1, "Type or paste the code printed under the QR code.")
-    .refine((s) => extractVerificationCode(s) !== null, "That is not a Riser verification code: it has 24 letters, digits, - or _."),
+    .min(1, "Type or paste the code printed under the verification address, or the certificate's serial.")
+    .refine((s) => parseVerifyInput(s) !== null, VERIFY_INPUT_ERROR),
 });
 export type VerifyCodeInput = z.infer<typeof verifyCodeInput>;

@@ -7,8 +7,15 @@ export type SearchDoc = {
   title: string;
   href: string;
   context: string;
+  /** the card's or lesson's own headings (## …), weighted above the text */
+  headings?: string;
   text: string;
 };
+
+/** "## Heading" lines of an MDX body, as one line of text. */
+export function headingsOf(body: string): string {
+  return [...body.matchAll(/^#{2,4}\s+(.+)$/gm)].map((m) => m[1]!.replace(/[*_`]/g, "").trim()).join(" · ");
+}
 
 /** Strips MDX/markdown to readable text: SVG and JSX tags removed, link text kept. */
 export function mdxToText(body: string): string {
@@ -35,12 +42,13 @@ export function buildSearchDocs(catalog: Catalog): SearchDoc[] {
         title: l.meta.title,
         href: `/modules/${m.slug}/${l.slug}`,
         context: m.meta.title,
+        headings: headingsOf(l.body),
         text: `${l.meta.summary} ${mdxToText(l.body)}`,
       });
     }
   }
   for (const c of catalog.cards) {
-    docs.push({ id: `card:${c.slug}`, kind: "card", title: c.meta.title, href: `/reference/${c.slug}`, context: "Code-reference card", text: `${c.meta.summary} ${mdxToText(c.body)}` });
+    docs.push({ id: `card:${c.slug}`, kind: "card", title: c.meta.title, href: `/reference/${c.slug}`, context: "Code-reference card", headings: headingsOf(c.body), text: `${c.meta.summary} ${mdxToText(c.body)}` });
   }
   for (const t of catalog.glossary) {
     docs.push({ id: `term:${t.id}`, kind: "term", title: t.term, href: `/glossary#${t.id}`, context: "Glossary", text: t.definition });

@@ -1,77 +1,227 @@
 /**
- * Full-text search over lessons, cards and glossary terms with flexsearch. Works in Node (the
- * /api/search route) and in a browser alike. Title matches rank before body matches; a light
- * English stemmer makes "insulate" find "insulation" and "sidewalls" find "sidewall"; forward
- * tokenizing gives results as you type.
+ * Search over lessons, code cards and glossary terms (plain code: the /api/search route and a
+ * browser alike). Each document's fields are indexed with their own weight (title, then the card
+ * or lesson headings, then the text); a query is read term by term with the trade's synonyms,
+ * typo correction ("did you mean") and completion of the last word as one types; sizes with units
+ * are terms of their own ("1 inch" finds "1 in"). Documents whose title matches rank first, then
+ * by a BM25F score that rewards covering every term of the question.
  */
-import { Index } from "flexsearch";
 import type { SearchDoc } from "./docs";
+import { editDistance, normalize, stem, STOP, synonymsOf, tokens, typoBudget } from "./text";
+
+export { stem, tokens } from "./text";
 
 export const MAX_RESULTS = 20;
 export const MAX_QUERY_LENGTH = 200;
 
-const STOP = new Set(["a", "an", "and", "are", "as", "at", "be", "by", "for", "from", "in", "is", "it", "of", "on", "or", "the", "to", "with", "what", "how", "do", "does"]);
-const SUFFIXES = ["ations", "ation", "ings", "ing", "ions", "ion", "ers", "er", "ied", "ies", "ed", "es", "ate", "s", "e"];
-
-/** Reduces an English word to a rough stem; the same rule runs on content and queries. */
-export function stem(word: string): string {
-  let w = word;
-  for (const s of SUFFIXES) {
-    if (w.length - s.length >= 4 && w.endsWith(s)) {
-      w = w.slice(0, -s.length);
-      break;
-    }
-  }
-  return w;
-}
-
-export function tokens(text: string): string[] {
-  return text
-    .toLowerCase()
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    .split(/[^a-z0-9]+/)
-    .filter((t) => t && !STOP.has(t))
-    .map(stem);
-}
-
 export type Segment = { text: string; hit: boolean };
 export type SearchHit = { id: string; kind: SearchDoc["kind"]; title: string; href: string; context: string; snippet: Segment[]; titleMatch: boolean };
+export type SearchResult = { hits: SearchHit[]; didYouMean: string | null };
+
+const FIELDS = ["title", "headings", "context", "text"] as const;
+type Field = (typeof FIELDS)[number];
+/** Field weights (Riser's tuning against tests/unit/search-relevance.test.ts). */
+const WEIGHT: Record<Field, number> = { title: 6, headings: 2.5, context: 0.4, text: 1 };
+const KIND_WEIGHT: Record<SearchDoc["kind"], number> = { card: 1.1, lesson: 1, term: 0.6 };
+const K1 = 1.2;
+const B = 0.75;
+
+type Posting = Map<number, number>; // doc → term frequency
+
+/** One term of the query and what it may also match, with a weight per variant. */
+type Slot = { word: string; variants: Map<string, number>; corrected: string | null };
 
 export class SearchIndex {
-  private titles = new Index({ tokenize: "forward", encode: tokens, resolution: 9 });
-  private bodies = new Index({ tokenize: "forward", encode: tokens, resolution: 9, context: false });
   private docs: SearchDoc[];
+  private postings: Record<Field, Map<string, Posting>> = { title: new Map(), headings: new Map(), context: new Map(), text: new Map() };
+  private lengths: Record<Field, number[]> = { title: [], headings: [], context: [], text: [] };
+  private avg: Record<Field, number> = { title: 1, headings: 1, context: 1, text: 1 };
+  private df = new Map<string, number>();
+  /** every document holding the term, in any field */
+  private docsWith = new Map<string, number[]>();
+  /** known words (no digits) by length, for typo look-ups */
+  private byLength = new Map<number, string[]>();
+  /** every term, sorted, for completing a prefix */
+  private sorted: string[] = [];
 
   constructor(docs: SearchDoc[]) {
     this.docs = docs;
     docs.forEach((d, i) => {
-      this.titles.add(i, d.title);
-      this.bodies.add(i, `${d.context} ${d.text}`);
+      const seen = new Set<string>();
+      for (const f of FIELDS) {
+        const ts = tokens(d[f] ?? "");
+        this.lengths[f][i] = ts.length;
+        for (const t of ts) {
+          let p = this.postings[f].get(t);
+          if (!p) this.postings[f].set(t, (p = new Map()));
+          p.set(i, (p.get(i) ?? 0) + 1);
+          seen.add(t);
+        }
+      }
+      for (const t of seen) {
+        this.df.set(t, (this.df.get(t) ?? 0) + 1);
+        let list = this.docsWith.get(t);
+        if (!list) this.docsWith.set(t, (list = []));
+        list.push(i);
+      }
+    });
+    for (const f of FIELDS) this.avg[f] = Math.max(1, this.lengths[f].reduce((a, b) => a + b, 0) / Math.max(1, docs.length));
+    this.sorted = [...this.df.keys()].sort();
+    this.surface = this.buildSurface();
+    for (const t of this.sorted) {
+      if (/\d/.test(t)) continue;
+      let list = this.byLength.get(t.length);
+      if (!list) this.byLength.set(t.length, (list = []));
+      list.push(t);
+    }
+  }
+
+  /** Terms that start with `prefix` (binary search in the sorted list), at most `max`. */
+  private completions(prefix: string, max: number): string[] {
+    let lo = 0;
+    let hi = this.sorted.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.sorted[mid]! < prefix) lo = mid + 1;
+      else hi = mid;
+    }
+    const out: string[] = [];
+    for (let i = lo; i < this.sorted.length && out.length < max && this.sorted[i]!.startsWith(prefix); i++) out.push(this.sorted[i]!);
+    return out;
+  }
+
+  private idf(term: string): number {
+    const n = this.df.get(term) ?? 0;
+    return Math.log(1 + (this.docs.length - n + 0.5) / (n + 0.5));
+  }
+
+  /** Typo correction for a word the corpus does not know: the closest known term, preferring ones used beside the other words. */
+  private correct(word: string, others: string[]): string | null {
+    const budget = typoBudget(word.length);
+    if (!budget || /\d/.test(word)) return null;
+    const near = new Set<number>();
+    for (const o of others) for (const i of this.docsWith.get(o) ?? []) near.add(i);
+    let best: { t: string; d: number; co: number; df: number } | null = null;
+    for (let len = word.length - budget; len <= word.length + budget; len++) {
+      for (const t of this.byLength.get(len) ?? []) {
+        const d = editDistance(word, t, budget);
+        if (d > budget) continue;
+        let co = 0;
+        for (const i of this.docsWith.get(t) ?? []) if (near.has(i)) co++;
+        const df = this.df.get(t) ?? 0;
+        if (!best || d < best.d || (d === best.d && (co > best.co || (co === best.co && df > best.df)))) best = { t, d, co, df };
+      }
+    }
+    return best?.t ?? null;
+  }
+
+  private slots(query: string): Slot[] {
+    const words = normalize(query)
+      .split(/[^a-z0-9_]+/)
+      .filter((w) => w && !STOP.has(w));
+    const stems = words.map(stem);
+    const known = stems.filter((s) => this.df.has(s));
+    return words.slice(0, 12).map((word, k) => {
+      const s = stems[k]!;
+      const variants = new Map<string, number>();
+      let corrected: string | null = null;
+      if (this.df.has(s)) variants.set(s, 1);
+      else {
+        const fix = this.correct(s, known);
+        if (fix) {
+          variants.set(fix, 0.85);
+          corrected = fix;
+        }
+      }
+      for (const syn of synonymsOf(s)) if (this.df.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
+      // The last word may be unfinished (search as you type): complete it.
+      if (k === words.length - 1 && s.length >= 3 && !/\d/.test(s)) {
+        for (const t of this.completions(s, 12)) if (!variants.has(t)) variants.set(t, 0.5);
+      }
+      return { word, variants, corrected };
     });
   }
 
-  search(rawQuery: string, limit = MAX_RESULTS): SearchHit[] {
-    const query = rawQuery.slice(0, MAX_QUERY_LENGTH);
-    const terms = tokens(query);
-    if (!terms.length) return [];
-    const q = terms.join(" ");
-    const n = Math.min(Math.max(1, limit), MAX_RESULTS);
-    const inTitle = this.titles.search(q, { limit: n }) as number[];
-    const inBody = this.bodies.search(q, { limit: n * 2 }) as number[];
-    const seen = new Set<number>();
-    const order: { i: number; titleMatch: boolean }[] = [];
-    for (const [ids, titleMatch] of [[inTitle, true], [inBody, false]] as const) {
-      for (const i of ids) {
-        if (seen.has(i)) continue;
-        seen.add(i);
-        order.push({ i, titleMatch });
+  /** BM25F: per slot the best of its variants (a synonym never counts twice). */
+  private score(slots: Slot[]): { i: number; score: number; titleSlots: number; covered: number }[] {
+    const acc = new Map<number, { score: number; titleSlots: number; covered: number }>();
+    for (const slot of slots) {
+      const best = new Map<number, { s: number; title: boolean }>();
+      for (const [term, w] of slot.variants) {
+        const idf = this.idf(term);
+        const maps = FIELDS.map((f) => this.postings[f].get(term));
+        for (const i of this.docsWith.get(term) ?? []) {
+          let tf = 0;
+          let inTitle = false;
+          for (let k = 0; k < FIELDS.length; k++) {
+            const f = FIELDS[k]!;
+            const n = maps[k]?.get(i) ?? 0;
+            if (!n) continue;
+            if (f === "title") inTitle = true;
+            tf += (WEIGHT[f] * n) / (1 - B + (B * (this.lengths[f][i] ?? 0)) / this.avg[f]);
+          }
+          const s = (w * idf * tf) / (K1 + tf);
+          const old = best.get(i);
+          if (!old || s > old.s) best.set(i, { s, title: inTitle || (old?.title ?? false) });
+          else if (inTitle) old.title = true;
+        }
+      }
+      for (const [i, b] of best) {
+        const a = acc.get(i) ?? { score: 0, titleSlots: 0, covered: 0 };
+        a.score += b.s;
+        a.covered++;
+        if (b.title) a.titleSlots++;
+        acc.set(i, a);
       }
     }
-    return order.slice(0, n).map(({ i, titleMatch }) => {
-      const d = this.docs[i]!;
-      return { id: d.id, kind: d.kind, title: d.title, href: d.href, context: d.context, titleMatch, snippet: snippet(d.text, terms) };
+    const n = Math.max(1, slots.length);
+    return [...acc].map(([i, a]) => {
+      const coverage = a.covered / n;
+      const allInTitle = a.titleSlots === n && n > 1 ? 1.3 : 1;
+      return { i, score: a.score * (0.4 + 0.6 * coverage * coverage) * allInTitle * KIND_WEIGHT[this.docs[i]!.kind], titleSlots: a.titleSlots, covered: a.covered };
     });
+  }
+
+  /** Hits and a corrected query when a word was read as a typo. */
+  query(rawQuery: string, limit = MAX_RESULTS): SearchResult {
+    const query = rawQuery.slice(0, MAX_QUERY_LENGTH);
+    const slots = this.slots(query);
+    if (!slots.length || slots.every((s) => s.variants.size === 0)) return { hits: [], didYouMean: null };
+    const n = Math.min(Math.max(1, limit), MAX_RESULTS);
+    // Title matches first (more of the question in the title first); a glossary entry defines a
+    // word, so it yields to a card or lesson with as many title matches, which answers a question.
+    const tier = (r: { i: number; titleSlots: number }) => r.titleSlots - (this.docs[r.i]!.kind === "term" && r.titleSlots > 0 ? 0.5 : 0);
+    const ranked = this.score(slots).sort((a, b) => tier(b) - tier(a) || b.score - a.score);
+    const terms = [...new Set(slots.flatMap((s) => [...s.variants.keys()]))];
+    const hits = ranked.slice(0, n).map(({ i, titleSlots }) => {
+      const d = this.docs[i]!;
+      return { id: d.id, kind: d.kind, title: d.title, href: d.href, context: d.context, titleMatch: titleSlots > 0, snippet: snippet(d.text, terms) };
+    });
+    const didYouMean = slots.some((s) => s.corrected) ? slots.map((s) => (s.corrected ? this.display(s.corrected) : s.word)).join(" ") : null;
+    return { hits, didYouMean };
+  }
+
+  /** Hits only (the older call). */
+  search(rawQuery: string, limit = MAX_RESULTS): SearchHit[] {
+    return this.query(rawQuery, limit).hits;
+  }
+
+  /** A stem as a reader would type it: the shortest word of the corpus with that stem. */
+  private display(term: string): string {
+    return this.surface.get(term) ?? term;
+  }
+  private surface = new Map<string, string>();
+  private buildSurface(): Map<string, string> {
+    const out = new Map<string, string>();
+    for (const d of this.docs) {
+      for (const w of normalize(`${d.title} ${d.headings ?? ""} ${d.text}`).split(/[^a-z0-9_]+/)) {
+        if (!w || STOP.has(w)) continue;
+        const s = stem(w);
+        const old = out.get(s);
+        if (!old || w.length < old.length) out.set(s, w);
+      }
+    }
+    return out;
   }
 }
 
@@ -79,17 +229,17 @@ const escapeRe = (t: string) => t.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 
 /** About 160 characters of text around the first matching word, with the matches marked. */
 export function snippet(text: string, terms: string[], width = 160): Segment[] {
-  // A word matches when it starts with a query stem (prefix search), so only the window is scanned.
-  const wordStart = new RegExp(`(^|[^A-Za-z0-9])(${terms.map(escapeRe).join("|")})`, "i");
-  const first = wordStart.exec(text);
+  const words = terms.filter((t) => /^[a-z]/.test(t));
+  const wordStart = words.length ? new RegExp(`(^|[^A-Za-z0-9])(${words.map(escapeRe).join("|")})`, "i") : null;
+  const first = wordStart?.exec(text);
   const at = first ? first.index + first[1]!.length : 0;
   let start = Math.max(0, at - Math.floor(width / 3));
   if (start > 0) start = text.indexOf(" ", start) + 1 || start;
   const end = Math.min(text.length, start + width);
   const slice = text.slice(start, end);
   const matches = (w: string) => {
-    const s = tokens(w)[0];
-    return !!s && terms.some((t) => s.startsWith(t) || t.startsWith(s));
+    const s = stem(w.toLowerCase());
+    return terms.some((t) => s.startsWith(t) || (t.startsWith(s) && s.length >= 3));
   };
   const out: Segment[] = [];
   let last = 0;

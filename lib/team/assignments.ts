@@ -6,6 +6,8 @@ import type { Viewer } from "@/lib/access";
 import { ApiError } from "@/lib/api";
 import { audit } from "@/lib/audit";
 import { loadCatalog } from "@/lib/content/load";
+import { after } from "next/server";
+import { mailAssigned } from "./assigned-mail";
 import { itemModules, itemTitle, rowsFor, type BoardCell, type Person } from "./board";
 
 export { itemTitle };
@@ -54,6 +56,8 @@ export async function createAssignments(
       );
     }
   });
+  // Tell the people (once per item): after the response, so a slow mail server never holds the form.
+  after(() => mailAssigned({ orgId: org.orgId, userIds, teamIds, kind: input.kind, slug: input.slug, dueAt, assignedBy: viewer.name }).then(() => undefined));
   return { assigned: targets.length, dueAt: dueAt.toISOString() };
 }
 

@@ -1,7 +1,7 @@
 import "server-only";
 import { createHash } from "node:crypto";
 import { after } from "next/server";
-import { eq, inArray } from "drizzle-orm";
+import { and, eq, inArray, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
@@ -49,13 +49,14 @@ function rowsOf(bytes: Uint8Array, fileName: string): RawRosterRow[] {
 
 async function checkAgainstDb(orgId: string, orgName: string, raw: RawRosterRow[], tx: Tx | typeof db = db): Promise<CheckedRow[]> {
   const emails = [...new Set(raw.map((r) => r.email.toLowerCase()).filter(Boolean))];
-  const teams = await tx.select({ id: team.id, name: team.name }).from(team).where(eq(team.organizationId, orgId));
+  const teams = await tx.select({ id: team.id, name: team.name }).from(team).where(and(eq(team.organizationId, orgId), isNull(team.archivedAt)));
+  // Only this organization's members are looked up: whether an address has an account elsewhere
+  // is never revealed here (acceptance resolves it).
   const members = new Set<string>();
-  const elsewhere = new Set<string>();
   for (let i = 0; i < emails.length; i += 500) {
     const chunk = emails.slice(i, i + 500);
-    const found = await tx.select({ email: user.email, org: user.organizationId }).from(user).where(inArray(user.email, chunk));
-    for (const u of found) (u.org === orgId ? members : elsewhere).add(u.email.toLowerCase());
+    const found = await tx.select({ email: user.email }).from(user).where(and(inArray(user.email, chunk), eq(user.organizationId, orgId)));
+    for (const u of found) members.add(u.email.toLowerCase());
   }
   const pending = await pendingEmails(orgId, emails, tx);
   const usage = await seatUsage(orgId, tx);
@@ -63,7 +64,6 @@ async function checkAgainstDb(orgId: string, orgName: string, raw: RawRosterRow[
     orgName,
     teams: new Map(teams.map((t) => [t.name.toLowerCase(), t])),
     members,
-    elsewhere,
     pending,
     seats: usage.seats,
     used: usage.members + usage.pending,

@@ -5,6 +5,7 @@ import { certificate, team, user } from "@/db/schema";
 import { certificateStatus } from "@/lib/certificates/status";
 import { boardModules, boardRowsInChunks, type BoardFilter } from "./board";
 import { csvResponse } from "@/lib/csv";
+import { withCellExtras } from "./board-extras";
 import { STATUS_LABELS } from "./schemas";
 import type { OrgScope } from "./scope";
 import { isDone } from "./status";
@@ -14,23 +15,33 @@ import { isExpiring } from "@/lib/expiring";
 const day = (iso: string | null | undefined) => isoDay(iso);
 const stamp = () => isoDay(new Date());
 
-/** The filtered board as CSV: one row per person, one column per module. */
+/**
+ * The filtered board as CSV: one row per person; per module its status, completion date, best
+ * score, certificate serial and due date (five columns, so a spreadsheet can sort and filter each).
+ */
 export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Response> {
   const modules = boardModules(f.module);
-  const header = ["Name", "E-mail", "Team", ...modules.map((m) => m.title), "Modules passed", "Overdue", "Next due"];
+  const perModule = (title: string) => [title, `${title}: completed`, `${title}: score`, `${title}: certificate`, `${title}: due`];
+  const header = ["Name", "E-mail", "Team", ...modules.flatMap((m) => perModule(m.title)), "Modules passed", "Overdue", "Next due"];
   return csvResponse(`riser-team-board-${stamp()}.csv`, header, async function* () {
     for await (const chunk of boardRowsInChunks(scope, f)) {
-      yield chunk.map((r) => [
+      const rich = await withCellExtras(chunk);
+      yield rich.map((r) => [
         r.name,
         r.email,
         r.team ?? "",
-        ...modules.map((m) => {
+        ...modules.flatMap((m) => {
           const c = r.cells[m.slug];
-          if (!c) return "";
+          if (!c) return ["", "", "", "", ""];
           const label = STATUS_LABELS[c.status];
-          if (c.status === "expiring" || c.status === "expired") return `${label} (${day(c.expiresAt)})`;
-          if (!isDone(c.status) && c.dueAt) return `${label} (due ${day(c.dueAt)})`;
-          return label;
+          const waiting = c.waitingSignOffs ? "; sign-off waiting for review" : "";
+          const status =
+            c.status === "expiring" || c.status === "expired"
+              ? `${label} (${day(c.expiresAt)})`
+              : !isDone(c.status) && c.dueAt
+                ? `${label} (due ${day(c.dueAt)}${waiting})`
+                : `${label}${waiting ? ` (${waiting.slice(2)})` : ""}`;
+          return [status, day(c.completedAt), c.bestScore === null ? "" : `${c.bestScore}%`, c.serial ?? "", isDone(c.status) ? "" : day(c.dueAt)];
         }),
         r.passed,
         r.overdue,

@@ -2,14 +2,17 @@ import "server-only";
 import { createHash, randomBytes, randomUUID } from "node:crypto";
 import { and, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
-import { invitation, organization, team, user } from "@/db/schema";
+import { assignment, invitation, organization, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { createAccount } from "@/lib/accounts";
 import { ApiError } from "@/lib/api";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { INVITE_DAYS, ROLE_LABELS, type AcceptInviteInput, type InviteRole } from "./schemas";
+import { INVITE_DAYS, ROLE_LABELS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
+import { mailAssigned } from "./assigned-mail";
+import { after } from "next/server";
+import { loadCatalog } from "@/lib/content/load";
 import { assertSeatAvailable } from "./seats";
 import { addDays, longDate } from "@/lib/dates";
 
@@ -23,7 +26,7 @@ export const hashInviteToken = (token: string) => createHash("sha256").update(to
 export const inviteUrl = (token: string) => `${env.APP_URL}/invite/${token}`;
 
 export type InviteRow = typeof invitation.$inferSelect;
-export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null };
+export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null; assign?: AssignItem[] };
 
 /**
  * Writes one invitation inside the caller's transaction: earlier open invitations for the same
@@ -45,6 +48,7 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
     email: invite.email,
     name: invite.name ?? null,
     role: invite.role,
+    assignOnAccept: invite.assign?.length ? invite.assign : null,
     tokenHash: hashInviteToken(token),
     invitedBy: invitedBy.id,
     createdAt: now,
@@ -73,27 +77,37 @@ The link works once and expires on ${dateText(p.expiresAt)} (${INVITE_DAYS} days
   };
 }
 
-/** Whether the e-mail already has an account: in this organization, elsewhere, or not at all. */
-export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string } | { state: "elsewhere" }> {
-  const [u] = await db.select({ name: user.name, org: user.organizationId }).from(user).where(eq(user.email, email)).limit(1);
-  if (!u) return { state: "none" };
-  return u.org === orgId ? { state: "member", name: u.name } : { state: "elsewhere" };
+/**
+ * Whether the e-mail is already a member of this organization. Whether it has an account anywhere
+ * else is deliberately not asked: a manager must not learn that (acceptance resolves it).
+ */
+export async function accountState(email: string, orgId: string): Promise<{ state: "none" } | { state: "member"; name: string }> {
+  const [u] = await db.select({ name: user.name }).from(user).where(and(eq(user.email, email), eq(user.organizationId, orgId))).limit(1);
+  return u ? { state: "member", name: u.name } : { state: "none" };
+}
+
+/** Each module or path carried by an invitation must exist (400 with the field named otherwise). */
+export function checkAssignItems(items: AssignItem[] | undefined) {
+  if (!items?.length) return;
+  const catalog = loadCatalog();
+  for (const i of items) {
+    const ok = i.kind === "module" ? catalog.modules.some((m) => m.slug === i.slug) : catalog.paths.some((p) => p.slug === i.slug);
+    if (!ok) throw new ApiError(400, "Some fields need attention.", { assign: [`No ${i.kind === "module" ? "module" : "learning path"} “${i.slug}”`] });
+  }
 }
 
 /** One invitation from the form. Re-inviting a member changes nothing and says so. */
 export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: string }, input: NewInvite, ip: string) {
   let teamName: string | null = null;
   if (input.teamId) {
-    const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId)));
+    const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId), isNull(team.archivedAt)));
     if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
     teamName = t.name;
   }
+  checkAssignItems(input.assign);
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
     throw new ApiError(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
-  }
-  if (existing.state === "elsewhere") {
-    throw new ApiError(409, `${input.email} already has a Riser account in another organization, so it cannot be invited here. Ask the person for another work address.`);
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
@@ -175,6 +189,17 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
   const found = await lookupInvite(input.token);
   if (found.state !== "ok") throw new ApiError(410, refusalText(found).message);
   const inv = found.invite;
+  // Resolved here, not when inviting: an address that already has an account (in another
+  // organization, or none) is told so by its owner's own link; the manager never learns it.
+  const [holder] = await db.select({ org: user.organizationId }).from(user).where(eq(user.email, inv.email)).limit(1);
+  if (holder) {
+    throw new ApiError(
+      409,
+      holder.org === inv.organizationId
+        ? `${inv.email} is already a member of ${found.orgName}. Sign in with your password.`
+        : `${inv.email} already has a Riser account, and a Riser account belongs to one organization. Sign in with it, or ask your training manager to invite another address.`,
+    );
+  }
   const now = new Date(); // application time, as everywhere dates are written (UTC)
   const [claim] = await db
     .update(invitation)
@@ -186,7 +211,7 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
   try {
     // The team may have been removed since the invitation was sent.
     const teamId = inv.teamId ? ((await db.select({ id: team.id }).from(team).where(eq(team.id, inv.teamId)))[0]?.id ?? null) : null;
-    const result = await createAccount({ name: input.name, email: inv.email, password: input.password }, { organizationId: inv.organizationId, teamId, role: inv.role as InviteRole }, headers);
+    const result = await createAccount({ name: input.name, email: inv.email, password: input.password }, { organizationId: inv.organizationId, teamId, role: inv.role as InviteRole, emailVerified: true }, headers);
     if (!result.ok) {
       await release();
       const emailProblem = result.fieldErrors?.email?.[0];
@@ -205,7 +230,28 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
       { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "invite.accept", targetType: "invitation", targetId: inv.id, ip, details: { role: inv.role, teamId: inv.teamId } },
       tx,
     );
+    // Work the manager attached to the invitation becomes the person's own assignments now.
+    for (const item of inv.assignOnAccept ?? []) {
+      const dueAt = endOfDayUtc(item.dueAt);
+      await tx
+        .insert(assignment)
+        .values({ organizationId: inv.organizationId, kind: item.kind, targetSlug: item.slug, userId, teamId: null, targetKey: `u:${userId}`, dueAt, createdBy: inv.invitedBy, createdAt: now })
+        .onDuplicateKeyUpdate({ set: { dueAt } });
+      await audit(
+        { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "assignment.set", targetType: "user", targetId: userId, ip, details: { kind: item.kind, slug: item.slug, dueAt: dueAt.toISOString(), via: "invitation", invitationId: inv.id } },
+        tx,
+      );
+    }
   });
+  const items = inv.assignOnAccept ?? [];
+  if (items.length) {
+    const [inviter] = inv.invitedBy ? await db.select({ name: user.name }).from(user).where(eq(user.id, inv.invitedBy)) : [];
+    after(async () => {
+      for (const item of items) {
+        await mailAssigned({ orgId: inv.organizationId, userIds: [userId], teamIds: [], kind: item.kind, slug: item.slug, dueAt: endOfDayUtc(item.dueAt), assignedBy: inviter?.name ?? "Your training manager" });
+      }
+    });
+  }
   return { email: inv.email, userId };
 }
 

@@ -71,8 +71,9 @@ export type RosterContext = {
   teams: Map<string, { id: string; name: string }>;
   /** lower-cased e-mails with an account in this organization */
   members: Set<string>;
-  /** lower-cased e-mails with an account in another organization (or an admin account) */
-  elsewhere: Set<string>;
+  // No list of addresses with an account elsewhere: a row for such an address gets exactly the
+  // answer an unknown address gets, so a preview cannot probe other organizations. Acceptance
+  // resolves it (lib/team/invites.ts acceptInvite).
   /** lower-cased e-mails with an open invitation in this organization */
   pending: Set<string>;
   seats: number;
@@ -115,7 +116,6 @@ export function checkRoster(raw: RawRosterRow[], ctx: RosterContext): CheckedRow
       if (seen !== undefined) problems.push(`Duplicate in file: the same e-mail is on line ${seen}`);
       else firstLine.set(email, r.line);
       if (ctx.members.has(email)) problems.push(`Already a member of ${ctx.orgName}: nothing will be sent`);
-      else if (ctx.elsewhere.has(email)) problems.push("Has a Riser account in another organization");
     }
     if (problems.length === 0) {
       if (ctx.pending.has(email)) notes.push("Has an open invitation: a new link replaces it (no extra seat)");
@@ -126,8 +126,11 @@ export function checkRoster(raw: RawRosterRow[], ctx: RosterContext): CheckedRow
   });
 }
 
-/** Template CSV: header and two example rows with the organization's own team names. */
+/**
+ * Template CSV: header and two example rows with the organization's own team names. A company
+ * without teams yet gets rows with the team left empty, so the template imports as it is.
+ */
 export function rosterTemplate(teamNames: string[]): string {
-  const [a = "North crew", b = a] = teamNames;
+  const [a = "", b = a] = teamNames;
   return csvLines([[...ROSTER_COLUMNS], ["new.installer@example.com", "Ruel Tamberlin", "learner", a], ["crew.lead@example.com", "Odile Vassmer", "manager", b]]);
 }

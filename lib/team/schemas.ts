@@ -37,8 +37,40 @@ export const inviteSchema = z.object({
   teamId: optionalId,
   /** admins only: which organization the invitation is for */
   org: optionalId,
+  /** work assigned when the invitation is accepted */
+  assign: z.array(z.lazy(() => assignItemSchema)).max(10, "At most 10 items per invitation").optional(),
 });
 export type InviteInput = z.input<typeof inviteSchema>;
+
+/** One module or path with a due date, carried by an invitation until it is accepted. */
+export const assignItemSchema = z.object({
+  kind: z.enum(["module", "path"], { message: "Choose a module or a learning path" }),
+  slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "Choose a module or a learning path").max(80),
+  dueAt: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, "Pick a due date")
+    .refine((d) => !Number.isNaN(new Date(`${d}T23:59:59.000Z`).getTime()), "Pick a real date")
+    .refine((d) => new Date(`${d}T23:59:59.000Z`).getTime() >= Date.now(), "Pick today or a later date"),
+});
+export type AssignItem = z.infer<typeof assignItemSchema>;
+export const inviteAssignSchema = z.object({ items: z.array(assignItemSchema).min(1, "Choose at least one module or path").max(10, "At most 10 items per invitation") });
+
+const teamName = z.string().trim().min(1, "Name the team").max(120, "At most 120 characters");
+export const createTeamSchema = z.object({ name: teamName, org: optionalId });
+export const updateTeamSchema = z
+  .object({ name: teamName.optional(), archived: z.boolean().optional(), org: optionalId })
+  .refine((v) => v.name !== undefined || v.archived !== undefined, { path: ["name"], message: "Give a new name, or archive or restore the team" });
+
+/** A manager's change to a person: team (null = no team) and/or role; admin is never offered. */
+export const updatePersonSchema = z
+  .object({
+    teamId: z.string().trim().max(36).nullable().optional().transform((v) => (v === "" ? null : v)),
+    role: z.enum(INVITE_ROLES, { message: "Choose learner, sales or manager" }).optional(),
+  })
+  .refine((v) => v.teamId !== undefined || v.role !== undefined, { path: ["role"], message: "Choose a team or a role" });
+
+/** Roster previews per manager per window (DB-backed; the preview is where addresses are checked). */
+export const ROSTER_PREVIEW_LIMIT = { max: 20, windowSeconds: 600 };
 
 export const acceptInviteSchema = z
   .object({ token: z.string().min(20).max(100), name: personName, password, confirm: z.string() })

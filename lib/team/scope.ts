@@ -1,5 +1,5 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import { forbidden, notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { organization, team } from "@/db/schema";
@@ -47,13 +47,15 @@ export async function resolveWriteOrg(viewer: Viewer, orgParam?: string | null):
 
 export type TeamOption = { id: string; name: string; organizationId: string; orgName: string };
 
-/** Teams in scope (all teams of all organizations for an admin without ?org=). */
+/** Active (not archived) teams in scope (all teams of all organizations for an admin without ?org=). */
 export async function teamsInScope(scope: OrgScope): Promise<TeamOption[]> {
   const q = db
     .select({ id: team.id, name: team.name, organizationId: team.organizationId, orgName: organization.name })
     .from(team)
     .innerJoin(organization, eq(organization.id, team.organizationId));
-  const rows = scope.orgId ? await q.where(eq(team.organizationId, scope.orgId)).orderBy(asc(team.name)) : await q.orderBy(asc(organization.name), asc(team.name));
+  const rows = scope.orgId
+    ? await q.where(and(eq(team.organizationId, scope.orgId), isNull(team.archivedAt))).orderBy(asc(team.name))
+    : await q.where(isNull(team.archivedAt)).orderBy(asc(organization.name), asc(team.name));
   return rows;
 }
 

@@ -45,7 +45,9 @@ export async function seatUsage(orgId: string, tx: Tx | typeof db = db, lock = f
   const [p] = await tx
     .select({ n: countDistinct(invitation.email) })
     .from(invitation)
-    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, new Date())));
+    // An invitation being accepted (claimed, account not yet linked) still holds its seat, so a
+    // concurrent invitation cannot take it in between.
+    .where(and(eq(invitation.organizationId, orgId), isNull(invitation.acceptedUserId), isNull(invitation.revokedAt), gt(invitation.expiresAt, new Date())));
   const allowance = seatAllowance({ seats: org?.seats ?? 0, trialEndsAt: org?.trialEndsAt ?? null });
   return { seats: allowance.seats, members: m?.n ?? 0, pending: p?.n ?? 0, trial: allowance.trial, trialEndsAt: allowance.trialEndsAt };
 }

@@ -25,7 +25,7 @@ test("a learner sees their certificates, downloads one, and the public check sho
   expect((await download).suggestedFilename()).toMatch(/^riser-certificate-RSR-\d{4}-\d{6}\.pdf$/);
 
   const link = await card.getByTestId("share-link").inputValue();
-  expect(link).toMatch(/\/verify\/[A-Za-z0-9_-]{24}$/);
+  expect(link).toMatch(/\/verify\/[0-9A-HJKMNP-TV-Z]{28}$/); // new codes: Crockford base32, no trailing punctuation
   // the verifier has no account: a fresh browser context without cookies
   const verifier = await browser.newContext();
   const pub = await verifier.newPage();
@@ -41,7 +41,7 @@ test("the check page takes a typed code, explains a malformed one, and shows not
   await page.goto("/verify");
   await page.getByLabel("Verification code").fill("not-a-code");
   await page.getByRole("button", { name: "Check certificate" }).click();
-  await expect(page.getByText("That is not a Riser verification code")).toBeVisible();
+  await expect(page.getByText("That is neither a Riser verification code nor a certificate serial")).toBeVisible();
   await page.getByLabel("Verification code").fill("AAAAAAAAAAAAAAAAAAAAAAAA");
   await page.getByRole("button", { name: "Check certificate" }).click();
   await expect(page.getByRole("heading", { name: "No certificate matches this code" })).toBeVisible();

@@ -34,8 +34,17 @@ test("a learner completes a module's lessons, passes its quiz and sees the modul
     const res = await page.request.post("/api/progress", { data: { module: MODULE, lesson: l.slug }, headers: { origin: new URL(page.url()).origin } });
     expect(res.status()).toBe(200);
   }
-  await page.goto(`/modules/${MODULE}/quiz`);
+  // All lessons done: the quiz is the module page's main action (not "Continue the lessons").
+  await page.goto(`/modules/${MODULE}`);
+  await expect(page.getByTestId("module-main-action")).toHaveText("Start the quiz");
+  await page.getByTestId("module-main-action").click();
+  await expect(page).toHaveURL(new RegExp(`/modules/${MODULE}/quiz$`));
   await page.getByRole("button", { name: "Start the quiz" }).click();
+  await expect(page.getByTestId("quiz-progress")).toHaveText(/Answered 0 of/);
+  // An open attempt resumes: reloading the page offers "Resume the quiz", not "Start the quiz".
+  await page.reload();
+  await expect(page.getByRole("button", { name: "Resume the quiz" })).toBeVisible();
+  await page.getByRole("button", { name: "Resume the quiz" }).click();
   await expect(page.getByTestId("quiz-progress")).toHaveText(/Answered 0 of/);
   const questions = await rightAnswers(email);
   for (const [i, q] of questions.entries()) {
@@ -57,7 +66,8 @@ test("the quiz shows one question per screen on a phone", async ({ page }) => {
   await page.setViewportSize({ width: 360, height: 780 });
   await signInAs(page, "kasimir@quillmoor.example");
   await page.goto("/modules/how-systems-work/quiz");
-  await page.getByRole("button", { name: "Start the quiz" }).click();
+  // Kasimir completed this module (demo seed), so the quiz offers a new attempt, not "Start the quiz".
+  await page.getByRole("button", { name: "Take the quiz again" }).click();
   await expect(page.getByText("Question 1 of", { exact: false }).first()).toBeVisible();
   await expect(page.getByText(/^Question 2 of/)).toBeHidden();
   await page.getByRole("button", { name: "Next" }).click();

@@ -56,6 +56,8 @@ test("a learner uploads a photo for a skill and their manager approves it", asyn
   await axe(managerPage, "review queue");
   await item.getByRole("button", { name: "Approve sign-off" }).click();
   await expect(item.getByText(`✓ Approved. ${LEARNER.name} has been e-mailed.`)).toBeVisible();
+  // The queue updates without a reload: the approved item leaves the waiting list.
+  await expect(item).toHaveCount(0, { timeout: 10_000 });
 
   await learnerPage.reload();
   await expect(learnerPage.getByTestId(`skill-${SKILL.id}`).getByText("✓ Signed off")).toBeVisible();

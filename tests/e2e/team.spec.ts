@@ -38,3 +38,20 @@ test("axe finds no violations on /team", async ({ page }) => {
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
   expect(results.violations.map((v) => `${v.id} (${v.nodes.length}) ${v.nodes[0]?.target} ${v.nodes[0]?.failureSummary ?? ""}`)).toEqual([]);
 });
+
+test("a board cell opens its details on tap; at 1280 px the person column stays while modules scroll", async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await signInAs(page, demoByRole("manager", "quillmoor").email);
+  await page.goto("/team");
+  const table = page.getByRole("region", { name: "Team board table" });
+  await expect(table).toBeVisible();
+  const cell = table.getByTestId("board-cell").first();
+  await cell.locator("summary").click();
+  await expect(cell.getByText(/lessons? done/)).toBeVisible();
+  const { scrolls, sticky } = await table.evaluate((el) => ({
+    scrolls: el.scrollWidth > el.clientWidth,
+    sticky: getComputedStyle(el.querySelector("thead th")!).position,
+  }));
+  expect(scrolls).toBe(true);
+  expect(sticky).toBe("sticky");
+});

@@ -100,7 +100,9 @@ describe("issuing", () => {
     expect(Number(firstCert.ceHours)).toBe(hoursOf("how-systems-work"));
     expect(firstCert.expiresAt.toISOString()).toBe(addMonthsUtc(firstCert.issuedAt, validityOf("how-systems-work")).toISOString());
     expect(firstCert.serial).toMatch(/^RSR-\d{4}-\d{6}$/);
-    expect(firstCert.verificationCode).toMatch(/^[A-Za-z0-9_-]{24}$/); // 18 bytes = 144 bits, base64url (RFC 4648 §5)
+    // New codes: 28 symbols of Crockford's base32 (0-9 A-Z without I L O U) = 140 bits; no trailing punctuation.
+    // Older base64url codes (24 characters) still verify (tests/integration/verify-input.test.ts).
+    expect(firstCert.verificationCode).toMatch(/^[0-9A-HJKMNP-TV-Z]{28}$/);
 
     const mail = await waitForMail(holder.email, /Your Riser certificate: How a home sprinkler system works/);
     expect(mail.text).toContain(`/verify/${firstCert.verificationCode}`);

@@ -176,7 +176,26 @@ describe("exports", () => {
     expect(res.headers.get("content-type")).toContain("text/csv");
     const text = (await res.text()).replace(/^\uFEFF/, "");
     const rows = Papa.parse<string[]>(text.trim()).data;
-    expect(rows[0]).toEqual(["Name", "E-mail", "Team", "Freeze protection", "Modules passed", "Overdue", "Next due"]);
+    expect(rows[0]).toEqual([
+      "Name",
+      "E-mail",
+      "Team",
+      "Freeze protection",
+      "Freeze protection: completed",
+      "Freeze protection: score",
+      "Freeze protection: certificate",
+      "Freeze protection: due",
+      "Modules passed",
+      "Overdue",
+      "Next due",
+    ]);
+    // Per cell: completion date, score, certificate serial and due date in their own columns.
+    const passedRow = rows.find((r) => r[0] === "Paloma Passed")!;
+    expect(passedRow[4]).toBe(daysFromNow(-20).toISOString().slice(0, 10));
+    expect(passedRow[5]).toBe("90%"); // the fixture's passing attempt scores 90
+    expect(passedRow[6]).toMatch(/^RSR-\d{4}-\d{6}$/);
+    expect(passedRow[7]).toBe("");
+    expect(rows.find((r) => r[0] === "Greta Overdue")![7]).toBe(daysFromNow(-2).toISOString().slice(0, 10));
     expect(rows).toHaveLength(11);
     const evil = rows.find((r) => r[0] === "Rupert Formula")!;
     expect(evil[2]).toBe(`'=HYPERLINK("http://evil.example","click")`);

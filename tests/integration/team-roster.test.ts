@@ -49,7 +49,9 @@ describe("CSV roster", () => {
     expect(by[6]).toEqual(["Unknown team “Attic crew”: teams are Rough-in crew, Trim crew"]);
     expect(by[7]).toEqual(["Duplicate in file: the same e-mail is on line 2"]);
     expect(by[8]).toEqual([`Already a member of ${org.name}: nothing will be sent`]);
-    expect(by[9]).toEqual(["Has a Riser account in another organization"]);
+    // An address with an account in another organization gets the answer an unknown address gets
+    // (here: over the seat count, like line 11), never "has an account elsewhere".
+    expect(by[9]).toEqual(["Over the seat count: your organization has 4 seats and all are taken; buy more on the billing page"]);
     expect(by[10]).toEqual(["E-mail is missing"]);
     expect(by[11]).toEqual(["Over the seat count: your organization has 4 seats and all are taken; buy more on the billing page"]);
     // Nothing written before the manager confirms.

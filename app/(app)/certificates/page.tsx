@@ -6,8 +6,10 @@ import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates/access";
-import { formatCertificateDate, formatHours } from "@/lib/certificates/status";
 import { CertificateCard } from "@/components/certificates/certificate-card";
+import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/status";
+import { env } from "@/lib/env";
+import { plural, pluralNoun } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Certificates" };
 
@@ -41,7 +43,7 @@ export default async function CertificatesPage() {
               Valid now
             </h2>
             <p className="mt-1 text-muted" data-testid="certificates-summary">
-              {current.length} valid certificate{current.length === 1 ? "" : "s"} · {formatHours(hours)} CE hours from modules
+              {plural(current.length, "valid certificate")} · {formatHours(hours)} {pluralNoun(hours, "CE hour")} from modules
             </p>
             {current.length === 0 ? <p className="mt-3">None of your certificates is valid today.</p> : null}
             <ul className="mt-4 grid gap-4 lg:grid-cols-2">

@@ -9,6 +9,9 @@ import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team/assignments";
 import type { BoardCell } from "@/lib/team/board";
 import { isoDay, weekdayShortDate } from "@/lib/dates";
+import { FirstDayChecklist } from "@/components/team/first-day";
+import { firstDayCounts } from "@/lib/team/first-day";
+import { firstDaySteps, showFirstDay } from "@/lib/team/first-day-steps";
 
 export const metadata: Metadata = { title: "My training" };
 
@@ -39,11 +42,18 @@ export default async function LearnPage() {
     : null;
   const [work, last, certs] = await Promise.all([person ? assignedWork(person) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id)]);
   const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0);
+  // A manager whose organization is not set up yet lands on the first-day checklist.
+  const counts = viewer.role === "manager" && viewer.organizationId ? await firstDayCounts(viewer.organizationId) : null;
+  const firstDay = counts && showFirstDay(viewer.role, counts) ? firstDaySteps(counts) : null;
   const shownCerts = certs.filter((c) => c.status !== "revoked").slice(0, 3);
 
   return (
     <>
-      <PageTitle title={`Hello, ${viewer.name}`} lead="Your assigned work, where you left off, and your certificates." />
+      <PageTitle
+        title={`Hello, ${viewer.name}`}
+        lead={firstDay ? "Set up your crew first; your own training is below." : "Your assigned work, where you left off, and your certificates."}
+      />
+      {firstDay ? <FirstDayChecklist steps={firstDay} /> : null}
 
       {next ? (
         <section aria-labelledby="resume" className="mb-8 rounded border border-water/40 bg-water-light p-4">

@@ -7,6 +7,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { asJson } from "@/components/ui/server-first";
 import { requireViewer } from "@/lib/access";
 import { boardModules, boardPage, completionsPerWeek, teamTotals } from "@/lib/team/board";
+import { withCellExtras } from "@/lib/team/board-extras";
 import { boardQuerySchema, parseBoardQuery } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 
@@ -24,7 +25,7 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   const [teams, orgs, firstPage, teamsTotals, weeks] = await Promise.all([
     teamsInScope(scope),
     viewer.role === "admin" ? allOrganizations() : Promise.resolve([]),
-    boardPage(scope, q),
+    boardPage(scope, q).then(async (page) => ({ ...page, rows: await withCellExtras(page.rows) })),
     teamTotals(scope),
     completionsPerWeek(scope),
   ]);

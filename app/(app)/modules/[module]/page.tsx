@@ -5,8 +5,11 @@ import { buttonLinkClass } from "@/components/ui/button";
 import { requireViewer } from "@/lib/access";
 import { findModule, loadCatalog } from "@/lib/content/load";
 import { progressByModule } from "@/lib/progress";
-import { moduleStatus } from "@/lib/completion";
 import { isoDay } from "@/lib/dates";
+import { missingForCompletion, moduleStatus } from "@/lib/completion";
+import { moduleActions } from "@/lib/learner-actions";
+import { listAttempts } from "@/lib/quiz/attempts";
+import { plural } from "@/lib/plural";
 
 type Params = { params: Promise<{ module: string }> };
 
@@ -20,15 +23,24 @@ export default async function ModulePage({ params }: Params) {
   const mod = findModule(slug);
   if (!mod) notFound();
   const done = new Set((await progressByModule(viewer.id)).get(slug)?.completed ?? []);
-  const status = await moduleStatus(viewer.id, slug);
+  const [status, attempts, missing] = await Promise.all([moduleStatus(viewer.id, slug), listAttempts(viewer, viewer.id, slug), missingForCompletion(viewer.id, slug)]);
   const paths = loadCatalog().paths.filter((p) => p.modules.includes(slug));
-  const firstOpen = mod.lessons.find((l) => !done.has(l.slug)) ?? mod.lessons[0]!;
+  const actions = moduleActions({
+    slug,
+    lessons: mod.lessons.map((l) => ({ slug: l.slug, title: l.meta.title })),
+    done,
+    openAttempt: attempts.some((a) => a.status === "open"),
+    passed: status.lastPassed === true,
+    completed: status.completedAt !== null && missing.length === 0,
+    hasSkills: mod.skills.length > 0,
+    missing,
+  });
 
   return (
     <div className="flex flex-col gap-6">
       <nav aria-label="Breadcrumb" className="text-sm"><Link href="/modules">Modules</Link></nav>
       <header>
-        <p className="font-mono text-sm text-muted">Module {mod.meta.order} · {mod.meta.ceHours} CE hours</p>
+        <p className="font-mono text-sm text-muted">Module {mod.meta.order} · {plural(Number(mod.meta.ceHours), "CE hour")}</p>
         <h1 className="mt-1 text-3xl sm:text-4xl">{mod.meta.title}</h1>
         <p className="mt-2 max-w-prose text-lg text-muted">{mod.meta.summary}</p>
         <p className="mt-2 text-sm">Part of: {paths.map((p) => p.title).join(", ")}</p>
@@ -68,9 +80,10 @@ export default async function ModulePage({ params }: Params) {
           <li>Completion earns a certificate for {mod.meta.ceHours} continuing-education hours, valid {mod.meta.validityMonths} months.</li>
         </ul>
         <div className="mt-4 flex flex-wrap gap-3">
-          <Link href={`/modules/${slug}/${firstOpen.slug}`} className={buttonLinkClass}>{done.size ? "Continue" : "Start"} the lessons</Link>
-          <Link href={`/modules/${slug}/quiz`} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Take the quiz</Link>
-          {mod.skills.length ? <Link href={`/modules/${slug}/sign-offs`} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Practical sign-offs</Link> : null}
+          <Link href={actions.main.href} className={buttonLinkClass} data-testid="module-main-action">{actions.main.label}</Link>
+          {actions.others.map((a) => (
+            <Link key={a.href + a.label} href={a.href} className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">{a.label}</Link>
+          ))}
         </div>
       </section>
     </div>

@@ -10,6 +10,8 @@ import { listAssignments } from "@/lib/team/assignments";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 import { Table } from "@/components/ui/table";
 import { isoDay } from "@/lib/dates";
+import { InviteeWork } from "@/components/team/invitee-work";
+import { listInvitations } from "@/lib/team/invite-admin";
 
 export const metadata: Metadata = { title: "Assign work" };
 
@@ -19,11 +21,15 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
   const scope = await pageScope(viewer, org);
   const adminOrg = viewer.role === "admin" ? scope.orgId : null;
   const catalog = loadCatalog();
-  const [teams, assignments, orgs] = await Promise.all([
+  const [teams, assignments, orgs, invites] = await Promise.all([
     scope.orgId ? teamsInScope(scope) : Promise.resolve([]),
     listAssignments(scope),
     viewer.role === "admin" ? allOrganizations() : Promise.resolve([]),
+    scope.orgId ? listInvitations(scope.orgId) : Promise.resolve([]),
   ]);
+  const invitees = invites
+    .filter((i) => i.status === "pending")
+    .map((i) => ({ id: i.id, email: i.email, name: i.name, items: i.assignOnAccept ?? [] }));
   return (
     <>
       <PageTitle title="Assign work" lead="Give people or whole teams a module or a learning path with a due date. Learners see it on their own page, soonest first, and get reminders." />
@@ -39,6 +45,14 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
       ) : (
         <p>Choose the organization to assign work in.</p>
       )}
+      {scope.orgId ? (
+        <InviteeWork
+          invitees={invitees}
+          modules={catalog.modules.map((m) => ({ slug: m.slug, title: m.meta.title }))}
+          paths={catalog.paths.map((p) => ({ slug: p.slug, title: p.title }))}
+          org={adminOrg}
+        />
+      ) : null}
       <section aria-labelledby="current" className="mt-10">
         <h2 id="current" className="mb-3 text-2xl">Current assignments</h2>
         <Table

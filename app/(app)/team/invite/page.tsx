@@ -1,12 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { BulkInvite } from "@/components/team/bulk-invite";
+import { ActionButton } from "@/components/team/action-button";
 import { InviteForm } from "@/components/team/invite-form";
 import { OrgPicker } from "@/components/team/org-picker";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { openInvitations } from "@/lib/team/invites";
+import { INVITE_STATUS_LABELS, listInvitations } from "@/lib/team/invite-admin";
+import { plural } from "@/lib/plural";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
@@ -35,13 +37,16 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
       </>
     );
   }
-  const [teams, usage, open] = await Promise.all([teamsInScope(scope), seatUsage(scope.orgId), openInvitations(scope.orgId)]);
+  const [teams, usage, all] = await Promise.all([teamsInScope(scope), seatUsage(scope.orgId), listInvitations(scope.orgId)]);
+  const open = all.filter((i) => i.status === "pending" || i.status === "expired");
+  const closed = all.filter((i) => i.status !== "pending" && i.status !== "expired").slice(0, 50);
+  const q = adminOrg ? `?org=${adminOrg}` : "";
   const used = usage.members + usage.pending;
   return (
     <>
       {head}
       <p className="mb-6 rounded border border-line bg-panel px-3 py-2">
-        <strong>{scope.orgName}</strong>: {used} of {usage.seats} seats taken ({usage.members} members, {usage.pending} open invitations).{" "}
+        <strong>{scope.orgName}</strong>: {used} of {usage.seats} seats taken ({plural(usage.members, "member")}, {plural(usage.pending, "open invitation")}).{" "}
         {used >= usage.seats ? <strong className="text-caution">All seats are taken. </strong> : null}
         <Link href={BILLING_PATH}>Seats and billing</Link>
       </p>
@@ -56,23 +61,65 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
         </section>
       </div>
       <section aria-labelledby="open" className="mt-10">
-        <h2 id="open" className="mb-3 text-2xl">Open invitations</h2>
-        <Table
-          label="Open invitations"
-          density="compact"
-          rows={open}
-          rowKey={(i) => i.id}
-          empty={<p>No open invitations.</p>}
-          columns={[
-            { key: "email", header: "E-mail", className: "break-all", cell: (i) => i.email },
-            { key: "name", header: "Name", cell: (i) => i.name ?? "" },
-            { key: "role", header: "Role", cell: (i) => ROLE_LABELS[i.role as InviteRole] ?? i.role },
-            { key: "team", header: "Team", cell: (i) => i.team ?? "No team" },
-            { key: "sent", header: "Sent", className: "font-mono", cell: (i) => isoDay(i.createdAt) },
-            { key: "expires", header: "Link expires", className: "font-mono", cell: (i) => isoDay(i.expiresAt) },
-          ]}
-        />
+        <h2 id="open" className="mb-3 text-2xl">Invitations</h2>
+        <p className="mb-3 text-sm text-muted">
+          An open invitation holds a seat until it is accepted, revoked or expires. Revoke frees the seat at once; Resend mails a new link (the old one stops working).
+        </p>
+        {open.length === 0 ? <p>No open invitations.</p> : <InviteTable rows={open} actions q={q} />}
+        {closed.length ? (
+          <details className="mt-4">
+            <summary className="cursor-pointer font-bold">Accepted, revoked and replaced ({closed.length})</summary>
+            <InviteTable rows={closed} q={q} />
+          </details>
+        ) : null}
       </section>
     </>
+  );
+}
+
+type Row = Awaited<ReturnType<typeof listInvitations>>[number];
+
+function InviteTable({ rows, actions, q }: { rows: Row[]; actions?: boolean; q: string }) {
+  const day = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
+  return (
+    <div role="region" aria-label="Invitations" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
+      <table className="w-full border-collapse text-sm">
+        <thead>
+          <tr className="border-b border-line bg-paper text-left">
+            <th scope="col" className="px-2 py-2">E-mail</th>
+            <th scope="col" className="px-2 py-2">Name</th>
+            <th scope="col" className="px-2 py-2">Role</th>
+            <th scope="col" className="px-2 py-2">Team</th>
+            <th scope="col" className="px-2 py-2">Status</th>
+            <th scope="col" className="px-2 py-2">Sent</th>
+            <th scope="col" className="px-2 py-2">Link expires</th>
+            {actions ? <th scope="col" className="px-2 py-2">Actions</th> : null}
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((i) => (
+            <tr key={i.id} className="border-b border-line last:border-0">
+              <td className="px-2 py-2 break-all">{i.email}</td>
+              <td className="px-2 py-2">{i.name ?? ""}</td>
+              <td className="px-2 py-2">{ROLE_LABELS[i.role as InviteRole] ?? i.role}</td>
+              <td className="px-2 py-2">{i.team ?? "No team"}</td>
+              <td className="px-2 py-2">{INVITE_STATUS_LABELS[i.status]}{i.assignOnAccept?.length ? ` · ${plural(i.assignOnAccept.length, "item")} to assign on acceptance` : ""}</td>
+              <td className="px-2 py-2 font-mono">{day(i.lastSentAt ?? i.createdAt)}{i.sendCount > 1 ? ` (${plural(i.sendCount, "time")})` : ""}</td>
+              <td className="px-2 py-2 font-mono">{day(i.expiresAt)}</td>
+              {actions ? (
+                <td className="px-2 py-2">
+                  <span className="flex flex-wrap gap-2">
+                    <ActionButton url={`/api/team/invites/${i.id}/resend${q}`} label="Resend" busyLabel="Sending…" ariaLabel={`Resend the invitation to ${i.email}`} />
+                    {i.status === "pending" ? (
+                      <ActionButton url={`/api/team/invites/${i.id}/revoke${q}`} label="Revoke" busyLabel="Revoking…" danger ariaLabel={`Revoke the invitation to ${i.email}`} confirm={`Revoke the invitation to ${i.email}? The link stops working and the seat is free at once.`} />
+                    ) : null}
+                  </span>
+                </td>
+              ) : null}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

@@ -1,15 +1,18 @@
 import { ApiError, fieldErrorsOf, json, route } from "@/lib/api";
 import { boardPage } from "@/lib/team/board";
+import { withCellExtras } from "@/lib/team/board-extras";
 import { parseBoardQuery } from "@/lib/team/schemas";
 import { resolveScope } from "@/lib/team/scope";
 
 /**
  * GET /api/team/board?page=&pageSize=&team=&status=&module=&dueBefore=&sort=&dir=&q=[&org= admins]
- * → one page of people × modules with each cell's status. Managers: their organization only.
+ * → one page of people × modules with each cell's status,
+ * its waiting sign-offs and its certificate serial. Managers: their organization only.
  */
 export const GET = route("manager", async ({ req, viewer }) => {
   const parsed = parseBoardQuery(new URL(req.url).searchParams);
   if (!parsed.success) throw new ApiError(400, "Some filters are not valid.", fieldErrorsOf(parsed.error));
   const scope = await resolveScope(viewer, parsed.data.org);
-  return json(await boardPage(scope, parsed.data));
+  const page = await boardPage(scope, parsed.data);
+  return json({ ...page, rows: await withCellExtras(page.rows) });
 });

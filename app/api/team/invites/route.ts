@@ -1,7 +1,8 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
+import { listInvitations } from "@/lib/team/invite-admin";
 import { inviteOne } from "@/lib/team/invites";
 import { inviteSchema } from "@/lib/team/schemas";
-import { resolveWriteOrg } from "@/lib/team/scope";
+import { resolveScope, resolveWriteOrg } from "@/lib/team/scope";
 import { SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
 
 /**
@@ -13,7 +14,7 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, inviteSchema);
   const org = await resolveWriteOrg(viewer, input.org);
   try {
-    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null }, clientIp(req));
+    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign }, clientIp(req));
     const message = r.replaced
       ? `A new invitation went to ${r.email}; the earlier link no longer works.`
       : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
@@ -22,4 +23,10 @@ export const POST = route("manager", async ({ req, viewer }) => {
     if (err instanceof SeatLimitError) return seatLimitResponse(err);
     throw err;
   }
+});
+
+/** GET /api/team/invites[?org=] → the organization's invitations with their status; admins name ?org=. */
+export const GET = route("manager", async ({ req, viewer }) => {
+  const scope = await resolveScope(viewer, new URL(req.url).searchParams.get("org"));
+  return json({ invitations: scope.orgId ? await listInvitations(scope.orgId) : [] });
 });

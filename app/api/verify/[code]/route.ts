@@ -12,6 +12,6 @@ export const GET = route<{ code: string }>("public", async ({ req, params }) => 
     return json({ error: tooManyLookupsMessage(limit.retryAfterSeconds) }, { status: 429, headers: { "Retry-After": String(limit.retryAfterSeconds) } });
   }
   const record = await verificationByCode(params.code);
-  if (!record) throw new ApiError(404, "No Riser certificate matches this code. Check it against the one printed under the QR code.");
+  if (!record) throw new ApiError(404, "No Riser certificate matches this code or serial. Check it against the certificate: the code is printed under the verification address.");
   return json(record);
 });

@@ -5,6 +5,7 @@ import { QuizRunner } from "@/components/quiz/quiz-runner";
 import { requireViewer } from "@/lib/access";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
 import { findModule } from "@/lib/content/load";
+import { missingLinks, quizStartLabel } from "@/lib/learner-actions";
 import { listAttempts } from "@/lib/quiz/attempts";
 import { isoDay, isoMinute } from "@/lib/dates";
 import { Table } from "@/components/ui/table";
@@ -33,9 +34,21 @@ export default async function QuizPage({ params }: Params) {
       </header>
       {status.completedAt ? <p role="status" className="rounded border border-pass bg-pass-light p-3 font-bold text-pass" data-testid="module-complete">✓ Module complete on {isoDay(status.completedAt)}</p> : null}
       {!status.completedAt && status.lastPassed && missing.length ? (
-        <p className="rounded border border-line bg-panel p-3">You passed the quiz. To complete the module, finish: {missing.join("; ")}.</p>
+        <div className="rounded border border-line bg-panel p-3" data-testid="still-to-do">
+          <p>You passed the quiz. To complete the module, finish:</p>
+          <ul className="mt-1 list-disc pl-6">
+            {missingLinks(slug, mod.lessons.map((l) => ({ slug: l.slug, title: l.meta.title })), missing).map((m) => (
+              <li key={m.text}>{m.href ? <Link href={m.href}>{m.text}</Link> : m.text}</li>
+            ))}
+          </ul>
+        </div>
       ) : null}
-      <QuizRunner module={slug} canStart blockedReason={null} />
+      <QuizRunner
+        module={slug}
+        canStart
+        blockedReason={null}
+        startLabel={quizStartLabel({ openAttempt: attempts.some((a) => a.status === "open"), passed: status.lastPassed === true, completed: status.completedAt !== null })}
+      />
       {attempts.length ? (
         <section aria-labelledby="past-h">
           <h2 id="past-h" className="text-xl">Your attempts</h2>

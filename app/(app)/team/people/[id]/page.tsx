@@ -4,6 +4,7 @@ import { forbidden, notFound } from "next/navigation";
 import { PersonSignOffs } from "@/components/signoffs/person-sign-offs";
 import { PersonAttempts, PersonCertificates, PersonLessons, PersonModules } from "@/components/team/person-record";
 import { StatusBadge } from "@/components/team/status-badge";
+import { PersonControls } from "@/components/team/person-controls";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
@@ -12,6 +13,7 @@ import { boardModules } from "@/lib/team/board";
 import { personForViewer, personHistory } from "@/lib/team/people";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
 import { isoDay } from "@/lib/dates";
+import { teamsInScope } from "@/lib/team/scope";
 
 export const metadata: Metadata = { title: "Person" };
 
@@ -24,7 +26,11 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
   if (found.state === "missing") notFound();
   if (found.state === "forbidden") forbidden();
   const p = found.person;
-  const [{ items, cells }, history] = await Promise.all([assignedWork(p), personHistory(p.id)]);
+  const [{ items, cells }, history, teams] = await Promise.all([
+    assignedWork(p),
+    personHistory(p.id),
+    teamsInScope({ orgId: p.organizationId, orgName: p.orgName }),
+  ]);
   const modules = boardModules();
   const org = viewer.role === "admin" ? p.organizationId : null;
 
@@ -35,6 +41,8 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
       <p className="mb-6">
         <Link href={`/team${org ? `?org=${org}` : ""}`}>← Back to the board</Link>
       </p>
+
+      {p.role === "admin" ? null : <PersonControls person={{ id: p.id, name: p.name, teamId: p.teamId, role: p.role }} teams={teams} self={p.id === viewer.id} />}
 
       <section aria-labelledby="assigned" className="mb-8">
         <h2 id="assigned" className="mb-3 text-2xl">Assigned work</h2>

@@ -1,0 +1,13 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { addInvitationWork } from "@/lib/team/invite-admin";
+import { inviteAssignSchema } from "@/lib/team/schemas";
+
+/**
+ * POST /api/team/invites/[id]/assign { items: [{ kind, slug, dueAt }] } → the open invitation
+ * carries this work; it is assigned when the person accepts. Unknown → 404, another organization's → 403.
+ */
+export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
+  const input = await readJson(req, inviteAssignSchema);
+  const r = await addInvitationWork(viewer, params.id, input.items, clientIp(req));
+  return json({ ok: true, message: `Saved: ${r.email} gets this work when they accept the invitation.` });
+});

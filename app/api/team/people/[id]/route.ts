@@ -1,0 +1,10 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { updatePerson } from "@/lib/team/members";
+import { updatePersonSchema } from "@/lib/team/schemas";
+
+/** POST /api/team/people/[id] { teamId?, role? } → changes team and/or role (learner, sales, manager). */
+export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
+  const input = await readJson(req, updatePersonSchema);
+  const r = await updatePerson(viewer, params.id, input, clientIp(req));
+  return json({ ok: true, changed: r.changed, message: r.changed ? `${r.person.name} updated.` : "Nothing changed." });
+});

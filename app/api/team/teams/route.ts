@@ -1,0 +1,18 @@
+import { clientIp, json, readJson, route } from "@/lib/api";
+import { createTeamSchema } from "@/lib/team/schemas";
+import { resolveScope, resolveWriteOrg } from "@/lib/team/scope";
+import { createTeam, listTeams } from "@/lib/team/teams";
+
+/** GET /api/team/teams[?org=] → the organization's teams (archived ones too) with head counts; admins name ?org=. */
+export const GET = route("manager", async ({ req, viewer }) => {
+  const scope = await resolveScope(viewer, new URL(req.url).searchParams.get("org"));
+  return json({ teams: scope.orgId ? await listTeams(scope.orgId) : [] });
+});
+
+/** POST /api/team/teams { name, org? } → 201; a name already used in the organization → 409. */
+export const POST = route("manager", async ({ req, viewer }) => {
+  const input = await readJson(req, createTeamSchema);
+  const org = await resolveWriteOrg(viewer, input.org);
+  const created = await createTeam(viewer, org.orgId, input.name, clientIp(req));
+  return json({ ok: true, team: created, message: `Team “${created.name}” created.` }, 201);
+});

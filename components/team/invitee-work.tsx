@@ -1,0 +1,80 @@
+"use client";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
+import { postJson } from "@/lib/fetcher";
+
+type Invitee = { id: string; email: string; name: string | null; items: { kind: string; slug: string; dueAt: string }[] };
+type Item = { slug: string; title: string };
+
+/**
+ * People invited but not joined yet: they are not in the people picker until they accept, so work
+ * for them is attached to the invitation and assigned on acceptance.
+ */
+export function InviteeWork({ invitees, modules, paths, org }: { invitees: Invitee[]; modules: Item[]; paths: Item[]; org: string | null }) {
+  const router = useRouter();
+  const [who, setWho] = useState(invitees[0]?.id ?? "");
+  const [what, setWhat] = useState(modules[0] ? `module:${modules[0].slug}` : "");
+  const [due, setDue] = useState("");
+  const [msg, setMsg] = useState<{ ok: boolean; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const title = (kind: string, slug: string) => (kind === "path" ? paths : modules).find((x) => x.slug === slug)?.title ?? slug;
+  return (
+    <section aria-labelledby="invitees" className="mt-10 rounded border border-line bg-panel p-4">
+      <h2 id="invitees" className="mb-2 text-2xl">Invited, not joined yet</h2>
+      <p className="mb-3 text-sm text-muted">
+        Someone you invited is not in the people list above until they accept their invitation (the link is good for 7 days). Work you add here waits on the
+        invitation and becomes theirs, with its due date, the moment they accept.{" "}
+        <Link href={`/team/invite${org ? `?org=${org}` : ""}`}>See every invitation</Link>.
+      </p>
+      {invitees.length === 0 ? (
+        <p>No open invitations.</p>
+      ) : (
+        <>
+          <ul className="mb-4 flex flex-col gap-1 text-sm">
+            {invitees.map((i) => (
+              <li key={i.id}>
+                <span className="font-bold">{i.name ?? i.email}</span> <span className="text-muted">({i.email})</span>
+                {i.items.length ? ` · on acceptance: ${i.items.map((x) => `${title(x.kind, x.slug)} (due ${x.dueAt})`).join("; ")}` : " · no work attached yet"}
+              </li>
+            ))}
+          </ul>
+          <form
+            className="grid gap-3 sm:grid-cols-4 sm:items-end"
+            onSubmit={async (e) => {
+              e.preventDefault();
+              const [kind, slug] = what.split(":");
+              setBusy(true);
+              setMsg(null);
+              const res = await postJson<{ message: string }>(`/api/team/invites/${who}/assign`, { items: [{ kind, slug, dueAt: due }] });
+              setBusy(false);
+              if (!res.ok) return setMsg({ ok: false, text: Object.values(res.fieldErrors ?? {})[0]?.[0] ?? res.error });
+              setMsg({ ok: true, text: res.data.message });
+              router.refresh();
+            }}
+          >
+            <SelectField label="Invited person" value={who} onChange={(e) => setWho(e.target.value)} options={invitees.map((i) => ({ value: i.id, label: i.name ? `${i.name} (${i.email})` : i.email }))} />
+            <SelectField
+              label="Module or path"
+              value={what}
+              onChange={(e) => setWhat(e.target.value)}
+              options={[...modules.map((m) => ({ value: `module:${m.slug}`, label: `Module: ${m.title}` })), ...paths.map((p) => ({ value: `path:${p.slug}`, label: `Path: ${p.title}` }))]}
+            />
+            <Field label="Due date" type="date" value={due} onChange={(e) => setDue(e.target.value)} required />
+            <Button type="submit" disabled={busy || !who || !due}>
+              {busy ? "Saving…" : "Assign on acceptance"}
+            </Button>
+          </form>
+          {msg ? (
+            <p role={msg.ok ? "status" : "alert"} className={`mt-2 ${msg.ok ? "" : "text-caution"}`}>
+              {msg.text}
+            </p>
+          ) : null}
+        </>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,43 @@
+import "server-only";
+import { and, eq, inArray, isNull, or } from "drizzle-orm";
+import { db } from "@/db/client";
+import { reminderLog, user } from "@/db/schema";
+import { env } from "@/lib/env";
+import { sendMail } from "@/lib/mail";
+import { itemTitle } from "./board";
+
+/**
+ * "New training for you": one mail per person per assigned item, ever (claimed in reminder_log
+ * as kind "assigned" before sending; a failed send releases the claim so a later call retries).
+ * A due-date change does not mail again; the reminders cover the due date.
+ */
+const dayText = (d: Date) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "long", day: "numeric", year: "numeric", timeZone: "UTC" }).format(d);
+export const assignedKey = (kind: string, slug: string) => `assigned:${kind}:${slug}`;
+
+export async function mailAssigned(p: { orgId: string; userIds: string[]; teamIds: string[]; kind: "module" | "path"; slug: string; dueAt: Date; assignedBy: string }) {
+  const conds = [];
+  if (p.userIds.length) conds.push(inArray(user.id, p.userIds));
+  if (p.teamIds.length) conds.push(inArray(user.teamId, p.teamIds));
+  if (!conds.length) return { sent: 0 };
+  const people = await db
+    .select({ id: user.id, name: user.name, email: user.email })
+    .from(user)
+    .where(and(eq(user.organizationId, p.orgId), or(...conds), or(isNull(user.banned), eq(user.banned, false))));
+  const key = assignedKey(p.kind, p.slug);
+  const title = itemTitle(p.kind, p.slug);
+  const link = p.kind === "module" ? `${env.APP_URL}/modules/${p.slug}` : `${env.APP_URL}/modules?path=${p.slug}`;
+  let sent = 0;
+  for (const person of people) {
+    const [claim] = await db.insert(reminderLog).ignore().values({ kind: "assigned", userId: person.id, periodKey: key, sentAt: new Date() });
+    if (claim.affectedRows !== 1) continue;
+    const res = await sendMail({
+      to: person.email,
+      kind: "assigned",
+      subject: `New training for you: ${title}`,
+      text: `Hello ${person.name},\n\n${p.assignedBy} assigned you ${p.kind === "path" ? "the learning path" : "the module"} “${title}”, due ${dayText(p.dueAt)}.\n\nStart here:\n${link}\n\nIt is also on your page “My training”, soonest due first. You will get a reminder shortly before it is due.`,
+    });
+    if (res.ok) sent++;
+    else await db.delete(reminderLog).where(and(eq(reminderLog.kind, "assigned"), eq(reminderLog.userId, person.id), eq(reminderLog.periodKey, key)));
+  }
+  return { sent };
+}
