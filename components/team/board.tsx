@@ -10,8 +10,7 @@ import { getJson } from "@/lib/fetcher";
 import type { BoardPage } from "@/lib/team/board";
 import type { RichRow } from "@/lib/team/board-extras";
 import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
-import { StatusBadge } from "./status-badge";
-import { isoDay, shortDate } from "@/lib/dates";
+import { isoDay } from "@/lib/dates";
 import { BoardCellView } from "./board-cell";
 
 export type BoardFilters = { team: string; status: string; module: string; dueBefore: string; q: string; sort: BoardSort; dir: "" | "asc" | "desc"; page: number; pageSize: number };

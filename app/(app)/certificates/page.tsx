@@ -7,8 +7,7 @@ import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates/access";
 import { CertificateCard } from "@/components/certificates/certificate-card";
-import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/status";
-import { env } from "@/lib/env";
+import { formatCertificateDate, formatHours } from "@/lib/certificates/status";
 import { plural, pluralNoun } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Certificates" };

@@ -12,8 +12,6 @@ import { plural } from "@/lib/plural";
 import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
 import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
-import { isoDay } from "@/lib/dates";
-import { Table } from "@/components/ui/table";
 
 export const metadata: Metadata = { title: "Invite people" };
 
