@@ -14,6 +14,8 @@ export const JOBS: Job[] = [
   { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
   { name: "assignment-reminders", run: async () => (await import("@/lib/team/reminders")).sendDueReminders() },
   { name: "manager-digest", run: async () => (await import("@/lib/team/reminders")).sendManagerDigests() },
+  // last, so that the messages the jobs above queued go out in the same run
+  { name: "mail-outbox", run: async () => (await import("@/lib/mail/outbox")).deliverOutbox() },
 ];
 
 export type JobOutcome = { name: string; ok: boolean; ms: number; result?: unknown; error?: string };

@@ -7,7 +7,7 @@ import "server-only";
  */
 import { randomUUID } from "node:crypto";
 import { and, eq, isNull, or } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { signOff, signOffEvidence, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { ApiError, fieldErrorsOf } from "@/lib/api";
@@ -156,6 +156,8 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
         },
         tx,
       );
+      // the reviewers' notice is queued with the sign-off: it exists exactly when the sign-off does
+      await notifyReviewers(tx, viewer, id, mod.meta.title, skill.title);
     });
   } catch (err) {
     await deleteObjectsQuietly(stored);
@@ -166,7 +168,6 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
     throw err;
   }
 
-  await notifyReviewers(viewer, mod.meta.title, skill.title);
   return {
     id,
     status: "submitted",
@@ -182,11 +183,11 @@ function liveConflict(status: string): ApiError {
     : new ApiError(409, "A sign-off for this skill is already waiting for review. You can send new evidence if it is returned.");
 }
 
-/** Tells the learner's organization's managers that something waits in their queue (best effort). */
-async function notifyReviewers(viewer: Viewer, moduleTitle: string, skillTitle: string): Promise<void> {
+/** Tells the learner's organization's managers that something waits in their queue (queued in `tx`). */
+async function notifyReviewers(tx: Tx, viewer: Viewer, signOffId: string, moduleTitle: string, skillTitle: string): Promise<void> {
   if (!viewer.organizationId) return;
-  try {
-    const managers = await db
+  {
+    const managers = await tx
       .select({ email: user.email })
       .from(user)
       .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
@@ -196,9 +197,8 @@ async function notifyReviewers(viewer: Viewer, moduleTitle: string, skillTitle: 
         subject: `Sign-off to review: ${viewer.name}`,
         text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
         kind: "signoff-submitted",
-      });
+        key: `signoff-submitted:${signOffId}:${m.email}`,
+      }, tx);
     }
-  } catch (err) {
-    console.error("[sign-offs] could not mail the reviewers", err);
   }
 }
