@@ -9,6 +9,7 @@ export type Job = { name: string; run: () => Promise<unknown> };
 
 export const JOBS: Job[] = [
   { name: "certificate-reminders", run: async () => (await import("@/lib/certificates/reminders")).sendExpiryReminders() },
+  { name: "completion-retry", run: async () => (await import("@/lib/completion")).retryPendingCompletions() },
   { name: "certificate-backfill", run: async () => (await import("@/lib/certificates/issue")).issueMissingCertificates() },
   { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
   { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
