@@ -10,8 +10,9 @@ import { and, eq, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { signOff, signOffEvidence, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError, fieldErrorsOf } from "@/lib/api";
+import { ApiError, fieldErrorsOf, json } from "@/lib/api";
 import { audit } from "@/lib/audit";
+import { hitRateLimit } from "@/lib/certificates/rate-limit";
 import { findModule } from "@/lib/content/load";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
@@ -26,6 +27,24 @@ const MULTIPART_OVERHEAD = 64 * 1024;
 const INCOMPLETE = "The upload did not arrive complete — the connection may have dropped part-way. Nothing was stored; try again.";
 
 export type Upload = { fields: SubmitFields; files: File[] };
+
+/** Uploads one person may send per window (every app server counts in MariaDB). */
+export const UPLOADS_PER_WINDOW = 20;
+export const UPLOAD_WINDOW_S = 3600;
+
+/**
+ * Counts this upload against the person's allowance before any of its body is read: null when it
+ * may go on, else the 429 answer with Retry-After. Per person, not per address (offices share one).
+ */
+export async function uploadRateRefusal(viewer: Viewer): Promise<Response | null> {
+  const r = await hitRateLimit(`evidence-upload:${viewer.id}`, UPLOADS_PER_WINDOW, UPLOAD_WINDOW_S);
+  if (r.allowed) return null;
+  const mins = Math.max(1, Math.ceil(r.retryAfterSeconds / 60));
+  return json(
+    { error: `You have sent ${UPLOADS_PER_WINDOW} uploads within an hour, the most Riser takes. Try again in ${mins} minute${mins === 1 ? "" : "s"}; nothing was saved.` },
+    { status: 429, headers: { "Retry-After": String(r.retryAfterSeconds) } },
+  );
+}
 
 /** Reads the request's multipart form; anything short of a whole, well-formed body is a 4xx. */
 export async function readUpload(req: Request): Promise<Upload> {
