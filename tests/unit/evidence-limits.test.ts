@@ -6,7 +6,7 @@ import { DECODE_QUEUE, DECODE_SLOTS, EvidenceError, MAX_INPUT_PIXELS, decodeLoad
 
 const png = (width: number, height: number) => sharp({ create: { width, height, channels: 3, background: "#c87533" } }).png({ compressionLevel: 9 }).toBuffer();
 const jpeg = (width: number, height: number) =>
-  sharp({ create: { width, height, channels: 3, noise: { type: "gaussian", mean: 128, sigma: 40 } } }).jpeg({ quality: 80 }).toBuffer();
+  sharp({ create: { width, height, channels: 3, background: "#777777", noise: { type: "gaussian", mean: 128, sigma: 40 } } }).jpeg({ quality: 80 }).toBuffer();
 
 describe("pixel cap", () => {
   it("is about 40 megapixels", () => {
