@@ -151,6 +151,8 @@ describe("download my records", () => {
     const body = await res.json();
     expect(body.person).toMatchObject({ id: me.id, email: me.email, organization: org.name, team: null });
     expect(body.lessons).toEqual([expect.objectContaining({ module: "freeze-protection", lesson: "where-homes-freeze" })]);
+    // the reading time behind it: the server's first-open stamp is part of the record
+    expect(body.lessons[0].firstOpenedAt).toBeTruthy();
     expect(body.attempts.map((a: { id: string }) => a.id)).toEqual([myAttempt]);
     expect(body.attempts[0]).toMatchObject({ score: 90, passed: true, passMark: 80 });
     expect(body.notAvailable).toEqual([]);
