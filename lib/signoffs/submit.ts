@@ -205,19 +205,17 @@ function liveConflict(status: string): ApiError {
 /** Tells the learner's organization's managers that something waits in their queue (queued in `tx`). */
 async function notifyReviewers(tx: Tx, viewer: Viewer, signOffId: string, moduleTitle: string, skillTitle: string): Promise<void> {
   if (!viewer.organizationId) return;
-  {
-    const managers = await tx
-      .select({ email: user.email })
-      .from(user)
-      .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
-    for (const m of managers.filter((x) => x.email !== viewer.email)) {
-      await sendMail({
-        to: m.email,
-        subject: `Sign-off to review: ${viewer.name}`,
-        text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
-        kind: "signoff-submitted",
-        key: `signoff-submitted:${signOffId}:${m.email}`,
-      }, tx);
-    }
+  const managers = await tx
+    .select({ email: user.email })
+    .from(user)
+    .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
+  for (const m of managers.filter((x) => x.email !== viewer.email)) {
+    await sendMail({
+      to: m.email,
+      subject: `Sign-off to review: ${viewer.name}`,
+      text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
+      kind: "signoff-submitted",
+      key: `signoff-submitted:${signOffId}:${m.email}`,
+    }, tx);
   }
 }
