@@ -1,7 +1,7 @@
 import "server-only";
 import { hostname } from "node:os";
 import nodemailer from "nodemailer";
-import { and, asc, eq, gt, isNull, lte, lt, or } from "drizzle-orm";
+import { and, desc, eq, inArray, isNull, lte, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { mailLog, mailOutbox } from "@/db/schema";
 import { env } from "@/lib/env";
@@ -18,11 +18,20 @@ export const MAX_TRIES = 12;
 export const RETRY_BASE_MS = 5_000;
 const RETRY_CAP_MS = 3_600_000;
 const CLAIM_MS = 90_000; // longer than the worst SMTP exchange below
+/** Messages sent at once by one process. */
+const PARALLEL = 4;
+/**
+ * Bulk kinds (invitation runs, reminders, digests) go after the messages someone is waiting for
+ * (confirmation links, password resets, certificates, receipts); within a class the newest first,
+ * so a fresh message never queues behind a backlog of thousands.
+ */
+const BULK_KINDS = ["invite", "digest", "reminder-overdue", "reminder-due-soon", "certificate.expiry-reminder"];
 const TIMEOUTS = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000, dnsTimeout: 10_000 };
 
 const local = /^smtp:\/\/(127\.0\.0\.1|localhost)(:|\/|$)/.test(env.SMTP_URL);
 // The local catcher's certificate is not trusted: plain SMTP on loopback only (see STACK.md).
-const transport = nodemailer.createTransport({ url: env.SMTP_URL, ...TIMEOUTS, ...(local ? { ignoreTLS: true } : {}) } as Parameters<
+// Pooled: a few SMTP connections reused for many messages (a bulk invitation run is thousands).
+const transport = nodemailer.createTransport({ url: env.SMTP_URL, pool: true, maxConnections: PARALLEL, maxMessages: 100, ...TIMEOUTS, ...(local ? { ignoreTLS: true } : {}) } as Parameters<
   typeof nodemailer.createTransport
 >[0]);
 
@@ -102,12 +111,12 @@ async function deliverOne(row: Row): Promise<"sent" | "retry" | "failed"> {
 export type OutboxRun = { sent: number; retrying: number; failed: number };
 
 /** Sends every due message (up to `limit`); safe to run on several servers and twice at once. */
-export async function deliverOutbox(limit = 200): Promise<OutboxRun> {
+export async function deliverOutbox(limit = 500): Promise<OutboxRun> {
   const out: OutboxRun = { sent: 0, retrying: 0, failed: 0 };
-  let seen = 0;
-  let lastId = 0;
-  while (seen < limit) {
+  const seen = new Set<number>();
+  while (seen.size < limit) {
     const now = new Date();
+    // rows handled in this run are claimed, sent or rescheduled, so they drop out of this query
     const due = await db
       .select()
       .from(mailOutbox)
@@ -116,21 +125,24 @@ export async function deliverOutbox(limit = 200): Promise<OutboxRun> {
           eq(mailOutbox.status, "pending"),
           lte(mailOutbox.nextAttemptAt, now),
           or(isNull(mailOutbox.claimedUntil), lt(mailOutbox.claimedUntil, now)),
-          gt(mailOutbox.id, lastId),
+          seen.size ? notInArray(mailOutbox.id, [...seen]) : undefined,
         ),
       )
-      .orderBy(asc(mailOutbox.id))
-      .limit(20);
+      .orderBy(sql`CASE WHEN ${inArray(mailOutbox.kind, BULK_KINDS)} THEN 1 ELSE 0 END`, desc(mailOutbox.id))
+      .limit(PARALLEL * 5);
     if (!due.length) break;
-    for (const row of due) {
-      lastId = row.id;
-      seen++;
-      if (!(await claim(row.id, now))) continue;
-      const r = await deliverOne(row);
-      if (r === "sent") out.sent++;
-      else if (r === "retry") out.retrying++;
-      else out.failed++;
-    }
+    for (const r of due) seen.add(r.id);
+    let next = 0;
+    const lane = async () => {
+      for (let row = due[next++]; row; row = due[next++]) {
+        if (!(await claim(row.id, now))) continue;
+        const r = await deliverOne(row);
+        if (r === "sent") out.sent++;
+        else if (r === "retry") out.retrying++;
+        else out.failed++;
+      }
+    };
+    await Promise.all(Array.from({ length: PARALLEL }, lane));
   }
   return out;
 }

@@ -84,7 +84,7 @@ describe("names", () => {
   it("the server refuses control characters, links, e-mail addresses and overlong names, whatever the form allows", async () => {
     const me = await person("name-rule");
     const [before] = await db.select({ name: user.name }).from(user).where(eq(user.id, me.id));
-    for (const name of ["Ann\u0000Lee", "Ann\u202eeeL", "Ann\nLee", "see https://evil.example/x", "www.evil.example", "bob@evil.example", "x".repeat(101), "  ", "<b>Ann</b>", "1234"]) {
+    for (const name of ["Ann\u0000Lee", "Ann\u202eeeL", "Ann\nLee", "see https://evil.example/x", "www.evil.example", "bob@evil.example", "x".repeat(101), "  ", "1234", "Ann\u200bLee"]) {
       const r = await postJson(me.client, "/api/auth/update-user", { name });
       expect(r.status, JSON.stringify(name)).toBe(400);
     }
