@@ -1,11 +1,9 @@
-import { randomUUID } from "node:crypto";
 import { expect, test } from "@playwright/test";
-import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
-import { DEMO_PASSWORD } from "../../db/demo";
 import { loadCatalogFrom } from "../../lib/content/load";
 import type { Question } from "../../lib/content/schema";
 import { signInAs } from "./helpers";
+import { backdateOpens, throwAwayLearner } from "./reading";
 
 const MODULE = "talking-with-homebuyers";
 
@@ -25,34 +23,6 @@ async function rightAnswers(email: string) {
   }
 }
 
-/**
- * A throw-away learner in the demo contractor, and the seat-time fixture: the server's own
- * first-open stamps of that person moved back in time (never anything the client can send).
- */
-async function throwAwayLearner(): Promise<string> {
-  const conn = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
-  try {
-    const email = `e2e-reader-${Date.now().toString(36)}@test.example`;
-    const id = randomUUID();
-    const [rows] = await conn.query("select organization_id from user where email = 'rafaela@quillmoor.example'");
-    const org = (rows as { organization_id: string }[])[0]!.organization_id;
-    await conn.query("insert into user (id, name, email, email_verified, role, organization_id, created_at, updated_at) values (?, 'Test Reader', ?, 1, 'learner', ?, now(), now())", [id, email, org]);
-    await conn.query("insert into account (id, account_id, provider_id, user_id, password, created_at, updated_at) values (?, ?, 'credential', ?, ?, now(), now())", [randomUUID(), id, id, await hashPassword(DEMO_PASSWORD)]);
-    return email;
-  } finally {
-    await conn.end();
-  }
-}
-
-async function backdateOpens(email: string) {
-  const conn = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
-  try {
-    await conn.query("update lesson_open o join user u on u.id = o.user_id set o.first_opened_at = o.first_opened_at - interval 1 day where u.email = ? and u.email like '%@test.example'", [email]);
-  } finally {
-    await conn.end();
-  }
-}
-
 test("a learner completes a module's lessons, passes its quiz and sees the module complete", async ({ page }) => {
   const email = await throwAwayLearner();
   await signInAs(page, email);
@@ -62,7 +32,7 @@ test("a learner completes a module's lessons, passes its quiz and sees the modul
   for (const l of mod.lessons) await page.goto(`/modules/${MODULE}/${l.slug}`);
   await page.goto(`/modules/${MODULE}/${mod.lessons[0]!.slug}`);
   await page.getByRole("button", { name: "Mark this lesson complete" }).click();
-  await expect(page.getByRole("alert")).toContainText("Keep reading");
+  await expect(page.getByTestId("lesson-progress").getByRole("alert")).toContainText("Keep reading");
   await backdateOpens(email);
   // The first lesson through the page, the rest through the same API the button uses.
   await page.getByRole("button", { name: "Mark this lesson complete" }).click();
