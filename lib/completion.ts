@@ -79,3 +79,22 @@ export async function checkAndRecordCompletion(userId: string, moduleSlug: strin
   await issueCertificateForCompletion(id);
   return id;
 }
+
+/**
+ * Job: passed attempts of the last `days` whose module has no completion from that pass yet (a
+ * failure after grading, or a lesson or sign-off finished later) get the completion check again.
+ * Idempotent: checkAndRecordCompletion records one completion per passing attempt.
+ */
+export async function retryPendingCompletions(days = 30, limit = 500): Promise<{ checked: number; completed: number }> {
+  const since = new Date(Date.now() - days * 86_400_000);
+  const rows = await db.execute(sql`
+    SELECT DISTINCT a.user_id AS userId, a.module_slug AS moduleSlug
+    FROM quiz_attempt a
+    LEFT JOIN module_completion c ON c.attempt_id = a.id
+    WHERE a.status = 'graded' AND a.passed = 1 AND a.submitted_at >= ${since} AND c.id IS NULL
+    LIMIT ${limit}`);
+  const list = (rows[0] as unknown as { userId: string; moduleSlug: string }[]) ?? [];
+  let completed = 0;
+  for (const r of list) if ((await checkAndRecordCompletion(r.userId, r.moduleSlug)) !== null) completed++;
+  return { checked: list.length, completed };
+}

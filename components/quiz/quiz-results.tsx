@@ -14,6 +14,14 @@ export function QuizResults({ result, onRetry }: { result: GradedAttempt; onRetr
           {result.lateGraded ? " The time limit ran out, so the answers saved before it were graded." : ""}
         </p>
       </div>
+      {result.completionPending ? (
+        <p role="status" className="rounded border border-line bg-panel p-3 text-sm">{result.completionPending}</p>
+      ) : null}
+      {!result.answersRevealed && result.correctCount < result.total ? (
+        <p className="text-sm text-muted" data-testid="answers-hidden">
+          The right answers show once you pass, or once you have used this period&apos;s attempts. Until then, review the lessons named under each question.
+        </p>
+      ) : null}
       {review.length ? (
         <div className="rounded border border-line bg-panel p-4">
           <h3 className="text-lg">What to review</h3>
@@ -26,7 +34,7 @@ export function QuizResults({ result, onRetry }: { result: GradedAttempt; onRetr
             <p className="font-mono text-sm text-muted">Question {i + 1} · <span className={f.correct ? "text-pass" : "text-caution"}>{f.correct ? "correct" : "wrong"}</span></p>
             <p className="mt-1 font-bold">{f.prompt}</p>
             <p className="mt-2 text-sm">Your answer: {f.yourAnswer}</p>
-            {!f.correct ? <p className="text-sm">Correct answer: {f.correctAnswer}</p> : null}
+            {!f.correct && f.correctAnswer !== null ? <p className="text-sm">Correct answer: {f.correctAnswer}</p> : null}
             <p className="mt-2">{f.explanation}</p>
             <p className="mt-1 text-sm">From the lesson <Link href={f.lesson.href}>{f.lesson.title}</Link></p>
           </li>

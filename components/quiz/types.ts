@@ -23,7 +23,8 @@ export type Feedback = {
   prompt: string;
   yourAnswer: string;
   correct: boolean;
-  correctAnswer: string;
+  /** null until the person passed or has no attempts left in the period */
+  correctAnswer: string | null;
   explanation: string;
   lesson: { slug: string; title: string; href: string };
 };
@@ -38,6 +39,9 @@ export type GradedAttempt = {
   total: number;
   lateGraded: boolean;
   submittedAt: string | null;
+  answersRevealed: boolean;
+  /** set when the grade is saved but recording the completion must be retried */
+  completionPending?: string;
   feedback: Feedback[];
 };
 export type AttemptView = OpenAttempt | GradedAttempt;

@@ -6,3 +6,4 @@ export * from "./certificates";
 export * from "./team";
 export * from "./billing";
 export * from "./signoffs";
+export * from "./records";

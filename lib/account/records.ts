@@ -1,9 +1,9 @@
 import "server-only";
-import { asc, eq, getTableColumns, is } from "drizzle-orm";
+import { and, asc, eq, getTableColumns, is } from "drizzle-orm";
 import { MySqlTable, type AnyMySqlColumn } from "drizzle-orm/mysql-core";
 import { db } from "@/db/client";
 import * as schema from "@/db/schema";
-import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, organization, quizAttempt, team, user } from "@/db/schema";
+import { catalogLesson, catalogModule, lessonOpen, lessonProgress, moduleCompletion, organization, quizAttempt, team, user } from "@/db/schema";
 import { toSafeCsv, type CsvValue } from "@/lib/csv";
 
 export type RecordRow = Record<string, string | number | boolean | null>;
@@ -76,10 +76,19 @@ export async function collectMyRecords(userId: string): Promise<MyRecords> {
   if (!person) throw new Error(`no person ${userId}`);
 
   const lessons = await db
-    .select({ module: catalogModule.slug, moduleTitle: catalogModule.title, lesson: catalogLesson.slug, lessonTitle: catalogLesson.title, completedAt: lessonProgress.completedAt })
+    .select({
+      module: catalogModule.slug,
+      moduleTitle: catalogModule.title,
+      lesson: catalogLesson.slug,
+      lessonTitle: catalogLesson.title,
+      // the server's own first-open stamp: reading time = completedAt − firstOpenedAt
+      firstOpenedAt: lessonOpen.firstOpenedAt,
+      completedAt: lessonProgress.completedAt,
+    })
     .from(lessonProgress)
     .innerJoin(catalogLesson, eq(catalogLesson.id, lessonProgress.lessonId))
     .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
+    .leftJoin(lessonOpen, and(eq(lessonOpen.userId, lessonProgress.userId), eq(lessonOpen.lessonId, lessonProgress.lessonId)))
     .where(eq(lessonProgress.userId, userId))
     .orderBy(asc(lessonProgress.completedAt));
 

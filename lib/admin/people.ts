@@ -1,13 +1,11 @@
 import "server-only";
 import { and, count, eq, gt, isNull, like, or, sql, type SQL } from "drizzle-orm";
 import type { z } from "zod";
-import { APIError } from "better-auth/api";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { organization, session, team, user } from "@/db/schema";
 import type { Role, Viewer } from "@/lib/access";
 import { ApiError } from "@/lib/api";
 import { audit } from "@/lib/audit";
-import { auth } from "@/lib/auth";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { Paged, peopleQuery } from "./schemas";
 
@@ -99,21 +97,14 @@ async function findPerson(id: string): Promise<Target> {
 }
 
 /**
- * Runs one better-auth admin call and writes its audit row in one transaction: the audit row is
- * written first and commits only if the call succeeded (a failed call rolls it back).
+ * Applies one admin change and writes its audit row in the same transaction, on the same
+ * connection: both commit or neither does. (The change is written here rather than through
+ * better-auth's admin endpoints, which would commit on a connection of their own.)
  */
-async function auditedAuthCall(entry: Parameters<typeof audit>[0], call: () => Promise<unknown>): Promise<void> {
+async function auditedChange(entry: Parameters<typeof audit>[0], change: (tx: Tx) => Promise<unknown>): Promise<void> {
   await db.transaction(async (tx) => {
+    await change(tx);
     await audit(entry, tx);
-    try {
-      await call();
-    } catch (err) {
-      if (err instanceof APIError) {
-        const status = err.statusCode >= 400 && err.statusCode < 500 ? err.statusCode : 502;
-        throw new ApiError(status, err.body?.message ?? err.message ?? "The sign-in service refused the change.");
-      }
-      throw err;
-    }
   });
 }
 
@@ -124,10 +115,9 @@ export async function changeRole(actor: Actor, personId: string, role: Role, rea
   if (role !== "admin" && !person.organizationId) {
     throw new ApiError(400, "Some fields need attention.", { role: ["Move this person into an organization first: every role but admin belongs to one."] });
   }
-  await auditedAuthCall(
+  await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.role", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { from: person.role, to: role } },
-    // better-auth types roles as its defaults ("user" | "admin"); Riser's roles are checked by changeRoleSchema.
-    () => auth.api.setRole({ body: { userId: person.id, role: role as "admin" }, headers: ctx.headers }),
+    (tx) => tx.update(user).set({ role, updatedAt: new Date() }).where(eq(user.id, person.id)),
   );
 }
 
@@ -159,19 +149,25 @@ export async function banPerson(actor: Actor, personId: string, reason: string, 
   const person = await findPerson(personId);
   if (person.id === actor.id) throw new ApiError(400, "You cannot ban yourself.");
   if (person.banned) throw new ApiError(400, `${person.name} is already banned.`);
-  await auditedAuthCall(
+  await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.ban", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { days } },
-    // better-auth sets the ban and deletes every session of the person.
-    () => auth.api.banUser({ body: { userId: person.id, banReason: reason, ...(days ? { banExpiresIn: days * 86_400 } : {}) }, headers: ctx.headers }),
+    // the ban, as better-auth's admin plugin stores it, and every session of the person ended
+    async (tx) => {
+      await tx
+        .update(user)
+        .set({ banned: true, banReason: reason, banExpires: days ? new Date(Date.now() + days * 86_400_000) : null, updatedAt: new Date() })
+        .where(eq(user.id, person.id));
+      await tx.delete(session).where(eq(session.userId, person.id));
+    },
   );
 }
 
 export async function unbanPerson(actor: Actor, personId: string, reason: string | undefined, ctx: RequestContext): Promise<void> {
   const person = await findPerson(personId);
   if (!person.banned) throw new ApiError(400, `${person.name} is not banned.`);
-  await auditedAuthCall(
+  await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.unban", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip },
-    () => auth.api.unbanUser({ body: { userId: person.id }, headers: ctx.headers }),
+    (tx) => tx.update(user).set({ banned: false, banReason: null, banExpires: null, updatedAt: new Date() }).where(eq(user.id, person.id)),
   );
 }
 
@@ -179,9 +175,9 @@ export async function signOutPerson(actor: Actor, personId: string, reason: stri
   const person = await findPerson(personId);
   const [live] = await db.select({ n: count() }).from(session).where(and(eq(session.userId, person.id), gt(session.expiresAt, new Date())));
   const sessionsEnded = live?.n ?? 0;
-  await auditedAuthCall(
+  await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.sign-out", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip, details: { sessionsEnded } },
-    () => auth.api.revokeUserSessions({ body: { userId: person.id }, headers: ctx.headers }),
+    (tx) => tx.delete(session).where(eq(session.userId, person.id)),
   );
   return { sessionsEnded };
 }

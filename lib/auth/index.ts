@@ -9,6 +9,7 @@ import { db } from "@/db/client";
 import * as schema from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { nameProblem, normalizeName } from "@/lib/names";
 import { signupContext } from "./signup-context";
 
 export const auth = betterAuth({
@@ -111,8 +112,12 @@ export const auth = betterAuth({
           if (!placement) {
             throw new APIError("FORBIDDEN", { message: "Create an account from the sign-up page or an invitation." });
           }
-          return { data: { ...user, ...placement } };
+          return { data: { ...user, ...placement, name: checkedName(user.name) } };
         },
+      },
+      // every name change (account settings, admin tools) passes the same rule as sign-up
+      update: {
+        before: async (data) => ("name" in data && data.name !== undefined ? { data: { ...data, name: checkedName(data.name) } } : { data }),
       },
     },
   },
@@ -120,3 +125,10 @@ export const auth = betterAuth({
 });
 
 export type Auth = typeof auth;
+
+/** The server's name rule (lib/names.ts): the stored form, or a 400 with the reason. */
+function checkedName(name: unknown): string {
+  const problem = nameProblem(name);
+  if (problem) throw new APIError("BAD_REQUEST", { message: `Name: ${problem}` });
+  return normalizeName(name as string);
+}

@@ -1,9 +1,17 @@
 /** Form schemas shared by the browser (react-hook-form) and the server (route handlers). */
 import { z } from "zod";
+import { nameProblem, normalizeName } from "@/lib/names";
 
 export const email = z.string().trim().toLowerCase().email("Enter an e-mail address like name@company.com").max(255, "At most 255 characters");
 export const password = z.string().min(10, "Use at least 10 characters").max(128, "At most 128 characters");
-export const personName = z.string().trim().min(2, "Enter at least 2 characters").max(200, "At most 200 characters");
+// The name rule is lib/names.ts (certificates print it; the server enforces it in lib/auth hooks too).
+export const personName = z
+  .string()
+  .superRefine((v, ctx) => {
+    const problem = nameProblem(v);
+    if (problem) ctx.addIssue({ code: "custom", message: problem });
+  })
+  .transform(normalizeName);
 
 export const signUpSchema = z.object({
   name: personName,

@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, isNull, or } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { checkout, organization, paymentEvent, user, type CheckoutStatus, type PaymentOutcome } from "@/db/schema";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
@@ -143,6 +143,8 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
           },
           tx,
         );
+        // the receipt is queued in this transaction: it exists exactly when the seats do
+        await mailReceipt(c.id, { outcome, seatsAdded, seatsBefore, seatsAfter, paymentEventId }, tx);
       }
       return { outcome, seatsAdded, seatsBefore, seatsAfter, paymentEventId };
     });
@@ -152,21 +154,20 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
     throw err;
   }
   if (!applied) return { outcome: "duplicate", seatsAdded: 0 };
-  if (applied.outcome === "seats_added") await mailReceipt(found.id, applied).catch((err) => console.error("[billing] receipt mail failed", err));
   return { outcome: applied.outcome, seatsAdded: applied.seatsAdded };
 }
 
 const dateText = (d: Date) => receiptLongDate(d);
 
 /** The receipt mail: to whoever bought, and to every manager of the organization. */
-async function mailReceipt(checkoutId: string, applied: Applied): Promise<void> {
-  const [c] = await db
+async function mailReceipt(checkoutId: string, applied: Applied, tx: Tx): Promise<void> {
+  const [c] = await tx
     .select({ checkout, orgName: organization.name })
     .from(checkout)
     .innerJoin(organization, eq(organization.id, checkout.organizationId))
     .where(eq(checkout.id, checkoutId));
   if (!c) return;
-  const managers = await db
+  const managers = await tx
     .select({ email: user.email })
     .from(user)
     .where(and(eq(user.organizationId, c.checkout.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
@@ -192,6 +193,6 @@ async function mailReceipt(checkoutId: string, applied: Applied): Promise<void> 
     "Riser",
   ].join("\n");
   for (const address of to) {
-    await sendMail({ to: address, subject: `Riser receipt: ${k.seats} seat${s} for ${c.orgName}`, text, kind: "billing.receipt" });
+    await sendMail({ to: address, subject: `Riser receipt: ${k.seats} seat${s} for ${c.orgName}`, text, kind: "billing.receipt", key: `billing.receipt:${applied.paymentEventId}:${address}` }, tx);
   }
 }

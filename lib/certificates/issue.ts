@@ -61,7 +61,7 @@ function isRetryable(err: unknown): boolean {
  *
  * Dates follow the completion: issued at its time, expiring after the module's validity. A later
  * completion of the same module is a renewal: a new certificate linked to the previous one.
- * Mails the learner for each new certificate (after commit) unless `notify` is false.
+ * Queues a mail to the learner for each new certificate (same transaction) unless `notify` is false.
  */
 export async function issueCertificateForCompletion(completionId: number, opts: { notify?: boolean } = {}): Promise<IssuedCertificate[]> {
   const [completion] = await db.select().from(moduleCompletion).where(eq(moduleCompletion.id, completionId));
@@ -73,20 +73,17 @@ export async function issueCertificateForCompletion(completionId: number, opts: 
   let result: { issued: IssuedCertificate[]; email: string | null; holderName: string } = { issued: [], email: null, holderName: "" };
   for (let attempt = 1; ; attempt++) {
     try {
-      result = await db.transaction((tx) => issueInTransaction(tx, completion, year), { isolationLevel: "read committed" });
+      result = await db.transaction((tx) => issueInTransaction(tx, completion, year, opts.notify !== false), { isolationLevel: "read committed" });
       break;
     } catch (err) {
       if (attempt >= 5 || !isRetryable(err)) throw err;
       await new Promise((r) => setTimeout(r, 20 * attempt + Math.random() * 30));
     }
   }
-  if (opts.notify !== false && result.email) {
-    for (const c of result.issued) await mailIssued(result.email, result.holderName, c);
-  }
   return result.issued;
 }
 
-async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$inferSelect, year: number) {
+async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$inferSelect, year: number, notify: boolean) {
   const at = completion.completedAt;
   // One issuer at a time per person: path checks below see every certificate committed before.
   const [holder] = await tx
@@ -175,6 +172,8 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
       .$returningId()) as [{ id: number }];
     issued.push({ id, serial: serial.serial, kind: values.kind, subjectSlug: values.subjectSlug, subjectTitle: values.subjectTitle, verificationCode, expiresAt: values.expiresAt });
   }
+  // the mails are queued in this transaction: each exists exactly when its certificate does
+  if (notify) for (const c of issued) await mailIssued(tx, holder.email, holder.name, c);
   return { issued, email: holder.email, holderName: holder.name };
 }
 
@@ -208,11 +207,12 @@ async function latestValidCertificate(tx: Tx, userId: string, kind: "module" | "
   return row && certificateStatus(row, at) === "valid" ? row : null;
 }
 
-async function mailIssued(to: string, holderName: string, c: IssuedCertificate) {
+async function mailIssued(tx: Tx, to: string, holderName: string, c: IssuedCertificate) {
   const link = verificationUrl(env.APP_URL, c.verificationCode);
   const what = c.kind === "path" ? `the learning path "${c.subjectTitle}"` : `the module "${c.subjectTitle}"`;
   await sendMail({
     to,
+    key: `certificate.issued:${c.id}`,
     kind: "certificate.issued",
     subject: `Your Riser certificate: ${c.subjectTitle}`,
     text: [
@@ -227,7 +227,7 @@ async function mailIssued(to: string, holderName: string, c: IssuedCertificate) 
       "",
       "— Riser",
     ].join("\n"),
-  });
+  }, tx);
 }
 
 /**

@@ -1,37 +1,30 @@
 import "server-only";
-import nodemailer from "nodemailer";
-import { db } from "@/db/client";
-import { mailLog } from "@/db/schema";
-import { env } from "@/lib/env";
+import { db, type Tx } from "@/db/client";
+import { mailOutbox } from "@/db/schema";
+import { isDuplicateKey, scheduleDelivery } from "./outbox";
 
-const local = /^smtp:\/\/(127\.0\.0\.1|localhost)(:|\/|$)/.test(env.SMTP_URL);
+/** `key`: optional caller key; a message with a key already queued is not queued again. */
+export type Mail = { to: string; subject: string; text: string; kind: string; key?: string };
 
-// The local catcher's certificate is not trusted: plain SMTP on loopback only (see STACK.md).
-const transport = local
-  ? nodemailer.createTransport({ url: env.SMTP_URL, ignoreTLS: true } as Parameters<typeof nodemailer.createTransport>[0])
-  : nodemailer.createTransport(env.SMTP_URL);
-
-export type Mail = { to: string; subject: string; text: string; kind: string };
-
-/** Sends one message and records it in the outgoing mail log (body kept outside production only). */
-export async function sendMail(mail: Mail): Promise<{ ok: boolean }> {
-  let error: string | null = null;
+/**
+ * Queues one message in the outbox; a worker delivers it (lib/mail/outbox.ts) with retries, so no
+ * request ever waits on SMTP. Pass the transaction of the change that causes the message: the
+ * message then exists exactly when that change commits. `ok` means "queued".
+ */
+export async function sendMail(mail: Mail, tx?: Tx): Promise<{ ok: boolean }> {
+  const values = {
+    to: mail.to.slice(0, 255),
+    subject: mail.subject.replace(/[\r\n]+/g, " ").slice(0, 255),
+    kind: mail.kind.slice(0, 40),
+    body: mail.text,
+    dedupeKey: mail.key ? mail.key.slice(0, 191) : null,
+    nextAttemptAt: new Date(),
+  };
   try {
-    await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+    await (tx ?? db).insert(mailOutbox).values(values);
   } catch (err) {
-    error = err instanceof Error ? err.message : String(err);
-    console.error(`[mail] could not send "${mail.subject}" to ${mail.to}: ${error}`);
+    if (!(mail.key && isDuplicateKey(err))) throw err; // the same keyed message is already queued
   }
-  await db
-    .insert(mailLog)
-    .values({
-      to: mail.to,
-      subject: mail.subject.slice(0, 255),
-      kind: mail.kind,
-      status: error ? "failed" : "sent",
-      error,
-      body: env.NODE_ENV === "production" && !env.MAIL_CATCHER_URL ? null : mail.text,
-    })
-    .catch((err) => console.error("[mail] could not write the mail log", err));
-  return { ok: !error };
+  scheduleDelivery(tx ? 400 : 20);
+  return { ok: true };
 }

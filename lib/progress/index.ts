@@ -1,11 +1,54 @@
 import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { catalogLesson, catalogModule, lessonProgress, user } from "@/db/schema";
+import { catalogLesson, catalogModule, lessonOpen, lessonProgress, user } from "@/db/schema";
 import { ApiError } from "@/lib/api";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
 
 export type ModuleProgress = { module: string; completed: string[]; lastAt: Date | null };
+
+/**
+ * Seat-time rule: a lesson counts as done only when at least half its stated reading time
+ * (`minutes` in its frontmatter) has passed since the server first saw the person open it. Both
+ * times are the server's own clock; nothing the client sends is trusted for it.
+ */
+export const SEAT_TIME_SHARE = 0.5;
+export const minimumSeatSeconds = (minutes: number) => Math.ceil(minutes * 60 * SEAT_TIME_SHARE);
+
+async function findLesson(moduleSlug: string, lessonSlug: string) {
+  const [lesson] = await db
+    .select({ id: catalogLesson.id, minutes: catalogLesson.minutes })
+    .from(catalogLesson)
+    .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
+    .where(and(eq(catalogModule.slug, moduleSlug), eq(catalogLesson.slug, lessonSlug), isNull(catalogLesson.retiredAt)));
+  return lesson ?? null;
+}
+
+/** The server's stamp of the person's first open of a lesson (called when the lesson page renders). */
+export async function recordLessonOpen(userId: string, moduleSlug: string, lessonSlug: string): Promise<void> {
+  const lesson = await findLesson(moduleSlug, lessonSlug);
+  if (!lesson) return;
+  await db.insert(lessonOpen).ignore().values({ userId, lessonId: lesson.id, firstOpenedAt: new Date() });
+}
+
+export type LessonTime = { lesson: string; firstOpenedAt: string; completedAt: string | null; readingSeconds: number | null };
+
+/** Per lesson of a module: when the person first opened it and the reading time counted at completion. */
+export async function readingTimes(userId: string, moduleSlug: string): Promise<LessonTime[]> {
+  const rows = await db
+    .select({ lesson: catalogLesson.slug, openedAt: lessonOpen.firstOpenedAt, completedAt: lessonProgress.completedAt })
+    .from(lessonOpen)
+    .innerJoin(catalogLesson, eq(catalogLesson.id, lessonOpen.lessonId))
+    .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
+    .leftJoin(lessonProgress, and(eq(lessonProgress.userId, lessonOpen.userId), eq(lessonProgress.lessonId, lessonOpen.lessonId)))
+    .where(and(eq(lessonOpen.userId, userId), eq(catalogModule.slug, moduleSlug)));
+  return rows.map((r) => ({
+    lesson: r.lesson,
+    firstOpenedAt: r.openedAt.toISOString(),
+    completedAt: r.completedAt?.toISOString() ?? null,
+    readingSeconds: r.completedAt ? Math.max(0, Math.round((r.completedAt.getTime() - r.openedAt.getTime()) / 1000)) : null,
+  }));
+}
 
 /** Completed lesson slugs per module for one person. */
 export async function progressByModule(userId: string): Promise<Map<string, ModuleProgress>> {
@@ -38,15 +81,34 @@ export async function lastCompletedLesson(userId: string): Promise<{ module: str
   return row ?? null;
 }
 
-/** Marks a lesson complete; a second call changes nothing (one row per person and lesson). */
+/**
+ * Marks a lesson complete once the seat-time rule is met; a second call changes nothing (one row
+ * per person and lesson). Too early → 409 saying how long is left.
+ */
 export async function markLessonComplete(userId: string, moduleSlug: string, lessonSlug: string): Promise<string[]> {
-  const [lesson] = await db
-    .select({ id: catalogLesson.id })
-    .from(catalogLesson)
-    .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
-    .where(and(eq(catalogModule.slug, moduleSlug), eq(catalogLesson.slug, lessonSlug), isNull(catalogLesson.retiredAt)));
+  const lesson = await findLesson(moduleSlug, lessonSlug);
   if (!lesson) throw new ApiError(404, `No lesson "${lessonSlug}" in module "${moduleSlug}".`);
-  await db.insert(lessonProgress).ignore().values({ userId, lessonId: lesson.id });
+  const [done] = await db
+    .select({ at: lessonProgress.completedAt })
+    .from(lessonProgress)
+    .where(and(eq(lessonProgress.userId, userId), eq(lessonProgress.lessonId, lesson.id)));
+  if (!done) {
+    const [opened] = await db
+      .select({ at: lessonOpen.firstOpenedAt })
+      .from(lessonOpen)
+      .where(and(eq(lessonOpen.userId, userId), eq(lessonOpen.lessonId, lesson.id)));
+    if (!opened) throw new ApiError(409, "Open the lesson and read it first: reading time is counted from when you open it.");
+    const needed = minimumSeatSeconds(lesson.minutes);
+    const left = needed - Math.floor((Date.now() - opened.at.getTime()) / 1000);
+    if (left > 0) {
+      const mins = Math.ceil(left / 60);
+      throw new ApiError(
+        409,
+        `Keep reading: this ${lesson.minutes}-minute lesson counts as done after ${Math.ceil(needed / 60)} minutes of reading time. About ${mins} minute${mins === 1 ? "" : "s"} to go.`,
+      );
+    }
+    await db.insert(lessonProgress).ignore().values({ userId, lessonId: lesson.id });
+  }
   // The last lesson done after a passing quiz completes the module (lazy import: completion uses this module).
   const { checkAndRecordCompletion } = await import("@/lib/completion");
   await checkAndRecordCompletion(userId, moduleSlug);

@@ -1,4 +1,7 @@
 import "server-only";
+// Over 300 lines on purpose: starting, saving, grading, viewing and listing attempts share one
+// locking discipline (the attempt row FOR UPDATE) and the same row/item shapes; split, the lock
+// rules would live in several files.
 import { randomInt, randomUUID } from "node:crypto";
 import { and, asc, desc, eq, gte, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
@@ -59,8 +62,13 @@ function answerText(item: ItemRow): string {
   return `${a} ${"unit" in q ? q.unit : ""}`.trim();
 }
 
-/** The graded attempt with per-question feedback (only after submit). */
-function resultView(a: AttemptRow, items: ItemRow[]) {
+/**
+ * The graded attempt with per-question feedback (only after submit): right or wrong, the person's
+ * answer and the explanation for every question; the keyed answer only when `reveal` (the attempt
+ * passed, or the person has no attempts left in the module's period), so that a few failed
+ * attempts do not hand out the question bank's key.
+ */
+function resultView(a: AttemptRow, items: ItemRow[], reveal: boolean) {
   const mod = findModule(a.moduleSlug);
   return {
     id: a.id,
@@ -74,6 +82,7 @@ function resultView(a: AttemptRow, items: ItemRow[]) {
     passMark: a.passMark,
     correctCount: items.filter((i) => i.correct).length,
     total: items.length,
+    answersRevealed: reveal,
     feedback: items.map((i) => {
       const lesson = mod?.lessons.find((l) => l.slug === i.body.lesson);
       return {
@@ -82,7 +91,7 @@ function resultView(a: AttemptRow, items: ItemRow[]) {
         prompt: i.body.type === "parametric" ? fillPrompt(i.body.prompt, { ...i.body.fixed, ...(i.params ?? {}) }) : i.body.prompt,
         yourAnswer: answerText(i),
         correct: !!i.correct,
-        correctAnswer: correctAnswerText({ question: i.body, params: i.params }),
+        correctAnswer: reveal ? correctAnswerText({ question: i.body, params: i.params }) : null,
         explanation: i.body.explanation,
         lesson: { slug: i.body.lesson, title: lesson?.meta.title ?? i.body.lesson, href: `/modules/${a.moduleSlug}/${i.body.lesson}` },
       };
@@ -180,7 +189,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
     );
     return attemptId;
   });
-  if (expiredToComplete) await checkAndRecordCompletion(viewer.id, moduleSlug);
+  if (expiredToComplete) await completeAfterGrading(viewer.id, moduleSlug);
   return viewAttempt(viewer, id);
 }
 
@@ -191,9 +200,20 @@ export async function viewAttempt(viewer: Viewer, id: string): Promise<AttemptVi
     throw new AccessError(403, "This attempt belongs to someone else.");
   }
   const items = await loadItems(id);
-  if (a.status === "graded") return resultView(a, items);
+  if (a.status === "graded") return resultView(a, items, a.passed === true || (await attemptsLeft(a.userId, a.moduleSlug)) === 0);
   if (a.userId !== viewer.id) return { ...openView(a, items), questions: [], answers: {} };
   return openView(a, items);
+}
+
+/** Attempts the person may still start in the module's current period (its attempt limit). */
+async function attemptsLeft(userId: string, moduleSlug: string, now = Date.now()): Promise<number> {
+  const rules = rulesOf(moduleSlug).meta.quiz;
+  const since = new Date(now - rules.periodHours * 3_600_000);
+  const [row] = await db
+    .select({ n: sql<number>`count(*)` })
+    .from(quizAttempt)
+    .where(and(eq(quizAttempt.userId, userId), eq(quizAttempt.moduleSlug, moduleSlug), gte(quizAttempt.startedAt, since)));
+  return Math.max(0, rules.attemptsPerPeriod - Number(row?.n ?? 0));
 }
 
 export type AnswerInput = { position: number; answer: Answer };
@@ -239,14 +259,14 @@ export async function saveAnswers(viewer: Viewer, id: string, answers: AnswerInp
 
 async function afterGrading(userId: string, id: string) {
   const a = await getAttemptRow(id);
-  if (a.passed) await checkAndRecordCompletion(userId, a.moduleSlug);
+  if (a.passed) await completeAfterGrading(userId, a.moduleSlug);
 }
 
 /**
  * Grades the attempt on the server, once: the attempt row is locked, so concurrent or repeated
  * submits wait for the first and then return the same stored result.
  */
-export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = []): Promise<AttemptView> {
+export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = []): Promise<AttemptView & { completionPending?: string }> {
   let refusedLate = false;
   const graded = await db.transaction(async (tx) => {
     const a = await getAttemptRow(id, tx, true);
@@ -263,10 +283,28 @@ export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: An
     if (late && finalAnswers.length) refusedLate = true;
     return gradeLocked(tx, a, late, items);
   });
-  if (graded?.row.passed) await checkAndRecordCompletion(viewer.id, graded.row.moduleSlug);
+  const completion = graded?.row.passed ? await completeAfterGrading(viewer.id, graded.row.moduleSlug) : null;
   if (refusedLate) throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
   // Every response, first or repeated, is built from the stored rows so that all are identical.
-  return viewAttempt(viewer, id);
+  const view = await viewAttempt(viewer, id);
+  return completion === "pending" ? { ...view, completionPending: COMPLETION_PENDING } : view;
+}
+
+const COMPLETION_PENDING =
+  "Your result is saved. Recording the module's completion did not finish just now; it is retried automatically and your certificate follows by e-mail.";
+
+/**
+ * The grade is committed before this runs: a failure here must not turn a saved pass into an error.
+ * It is reported in the answer and retried by the "completion-retry" job (lib/completion.ts).
+ */
+async function completeAfterGrading(userId: string, moduleSlug: string): Promise<"done" | "pending"> {
+  try {
+    await checkAndRecordCompletion(userId, moduleSlug);
+    return "done";
+  } catch (err) {
+    console.error(`[quiz] completion of ${moduleSlug} for ${userId} failed after grading; the job retries it`, err);
+    return "pending";
+  }
 }
 
 /** Writes answers with one statement. */

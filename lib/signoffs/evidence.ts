@@ -14,7 +14,7 @@ import sharp from "sharp";
 
 export class EvidenceError extends Error {
   constructor(
-    readonly status: 400 | 413 | 415,
+    readonly status: 400 | 413 | 415 | 503,
     message: string,
   ) {
     super(message);
@@ -36,8 +36,40 @@ export type PreparedEvidence = {
 /** Longest edge kept for stored photos (enough to read a pipe marking or a gauge); thumbnails. */
 export const PHOTO_MAX_EDGE = 3000;
 export const THUMB_EDGE = 480;
-/** Decoding stops above this many pixels (a guard against decompression bombs): 100 megapixels. */
-const MAX_INPUT_PIXELS = 100_000_000;
+/**
+ * Photos above this many pixels are refused before decoding (a guard against decompression bombs
+ * and memory exhaustion): 40 megapixels, above the largest common phone camera modes' default
+ * output (12–24 MP; 48–50 MP sensors save binned 12 MP photos unless set otherwise).
+ */
+export const MAX_INPUT_PIXELS = 40_000_000;
+const MAX_MP_LABEL = `${MAX_INPUT_PIXELS / 1_000_000} megapixels`;
+
+/**
+ * At most DECODE_SLOTS photos are decoded at once in this process (sharp holds whole images in
+ * memory); up to DECODE_QUEUE more wait their turn, and beyond that the upload is refused with 503.
+ */
+export const DECODE_SLOTS = 2;
+export const DECODE_QUEUE = 8;
+const gate = { active: 0, waiting: [] as (() => void)[] };
+
+async function withDecodeSlot<T>(fn: () => Promise<T>): Promise<T> {
+  if (gate.active >= DECODE_SLOTS) {
+    if (gate.waiting.length >= DECODE_QUEUE) {
+      throw new EvidenceError(503, "Riser is busy preparing other people's photos. Nothing was saved; try again in a minute.");
+    }
+    await new Promise<void>((resolve) => gate.waiting.push(resolve));
+  } else gate.active++;
+  try {
+    return await fn();
+  } finally {
+    const next = gate.waiting.shift();
+    if (next) next(); // the slot passes straight to the next in line
+    else gate.active--;
+  }
+}
+
+/** For tests: how many decodes run and wait right now. */
+export const decodeLoad = () => ({ active: gate.active, waiting: gate.waiting.length });
 
 /**
  * A file name safe to show and to put in a Content-Disposition header: the last path segment only,
@@ -70,12 +102,13 @@ async function preparePhoto(bytes: Uint8Array, detectedExt: string, name: string
   let input: ReturnType<typeof sharp>;
   try {
     input = sharp(bytes, { failOn: "truncated", limitInputPixels: MAX_INPUT_PIXELS });
-    const meta = await input.metadata();
+    const meta = await input.metadata(); // the header only: nothing is decoded yet
     if (!meta.width || !meta.height) throw new Error("no dimensions");
+    if (meta.width * meta.height > MAX_INPUT_PIXELS) throw new Error("pixel limit");
   } catch (err) {
-    if (heic) throw new EvidenceError(415, HEIC_REFUSAL);
     const msg = err instanceof Error ? err.message : "";
-    if (/pixel limit/i.test(msg)) throw new EvidenceError(413, `"${name}" has more than 100 megapixels; save a smaller copy and upload that.`);
+    if (/pixel limit/i.test(msg)) throw new EvidenceError(413, `"${name}" has more than ${MAX_MP_LABEL}; save a smaller copy (or set the camera to a lower resolution) and upload that.`);
+    if (heic) throw new EvidenceError(415, HEIC_REFUSAL);
     throw new EvidenceError(400, `"${name}" could not be read as a photo: it looks damaged or cut short. Take or export it again.`);
   }
   // PNG stays PNG (screenshots of records); JPEG and converted HEIC become JPEG.
@@ -122,7 +155,7 @@ export async function prepareEvidence(rawName: string, bytes: Uint8Array): Promi
     case "jpg":
     case "png":
     case "heic":
-      return preparePhoto(bytes, type.ext, name);
+      return withDecodeSlot(() => preparePhoto(bytes, type.ext, name));
     case "pdf":
       return preparePdf(bytes, name);
     default: {

@@ -7,11 +7,12 @@ import "server-only";
  */
 import { randomUUID } from "node:crypto";
 import { and, eq, isNull, or } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { signOff, signOffEvidence, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError, fieldErrorsOf } from "@/lib/api";
+import { ApiError, fieldErrorsOf, json } from "@/lib/api";
 import { audit } from "@/lib/audit";
+import { hitRateLimit } from "@/lib/certificates/rate-limit";
 import { findModule } from "@/lib/content/load";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
@@ -26,6 +27,24 @@ const MULTIPART_OVERHEAD = 64 * 1024;
 const INCOMPLETE = "The upload did not arrive complete — the connection may have dropped part-way. Nothing was stored; try again.";
 
 export type Upload = { fields: SubmitFields; files: File[] };
+
+/** Uploads one person may send per window (every app server counts in MariaDB). */
+export const UPLOADS_PER_WINDOW = 20;
+export const UPLOAD_WINDOW_S = 3600;
+
+/**
+ * Counts this upload against the person's allowance before any of its body is read: null when it
+ * may go on, else the 429 answer with Retry-After. Per person, not per address (offices share one).
+ */
+export async function uploadRateRefusal(viewer: Viewer): Promise<Response | null> {
+  const r = await hitRateLimit(`evidence-upload:${viewer.id}`, UPLOADS_PER_WINDOW, UPLOAD_WINDOW_S);
+  if (r.allowed) return null;
+  const mins = Math.max(1, Math.ceil(r.retryAfterSeconds / 60));
+  return json(
+    { error: `You have sent ${UPLOADS_PER_WINDOW} uploads within an hour, the most Riser takes. Try again in ${mins} minute${mins === 1 ? "" : "s"}; nothing was saved.` },
+    { status: 429, headers: { "Retry-After": String(r.retryAfterSeconds) } },
+  );
+}
 
 /** Reads the request's multipart form; anything short of a whole, well-formed body is a 4xx. */
 export async function readUpload(req: Request): Promise<Upload> {
@@ -156,6 +175,8 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
         },
         tx,
       );
+      // the reviewers' notice is queued with the sign-off: it exists exactly when the sign-off does
+      await notifyReviewers(tx, viewer, id, mod.meta.title, skill.title);
     });
   } catch (err) {
     await deleteObjectsQuietly(stored);
@@ -166,7 +187,6 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
     throw err;
   }
 
-  await notifyReviewers(viewer, mod.meta.title, skill.title);
   return {
     id,
     status: "submitted",
@@ -182,23 +202,20 @@ function liveConflict(status: string): ApiError {
     : new ApiError(409, "A sign-off for this skill is already waiting for review. You can send new evidence if it is returned.");
 }
 
-/** Tells the learner's organization's managers that something waits in their queue (best effort). */
-async function notifyReviewers(viewer: Viewer, moduleTitle: string, skillTitle: string): Promise<void> {
+/** Tells the learner's organization's managers that something waits in their queue (queued in `tx`). */
+async function notifyReviewers(tx: Tx, viewer: Viewer, signOffId: string, moduleTitle: string, skillTitle: string): Promise<void> {
   if (!viewer.organizationId) return;
-  try {
-    const managers = await db
-      .select({ email: user.email })
-      .from(user)
-      .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
-    for (const m of managers.filter((x) => x.email !== viewer.email)) {
-      await sendMail({
-        to: m.email,
-        subject: `Sign-off to review: ${viewer.name}`,
-        text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
-        kind: "signoff-submitted",
-      });
-    }
-  } catch (err) {
-    console.error("[sign-offs] could not mail the reviewers", err);
+  const managers = await tx
+    .select({ email: user.email })
+    .from(user)
+    .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
+  for (const m of managers.filter((x) => x.email !== viewer.email)) {
+    await sendMail({
+      to: m.email,
+      subject: `Sign-off to review: ${viewer.name}`,
+      text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
+      kind: "signoff-submitted",
+      key: `signoff-submitted:${signOffId}:${m.email}`,
+    }, tx);
   }
 }

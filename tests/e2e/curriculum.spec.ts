@@ -1,14 +1,22 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
 import { signInAs } from "./helpers";
+import { backdateOpens, throwAwayLearner } from "./reading";
 
-test("a learner opens a lesson, marks it complete and sees the module progress change", async ({ page }) => {
-  await signInAs(page, "odette@quillmoor.example");
+test("a learner opens a lesson, marks it complete after the reading time and sees the module progress change", async ({ page }) => {
+  const email = await throwAwayLearner();
+  await signInAs(page, email);
   await page.goto("/modules/freeze-protection");
   await expect(page.getByTestId("module-lesson-count")).toHaveText(/0 of 4 done/);
   await page.getByRole("link", { name: "Where homes freeze" }).first().click();
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
   await expect(page.getByTestId("module-progress")).toHaveText(/0 of 4/);
+  // right after opening: refused, with the reading time still to go
+  await page.getByRole("button", { name: "Mark this lesson complete" }).click();
+  await expect(page.getByTestId("lesson-progress").getByRole("alert")).toContainText("Keep reading");
+  await expect(page.getByTestId("module-progress")).toHaveText(/0 of 4/);
+  // the server's own first-open stamp moved back, as if the reading time had passed
+  await backdateOpens(email);
   await page.getByRole("button", { name: "Mark this lesson complete" }).click();
   await expect(page.getByText("✓ Lesson complete")).toBeVisible();
   await expect(page.getByTestId("module-progress")).toHaveText(/1 of 4/);

@@ -10,6 +10,7 @@ import { db, pool } from "@/db/client";
 import { certificate, quizAttempt, signOff, user } from "@/db/schema";
 import { APP, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { createPerson, createTestOrganization } from "../helpers/admin-people";
+import { readAndComplete } from "../helpers/progress";
 
 // the tests' own organization: nobody is added to the demo organizations
 let org: { id: string; name: string };
@@ -106,8 +107,8 @@ describe("download my records", () => {
     const other = await createPerson({ tag: "rec-other", organizationId: org.id });
     const mine = await signIn(me.email, me.password);
     const theirs = await signIn(other.email, other.password);
-    expect((await postJson(mine, "/api/progress", { module: "freeze-protection", lesson: "where-homes-freeze" })).status).toBe(200);
-    expect((await postJson(theirs, "/api/progress", { module: "freeze-protection", lesson: "where-homes-freeze" })).status).toBe(200);
+    await readAndComplete(mine, me.id, "freeze-protection", ["where-homes-freeze"]);
+    await readAndComplete(theirs, other.id, "freeze-protection", ["where-homes-freeze"]);
     // attempts written as the quiz engine stores them
     const myAttempt = randomUUID();
     const theirAttempt = randomUUID();
@@ -150,6 +151,8 @@ describe("download my records", () => {
     const body = await res.json();
     expect(body.person).toMatchObject({ id: me.id, email: me.email, organization: org.name, team: null });
     expect(body.lessons).toEqual([expect.objectContaining({ module: "freeze-protection", lesson: "where-homes-freeze" })]);
+    // the reading time behind it: the server's first-open stamp is part of the record
+    expect(body.lessons[0].firstOpenedAt).toBeTruthy();
     expect(body.attempts.map((a: { id: string }) => a.id)).toEqual([myAttempt]);
     expect(body.attempts[0]).toMatchObject({ score: 90, passed: true, passMark: 80 });
     expect(body.notAvailable).toEqual([]);

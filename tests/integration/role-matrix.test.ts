@@ -1,12 +1,20 @@
 // Every route × every role (and anonymous) gets the expected status. A page or route handler that
 // is not listed in lib/access/routes.ts fails the first test.
+import { randomUUID } from "node:crypto";
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
-import { beforeAll, describe, expect, it } from "vitest";
+import { and, eq } from "drizzle-orm";
+import { PDFDocument } from "pdf-lib";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db, pool } from "@/db/client";
+import { assignment, certificate, signOffEvidence } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
 import { ROUTES, type RouteEntry } from "@/lib/access/routes";
 import { roleSatisfies, type Role } from "@/lib/access/rules";
-import { anonymous, signIn, type Client } from "../helpers/http";
+import { anonymous, freshIp, postJson, signIn, type Client } from "../helpers/http";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { readAndComplete } from "../helpers/progress";
+import { answersFor, catalog } from "../helpers/quiz";
 
 function discoverRoutes(dir: string, prefix = ""): string[] {
   const out: string[] = [];
@@ -62,5 +70,94 @@ describe("role matrix", () => {
         if (res.status === 307) expect(res.headers.get("location")).toContain("/sign-in");
       });
     }
+  }
+});
+
+/**
+ * Every by-id route again, now with real ids that belong to *another* organization (a contractor
+ * the test creates: its learner's graded attempt, certificate, sign-off with PDF evidence, its
+ * manager's checkout and assignment). Learners, sales staff and managers of the demo contractor
+ * must get 403 or 404 and never a byte of that organization's data.
+ */
+describe("role matrix across organizations", () => {
+  const foreign = { orgId: "", learnerId: "", learnerEmail: "", learnerName: "", attemptId: "", certificateId: 0, serial: "", signOffId: "", evidenceId: "", checkoutId: "", assignmentId: 0 };
+
+  beforeAll(async () => {
+    const org = await createOrganization("Cross-Org Sprinkler Co");
+    foreign.orgId = org.id;
+    const [learner] = await createPeople(1, { organizationId: org.id, teamId: org.teamId, tag: "xorg-learner" });
+    const [manager] = await createPeople(1, { organizationId: org.id, role: "manager", tag: "xorg-manager" });
+    Object.assign(foreign, { learnerId: learner!.id, learnerEmail: learner!.email, learnerName: learner!.name });
+    const lc = await signIn(learner!.email, TEST_PASSWORD, freshIp());
+    const mc = await signIn(manager!.email, TEST_PASSWORD, freshIp());
+
+    const MODULE = "talking-with-homebuyers";
+    const mod = catalog.modules.find((m) => m.slug === MODULE)!;
+    await readAndComplete(lc, learner!.id, MODULE, mod.lessons.map((l) => l.slug));
+    const a = await postJson(lc, "/api/quiz/attempts", { module: MODULE });
+    foreign.attemptId = a.json.id as string;
+    expect((await postJson(lc, `/api/quiz/attempts/${foreign.attemptId}/submit`, { answers: await answersFor(foreign.attemptId) })).json.passed).toBe(true);
+    const [cert] = await db.select().from(certificate).where(and(eq(certificate.userId, learner!.id), eq(certificate.kind, "module")));
+    foreign.certificateId = cert!.id;
+    foreign.serial = cert!.serial;
+
+    const doc = await PDFDocument.create();
+    doc.addPage([200, 200]);
+    const form = new FormData();
+    form.set("module", "pipe-and-joining");
+    form.set("skill", "pj-support-and-restrain");
+    form.append("files", new Blob([Buffer.from(await doc.save())], { type: "application/pdf" }), "record.pdf");
+    const so = await lc.fetch("/api/sign-offs", { method: "POST", body: form });
+    expect(so.status).toBe(201);
+    foreign.signOffId = ((await so.json()) as { id: string }).id;
+    foreign.evidenceId = (await db.select().from(signOffEvidence).where(eq(signOffEvidence.signOffId, foreign.signOffId)))[0]!.id;
+
+    const co = await postJson(mc, "/api/billing/checkout", { seats: 1, idempotencyKey: randomUUID() });
+    expect(co.status, co.text).toBe(201);
+    foreign.checkoutId = co.json.checkoutId as string;
+    const due = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
+    const as = await postJson(mc, "/api/team/assignments", { kind: "module", slug: MODULE, userIds: [learner!.id], dueAt: due });
+    expect(as.status, as.text).toBeLessThan(300);
+    foreign.assignmentId = (await db.select().from(assignment).where(eq(assignment.organizationId, org.id)))[0]!.id;
+  }, 120_000);
+  afterAll(() => pool.end());
+
+  const requests = () => [
+    { method: "GET", path: `/api/quiz/attempts/${foreign.attemptId}` },
+    { method: "PUT", path: `/api/quiz/attempts/${foreign.attemptId}/answers`, body: { answers: [] } },
+    { method: "POST", path: `/api/quiz/attempts/${foreign.attemptId}/submit`, body: {} },
+    { method: "GET", path: `/api/quiz/attempts?userId=${foreign.learnerId}` },
+    { method: "GET", path: `/api/progress?userId=${foreign.learnerId}&module=talking-with-homebuyers` },
+    { method: "GET", path: `/api/certificates/${foreign.certificateId}/pdf` },
+    { method: "POST", path: `/api/certificates/${foreign.certificateId}/revoke`, body: { reason: "cross-organization probe" } },
+    { method: "POST", path: `/api/sign-offs/${foreign.signOffId}/review`, body: { decision: "approve", status: "approved", comment: "looks fine" } },
+    { method: "GET", path: `/api/sign-offs/${foreign.signOffId}/evidence/${foreign.evidenceId}` },
+    { method: "GET", path: `/api/sign-offs/${foreign.signOffId}/evidence/${foreign.evidenceId}?thumb=1` },
+    { method: "GET", path: `/api/billing/checkout/${foreign.checkoutId}` },
+    { method: "DELETE", path: `/api/team/assignments/${foreign.assignmentId}` },
+    { method: "GET", path: `/team/people/${foreign.learnerId}` },
+  ];
+
+  for (const who of ["learner", "sales", "manager"] as const) {
+    it(`${who} of another organization gets 403/404 and none of its data`, async () => {
+      const client = clients[who]!;
+      for (const r of requests()) {
+        const init: RequestInit = { method: r.method };
+        if (r.body) {
+          init.headers = { "content-type": "application/json" };
+          init.body = JSON.stringify(r.body);
+        }
+        const res = await client.fetch(r.path, init);
+        const text = await res.text();
+        expect([403, 404], `${r.method} ${r.path} as ${who}: ${res.status} ${text.slice(0, 200)}`).toContain(res.status);
+        for (const secret of [foreign.learnerEmail, foreign.learnerName, foreign.serial, foreign.orgId]) {
+          expect(text.includes(secret), `${r.method} ${r.path} as ${who} leaks ${secret}`).toBe(false);
+        }
+      }
+      // nothing changed: the attempt is still graded once, the certificate valid, the sign-off waiting, the assignment there
+      const [cert] = await db.select({ revokedAt: certificate.revokedAt }).from(certificate).where(eq(certificate.id, foreign.certificateId));
+      expect(cert!.revokedAt).toBeNull();
+      expect(await db.select().from(assignment).where(eq(assignment.id, foreign.assignmentId))).toHaveLength(1);
+    });
   }
 });

@@ -1,22 +1,28 @@
 import { z } from "zod";
 import { json, readJson, route } from "@/lib/api";
-import { assertCanReadPerson, markLessonComplete, progressByModule } from "@/lib/progress";
+import { assertCanReadPerson, markLessonComplete, progressByModule, readingTimes } from "@/lib/progress";
 import { slug } from "@/lib/content/schema";
 
-/** GET /api/progress?module=…[&userId=…] → completed lessons of a module (own, or a managed person's). */
+/**
+ * GET /api/progress?module=…[&userId=…] → completed lessons of a module (own, or a managed person's)
+ * and the reading time the server recorded for each opened lesson.
+ */
 export const GET = route("signed-in", async ({ req, viewer }) => {
   const url = new URL(req.url);
   const personId = url.searchParams.get("userId") ?? viewer.id;
   await assertCanReadPerson(viewer, personId);
   const all = await progressByModule(personId);
   const moduleSlug = url.searchParams.get("module");
-  if (moduleSlug) return json({ module: moduleSlug, completed: all.get(moduleSlug)?.completed ?? [] });
+  if (moduleSlug) return json({ module: moduleSlug, completed: all.get(moduleSlug)?.completed ?? [], readingTimes: await readingTimes(personId, moduleSlug) });
   return json({ modules: [...all.values()].map((p) => ({ module: p.module, completed: p.completed })) });
 });
 
 const body = z.object({ module: slug, lesson: slug });
 
-/** POST /api/progress { module, lesson } → marks the lesson complete for the viewer (idempotent). */
+/**
+ * POST /api/progress { module, lesson } → marks the lesson complete for the viewer (idempotent), once
+ * the server-recorded reading time meets the seat-time rule (lib/progress); too early → 409.
+ */
 export const POST = route("signed-in", async ({ req, viewer }) => {
   const input = await readJson(req, body);
   const completed = await markLessonComplete(viewer.id, input.module, input.lesson);

@@ -4,14 +4,13 @@ import { notFound } from "next/navigation";
 import { lessons as registry } from "@/content/.generated/registry";
 import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
-import { findModule, loadCatalog } from "@/lib/content/load";
+import { requireViewer } from "@/lib/access";
+import { findModule } from "@/lib/content/load";
+import { recordLessonOpen } from "@/lib/progress";
 
-// Statically generated; proxy.ts checks the session before serving it.
-export const dynamicParams = false;
-
-export function generateStaticParams() {
-  return loadCatalog().modules.flatMap((m) => m.lessons.map((l) => ({ module: m.slug, lesson: l.slug })));
-}
+// Rendered per request (never a shared-cache copy): the session is checked here (proxy.ts checks it
+// too) and the server stamps the person's first open, from which the seat-time rule counts.
+export const dynamic = "force-dynamic";
 
 type Params = { params: Promise<{ module: string; lesson: string }> };
 
@@ -23,10 +22,12 @@ export async function generateMetadata({ params }: Params): Promise<Metadata> {
 
 export default async function LessonPage({ params }: Params) {
   const { module: moduleSlug, lesson: lessonSlug } = await params;
+  const viewer = await requireViewer("signed-in", `/modules/${moduleSlug}/${lessonSlug}`);
   const mod = findModule(moduleSlug);
   const index = mod?.lessons.findIndex((l) => l.slug === lessonSlug) ?? -1;
   const load = registry[`${moduleSlug}/${lessonSlug}`];
   if (!mod || index < 0 || !load) notFound();
+  await recordLessonOpen(viewer.id, mod.slug, lessonSlug);
   const lesson = mod.lessons[index]!;
   const prev = mod.lessons[index - 1];
   const next = mod.lessons[index + 1];
@@ -67,7 +68,7 @@ export default async function LessonPage({ params }: Params) {
         </ul>
         <p className="mt-2 text-muted">Updated {lesson.meta.updated}.</p>
       </section>
-      <MarkComplete module={mod.slug} lesson={lesson.slug} total={mod.lessons.length} />
+      <MarkComplete module={mod.slug} lesson={lesson.slug} total={mod.lessons.length} minutes={lesson.meta.minutes} />
       <nav aria-label="Lessons" className="flex flex-wrap justify-between gap-4">
         {prev ? <Link href={`/modules/${mod.slug}/${prev.slug}`}>← {prev.meta.title}</Link> : <span />}
         {next ? (

@@ -5,6 +5,7 @@ import { getObject, isStorageDown } from "@/lib/storage";
 /**
  * GET /api/sign-offs/:id/evidence/:evidenceId[?thumb=1][&download=1] → the stored file, streamed from
  * the object store after checking access (the learner, their organization's managers, admins).
+ * PDFs always come as attachments.
  */
 export const GET = route<{ id: string; evidenceId: string }>("signed-in", async ({ req, viewer, params }) => {
   const url = new URL(req.url);
@@ -17,7 +18,9 @@ export const GET = route<{ id: string; evidenceId: string }>("signed-in", async 
     throw err;
   }
   if (!obj) throw new ApiError(404, "This file is missing from storage.");
-  const disposition = url.searchParams.get("download") === "1" ? "attachment" : "inline";
+  // A PDF is never shown inline on Riser's origin (a PDF viewer runs its scripts and links there):
+  // always a download. Photos (re-encoded by sharp, metadata stripped) may show inline.
+  const disposition = url.searchParams.get("download") === "1" || file.contentType === "application/pdf" ? "attachment" : "inline";
   const headers: Record<string, string> = {
     "Content-Type": file.contentType,
     "Content-Disposition": `${disposition}; filename="${file.name.replace(/[^\x20-\x7e]/g, "_")}"; filename*=UTF-8''${encodeURIComponent(file.name)}`,
