@@ -24,7 +24,7 @@ try {
   tsx("db/migrate.ts", [], env);
   tsx("db/seed.ts", [], env);
   buildApp({ distDir: cfg.env.NEXT_DIST_DIR });
-  server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(cfg.appPort)], { cwd: root, env, stdio: "ignore" });
+  server = spawn(process.execPath, [path.join(root, "scripts/serve.mjs"), "-H", "127.0.0.1", "-p", String(cfg.appPort)], { cwd: root, env, stdio: "ignore" });
   for (let i = 0; i < 300; i++) {
     const up = await fetch(`${cfg.env.APP_URL}/api/health`).then((r) => r.ok).catch(() => false);
     if (up) break;

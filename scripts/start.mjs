@@ -18,7 +18,7 @@ tsx("db/migrate.ts", [], env);
 tsx("db/seed.ts", [], env);
 buildApp();
 
-const server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(cfg.appPort)], {
+const server = spawn(process.execPath, [path.join(root, "scripts/serve.mjs"), "-H", "127.0.0.1", "-p", String(cfg.appPort)], {
   cwd: root,
   env: { ...process.env, ...env },
   stdio: "inherit",

@@ -77,7 +77,7 @@ try {
     tsx("db/seed.ts", [], env);
     step("build");
     buildApp({ distDir: cfg.env.NEXT_DIST_DIR });
-    server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(cfg.appPort)], {
+    server = spawn(process.execPath, [path.join(root, "scripts/serve.mjs"), "-H", "127.0.0.1", "-p", String(cfg.appPort)], {
       cwd: root,
       env,
       stdio: ["ignore", "inherit", "inherit"],

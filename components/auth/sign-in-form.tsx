@@ -29,7 +29,8 @@ export function SignInForm() {
     if (error) {
       if (error.code === "BANNED_USER") setError("This account is banned from Riser. If you think this is a mistake, ask your training manager.");
       else if (error.status === 403) setError("Confirm your e-mail address first: open the link we sent you.");
-      else if (error.status === 429) setError("Too many sign-in attempts. Wait a minute and try again.");
+      // a paused account (too many wrong passwords) explains itself; otherwise this address is rate limited
+      else if (error.status === 429) setError(error.code === "ACCOUNT_SIGN_IN_PAUSED" && error.message ? error.message : "Too many sign-in attempts. Wait a minute and try again.");
       else if (error.status === 401) setError("That e-mail and password do not match an account.");
       else setError(error.message ?? "Sign-in failed. Try again.");
       return;

@@ -2,6 +2,7 @@ import "server-only";
 import { ZodError, type ZodType } from "zod";
 import { AccessError, check, getRequestViewer, type Rule, type Viewer } from "@/lib/access";
 import { isDatabaseDown } from "@/lib/db-errors";
+import { clientIpOf } from "./client-ip";
 
 /** An error whose message is safe to show: becomes `{ error }` with its status. */
 export class ApiError extends Error {
@@ -76,7 +77,11 @@ export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
   };
 }
 
-/** The client address as the proxy in front reports it (for audit rows and rate limits). */
+/**
+ * The client address for audit rows and rate limits: the connected peer (appended by
+ * scripts/serve.mjs), or with TRUSTED_PROXY_HOPS set, the address the first trusted proxy saw.
+ * A forged X-Forwarded-For never decides it (lib/api/client-ip.ts).
+ */
 export function clientIp(req: Request): string {
-  return req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+  return clientIpOf(req.headers);
 }

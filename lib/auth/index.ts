@@ -1,7 +1,7 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { betterAuth } from "better-auth";
-import { APIError } from "better-auth/api";
+import { APIError, createAuthMiddleware } from "better-auth/api";
 import { drizzleAdapter } from "@better-auth/drizzle-adapter";
 import { admin } from "better-auth/plugins";
 import { nextCookies } from "better-auth/next-js";
@@ -9,7 +9,14 @@ import { db } from "@/db/client";
 import * as schema from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
 import { signupContext } from "./signup-context";
+import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
+
+const signInEmailOf = (body: unknown) => {
+  const email = (body as { email?: unknown } | undefined)?.email;
+  return typeof email === "string" && email.length <= 255 ? email.trim().toLowerCase() : null;
+};
 
 export const auth = betterAuth({
   appName: "Riser",
@@ -98,8 +105,28 @@ export const auth = betterAuth({
   advanced: {
     useSecureCookies: env.INSECURE_COOKIES !== "1",
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
-    ipAddress: { ipAddressHeaders: ["x-forwarded-for"] },
+    // proxy.ts sets this header from the real peer and TRUSTED_PROXY_HOPS (lib/api/client-ip.ts),
+    // replacing any client value: a forged X-Forwarded-For never reaches the rate limit or sessions.
+    ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     database: { generateId: () => crypto.randomUUID() },
+  },
+  hooks: {
+    // Per-account throttle (lib/auth/throttle.ts): a paused account is refused before its password
+    // is checked, whatever address the attempt comes from; every wrong password is counted.
+    before: createAuthMiddleware(async (ctx) => {
+      if (ctx.path !== "/sign-in/email") return;
+      const email = signInEmailOf(ctx.body);
+      if (!email) return;
+      const lock = await signInLock(email);
+      if (lock.locked) throw new APIError("TOO_MANY_REQUESTS", { message: lockedMessage(lock.retryAfterSeconds), code: "ACCOUNT_SIGN_IN_PAUSED" });
+    }),
+    after: createAuthMiddleware(async (ctx) => {
+      if (ctx.path !== "/sign-in/email") return;
+      const returned = ctx.context.returned;
+      if (!(returned instanceof APIError) || returned.statusCode !== 401) return;
+      const email = signInEmailOf(ctx.body);
+      if (email) await recordFailedSignIn(email, ctx.headers?.get(CLIENT_IP_HEADER) ?? "unknown");
+    }),
   },
   databaseHooks: {
     user: {

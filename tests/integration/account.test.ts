@@ -8,7 +8,7 @@ import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, quizAttempt, signOff, user } from "@/db/schema";
-import { APP, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
+import { APP, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { createPerson, createTestOrganization } from "../helpers/admin-people";
 
 // the tests' own organization: nobody is added to the demo organizations
@@ -19,9 +19,9 @@ beforeAll(async () => {
 afterAll(() => pool.end());
 
 async function trySignIn(email: string, password: string) {
-  return fetch(`${APP}/api/auth/sign-in/email`, {
+  return fetchFrom(freshIp(), `${APP}/api/auth/sign-in/email`, {
     method: "POST",
-    headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": freshIp() },
+    headers: { "content-type": "application/json", origin: APP },
     body: JSON.stringify({ email, password }),
   });
 }
@@ -90,7 +90,7 @@ describe("name and e-mail", () => {
     expect(before?.email).toBe(p.email);
 
     const link = linkIn(mail.text);
-    const open = await fetch(link, { redirect: "manual", headers: { cookie: client.cookie, "x-forwarded-for": client.ip } });
+    const open = await fetchFrom(client.ip, link, { redirect: "manual", headers: { cookie: client.cookie } });
     expect([302, 303, 307]).toContain(open.status);
     expect(open.headers.get("location")).toContain("/account?email=changed");
     const [after] = await db.select({ email: user.email, verified: user.emailVerified }).from(user).where(eq(user.id, p.id));

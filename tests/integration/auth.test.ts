@@ -4,7 +4,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { user } from "@/db/schema";
-import { APP, anonymous, cookiesOf, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail } from "../helpers/http";
+import { APP, anonymous, cookiesOf, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail } from "../helpers/http";
 
 const PASSWORD = "correct-horse-42";
 afterAll(() => pool.end());
@@ -20,9 +20,9 @@ describe("sign-up, verification, sign-in, sign-out", () => {
     expect(res.status).toBe(201);
 
     // Not verified yet: sign-in refused with 403.
-    const early = await fetch(`${APP}/api/auth/sign-in/email`, {
+    const early = await fetchFrom(freshIp(), `${APP}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": freshIp() },
+      headers: { "content-type": "application/json", origin: APP },
       body: JSON.stringify({ email, password: PASSWORD }),
     });
     expect(early.status).toBe(403);
@@ -30,7 +30,7 @@ describe("sign-up, verification, sign-in, sign-out", () => {
     const mail = await waitForMail(email, /confirm/i);
     const link = linkIn(mail.text);
     expect(link.startsWith(APP)).toBe(true);
-    const verify = await fetch(link, { redirect: "manual", headers: { "x-forwarded-for": freshIp() } });
+    const verify = await fetchFrom(freshIp(), link, { redirect: "manual" });
     expect([302, 303, 307]).toContain(verify.status);
     expect(verify.headers.get("location")).toContain("/sign-in?verified=1");
 
@@ -60,9 +60,9 @@ describe("sign-up, verification, sign-in, sign-out", () => {
     const ip = freshIp();
     const statuses: number[] = [];
     for (let i = 0; i < 7; i++) {
-      const r = await fetch(`${APP}/api/auth/sign-in/email`, {
+      const r = await fetchFrom(ip, `${APP}/api/auth/sign-in/email`, {
         method: "POST",
-        headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": ip },
+        headers: { "content-type": "application/json", origin: APP },
         body: JSON.stringify({ email: "nobody@test.example", password: "wrong-password-1" }),
       });
       statuses.push(r.status);
