@@ -13,6 +13,7 @@ export const JOBS: Job[] = [
   { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
   { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
   { name: "assignment-reminders", run: async () => (await import("@/lib/team/reminders")).sendDueReminders() },
+  { name: "unverified-accounts-expire", run: async () => (await import("@/lib/auth/signup")).expireUnverifiedAccounts() },
   { name: "manager-digest", run: async () => (await import("@/lib/team/reminders")).sendManagerDigests() },
 ];
 

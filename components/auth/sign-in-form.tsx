@@ -9,13 +9,9 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { signInSchema } from "@/lib/auth/schemas";
+import { safeNext } from "@/lib/safe-next";
 
 type Values = z.infer<typeof signInSchema>;
-
-/** Only same-site paths are followed after sign-in. */
-function safeNext(next: string | null): string {
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/learn";
-}
 
 export function SignInForm() {
   const router = useRouter();
@@ -35,7 +31,8 @@ export function SignInForm() {
       else setError(error.message ?? "Sign-in failed. Try again.");
       return;
     }
-    router.push(safeNext(params.get("next")));
+    // only same-origin path and query are followed (lib/safe-next.ts)
+    router.push(safeNext(params.get("next"), window.location.origin));
     router.refresh();
   }
 

@@ -11,6 +11,7 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
 import { signupContext } from "./signup-context";
+import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 
 const signInEmailOf = (body: unknown) => {
@@ -52,6 +53,8 @@ export const auth = betterAuth({
   emailVerification: {
     sendOnSignUp: true,
     autoSignInAfterVerification: false,
+    // a confirmation from another browser than the one that signed up clears the password (lib/auth/signup.ts)
+    afterEmailVerification: async (verified, request) => afterEmailVerified(verified, request),
     expiresIn: 60 * 60 * 24,
     sendVerificationEmail: async ({ user, url }) => {
       // An e-mail change (account settings) sends this to the new address while the stored one is still the old.
@@ -121,6 +124,12 @@ export const auth = betterAuth({
       if (lock.locked) throw new APIError("TOO_MANY_REQUESTS", { message: lockedMessage(lock.retryAfterSeconds), code: "ACCOUNT_SIGN_IN_PAUSED" });
     }),
     after: createAuthMiddleware(async (ctx) => {
+      if (ctx.path === "/verify-email") {
+        // the mailbox's owner confirmed someone else's sign-up: they choose the password now
+        const url = takeChoosePasswordUrl(typeof ctx.query?.token === "string" ? ctx.query.token : undefined);
+        if (url) throw ctx.redirect(url);
+        return;
+      }
       if (ctx.path !== "/sign-in/email") return;
       const returned = ctx.context.returned;
       if (!(returned instanceof APIError) || returned.statusCode !== 401) return;
