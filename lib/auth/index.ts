@@ -11,6 +11,7 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
 import { signupContext } from "./signup-context";
+import { assertEmailChangeAllowed, assertFieldLengths } from "./guards";
 import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 
@@ -117,6 +118,8 @@ export const auth = betterAuth({
     // Per-account throttle (lib/auth/throttle.ts): a paused account is refused before its password
     // is checked, whatever address the attempt comes from; every wrong password is counted.
     before: createAuthMiddleware(async (ctx) => {
+      assertFieldLengths(ctx.body);
+      if (ctx.path === "/change-email") return assertEmailChangeAllowed(ctx as unknown as Parameters<typeof assertEmailChangeAllowed>[0]);
       if (ctx.path !== "/sign-in/email") return;
       const email = signInEmailOf(ctx.body);
       if (!email) return;

@@ -8,7 +8,7 @@ import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, quizAttempt, signOff, user } from "@/db/schema";
-import { APP, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
+import { anonymous as anonymousClient, APP, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { createPerson, createTestOrganization } from "../helpers/admin-people";
 
 // the tests' own organization: nobody is added to the demo organizations
@@ -76,12 +76,38 @@ describe("name and e-mail", () => {
     expect((await postJson(client, "/api/auth/update-user", { email: uniqueEmail("sneaky") })).status).toBe(400);
   });
 
+  it("answers an over-long name or address with 400 and a message, not a database error", async () => {
+    const p = await createPerson({ tag: "long", organizationId: org.id });
+    const client = await signIn(p.email, p.password);
+    const before = (await sessionOf(client)).user.name;
+    const longName = await postJson(client, "/api/auth/update-user", { name: "N".repeat(201) });
+    expect(longName.status).toBe(400);
+    expect(longName.json.message).toMatch(/at most 200 characters/);
+    expect((await sessionOf(client)).user.name).toBe(before);
+    const longMail = await postJson(client, "/api/auth/change-email", { newEmail: `${"m".repeat(250)}@test.example`, password: p.password });
+    expect(longMail.status).toBe(400);
+    expect(longMail.json.message).toMatch(/at most 255 characters/);
+    const longSignIn = await postJson(anonymousClient(), "/api/auth/sign-in/email", { email: `${"s".repeat(260)}@test.example`, password: "whatever-it-is" });
+    expect(longSignIn.status).toBe(400);
+  });
+
   it("changes the e-mail only after the new address is confirmed, and tells the old address", async () => {
     const p = await createPerson({ tag: "email", organizationId: org.id });
     const client = await signIn(p.email, p.password);
     const next = uniqueEmail("email-new");
-    const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" });
+    const other = await signIn(p.email, p.password);
+    // the current password is required, and a wrong one changes nothing
+    const missing = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" });
+    expect(missing.status).toBe(400);
+    expect(missing.json.message).toMatch(/current password/i);
+    const wrong = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed", password: "not-my-password-1" });
+    expect(wrong.status).toBe(400);
+    expect(await sessionOf(other)).not.toBeNull();
+    const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed", password: p.password });
     expect(res.status).toBe(200);
+    // the account's other sessions end; this one stays
+    expect(await sessionOf(other)).toBeNull();
+    expect((await sessionOf(client))?.user.email).toBe(p.email);
     const mail = await waitForMail(next, /confirm your new e-mail/i);
     const notice = await waitForMail(p.email, /about to change/i);
     expect(notice.text).toContain(next);
