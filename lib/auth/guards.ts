@@ -3,6 +3,7 @@ import { and, eq, ne } from "drizzle-orm";
 import { APIError, getSessionFromCtx } from "better-auth/api";
 import { db } from "@/db/client";
 import { session } from "@/db/schema";
+import { passwordProblem } from "./password-policy";
 
 /**
  * Checks better-auth's own endpoints do not make (run from the before hook in lib/auth/index.ts):
@@ -46,4 +47,13 @@ export async function assertEmailChangeAllowed(ctx: HookCtx): Promise<void> {
   if (!ok) throw new APIError("BAD_REQUEST", { message: "The current password is not right.", code: "INVALID_PASSWORD" });
   // whoever else holds a session for this account is signed out before the address can move
   await db.delete(session).where(and(eq(session.userId, current.user.id), ne(session.token, current.session.token)));
+}
+
+/** New passwords (sign-up, reset, change) are checked against the blocklist (lib/auth/password-policy.ts). */
+export function assertPasswordAllowed(path: string, body: unknown): void {
+  const b = (body ?? {}) as { password?: unknown; newPassword?: unknown; email?: unknown };
+  const candidate = path === "/sign-up/email" ? b.password : path === "/reset-password" || path === "/change-password" ? b.newPassword : undefined;
+  if (typeof candidate !== "string") return;
+  const problem = passwordProblem(candidate, { email: typeof b.email === "string" ? b.email : null });
+  if (problem) throw new APIError("BAD_REQUEST", { message: problem, code: "PASSWORD_NOT_ALLOWED" });
 }

@@ -11,7 +11,8 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
 import { signupContext } from "./signup-context";
-import { assertEmailChangeAllowed, assertFieldLengths } from "./guards";
+import { assertEmailChangeAllowed, assertFieldLengths, assertPasswordAllowed } from "./guards";
+import { MIN_PASSWORD_LENGTH } from "./password-policy";
 import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 
@@ -38,7 +39,7 @@ export const auth = betterAuth({
   emailAndPassword: {
     enabled: true,
     requireEmailVerification: true,
-    minPasswordLength: 10,
+    minPasswordLength: MIN_PASSWORD_LENGTH,
     maxPasswordLength: 128,
     revokeSessionsOnPasswordReset: true,
     resetPasswordTokenExpiresIn: 60 * 60,
@@ -119,6 +120,7 @@ export const auth = betterAuth({
     // is checked, whatever address the attempt comes from; every wrong password is counted.
     before: createAuthMiddleware(async (ctx) => {
       assertFieldLengths(ctx.body);
+      assertPasswordAllowed(ctx.path, ctx.body);
       if (ctx.path === "/change-email") return assertEmailChangeAllowed(ctx as unknown as Parameters<typeof assertEmailChangeAllowed>[0]);
       if (ctx.path !== "/sign-in/email") return;
       const email = signInEmailOf(ctx.body);

@@ -15,10 +15,20 @@ export const freshIp = () => `127.${octet()}.${octet()}.${octet()}`;
 
 const agents = new Map<string, Agent>();
 /** fetch whose connections leave from the given loopback address. */
-export function fetchFrom(ip: string, url: string, init: RequestInit = {}): Promise<Response> {
+export async function fetchFrom(ip: string, url: string, init: RequestInit = {}): Promise<Response> {
   let agent = agents.get(ip);
   if (!agent) agents.set(ip, (agent = new Agent({ localAddress: ip })));
-  return undiciFetch(url, { ...(init as object), dispatcher: agent }) as unknown as Promise<Response>;
+  let { body, headers } = init;
+  // Node's built-in FormData and Blob are not the undici package's classes: encode them with Node's own
+  // Request first (same bytes and multipart boundary a browser would send).
+  if (body instanceof FormData || body instanceof Blob || body instanceof URLSearchParams) {
+    const encoded = new Request(url, { method: init.method ?? "POST", body });
+    const merged = new Headers(headers);
+    if (!merged.has("content-type") && encoded.headers.get("content-type")) merged.set("content-type", encoded.headers.get("content-type")!);
+    body = Buffer.from(await encoded.arrayBuffer());
+    headers = Object.fromEntries(merged.entries());
+  }
+  return (await undiciFetch(url, { ...(init as object), body, headers, dispatcher: agent } as Parameters<typeof undiciFetch>[1])) as unknown as Response;
 }
 
 export type Client = { cookie: string; ip: string; fetch: (path: string, init?: RequestInit) => Promise<Response> };

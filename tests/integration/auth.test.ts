@@ -85,7 +85,7 @@ describe("bad input on sign-up", () => {
     expect(res.status).toBe(400);
     const fe = res.json.fieldErrors as Record<string, string[]>;
     expect(fe.email?.[0]).toMatch(/e-mail/i);
-    expect(fe.password?.[0]).toMatch(/10 characters/);
+    expect(fe.password?.[0]).toMatch(/15 characters/);
     expect(fe.organizationName?.[0]).toBeTruthy();
   });
 

@@ -145,6 +145,19 @@ describe("sign-up abuse", () => {
   });
 });
 
+describe("password rules at sign-up", () => {
+  it("refuses a password under 15 characters, and one on the common-password list, with a field error", async () => {
+    const short = await postJson(anonymous(), "/api/account/sign-up", { ...signUpBody(uniqueEmail("shortpw")), password: "fourteen-chars" });
+    expect(short.status).toBe(400);
+    expect((short.json.fieldErrors as Record<string, string[]>).password?.[0]).toMatch(/15 characters/);
+    const email = uniqueEmail("commonpw");
+    const common = await postJson(anonymous(), "/api/account/sign-up", { ...signUpBody(email), password: "qwerty123456789" });
+    expect(common.status).toBe(400);
+    expect((common.json.fieldErrors as Record<string, string[]>).password?.[0]).toMatch(/common or breached/);
+    expect(await db.select({ id: user.id }).from(user).where(eq(user.email, email))).toEqual([]);
+  });
+});
+
 describe("local-only mail", () => {
   it("the test instance (RISER_LOCAL=1 on loopback) has /dev/mail", async () => {
     expect((await anonymous().fetch("/dev/mail")).status).toBe(200);
