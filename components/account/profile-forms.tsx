@@ -60,7 +60,7 @@ export function EmailForm({ email }: { email: string }) {
       <FormError message={error} />
       <FormNotice message={notice} />
       <Field label="New e-mail address" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <Field label="Current password (to change the e-mail)" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
+      <Field label="Your password (to confirm the change)" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="self-start">
         {formState.isSubmitting ? "Sending…" : "Send the confirmation link"}
       </Button>
