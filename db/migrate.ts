@@ -1,4 +1,6 @@
-// Applies the committed migrations in db/migrations: `npm run db:migrate`.
+// Applies the committed migrations in db/migrations, then syncs the content catalog (modules,
+// lessons, paths, code cards, question versions) from content/: `npm run db:migrate`. Every instance
+// runs this at deploy and npm start / npm test run it at start; demo data is separate (db/seed.ts).
 import { drizzle } from "drizzle-orm/mysql2";
 import { migrate } from "drizzle-orm/mysql2/migrator";
 import mysql from "mysql2/promise";
@@ -14,4 +16,14 @@ try {
   console.log("[db] migrations applied");
 } finally {
   await connection.end();
+}
+
+// The catalog sync needs the app's environment (lib/env) and server modules: loaded only now.
+const { pool } = await import("@/db/client");
+try {
+  await import("@/lib/content/sync-hooks");
+  const { syncCatalog } = await import("@/lib/content/sync");
+  console.log(`[db] catalog synced: ${JSON.stringify(await syncCatalog())}`);
+} finally {
+  await pool.end();
 }

@@ -1,15 +1,24 @@
-// Demo data: `npm run db:seed` (skips when the database already holds organizations).
-// Syncs the content catalog first, every time.
+// Demo data: `npm run db:seed` (skips when the database already holds organizations). Local
+// profiles only: the demo people share one published password, so the seed refuses to run unless
+// RISER_LOCAL=1 on a loopback APP_URL (what scripts/ set). The content catalog is synced by
+// db/migrate.ts on every instance; a real instance gets its first admin from `npm run admin:create`.
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import { db, pool } from "@/db/client";
 import { account, organization, team, user } from "@/db/schema";
-import { syncCatalog } from "@/lib/content/sync";
+import { isLocalInstance } from "@/lib/env-local";
 import { seedCertificates } from "@/lib/certificates/seed";
 import { seedSignOffs } from "@/lib/signoffs/seed";
-import "@/lib/content/sync-hooks";
 import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "./demo";
 import { seedTeamDemo } from "./seed-team";
+
+if (!isLocalInstance({ RISER_LOCAL: process.env.RISER_LOCAL === "1" ? "1" : "0", APP_URL: process.env.APP_URL ?? "" })) {
+  console.error(
+    "[seed] Refused: demo data (people with a published password) loads only on a local profile (RISER_LOCAL=1 and a loopback APP_URL).\n" +
+      "  For a real instance: npm run db:migrate, then npm run admin:create -- --email you@company.com (README, \"Run Riser for real\").",
+  );
+  process.exit(1);
+}
 
 async function seedDemo() {
   const existing = await db.select({ id: organization.id }).from(organization).limit(1);
@@ -49,8 +58,6 @@ async function seedDemo() {
 }
 
 try {
-  const counts = await syncCatalog();
-  console.log(`[seed] catalog synced: ${JSON.stringify(counts)}`);
   await seedDemo();
   await seedCertificates();
   await seedSignOffs();

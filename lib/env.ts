@@ -3,6 +3,9 @@
  * a message naming the variable (the scripts in scripts/ set all of these for local use).
  */
 import { z } from "zod";
+import { DEFAULT_APP_URL, localOnlyProblems } from "./env-local";
+
+export { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "./env-local";
 
 /** An empty variable (`FOO=`) counts as not set. */
 const emptyAsUnset = <T extends z.ZodType>(inner: T) => z.preprocess((v) => (v === "" ? undefined : v), inner);
@@ -12,7 +15,15 @@ const schema = z.object({
   DATABASE_URL: z.string().regex(/^mysql:\/\//, "must be a mysql:// URL"),
   DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(20),
   BETTER_AUTH_SECRET: z.string().min(32, "must be at least 32 characters"),
-  APP_URL: z.string().url().default("http://127.0.0.1:3000"),
+  APP_URL: z.string().url().default(DEFAULT_APP_URL),
+  /**
+   * "1" only on a developer's machine or a test run (the scripts in scripts/ set it): allows the mail
+   * catcher and /dev/mail, insecure cookies, the payment fake over http and demo data. Refused
+   * unless APP_URL is a loopback address.
+   */
+  RISER_LOCAL: z.enum(["0", "1"]).default("0"),
+  /** How many proxies in front of the app append to X-Forwarded-For (0: clients connect directly). */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
   SMTP_URL: z.string().regex(/^smtps?:\/\//, "must be an smtp:// or smtps:// URL"),
   MAIL_FROM: z.string().default("Riser <no-reply@riser.invalid>"),
   /** HTTP address of the local mail catcher; set only for local use and tests (enables /dev/mail). */
@@ -20,6 +31,13 @@ const schema = z.object({
   /** sign-in attempts allowed per window (better-auth rate limit) */
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(5),
   AUTH_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),
+  /** failed sign-ins per account (from any address) that pause its sign-in until the window ends */
+  SIGN_IN_LOCK_FAILURES: z.coerce.number().int().min(3).max(100).default(10),
+  SIGN_IN_LOCK_WINDOW_S: z.coerce.number().int().min(60).default(900),
+  /** sign-ups allowed per client address per hour; each e-mail address gets at most 3 per hour */
+  SIGN_UP_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(5),
+  /** unverified accounts (and the trial organizations they created) are removed after this many hours */
+  UNVERIFIED_ACCOUNT_TTL_H: z.coerce.number().int().min(1).default(48),
   JOBS_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
   /** public certificate look-ups (page + JSON) allowed per client address per window */
   VERIFY_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(30),
@@ -52,6 +70,8 @@ const schema = z.object({
   STRIPE_API_PORT: emptyAsUnset(z.coerce.number().int().min(1).max(65535).optional()),
   STRIPE_API_PROTOCOL: emptyAsUnset(z.enum(["http", "https"]).optional()),
 }).superRefine((e, ctx) => {
+  // Local conveniences are impossible to switch on in a real deployment.
+  for (const issue of localOnlyProblems(e)) ctx.addIssue({ code: "custom", path: [issue.variable], message: issue.message });
   // A key pair comes whole; with neither, the SDK's own chain (e.g. an instance role) supplies one.
   if (Boolean(e.S3_ACCESS_KEY_ID) !== Boolean(e.S3_SECRET_ACCESS_KEY)) {
     const missing = e.S3_ACCESS_KEY_ID ? "S3_SECRET_ACCESS_KEY" : "S3_ACCESS_KEY_ID";

@@ -14,6 +14,7 @@ export const JOBS: Job[] = [
   { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
   { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
   { name: "assignment-reminders", run: async () => (await import("@/lib/team/reminders")).sendDueReminders() },
+  { name: "unverified-accounts-expire", run: async () => (await import("@/lib/auth/signup")).expireUnverifiedAccounts() },
   { name: "manager-digest", run: async () => (await import("@/lib/team/reminders")).sendManagerDigests() },
   // last, so that the messages the jobs above queued go out in the same run
   { name: "mail-outbox", run: async () => (await import("@/lib/mail/outbox")).deliverOutbox() },

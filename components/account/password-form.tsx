@@ -37,7 +37,7 @@ export function PasswordForm() {
       <FormError message={error} />
       <FormNotice message={notice} />
       <Field label="Current password" type="password" autoComplete="current-password" {...register("currentPassword")} error={formState.errors.currentPassword?.message} />
-      <Field label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("newPassword")} error={formState.errors.newPassword?.message} />
+      <Field label="New password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("newPassword")} error={formState.errors.newPassword?.message} />
       <Field label="New password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" className="size-5" {...register("signOutOthers")} />

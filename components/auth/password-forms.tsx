@@ -44,7 +44,7 @@ export function ResetPasswordForm({ token }: { token: string | null }) {
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <FormError message={error} />
-      <Field label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
+      <Field label="New password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("password")} error={formState.errors.password?.message} />
       <Field label="New password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>Change the password</Button>
     </form>

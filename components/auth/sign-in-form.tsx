@@ -10,13 +10,9 @@ import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { signInSchema } from "@/lib/auth/schemas";
 import { ResendConfirmation } from "./resend-confirmation";
+import { safeNext } from "@/lib/safe-next";
 
 type Values = z.infer<typeof signInSchema>;
-
-/** Only same-site paths are followed after sign-in. */
-function safeNext(next: string | null): string {
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/learn";
-}
 
 export function SignInForm() {
   const router = useRouter();
@@ -34,12 +30,14 @@ export function SignInForm() {
         setError("Confirm your e-mail address first: open the link we sent you.");
         setUnconfirmed(values.email);
       }
-      else if (error.status === 429) setError("Too many sign-in attempts. Wait a minute and try again.");
+      // a paused account (too many wrong passwords) explains itself; otherwise this address is rate limited
+      else if (error.status === 429) setError(error.code === "ACCOUNT_SIGN_IN_PAUSED" && error.message ? error.message : "Too many sign-in attempts. Wait a minute and try again.");
       else if (error.status === 401) setError("That e-mail and password do not match an account.");
       else setError(error.message ?? "Sign-in failed. Try again.");
       return;
     }
-    router.push(safeNext(params.get("next")));
+    // only same-origin path and query are followed (lib/safe-next.ts)
+    router.push(safeNext(params.get("next"), window.location.origin));
     router.refresh();
   }
 

@@ -40,7 +40,7 @@ export function SignUpForm() {
       <FormError message={error} />
       <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
       <Field label="Work e-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <Field label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
+      <Field label="Password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("password")} error={formState.errors.password?.message} />
       <Field label="Company" autoComplete="organization" hint="Your sprinkler contractor or home-building company." {...register("organizationName")} error={formState.errors.organizationName?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Creating…" : "Create the account"}

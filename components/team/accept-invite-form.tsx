@@ -55,7 +55,7 @@ export function AcceptInviteForm({ token, email, name }: { token: string; email:
       </div>
       <input type="hidden" {...register("token")} />
       <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
-      <Field label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
+      <Field label="Password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("password")} error={formState.errors.password?.message} />
       <Field label="Password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Creating your account…" : "Create my account"}

@@ -2,7 +2,7 @@
  * better-auth's tables (core + admin plugin fields + database rate limit), in the shape its CLI
  * generates for MySQL. Riser's own fields on `user`: organizationId, teamId (one organization each).
  */
-import { bigint, boolean, index, int, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, datetime, index, int, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
 
 export const user = mysqlTable(
   "user",
@@ -85,4 +85,18 @@ export const rateLimit = mysqlTable("rate_limit", {
   key: varchar("key", { length: 255 }).notNull().unique(),
   count: int("count").notNull(),
   lastRequest: bigint("last_request", { mode: "number" }).notNull(),
+});
+
+/**
+ * Riser: a pending sign-up's proof of which browser chose its password (lib/auth/signup-intent.ts).
+ * The sign-up answer sets a random cookie; only its SHA-256 is kept here. Confirming the e-mail
+ * from that browser keeps the password; from anywhere else the password is cleared and the person
+ * holding the mailbox chooses one, so nobody can pre-register someone else's address.
+ */
+export const signupIntent = mysqlTable("signup_intent", {
+  userId: varchar("user_id", { length: 36 })
+    .primaryKey()
+    .references(() => user.id, { onDelete: "cascade" }),
+  nonceHash: varchar("nonce_hash", { length: 64 }).notNull(),
+  createdAt: datetime("created_at").notNull(),
 });

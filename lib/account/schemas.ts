@@ -4,7 +4,7 @@ import { email, password, personName } from "@/lib/auth/schemas";
 
 export const nameSchema = z.object({ name: personName });
 
-export const emailChangeSchema = z.object({ email });
+export const emailChangeSchema = z.object({ email, password: z.string().min(1, "Enter your current password").max(128, "At most 128 characters") });
 
 export const passwordChangeSchema = z
   .object({

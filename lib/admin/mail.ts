@@ -3,14 +3,17 @@ import { and, count, eq, like, or, type SQL } from "drizzle-orm";
 import type { z } from "zod";
 import { db } from "@/db/client";
 import { mailLog } from "@/db/schema";
-import { env } from "@/lib/env";
+import { env, isLocalInstance } from "@/lib/env";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { mailQuery, Paged } from "./schemas";
 
 export type MailRow = { id: number; at: string | null; to: string; subject: string; kind: string; status: string; error: string | null; body?: string | null };
 
-/** Message bodies hold sign-in links: shown only on development and test instances (with the local catcher). */
-export const mailBodiesVisible = () => env.NODE_ENV !== "production" || Boolean(env.MAIL_CATCHER_URL);
+/** Message bodies are kept only on a local instance (lib/mail); even there the log shows them with links removed. */
+export const mailBodiesVisible = () => isLocalInstance(env);
+
+/** Every web address in a body replaced, so the log never hands out a reset, invitation or sign-in link. */
+export const redactLinks = (text: string) => text.replace(/\b(?:https?:\/\/|www\.)[^\s<>"')\]]+/gi, "[link removed]");
 
 export async function listMail(q: z.infer<typeof mailQuery>): Promise<Paged<MailRow> & { bodiesVisible: boolean }> {
   const filters: (SQL | undefined)[] = [];
@@ -28,7 +31,7 @@ export async function listMail(q: z.infer<typeof mailQuery>): Promise<Paged<Mail
     .offset(offsetOf(q));
   const [total] = await db.select({ n: count() }).from(mailLog).where(where);
   return {
-    rows: rows.map(({ body, ...r }) => ({ ...r, at: iso(r.at), ...(bodiesVisible ? { body } : {}) })),
+    rows: rows.map(({ body, ...r }) => ({ ...r, at: iso(r.at), ...(bodiesVisible ? { body: body == null ? null : redactLinks(body) } : {}) })),
     total: total?.n ?? 0,
     page: q.page,
     pageSize: q.pageSize,

@@ -2,6 +2,8 @@ import "server-only";
 import { ZodError, type ZodType } from "zod";
 import { AccessError, check, getRequestViewer, type Rule, type Viewer } from "@/lib/access";
 import { isDatabaseDown } from "@/lib/db-errors";
+import { env } from "@/lib/env";
+import { clientIpOf } from "./client-ip";
 
 /** An error whose message is safe to show: becomes `{ error }` with its status. */
 export class ApiError extends Error {
@@ -28,8 +30,14 @@ export function fieldErrorsOf(error: ZodError): Record<string, string[]> {
   return out;
 }
 
-/** Parses a JSON body with a schema; a body that is not JSON or does not fit → 400 with field errors. */
+/**
+ * Parses a JSON body with a schema. Only a body declared application/json is read (415 otherwise):
+ * another site's page can send text/plain or a form without asking, but not JSON. A body that is not
+ * JSON or does not fit → 400 with field errors.
+ */
 export async function readJson<T>(req: Request, schema: ZodType<T>): Promise<T> {
+  const type = (req.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
+  if (type !== "application/json") throw new ApiError(415, "Send the request body as JSON (Content-Type: application/json).");
   let raw: unknown;
   try {
     raw = await req.json();
@@ -58,15 +66,33 @@ export function errorResponse(err: unknown): Response {
   return json({ error: "Something went wrong on our side. Nothing was saved." }, 500);
 }
 
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+
 /**
- * The one wrapper for route handlers: checks the access rule first (401/403), then runs the
- * handler and maps errors. Route params arrive awaited.
+ * Changes come only from Riser's own pages: a state-changing request whose Origin is another site,
+ * or whose Sec-Fetch-Site says cross-site or same-site, is refused with 403 (on top of the SameSite
+ * session cookie). Clients that send neither header are not browsers and carry no one else's cookie.
+ */
+export function assertSameOrigin(req: Request): void {
+  if (SAFE_METHODS.has(req.method.toUpperCase())) return;
+  const origin = req.headers.get("origin");
+  const site = req.headers.get("sec-fetch-site");
+  const own = new URL(env.APP_URL).origin;
+  if (origin !== null ? origin !== own : site !== null && site !== "same-origin" && site !== "none") {
+    throw new ApiError(403, "This change must come from Riser's own pages. Reload the page and try again.");
+  }
+}
+
+/**
+ * The one wrapper for route handlers: refuses changes sent from another site (403), checks the
+ * access rule (401/403), then runs the handler and maps errors. Route params arrive awaited.
  */
 export function route<P = Record<string, string>>(rule: "public", fn: (ctx: Ctx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 export function route<P = Record<string, string>>(rule: Exclude<Rule, "public">, fn: (ctx: SignedCtx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
   return async (req: Request, ctx: { params: Promise<P> }) => {
     try {
+      assertSameOrigin(req);
       const viewer = check(await getRequestViewer(req), rule);
       const params = ctx?.params ? await ctx.params : ({} as P);
       return await (fn as (c: Ctx<P>) => Promise<Response>)({ req, viewer, params });
@@ -76,7 +102,11 @@ export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
   };
 }
 
-/** The client address as the proxy in front reports it (for audit rows and rate limits). */
+/**
+ * The client address for audit rows and rate limits: the connected peer (appended by
+ * scripts/serve.mjs), or with TRUSTED_PROXY_HOPS set, the address the first trusted proxy saw.
+ * A forged X-Forwarded-For never decides it (lib/api/client-ip.ts).
+ */
 export function clientIp(req: Request): string {
-  return req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+  return clientIpOf(req.headers);
 }

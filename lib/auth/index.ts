@@ -1,7 +1,7 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { betterAuth } from "better-auth";
-import { APIError } from "better-auth/api";
+import { APIError, createAuthMiddleware } from "better-auth/api";
 import { drizzleAdapter } from "@better-auth/drizzle-adapter";
 import { admin } from "better-auth/plugins";
 import { nextCookies } from "better-auth/next-js";
@@ -10,7 +10,17 @@ import * as schema from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { nameProblem, normalizeName } from "@/lib/names";
+import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
 import { signupContext } from "./signup-context";
+import { assertEmailChangeAllowed, assertFieldLengths, assertPasswordAllowed } from "./guards";
+import { MIN_PASSWORD_LENGTH } from "./password-policy";
+import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
+import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
+
+const signInEmailOf = (body: unknown) => {
+  const email = (body as { email?: unknown } | undefined)?.email;
+  return typeof email === "string" && email.length <= 255 ? email.trim().toLowerCase() : null;
+};
 
 export const auth = betterAuth({
   appName: "Riser",
@@ -30,7 +40,7 @@ export const auth = betterAuth({
   emailAndPassword: {
     enabled: true,
     requireEmailVerification: true,
-    minPasswordLength: 10,
+    minPasswordLength: MIN_PASSWORD_LENGTH,
     maxPasswordLength: 128,
     revokeSessionsOnPasswordReset: true,
     resetPasswordTokenExpiresIn: 60 * 60,
@@ -46,6 +56,8 @@ export const auth = betterAuth({
   emailVerification: {
     sendOnSignUp: true,
     autoSignInAfterVerification: false,
+    // a confirmation from another browser than the one that signed up clears the password (lib/auth/signup.ts)
+    afterEmailVerification: async (verified, request) => afterEmailVerified(verified, request),
     expiresIn: 60 * 60 * 24,
     sendVerificationEmail: async ({ user, url }) => {
       // An e-mail change (account settings) sends this to the new address while the stored one is still the old.
@@ -101,8 +113,37 @@ export const auth = betterAuth({
   advanced: {
     useSecureCookies: env.INSECURE_COOKIES !== "1",
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
-    ipAddress: { ipAddressHeaders: ["x-forwarded-for"] },
+    // proxy.ts sets this header from the real peer and TRUSTED_PROXY_HOPS (lib/api/client-ip.ts),
+    // replacing any client value: a forged X-Forwarded-For never reaches the rate limit or sessions.
+    ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     database: { generateId: () => crypto.randomUUID() },
+  },
+  hooks: {
+    // Per-account throttle (lib/auth/throttle.ts): a paused account is refused before its password
+    // is checked, whatever address the attempt comes from; every wrong password is counted.
+    before: createAuthMiddleware(async (ctx) => {
+      assertFieldLengths(ctx.body);
+      assertPasswordAllowed(ctx.path, ctx.body);
+      if (ctx.path === "/change-email") return assertEmailChangeAllowed(ctx as unknown as Parameters<typeof assertEmailChangeAllowed>[0]);
+      if (ctx.path !== "/sign-in/email") return;
+      const email = signInEmailOf(ctx.body);
+      if (!email) return;
+      const lock = await signInLock(email);
+      if (lock.locked) throw new APIError("TOO_MANY_REQUESTS", { message: lockedMessage(lock.retryAfterSeconds), code: "ACCOUNT_SIGN_IN_PAUSED" });
+    }),
+    after: createAuthMiddleware(async (ctx) => {
+      if (ctx.path === "/verify-email") {
+        // the mailbox's owner confirmed someone else's sign-up: they choose the password now
+        const url = takeChoosePasswordUrl(typeof ctx.query?.token === "string" ? ctx.query.token : undefined);
+        if (url) throw ctx.redirect(url);
+        return;
+      }
+      if (ctx.path !== "/sign-in/email") return;
+      const returned = ctx.context.returned;
+      if (!(returned instanceof APIError) || returned.statusCode !== 401) return;
+      const email = signInEmailOf(ctx.body);
+      if (email) await recordFailedSignIn(email, ctx.headers?.get(CLIENT_IP_HEADER) ?? "unknown");
+    }),
   },
   databaseHooks: {
     user: {

@@ -3,7 +3,8 @@ import { z } from "zod";
 import { nameProblem, normalizeName } from "@/lib/names";
 
 export const email = z.string().trim().toLowerCase().email("Enter an e-mail address like name@company.com").max(255, "At most 255 characters");
-export const password = z.string().min(10, "Use at least 10 characters").max(128, "At most 128 characters");
+/** NIST SP 800-63B-4: 15+ characters without a second factor, no composition rules (blocklist: lib/auth/password-policy.ts). */
+export const password = z.string().min(15, "Use at least 15 characters (a few words make a good one)").max(128, "At most 128 characters");
 // The name rule is lib/names.ts (certificates print it; the server enforces it in lib/auth hooks too).
 export const personName = z
   .string()

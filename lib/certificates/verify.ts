@@ -1,10 +1,11 @@
 import "server-only";
+import { clientIpOf } from "@/lib/api/client-ip";
 import { env } from "@/lib/env";
 import { hitRateLimit, type RateLimitResult } from "./rate-limit";
 
-/** The client address as the proxy in front reports it (same rule as lib/api's clientIp). */
+/** The client address (same rule as lib/api's clientIp: forged X-Forwarded-For values are ignored). */
 export function ipFromHeaders(headers: Headers): string {
-  return headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+  return clientIpOf(headers);
 }
 
 /** One public look-up (page or JSON) by this client; both share one budget per window. */

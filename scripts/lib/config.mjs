@@ -61,6 +61,11 @@ export function config(name = profileFromArgs()) {
       SMTP_URL: `smtp://127.0.0.1:${p.smtpPort}`,
       MAIL_CATCHER_URL: `http://127.0.0.1:${p.mailHttpPort}`,
       INSECURE_COOKIES: "1",
+      // local use only: allows the mail catcher, /dev/mail, insecure cookies, the payment fake over
+      // http and demo data (lib/env.ts refuses all of them without this flag or off loopback)
+      RISER_LOCAL: "1",
+      // the app is served by scripts/serve.mjs with no proxy in front: trust no forwarded address
+      TRUSTED_PROXY_HOPS: "0",
       JOBS_SECRET: secretFor(`${name}-jobs`),
       NEXT_TELEMETRY_DISABLED: "1",
       // sign-off evidence: the local fake S3 server (scripts/s3-fake.mjs); s3rver's fixed key pair

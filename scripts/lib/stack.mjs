@@ -32,10 +32,14 @@ export function stack({ profile, mode = "production", reset = false, stdio = "in
     buildApp({ distDir: cfg.env.NEXT_DIST_DIR, env, typesChecked });
   }
 
-  /** `next start`, or `next dev` with hot reload in development mode; resolves when healthy. */
+  /**
+   * scripts/serve.mjs (Next's handler behind a server that appends the real peer address to
+   * X-Forwarded-For), or `next dev` with hot reload in development mode; resolves when healthy.
+   */
   async function serve() {
-    const args = mode === "development" ? ["dev", "-H", "127.0.0.1", "-p", String(cfg.appPort)] : ["start", "-H", "127.0.0.1", "-p", String(cfg.appPort)];
-    server = spawn(process.execPath, [nextBin, ...args], { cwd: root, env, stdio: ["ignore", stdio, stdio] });
+    const hostPort = ["-H", "127.0.0.1", "-p", String(cfg.appPort)];
+    const cmd = mode === "development" ? [nextBin, "dev", ...hostPort] : [path.join(root, "scripts/serve.mjs"), ...hostPort];
+    server = spawn(process.execPath, cmd, { cwd: root, env, stdio: ["ignore", stdio, stdio] });
     await waitForHealth(mode === "development" ? 600 : 300);
     return server;
   }

@@ -8,14 +8,12 @@ import { expect, test, type Browser, type Page } from "@playwright/test";
 import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
 import { DEMO_PASSWORD } from "../../db/demo";
+import { signInAs } from "./helpers";
 
 const PASSWORD = "e2e-person-pass-2026";
-let ipCounter = 0;
-// Each browser context is its own client address, so sign-in rate limits of one test never hit another.
-const freshIp = () => `10.91.${process.pid % 250}.${++ipCounter}`;
 
 async function newPage(browser: Browser, width = 1280) {
-  const context = await browser.newContext({ extraHTTPHeaders: { "x-forwarded-for": freshIp() }, viewport: { width, height: 900 } });
+  const context = await browser.newContext({ viewport: { width, height: 900 } });
   return context.newPage();
 }
 
@@ -39,14 +37,8 @@ async function createPerson(tag: string, role: string, organizationName: string,
   }
 }
 
-async function signIn(page: Page, email: string, password: string) {
-  await page.goto("/sign-in");
-  await page.waitForLoadState("networkidle"); // the form posts through its script once hydrated
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL("**/learn");
-}
+// Each sign-in leaves from its own loopback address (helpers.ts), so rate limits of one test never hit another.
+const signIn = (page: Page, email: string, password: string) => signInAs(page, email, password);
 
 async function axe(page: Page, what: string) {
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();

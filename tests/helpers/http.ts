@@ -1,12 +1,35 @@
 /** HTTP helpers for integration tests against the running app (started by scripts/test.mjs). */
+import { Agent, fetch as undiciFetch } from "undici";
 import { DEMO_PASSWORD } from "@/db/demo";
 
 export const APP = process.env.APP_URL ?? "http://127.0.0.1:3100";
 export const MAIL = process.env.MAIL_CATCHER_URL ?? "http://127.0.0.1:2536";
 
 const octet = () => 1 + Math.floor(Math.random() * 254);
-/** A random client address per caller, so that per-IP rate limits of one test do not hit another. */
-export const freshIp = () => `10.${octet()}.${octet()}.${octet()}`;
+/**
+ * A random loopback address per caller (127.0.0.0/8 is all loopback on Linux), so that per-IP rate
+ * limits of one test do not hit another. The requests really come from it: the app sees it as the
+ * connected peer. No X-Forwarded-For is sent (the app ignores a forged one anyway).
+ */
+export const freshIp = () => `127.${octet()}.${octet()}.${octet()}`;
+
+const agents = new Map<string, Agent>();
+/** fetch whose connections leave from the given loopback address. */
+export async function fetchFrom(ip: string, url: string, init: RequestInit = {}): Promise<Response> {
+  let agent = agents.get(ip);
+  if (!agent) agents.set(ip, (agent = new Agent({ localAddress: ip })));
+  let { body, headers } = init;
+  // Node's built-in FormData and Blob are not the undici package's classes: encode them with Node's own
+  // Request first (same bytes and multipart boundary a browser would send).
+  if (body instanceof FormData || body instanceof Blob || body instanceof URLSearchParams) {
+    const encoded = new Request(url, { method: init.method ?? "POST", body });
+    const merged = new Headers(headers);
+    if (!merged.has("content-type") && encoded.headers.get("content-type")) merged.set("content-type", encoded.headers.get("content-type")!);
+    body = Buffer.from(await encoded.arrayBuffer());
+    headers = Object.fromEntries(merged.entries());
+  }
+  return (await undiciFetch(url, { ...(init as object), body, headers, dispatcher: agent } as Parameters<typeof undiciFetch>[1])) as unknown as Response;
+}
 
 export type Client = { cookie: string; ip: string; fetch: (path: string, init?: RequestInit) => Promise<Response> };
 
@@ -15,10 +38,10 @@ function clientFor(cookie: string, ip: string): Client {
     cookie,
     ip,
     fetch: (path, init = {}) =>
-      fetch(`${APP}${path}`, {
+      fetchFrom(ip, `${APP}${path}`, {
         redirect: "manual",
         ...init,
-        headers: { origin: APP, "x-forwarded-for": ip, ...(cookie ? { cookie } : {}), ...(init.headers as Record<string, string> | undefined) },
+        headers: { origin: APP, ...(cookie ? { cookie } : {}), ...(init.headers as Record<string, string> | undefined) },
       }),
   };
 }
@@ -33,9 +56,9 @@ export function cookiesOf(res: Response): string {
 }
 
 export async function signIn(email: string, password = DEMO_PASSWORD, ip = freshIp()): Promise<Client> {
-  const res = await fetch(`${APP}/api/auth/sign-in/email`, {
+  const res = await fetchFrom(ip, `${APP}/api/auth/sign-in/email`, {
     method: "POST",
-    headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": ip },
+    headers: { "content-type": "application/json", origin: APP },
     body: JSON.stringify({ email, password }),
   });
   if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);

@@ -8,7 +8,7 @@ import { hashPassword } from "better-auth/crypto";
 import { eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { account, catalogLesson, catalogModule, certificate, certificateSerialCounter, lessonProgress, moduleCompletion, organization, quizAttempt, team, user } from "@/db/schema";
-import { APP, freshIp, type Client } from "./http";
+import { APP, fetchFrom, freshIp, type Client } from "./http";
 import { sessionCookieFor } from "./people";
 
 export const FIXTURE_PASSWORD = "team-fixture-pass-2026";
@@ -52,7 +52,7 @@ export async function clientOf(userId: string): Promise<Client> {
     cookie,
     ip,
     fetch: (path, init = {}) =>
-      fetch(`${APP}${path}`, { redirect: "manual", ...init, headers: { origin: APP, "x-forwarded-for": ip, cookie, ...(init.headers as Record<string, string> | undefined) } }),
+      fetchFrom(ip, `${APP}${path}`, { redirect: "manual", ...init, headers: { origin: APP, cookie, ...(init.headers as Record<string, string> | undefined) } }),
   };
 }
 

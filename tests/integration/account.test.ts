@@ -8,7 +8,7 @@ import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, quizAttempt, signOff, user } from "@/db/schema";
-import { APP, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
+import { anonymous as anonymousClient, APP, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { createPerson, createTestOrganization } from "../helpers/admin-people";
 import { readAndComplete } from "../helpers/progress";
 
@@ -20,9 +20,9 @@ beforeAll(async () => {
 afterAll(() => pool.end());
 
 async function trySignIn(email: string, password: string) {
-  return fetch(`${APP}/api/auth/sign-in/email`, {
+  return fetchFrom(freshIp(), `${APP}/api/auth/sign-in/email`, {
     method: "POST",
-    headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": freshIp() },
+    headers: { "content-type": "application/json", origin: APP },
     body: JSON.stringify({ email, password }),
   });
 }
@@ -77,12 +77,38 @@ describe("name and e-mail", () => {
     expect((await postJson(client, "/api/auth/update-user", { email: uniqueEmail("sneaky") })).status).toBe(400);
   });
 
+  it("answers an over-long name or address with 400 and a message, not a database error", async () => {
+    const p = await createPerson({ tag: "long", organizationId: org.id });
+    const client = await signIn(p.email, p.password);
+    const before = (await sessionOf(client)).user.name;
+    const longName = await postJson(client, "/api/auth/update-user", { name: "N".repeat(201) });
+    expect(longName.status).toBe(400);
+    expect(longName.json.message).toMatch(/at most 200 characters/);
+    expect((await sessionOf(client)).user.name).toBe(before);
+    const longMail = await postJson(client, "/api/auth/change-email", { newEmail: `${"m".repeat(250)}@test.example`, password: p.password });
+    expect(longMail.status).toBe(400);
+    expect(longMail.json.message).toMatch(/at most 255 characters/);
+    const longSignIn = await postJson(anonymousClient(), "/api/auth/sign-in/email", { email: `${"s".repeat(260)}@test.example`, password: "whatever-it-is" });
+    expect(longSignIn.status).toBe(400);
+  });
+
   it("changes the e-mail only after the new address is confirmed, and tells the old address", async () => {
     const p = await createPerson({ tag: "email", organizationId: org.id });
     const client = await signIn(p.email, p.password);
     const next = uniqueEmail("email-new");
-    const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" });
+    const other = await signIn(p.email, p.password);
+    // the current password is required, and a wrong one changes nothing
+    const missing = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed" });
+    expect(missing.status).toBe(400);
+    expect(missing.json.message).toMatch(/current password/i);
+    const wrong = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed", password: "not-my-password-1" });
+    expect(wrong.status).toBe(400);
+    expect(await sessionOf(other)).not.toBeNull();
+    const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed", password: p.password });
     expect(res.status).toBe(200);
+    // the account's other sessions end; this one stays
+    expect(await sessionOf(other)).toBeNull();
+    expect((await sessionOf(client))?.user.email).toBe(p.email);
     const mail = await waitForMail(next, /confirm your new e-mail/i);
     const notice = await waitForMail(p.email, /about to change/i);
     expect(notice.text).toContain(next);
@@ -91,7 +117,7 @@ describe("name and e-mail", () => {
     expect(before?.email).toBe(p.email);
 
     const link = linkIn(mail.text);
-    const open = await fetch(link, { redirect: "manual", headers: { cookie: client.cookie, "x-forwarded-for": client.ip } });
+    const open = await fetchFrom(client.ip, link, { redirect: "manual", headers: { cookie: client.cookie } });
     expect([302, 303, 307]).toContain(open.status);
     expect(open.headers.get("location")).toContain("/account?email=changed");
     const [after] = await db.select({ email: user.email, verified: user.emailVerified }).from(user).where(eq(user.id, p.id));

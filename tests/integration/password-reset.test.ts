@@ -2,7 +2,7 @@
 // the old one no longer does; an unknown address gets the same answer (no account probing).
 import { afterAll, describe, expect, it } from "vitest";
 import { pool } from "@/db/client";
-import { APP, freshIp, linkIn, mailsTo, postJson, anonymous, signIn, waitForMail } from "../helpers/http";
+import { APP, fetchFrom, freshIp, linkIn, mailsTo, postJson, anonymous, signIn, waitForMail } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
 
 afterAll(() => pool.end());
@@ -15,7 +15,7 @@ describe("password reset", () => {
     expect(req.status).toBe(200);
     const mail = await waitForMail(p!.email, /reset/i);
     const link = linkIn(mail.text);
-    const hop = await fetch(link, { redirect: "manual", headers: { "x-forwarded-for": freshIp() } });
+    const hop = await fetchFrom(freshIp(), link, { redirect: "manual" });
     expect([302, 303, 307]).toContain(hop.status);
     const location = new URL(hop.headers.get("location")!, APP);
     expect(location.pathname).toBe("/reset-password");

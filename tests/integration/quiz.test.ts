@@ -4,11 +4,11 @@ import { and, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, quizAttempt } from "@/db/schema";
-import { APP, freshIp, postJson, signIn, type Client } from "../helpers/http";
+import { APP, fetchFrom, freshIp, postJson, signIn, type Client } from "../helpers/http";
 
 const clientWithCookie = (cookie: string): Client => {
   const ip = freshIp();
-  return { cookie, ip, fetch: (p, init = {}) => fetch(`${APP}${p}`, { redirect: "manual", ...init, headers: { origin: APP, "x-forwarded-for": ip, cookie, ...(init.headers as Record<string, string> | undefined) } }) };
+  return { cookie, ip, fetch: (p, init = {}) => fetchFrom(ip, `${APP}${p}`, { redirect: "manual", ...init, headers: { origin: APP, cookie, ...(init.headers as Record<string, string> | undefined) } }) };
 };
 import { TEST_PASSWORD, createOrganization, createPeople, sessionCookieFor } from "../helpers/people";
 import { readAndComplete } from "../helpers/progress";

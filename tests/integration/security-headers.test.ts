@@ -6,7 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { demoByRole } from "@/db/demo";
 import { DEMO_PASSWORD } from "@/db/demo";
-import { APP, anonymous, freshIp, signIn } from "../helpers/http";
+import { APP, anonymous, fetchFrom, freshIp, signIn } from "../helpers/http";
 
 function expectSecurityHeaders(res: Response, what: string) {
   const csp = res.headers.get("content-security-policy");
@@ -51,9 +51,9 @@ describe("security headers on real responses", () => {
   });
 
   it("the session cookie is HttpOnly and SameSite=Lax (Secure unless INSECURE_COOKIES=1)", async () => {
-    const res = await fetch(`${APP}/api/auth/sign-in/email`, {
+    const res = await fetchFrom(freshIp(), `${APP}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: APP, "x-forwarded-for": freshIp() },
+      headers: { "content-type": "application/json", origin: APP },
       body: JSON.stringify({ email: demoByRole("sales").email, password: DEMO_PASSWORD }),
     });
     expect(res.status).toBe(200);

@@ -57,6 +57,13 @@ describe("the proxy's own 503 answers carry the security headers", () => {
 describe("session cookie attributes (better-auth configuration of lib/auth)", () => {
   async function sessionCookie(insecure: "0" | "1") {
     for (const [k, v] of Object.entries(BASE_ENV)) vi.stubEnv(k, v);
+    // the test run's local-profile settings are refused on a public APP_URL (lib/env-local.ts): a hosted
+    // instance has none of them; insecure cookies exist only on a local instance (loopback + RISER_LOCAL=1)
+    for (const k of ["MAIL_CATCHER_URL", "STRIPE_API_HOST", "STRIPE_API_PORT", "STRIPE_API_PROTOCOL", "RISER_LOCAL"]) vi.stubEnv(k, undefined);
+    if (insecure === "1") {
+      vi.stubEnv("APP_URL", "http://127.0.0.1:3999");
+      vi.stubEnv("RISER_LOCAL", "1");
+    }
     vi.stubEnv("INSECURE_COOKIES", insecure);
     const { auth } = await import("@/lib/auth");
     const ctx = await auth.$context;

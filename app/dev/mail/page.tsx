@@ -1,15 +1,18 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { env } from "@/lib/env";
+import { env, isLocalInstance } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Local mail" };
 export const dynamic = "force-dynamic";
 
 type Message = { id: string; at: string; from: string; to: string[]; subject: string; text: string };
 
-/** The local mail catcher's inbox. Exists only where MAIL_CATCHER_URL is set (local use and tests). */
+/**
+ * The local mail catcher's inbox. Exists only on a local instance (RISER_LOCAL=1 on a loopback
+ * APP_URL, set by the scripts) with MAIL_CATCHER_URL; lib/env refuses the catcher anywhere else.
+ */
 export default async function DevMailPage({ searchParams }: { searchParams: Promise<{ id?: string }> }) {
-  if (!env.MAIL_CATCHER_URL) notFound();
+  if (!env.MAIL_CATCHER_URL || !isLocalInstance(env)) notFound();
   const { id } = await searchParams;
   let messages: Message[] = [];
   let problem: string | null = null;

@@ -1,11 +1,20 @@
-import { ApiError, json, readJson, route } from "@/lib/api";
+import { ApiError, clientIp, json, readJson, route } from "@/lib/api";
 import { createOrganizationWithManager } from "@/lib/accounts";
 import { signUpSchema } from "@/lib/auth/schemas";
+import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth/signup";
 
-/** Creates a new organization (with its trial seats) and its first manager; sends the verification mail. */
+/**
+ * Creates a new organization (with its trial seats) and its first manager; sends the verification
+ * mail. Rate limited per client and per address; an unverified account on the address is replaced;
+ * the answer's cookie marks this browser as the one that chose the password (lib/auth/signup.ts).
+ */
 export const POST = route("public", async ({ req }) => {
   const input = await readJson(req, signUpSchema);
+  const limit = await hitSignupLimits(clientIp(req), input.email);
+  if (!limit.allowed) return json({ error: limit.message }, { status: 429, headers: { "Retry-After": String(limit.retryAfterSeconds) } });
+  await releasePendingAddress(input.email);
   const result = await createOrganizationWithManager(input, req.headers);
   if (!result.ok) throw new ApiError(400, result.message, result.fieldErrors);
-  return json({ ok: true, message: "Check your e-mail: we sent a link to confirm the address." }, 201);
+  const nonce = await rememberSignupBrowser(result.userId);
+  return json({ ok: true, message: "Check your e-mail: we sent a link to confirm the address." }, { status: 201, headers: { "Set-Cookie": signupCookie(nonce) } });
 });
