@@ -27,12 +27,12 @@ function resolves(href: string): boolean {
 }
 
 describe("curriculum (DESIGN.md's nine modules plus layouts and special spaces, 3–5 lessons each, four paths)", () => {
-  it("has the ten modules, at least 48 lessons, 30 cards, 60 terms and the four paths", () => {
+  it("has the ten modules, at least 48 lessons, 45 cards, 100 terms and the four paths", () => {
     expect(catalog.modules).toHaveLength(10);
     expect(lessons.length).toBeGreaterThanOrEqual(48);
     for (const m of catalog.modules) expect(m.lessons.length).toBeGreaterThanOrEqual(3);
-    expect(catalog.cards.length).toBeGreaterThanOrEqual(30);
-    expect(catalog.glossary.length).toBeGreaterThanOrEqual(60);
+    expect(catalog.cards.length).toBeGreaterThanOrEqual(45);
+    expect(catalog.glossary.length).toBeGreaterThanOrEqual(100);
     expect(catalog.paths.map((p) => p.slug).sort()).toEqual(["builder-sales", "crew-lead", "design-and-permits", "new-installer"]);
   });
 
