@@ -260,3 +260,88 @@ describe("facts the review corrected stay corrected", () => {
     expect(warm.prompt).toMatch(/between the ceiling joists/);
   });
 });
+
+describe("question banks are deep enough and fit their audience", () => {
+  it.each(catalog.modules.map((m) => [m.slug, m] as const))("%s: the bank holds at least twice the questions drawn per attempt", (_, m) => {
+    expect(m.questions.length).toBeGreaterThanOrEqual(2 * m.meta.quiz.questionsPerAttempt);
+  });
+
+  // modules whose lessons teach arithmetic a learner does on the job (flow, pressure, friction, coverage, supply)
+  const CALCULATION_MODULES = ["hydraulics-and-permits", "fire-and-water-officials", "sprinklers-and-coverage", "freeze-protection", "layouts-and-special-spaces"];
+  it.each(CALCULATION_MODULES)("%s: at least three numeric or parametric questions", (slug) => {
+    const m = catalog.modules.find((x) => x.slug === slug)!;
+    expect(m.questions.filter((q) => q.type === "numeric" || q.type === "parametric").length).toBeGreaterThanOrEqual(3);
+  });
+
+  it("never quizzes the builder-sales path on cure charts, solvent cement or test pressures", () => {
+    const sales = catalog.paths.find((p) => p.slug === "builder-sales")!;
+    const bad: string[] = [];
+    for (const slug of sales.modules) {
+      const m = catalog.modules.find((x) => x.slug === slug)!;
+      for (const q of m.questions) {
+        const text = [q.prompt, ...("options" in q ? q.options.map((o) => o.text) : [])].join(" ");
+        if (/\bcur(e|ed|es|ing)\b|solvent|cement|hydrostatic|test pressure/i.test(text)) bad.push(`${slug}/${q.id}`);
+      }
+    }
+    expect(sales.modules).not.toContain("inspection-testing-maintenance");
+    expect(bad).toEqual([]);
+  });
+});
+
+describe("the depth lessons teach what their skills and questions ask", () => {
+  const body = (slug: string) => lessons.find((l) => l.slug === slug)!.body;
+
+  it("teaches the service-connection flow test the hp-residential-flow-test skill signs off, with the losses already inside the readings", () => {
+    const hp = catalog.modules.find((m) => m.slug === "hydraulics-and-permits")!;
+    const skill = hp.skills.find((s) => s.id === "hp-residential-flow-test")!;
+    const l = body("supplies-beyond-the-main");
+    expect(l).toContain(skill.title);
+    expect(l).toMatch(/after the meter/);
+    expect(l).toMatch(/Do not subtract those losses again/);
+    // the worked test stays inside its tested flow (NFPA 291: a curve stretched past its tested flow is a guess)
+    expect(l).toMatch(/testFlowGpm: 30, demandFlowGpm: 26/);
+  });
+
+  it("cites the residential code's pressure, expansion and hammer provisions, and starts the calculation from the PRV setting", () => {
+    const l = body("pressure-problems");
+    for (const p of ["P2903.3.1", "P2903.4", "P2903.5"]) expect(l).toContain(p);
+    expect(l).toMatch(/80 psi/);
+    expect(l).toMatch(/70 − 8 = \*\*62 psi\*\*/);
+  });
+
+  it("puts the P2904.7 sign and owner's manual in the shut-off, close-out and sales lessons", () => {
+    for (const slug of ["leak-detection-and-shutoff-valves", "records-and-close-out", "add-ons-shared-walls-and-older-homes", "irc-prescriptive-path"]) {
+      expect(body(slug), slug).toMatch(/P2904\.7/);
+    }
+  });
+
+  it("teaches P2904's Equation 29-1 with every term, and the loop split that balances both legs", () => {
+    const p = body("irc-prescriptive-path");
+    expect(p).toMatch(/Pt = Psup − PLsvc − PLm − PLd − PLe − Psp/);
+    expect(p).toMatch(/60 − 3\.5 − 6 − 0 − 8\.7 − 10 = \*\*31\.8 psi\*\*/);
+    const loop = body("looped-and-networked-layouts");
+    // Hazen-Williams: equal loss on both legs of one size means Q1/Q2 = (L2/L1)^(1/1.85)
+    const ratio = (90 / 60) ** (1 / 1.85);
+    expect(ratio).toBeCloseTo(1.245, 3);
+    expect(26 / (1 + ratio)).toBeCloseTo(11.6, 1);
+    expect(loop).toMatch(/\*\*11\.6 gpm\*\*/);
+    expect(loop).toMatch(/\*\*14\.4 gpm\*\*/);
+  });
+
+  it("keeps the heat-source distance table marked 'from memory' and keys no question on it", () => {
+    const l = body("heat-sources-and-temperature-ratings");
+    const lead = l.slice(l.indexOf("## The heat-source table"), l.indexOf("| Heat source"));
+    expect(lead).toMatch(/from memory — verify/);
+    const m = catalog.modules.find((x) => x.slug === "sprinklers-and-coverage")!;
+    for (const q of m.questions.filter((x) => x.lesson === "heat-sources-and-temperature-ratings")) {
+      const keyed = keyedNumbers(q as Parameters<typeof keyedNumbers>[0]);
+      for (const n of ["36", "60", "42", "18", "9", "24", "6", "3"]) expect(keyed, q.id).not.toContain(n);
+    }
+  });
+
+  it("slides the Lot 11 pendent and shows the wall distance it breaks (obstruction fixes re-check every distance)", () => {
+    const l = body("obstructions-in-detail");
+    expect(14 / 2 + 3.5).toBe(10.5);
+    expect(l).toMatch(/10\.5 ft is more than 8 ft/);
+  });
+});

@@ -26,13 +26,13 @@ function resolves(href: string): boolean {
   return ["glossary", "search", "learn", "certificates", "modules", "reference"].includes(parts[0]!) && parts.length === 1;
 }
 
-describe("curriculum (DESIGN.md: nine modules, 3–5 lessons each, four paths)", () => {
-  it("has the nine modules, at least 30 lessons, 30 cards, 60 terms and the four paths", () => {
-    expect(catalog.modules).toHaveLength(9);
-    expect(lessons.length).toBeGreaterThanOrEqual(30);
+describe("curriculum (DESIGN.md's nine modules plus layouts and special spaces, 3–5 lessons each, four paths)", () => {
+  it("has the ten modules, at least 48 lessons, 45 cards, 100 terms and the four paths", () => {
+    expect(catalog.modules).toHaveLength(10);
+    expect(lessons.length).toBeGreaterThanOrEqual(48);
     for (const m of catalog.modules) expect(m.lessons.length).toBeGreaterThanOrEqual(3);
-    expect(catalog.cards.length).toBeGreaterThanOrEqual(30);
-    expect(catalog.glossary.length).toBeGreaterThanOrEqual(60);
+    expect(catalog.cards.length).toBeGreaterThanOrEqual(45);
+    expect(catalog.glossary.length).toBeGreaterThanOrEqual(100);
     expect(catalog.paths.map((p) => p.slug).sort()).toEqual(["builder-sales", "crew-lead", "design-and-permits", "new-installer"]);
   });
 
