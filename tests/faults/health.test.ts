@@ -1,10 +1,10 @@
 // With the test database stopped the app answers 503 (page and JSON, no stack trace) and recovers
 // by itself once it is back.
-import { execFileSync } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
 import { APP } from "../helpers/http";
+import { service } from "../helpers/services";
 
-const db = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/db.mjs", cmd, `--profile=${process.env.RISER_PROFILE ?? "test"}`], { stdio: "inherit" });
+const db = (cmd: "start" | "stop") => service("db", cmd);
 
 async function until(fn: () => Promise<boolean>, ms = 20_000) {
   const end = Date.now() + ms;
@@ -16,7 +16,7 @@ async function until(fn: () => Promise<boolean>, ms = 20_000) {
 }
 
 describe("database outage", () => {
-  afterAll(() => db("start"));
+  afterAll(() => db("start"), 120_000);
 
   it("health is 200 while the database runs", async () => {
     const res = await fetch(`${APP}/api/health`);
@@ -25,7 +25,7 @@ describe("database outage", () => {
   });
 
   it("gives 503 with a clear message while it is stopped, then recovers", async () => {
-    db("stop");
+    await db("stop");
     await new Promise((r) => setTimeout(r, 1200)); // the proxy's probe is remembered for 1 s
     const health = await fetch(`${APP}/api/health`);
     expect(health.status).toBe(503);
@@ -41,7 +41,7 @@ describe("database outage", () => {
     expect(api.status).toBe(503);
     expect((await api.json()).error).toMatch(/database/);
 
-    db("start");
+    await db("start");
     const back = await until(async () => (await fetch(`${APP}/api/health`)).status === 200);
     expect(back).toBe(true);
   });

@@ -2,7 +2,6 @@
 // accepting them and never answering (the case without timeouts that once hung a submit for
 // minutes) — a passing quiz submit answers at once; the certificate mail waits in the outbox and
 // arrives once the mail server is back.
-import { execFileSync } from "node:child_process";
 import { createServer, type Server, type Socket } from "node:net";
 import { and, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
@@ -12,9 +11,10 @@ import { freshIp, postJson, signIn, waitForMail } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
 import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
+import { service } from "../helpers/services";
 
 const profile = process.env.RISER_PROFILE ?? "test";
-const catcher = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/mail-catcher.mjs", cmd, `--profile=${profile}`], { stdio: "inherit" });
+const catcher = (cmd: "start" | "stop") => service("mail-catcher", cmd);
 const smtpPort = () => Number(new URL(process.env.SMTP_URL ?? "smtp://127.0.0.1:2535").port);
 const MODULE = "talking-with-homebuyers";
 
@@ -38,7 +38,7 @@ afterAll(async () => {
     for (const s of silent.sockets) s.destroy();
     await new Promise((r) => silent!.server.close(r));
   }
-  catcher("start");
+  await catcher("start");
   await pool.end();
 });
 
@@ -53,7 +53,7 @@ describe("mail outage", () => {
     const id = a.json.id as string;
     const answers = await answersFor(id);
 
-    catcher("stop");
+    await catcher("stop");
     silent = await silentServer(smtpPort());
     const t0 = Date.now();
     const res = await postJson(client, `/api/quiz/attempts/${id}/submit`, { answers });
@@ -78,7 +78,7 @@ describe("mail outage", () => {
     for (const s of silent.sockets) s.destroy();
     await new Promise((r) => silent!.server.close(r));
     silent = null;
-    catcher("start");
+    await catcher("start");
     const mail = await waitForMail(p!.email, /certificate/i, 60_000);
     expect(mail.text).toContain(cert!.serial);
     const sent = (await queued())!;

@@ -1,7 +1,6 @@
 // With the payment service down during checkout the manager gets a clear message, nothing is
 // charged and no seats are added; the retry with the same key (the form keeps it) makes exactly one
 // checkout, also when the service created it but its answer was lost on the way back.
-import { execFileSync } from "node:child_process";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
@@ -9,8 +8,9 @@ import { checkout, organization } from "@/db/schema";
 import { FAKE, fakeSessions, newKey, pressOnPayPage, until } from "../helpers/billing";
 import { freshIp, postJson, signIn, type Client } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { service } from "../helpers/services";
 
-const fake = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/payments-fake.mjs", cmd, `--profile=${process.env.RISER_PROFILE ?? "test"}`], { stdio: "inherit" });
+const fake = (cmd: "start" | "stop") => service("payments-fake", cmd);
 let client: Client;
 let orgId: string;
 const seats = async () => (await db.select({ seats: organization.seats }).from(organization).where(eq(organization.id, orgId)))[0]!.seats;
@@ -22,14 +22,14 @@ beforeAll(async () => {
   client = await signIn(m!.email, TEST_PASSWORD, freshIp());
 });
 afterAll(async () => {
-  fake("start");
+  await fake("start");
   await pool.end();
 });
 
 describe("payment service outage", () => {
   it("down during checkout: 503 with a clear message, nothing charged, no seats; the retry with the same key makes one checkout", async () => {
     const key = newKey();
-    fake("stop");
+    await fake("stop");
     const down = await postJson(client, "/api/billing/checkout", { seats: 3, idempotencyKey: key });
     expect(down.status).toBe(503);
     expect(down.json.error).toMatch(/payment service is not reachable/);
@@ -39,7 +39,7 @@ describe("payment service outage", () => {
     expect(row).toMatchObject({ status: "creating", providerSessionId: null });
     expect(await seats()).toBe(5);
 
-    fake("start");
+    await fake("start");
     const up = await postJson(client, "/api/billing/checkout", { seats: 3, idempotencyKey: key });
     expect(up.status).toBe(201);
     expect(up.json.checkoutId).toBe(row!.id);

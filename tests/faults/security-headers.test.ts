@@ -1,14 +1,14 @@
 // While the database is down, the proxy answers 503 itself; those answers carry the same security
 // headers as every other response (MDN "Content-Security-Policy"; OWASP Secure Headers Project).
-import { execFileSync } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
 import { APP } from "../helpers/http";
+import { service } from "../helpers/services";
 
-const db = (cmd: "start" | "stop") => execFileSync(process.execPath, ["scripts/db.mjs", cmd, `--profile=${process.env.RISER_PROFILE ?? "test"}`], { stdio: "inherit" });
+const db = (cmd: "start" | "stop") => service("db", cmd);
 
 describe("security headers on the proxy's 503 answers", () => {
   afterAll(async () => {
-    db("start");
+    await db("start");
     for (let i = 0; i < 80; i++) {
       if ((await fetch(`${APP}/api/health`)).status === 200) return;
       await new Promise((r) => setTimeout(r, 250));
@@ -16,7 +16,7 @@ describe("security headers on the proxy's 503 answers", () => {
   });
 
   it("pages and API routes", async () => {
-    db("stop");
+    await db("stop");
     await new Promise((r) => setTimeout(r, 1200)); // the proxy remembers its probe for 1 s
     for (const path of ["/learn", "/admin/people", "/api/admin/people", "/api/account/records"]) {
       const res = await fetch(`${APP}${path}`, { redirect: "manual" });
