@@ -5,70 +5,46 @@
  * typo correction ("did you mean") and completion of the last word as one types; sizes with units
  * are terms of their own ("1 inch" finds "1 in"). Documents whose title matches rank first, then
  * by a BM25F score that rewards covering every term of the question.
+ *
+ * flexsearch (./fields.ts) holds the per-field indexes: it answers which documents hold a term,
+ * in which field and how often (term frequency kept in its resolution slots), and completes the
+ * last word. This file is the thin layer on top: reading the query (synonyms from text.ts, typo
+ * correction over the indexed word list, "did you mean") and the final ranking (title tiers, BM25F
+ * with field weights), which flexsearch's own ranking does not express.
  */
 import type { SearchDoc } from "./docs";
-import { editDistance, normalize, stem, STOP, synonymsOf, tokens, typoBudget } from "./text";
+import { FIELDS, FieldIndexes, type Field } from "./fields";
+import { snippet, type Segment } from "./snippet";
+import { editDistance, normalize, stem, STOP, synonymsOf, typoBudget } from "./text";
 
 export { stem, tokens } from "./text";
+export { snippet, type Segment } from "./snippet";
 
 export const MAX_RESULTS = 20;
 export const MAX_QUERY_LENGTH = 200;
 
-export type Segment = { text: string; hit: boolean };
 export type SearchHit = { id: string; kind: SearchDoc["kind"]; title: string; href: string; context: string; snippet: Segment[]; titleMatch: boolean };
 export type SearchResult = { hits: SearchHit[]; didYouMean: string | null };
 
-const FIELDS = ["title", "headings", "context", "text"] as const;
-type Field = (typeof FIELDS)[number];
 /** Field weights (Riser's tuning against tests/unit/search-relevance.test.ts). */
 const WEIGHT: Record<Field, number> = { title: 6, headings: 2.5, context: 0.4, text: 1 };
 const KIND_WEIGHT: Record<SearchDoc["kind"], number> = { card: 1.1, lesson: 1, term: 0.6 };
 const K1 = 1.2;
-const B = 0.75;
-
-type Posting = Map<number, number>; // doc → term frequency
 
 /** One term of the query and what it may also match, with a weight per variant. */
 type Slot = { word: string; variants: Map<string, number>; corrected: string | null };
 
 export class SearchIndex {
   private docs: SearchDoc[];
-  private postings: Record<Field, Map<string, Posting>> = { title: new Map(), headings: new Map(), context: new Map(), text: new Map() };
-  private lengths: Record<Field, number[]> = { title: [], headings: [], context: [], text: [] };
-  private avg: Record<Field, number> = { title: 1, headings: 1, context: 1, text: 1 };
-  private df = new Map<string, number>();
-  /** every document holding the term, in any field */
-  private docsWith = new Map<string, number[]>();
+  private fields: FieldIndexes;
   /** known words (no digits) by length, for typo look-ups */
   private byLength = new Map<number, string[]>();
-  /** every term, sorted, for completing a prefix */
-  private sorted: string[] = [];
 
   constructor(docs: SearchDoc[]) {
     this.docs = docs;
-    docs.forEach((d, i) => {
-      const seen = new Set<string>();
-      for (const f of FIELDS) {
-        const ts = tokens(d[f] ?? "");
-        this.lengths[f][i] = ts.length;
-        for (const t of ts) {
-          let p = this.postings[f].get(t);
-          if (!p) this.postings[f].set(t, (p = new Map()));
-          p.set(i, (p.get(i) ?? 0) + 1);
-          seen.add(t);
-        }
-      }
-      for (const t of seen) {
-        this.df.set(t, (this.df.get(t) ?? 0) + 1);
-        let list = this.docsWith.get(t);
-        if (!list) this.docsWith.set(t, (list = []));
-        list.push(i);
-      }
-    });
-    for (const f of FIELDS) this.avg[f] = Math.max(1, this.lengths[f].reduce((a, b) => a + b, 0) / Math.max(1, docs.length));
-    this.sorted = [...this.df.keys()].sort();
+    this.fields = new FieldIndexes(docs);
     this.surface = this.buildSurface();
-    for (const t of this.sorted) {
+    for (const t of [...this.fields.vocabulary].sort()) {
       if (/\d/.test(t)) continue;
       let list = this.byLength.get(t.length);
       if (!list) this.byLength.set(t.length, (list = []));
@@ -76,22 +52,8 @@ export class SearchIndex {
     }
   }
 
-  /** Terms that start with `prefix` (binary search in the sorted list), at most `max`. */
-  private completions(prefix: string, max: number): string[] {
-    let lo = 0;
-    let hi = this.sorted.length;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (this.sorted[mid]! < prefix) lo = mid + 1;
-      else hi = mid;
-    }
-    const out: string[] = [];
-    for (let i = lo; i < this.sorted.length && out.length < max && this.sorted[i]!.startsWith(prefix); i++) out.push(this.sorted[i]!);
-    return out;
-  }
-
   private idf(term: string): number {
-    const n = this.df.get(term) ?? 0;
+    const n = this.fields.df(term);
     return Math.log(1 + (this.docs.length - n + 0.5) / (n + 0.5));
   }
 
@@ -100,15 +62,16 @@ export class SearchIndex {
     const budget = typoBudget(word.length);
     if (!budget || /\d/.test(word)) return null;
     const near = new Set<number>();
-    for (const o of others) for (const i of this.docsWith.get(o) ?? []) near.add(i);
+    for (const o of others) for (const i of this.fields.hits(o).keys()) near.add(i);
     let best: { t: string; d: number; co: number; df: number } | null = null;
     for (let len = word.length - budget; len <= word.length + budget; len++) {
       for (const t of this.byLength.get(len) ?? []) {
         const d = editDistance(word, t, budget);
         if (d > budget) continue;
+        const docs = this.fields.hits(t);
         let co = 0;
-        for (const i of this.docsWith.get(t) ?? []) if (near.has(i)) co++;
-        const df = this.df.get(t) ?? 0;
+        for (const i of docs.keys()) if (near.has(i)) co++;
+        const df = docs.size;
         if (!best || d < best.d || (d === best.d && (co > best.co || (co === best.co && df > best.df)))) best = { t, d, co, df };
       }
     }
@@ -120,12 +83,12 @@ export class SearchIndex {
       .split(/[^a-z0-9_]+/)
       .filter((w) => w && !STOP.has(w));
     const stems = words.map(stem);
-    const known = stems.filter((s) => this.df.has(s));
+    const known = stems.filter((s) => this.fields.vocabulary.has(s));
     return words.slice(0, 12).map((word, k) => {
       const s = stems[k]!;
       const variants = new Map<string, number>();
       let corrected: string | null = null;
-      if (this.df.has(s)) variants.set(s, 1);
+      if (this.fields.vocabulary.has(s)) variants.set(s, 1);
       else {
         const fix = this.correct(s, known);
         if (fix) {
@@ -133,10 +96,10 @@ export class SearchIndex {
           corrected = fix;
         }
       }
-      for (const syn of synonymsOf(s)) if (this.df.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
+      for (const syn of synonymsOf(s)) if (this.fields.vocabulary.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
       // The last word may be unfinished (search as you type): complete it.
       if (k === words.length - 1 && s.length >= 3 && !/\d/.test(s)) {
-        for (const t of this.completions(s, 12)) if (!variants.has(t)) variants.set(t, 0.5);
+        for (const t of this.fields.complete(s, 12)) if (!variants.has(t)) variants.set(t, 0.5);
       }
       return { word, variants, corrected };
     });
@@ -149,17 +112,10 @@ export class SearchIndex {
       const best = new Map<number, { s: number; title: boolean }>();
       for (const [term, w] of slot.variants) {
         const idf = this.idf(term);
-        const maps = FIELDS.map((f) => this.postings[f].get(term));
-        for (const i of this.docsWith.get(term) ?? []) {
+        for (const [i, inFields] of this.fields.hits(term)) {
           let tf = 0;
-          let inTitle = false;
-          for (let k = 0; k < FIELDS.length; k++) {
-            const f = FIELDS[k]!;
-            const n = maps[k]?.get(i) ?? 0;
-            if (!n) continue;
-            if (f === "title") inTitle = true;
-            tf += (WEIGHT[f] * n) / (1 - B + (B * (this.lengths[f][i] ?? 0)) / this.avg[f]);
-          }
+          for (const f of FIELDS) tf += WEIGHT[f] * (inFields[f] ?? 0);
+          const inTitle = inFields.title !== undefined;
           const s = (w * idf * tf) / (K1 + tf);
           const old = best.get(i);
           if (!old || s > old.s) best.set(i, { s, title: inTitle || (old?.title ?? false) });
@@ -185,6 +141,7 @@ export class SearchIndex {
   /** Hits and a corrected query when a word was read as a typo. */
   query(rawQuery: string, limit = MAX_RESULTS): SearchResult {
     const query = rawQuery.slice(0, MAX_QUERY_LENGTH);
+    this.fields.begin();
     const slots = this.slots(query);
     if (!slots.length || slots.every((s) => s.variants.size === 0)) return { hits: [], didYouMean: null };
     const n = Math.min(Math.max(1, limit), MAX_RESULTS);
@@ -223,34 +180,4 @@ export class SearchIndex {
     }
     return out;
   }
-}
-
-const escapeRe = (t: string) => t.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
-
-/** About 160 characters of text around the first matching word, with the matches marked. */
-export function snippet(text: string, terms: string[], width = 160): Segment[] {
-  const words = terms.filter((t) => /^[a-z]/.test(t));
-  const wordStart = words.length ? new RegExp(`(^|[^A-Za-z0-9])(${words.map(escapeRe).join("|")})`, "i") : null;
-  const first = wordStart?.exec(text);
-  const at = first ? first.index + first[1]!.length : 0;
-  let start = Math.max(0, at - Math.floor(width / 3));
-  if (start > 0) start = text.indexOf(" ", start) + 1 || start;
-  const end = Math.min(text.length, start + width);
-  const slice = text.slice(start, end);
-  const matches = (w: string) => {
-    const s = stem(w.toLowerCase());
-    return terms.some((t) => s.startsWith(t) || (t.startsWith(s) && s.length >= 3));
-  };
-  const out: Segment[] = [];
-  let last = 0;
-  for (const m of slice.matchAll(/[A-Za-z0-9\u00C0-\u024F]+/g)) {
-    if (!matches(m[0])) continue;
-    if (m.index! > last) out.push({ text: slice.slice(last, m.index), hit: false });
-    out.push({ text: m[0], hit: true });
-    last = m.index! + m[0].length;
-  }
-  if (last < slice.length) out.push({ text: slice.slice(last), hit: false });
-  if (start > 0) out.unshift({ text: "… ", hit: false });
-  if (end < text.length) out.push({ text: " …", hit: false });
-  return out;
 }
