@@ -245,7 +245,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
                         key={h.id}
                         scope="col"
                         aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}
-                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-30 bg-paper shadow-[2px_0_0_0_#D5CFC3]" : ""}`}
+                        className={`px-2 py-2 text-left align-bottom ${i === 0 ? "sticky left-0 z-30 bg-paper shadow-[2px_0_0_0_var(--color-line)]" : ""}`}
                       >
                         {sortable ? (
                           <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-end gap-1 text-left font-bold underline decoration-dotted underline-offset-4">
@@ -265,7 +265,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id} className="border-b border-line align-top last:border-0" data-person={r.original.name}>
                   {r.getVisibleCells().map((c, i) => (
-                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 z-10 bg-panel shadow-[2px_0_0_0_#D5CFC3]" : ""}`}>
+                    <td key={c.id} className={`px-2 py-2 ${i === 0 ? "sticky left-0 z-10 bg-panel shadow-[2px_0_0_0_var(--color-line)]" : ""}`}>
                       {flexRender(c.column.columnDef.cell, c.getContext())}
                     </td>
                   ))}
