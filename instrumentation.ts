@@ -3,9 +3,9 @@
 // mail outbox worker starts (an interval in this process; lib/jobs.ts runs the same delivery).
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { checkEnvironmentAtStart } = await import("./lib/startup");
+  const { checkEnvironmentAtStart } = await import("@/lib/startup");
   await checkEnvironmentAtStart();
   if (process.env.NEXT_PHASE === "phase-production-build") return;
-  const { startOutboxWorker } = await import("./lib/mail/worker");
+  const { startOutboxWorker } = await import("@/lib/mail");
   startOutboxWorker();
 }

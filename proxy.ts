@@ -1,13 +1,13 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
-import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/api/client-ip";
+import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
 import { applySecurityHeaders } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
  * clear page or JSON (a TCP probe, remembered for one second); (2) statically generated lesson
  * pages get their session checked here, since the page itself holds no per-person data; (3) the
- * client address is worked out once (lib/api/client-ip.ts) and handed to better-auth.
+ * client address is worked out once (lib/client-ip) and handed to better-auth.
  * Every dynamic page, action and route handler checks access again where the data is (lib/access).
  */
 let lastProbe = { at: 0, up: true };

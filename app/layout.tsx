@@ -3,7 +3,7 @@ import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { bodyFont, monoFont } from "./fonts";
 import "./globals.css";
-import { palette } from "@/lib/theme/tokens";
+import { palette } from "@/lib/theme";
 
 export const metadata: Metadata = {
   title: { default: "Riser — training for residential sprinkler work", template: "%s · Riser" },

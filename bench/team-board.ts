@@ -1,5 +1,5 @@
 // Team board at scale, through the API of a running `next start`: 5,000 learners in 20 teams
-// (db/seed-scale.ts, seeded here when missing) with lessons, attempts, completions and
+// (scripts/seed/seed-scale.ts, seeded here when missing) with lessons, attempts, completions and
 // certificates across all nine modules. Measures, sequentially after a warm-up:
 //   - the board's first page (GET /api/team/board, 25 people, name order)        target p95 < 150 ms
 //   - a filtered page (one crew, status "overdue")                               target p95 < 150 ms
@@ -14,7 +14,7 @@ import { performance } from "node:perf_hooks";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/db/client";
 import { organization, user } from "@/db/schema";
-import { SCALE_MANAGER, SCALE_ORG } from "../db/seed-scale";
+import { SCALE_MANAGER, SCALE_ORG } from "../scripts/seed/seed-scale";
 import { APP, record, sessionCookie, summary } from "./lib";
 
 const RUNS = Number(process.env.BENCH_RUNS ?? 100);
@@ -26,8 +26,8 @@ async function scaleOrg() {
 }
 
 if (!(await scaleOrg())) {
-  console.log("[bench] seeding the scale organization (db/seed-scale.ts) …");
-  const r = spawnSync("node_modules/.bin/tsx", ["db/seed-scale.ts"], { stdio: "inherit", env: process.env });
+  console.log("[bench] seeding the scale organization (scripts/seed/seed-scale.ts) …");
+  const r = spawnSync("node_modules/.bin/tsx", ["scripts/seed/seed-scale.ts"], { stdio: "inherit", env: process.env });
   if (r.status !== 0) throw new Error("scale seed failed");
 }
 const org = (await scaleOrg())!;

@@ -8,7 +8,7 @@ import { z } from "zod";
 import { db, pool } from "@/db/client";
 import { user, verification } from "@/db/schema";
 import { audit } from "@/lib/audit";
-import { email as emailSchema, personName } from "@/lib/auth/schemas";
+import { email as emailSchema, personName } from "@/lib/auth/browser";
 import { env } from "@/lib/env";
 
 const LINK_HOURS = 24;

@@ -4,8 +4,8 @@
 // Run by `npm run build` and `npm test`; fails naming file and field when content is invalid.
 import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
-import { ContentError, loadCatalogFrom } from "../lib/content/load";
-import { buildSearchDocs } from "../lib/search/docs";
+import { ContentError, loadCatalogFrom } from "@/lib/content";
+import { buildSearchDocs } from "@/lib/search/browser";
 
 const root = path.resolve(process.cwd(), "content");
 try {

@@ -3,7 +3,7 @@
 // the lint would reject; `--memory` lists every marker with its line. Read-only: writes nothing.
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { loadCatalogFrom } from "../lib/content/load";
+import { loadCatalogFrom } from "@/lib/content";
 import { countMarkers, figuresIn, type Sourcing } from "./lib/content-figures";
 
 const root = path.resolve(process.cwd(), "content");

@@ -2,7 +2,7 @@
 // Riser's HTTP server: Next's request handler behind a plain Node server that tells the app who is
 // really connected. `next start` fills X-Forwarded-For with the peer address only when a request
 // arrives without one, so a forged value would survive; here the socket's address is always
-// appended, and the app (lib/api/client-ip.ts) counts TRUSTED_PROXY_HOPS addresses from the right.
+// appended, and the app (lib/client-ip) counts TRUSTED_PROXY_HOPS addresses from the right.
 //   node scripts/serve.mjs [--dev] [-H 127.0.0.1] [-p 3000]
 // npm start, npm test and npm run bench start the app with this; use it in production too.
 import { createServer } from "node:http";

@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // Runs a command with a local profile's environment (dev unless RISER_PROFILE says otherwise):
-//   node scripts/with-env.mjs tsx db/seed.ts
+//   node scripts/with-env.mjs tsx scripts/seed/seed.ts
 // Variables already set in the environment win, so a hosted DATABASE_URL is never overridden; and
 // when DATABASE_URL is set without RISER_PROFILE (a real instance), no local setting is added at all
 // (RISER_LOCAL, the mail catcher and the fakes exist only on local profiles).

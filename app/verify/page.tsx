@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { VerifyForm } from "@/components/certificates/verify-form";
 import { PageTitle } from "@/components/ui/page-title";
-import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_ERROR } from "@/lib/certificates/verify-code";
+import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_ERROR } from "@/lib/certificates";
 
 export const metadata: Metadata = { title: "Check a certificate" };
 

@@ -6,8 +6,8 @@ import { useSWRConfig } from "swr";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { passwordChangeSchema } from "@/lib/account/schemas";
-import { authClient } from "@/lib/auth/client";
+import { passwordChangeSchema } from "@/lib/account/browser";
+import { authClient } from "@/lib/auth/browser";
 
 type Values = z.infer<typeof passwordChangeSchema>;
 

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { emailChangeSchema, nameSchema } from "@/lib/account/schemas";
-import { authClient } from "@/lib/auth/client";
+import { emailChangeSchema, nameSchema } from "@/lib/account/browser";
+import { authClient } from "@/lib/auth/browser";
 
 export function NameForm({ name }: { name: string }) {
   const router = useRouter();

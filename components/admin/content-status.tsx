@@ -1,6 +1,6 @@
 "use client";
 import useSWR from "swr";
-import type { ContentStatus as Status } from "@/lib/admin/content";
+import type { ContentStatus as Status } from "@/lib/admin";
 import { getJson } from "@/lib/fetcher";
 import { serverFirst } from "@/components/ui/server-first";
 import { When } from "@/components/ui/data-table";

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import type { MailRow } from "@/lib/admin/mail";
+import type { MailRow } from "@/lib/admin";
 import { DataTable, When, type Column } from "@/components/ui/data-table";
 import { SelectField } from "@/components/ui/select-field";
 import { useDebounced } from "@/components/ui/use-debounced";

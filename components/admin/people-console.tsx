@@ -2,8 +2,8 @@
 import { useState } from "react";
 import { useSWRConfig } from "swr";
 import { FormNotice } from "@/components/ui/field";
-import { ROLES } from "@/lib/access/rules";
-import type { PersonRow } from "@/lib/admin/people";
+import { ROLES } from "@/lib/access/browser";
+import type { PersonRow } from "@/lib/admin";
 import { DataTable, tableKey, When, type Column } from "@/components/ui/data-table";
 import { Dialog } from "@/components/ui/dialog";
 import { SelectField } from "@/components/ui/select-field";

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { authClient } from "@/lib/auth/client";
-import { forgotSchema, resetSchema } from "@/lib/auth/schemas";
+import { authClient } from "@/lib/auth/browser";
+import { forgotSchema, resetSchema } from "@/lib/auth/browser";
 
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState(false);

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { authClient } from "@/lib/auth/client";
+import { authClient } from "@/lib/auth/browser";
 
 /** "Send the link again" for an address that still needs confirming (better-auth's own endpoint, rate-limited there). */
 export function ResendConfirmation({ email }: { email: string }) {

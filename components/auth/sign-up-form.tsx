@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
+import { signUpSchema, type SignUpInput } from "@/lib/auth/browser";
 import { postJson } from "@/lib/fetcher";
 import { ResendConfirmation } from "./resend-confirmation";
 

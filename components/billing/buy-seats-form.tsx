@@ -6,8 +6,8 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { formatMoney, quote, type PriceTier } from "@/lib/billing/pricing";
-import { checkoutInput, MAX_SEATS_PER_CHECKOUT } from "@/lib/billing/schemas";
+import { formatMoney, quote, type PriceTier } from "@/lib/billing/browser";
+import { checkoutInput, MAX_SEATS_PER_CHECKOUT } from "@/lib/billing/browser";
 
 const seatsOnly = checkoutInput.pick({ seats: true });
 

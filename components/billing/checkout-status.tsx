@@ -3,8 +3,8 @@ import Link from "next/link";
 import { useEffect, useState } from "react";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
-import { formatMoney } from "@/lib/billing/pricing";
-import type { CheckoutSummary } from "@/lib/billing/queries";
+import { formatMoney } from "@/lib/billing/browser";
+import type { CheckoutSummary } from "@/lib/billing";
 
 type Status = CheckoutSummary & { seatsNow: number; orgName: string };
 const FINAL = new Set(["paid", "expired", "failed"]);

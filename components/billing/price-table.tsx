@@ -1,4 +1,4 @@
-import { formatMoney, type PriceTier } from "@/lib/billing/pricing";
+import { formatMoney, type PriceTier } from "@/lib/billing/browser";
 
 /** The price per seat by purchase size. */
 export function PriceTable({ plans, currency }: { plans: PriceTier[]; currency: string }) {

@@ -1,5 +1,5 @@
-import { formatMoney } from "@/lib/billing/pricing";
-import type { Receipt } from "@/lib/billing/queries";
+import { formatMoney } from "@/lib/billing/browser";
+import type { Receipt } from "@/lib/billing";
 import { formatDayTime } from "./format";
 
 /** Every payment that added seats, newest first. */

@@ -1,4 +1,4 @@
-import type { SeatSummary } from "@/lib/billing/queries";
+import type { SeatSummary } from "@/lib/billing";
 import { formatDay, plural } from "./format";
 
 function Figure({ label, value, detail, testId }: { label: string; value: number; detail?: string; testId: string }) {

@@ -3,7 +3,7 @@ import { ShareLink } from "@/components/certificates/share-link";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { buttonLinkClass } from "@/components/ui/button";
 import type { HolderCertificate } from "@/lib/certificates";
-import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/status";
+import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/browser";
 import { env } from "@/lib/env";
 
 /** One of the holder's certificates: status, dates, hours, share link, PDF and renewal. */

@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { revokeInput, type RevokeInput } from "@/lib/certificates/schemas";
+import { revokeInput, type RevokeInput } from "@/lib/certificates/browser";
 
 /** Revoke one certificate with a reason (managers of its organization, admins). */
 export function RevokeForm({ id, serial, holderName }: { id: number; serial: string; holderName: string }) {

@@ -1,4 +1,4 @@
-import { STATUS_LABEL, type CertificateStatus } from "@/lib/certificates/status";
+import { STATUS_LABEL, type CertificateStatus } from "@/lib/certificates/browser";
 
 const STYLE: Record<CertificateStatus, string> = {
   valid: "border-pass bg-pass-light text-pass",

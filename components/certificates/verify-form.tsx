@@ -4,8 +4,8 @@ import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/schemas";
-import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/certificates/verify-code";
+import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/browser";
+import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/certificates/browser";
 
 /**
  * Type or paste a certificate's code (or its whole link). Works without JavaScript too: the form

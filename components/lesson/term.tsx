@@ -1,4 +1,4 @@
-import { loadCatalog } from "@/lib/content/load";
+import { loadCatalog } from "@/lib/content";
 import { TermPopover } from "./term-popover";
 
 /** <Term id="k-factor">K-factor</Term> in MDX: links a word to its glossary definition. */

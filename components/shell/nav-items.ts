@@ -1,4 +1,4 @@
-import type { Role } from "@/lib/access/rules";
+import type { Role } from "@/lib/access/browser";
 
 export type NavItem = { href: string; label: string; rule: "signed-in" | "manager" | "admin" };
 

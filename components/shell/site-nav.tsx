@@ -2,8 +2,8 @@
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
 import { useState } from "react";
-import { authClient } from "@/lib/auth/client";
-import { isRole } from "@/lib/access/rules";
+import { authClient } from "@/lib/auth/browser";
+import { isRole } from "@/lib/access/browser";
 import { navFor, signedOutLinks } from "./nav-items";
 
 export function SiteNav() {

@@ -1,6 +1,6 @@
 import Image from "next/image";
-import { evidenceUrl, type EvidenceItem } from "@/lib/signoffs/queries";
-import { formatBytes } from "@/lib/signoffs/schemas";
+import { evidenceUrl, type EvidenceItem } from "@/lib/signoffs";
+import { formatBytes } from "@/lib/signoffs/browser";
 
 /**
  * Thumbnails of a submission's files, each opening the full file in a new tab. Every URL goes

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { Viewer } from "@/lib/access";
-import { signOffsOfPerson } from "@/lib/signoffs/queries";
+import { signOffsOfPerson } from "@/lib/signoffs";
 import { EvidenceThumbs } from "./evidence-thumbs";
 import { SignOffBadge } from "./status-badge";
 import { isoDay } from "@/lib/dates";

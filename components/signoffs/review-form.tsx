@@ -5,7 +5,7 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { reviewInput } from "@/lib/signoffs/schemas";
+import { reviewInput } from "@/lib/signoffs/browser";
 
 type Decision = "approve" | "return";
 

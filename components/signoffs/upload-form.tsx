@@ -5,7 +5,7 @@ import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
-import { ACCEPT, MAX_FILES, MAX_UPLOAD_LABEL, checkChosenFiles, uploadFormInput, type UploadFormInput } from "@/lib/signoffs/schemas";
+import { ACCEPT, MAX_FILES, MAX_UPLOAD_LABEL, checkChosenFiles, uploadFormInput, type UploadFormInput } from "@/lib/signoffs/browser";
 
 type ServerAnswer = { status: number; body: { error?: string; fieldErrors?: Record<string, string[]> } };
 

@@ -6,9 +6,9 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { authClient } from "@/lib/auth/client";
+import { authClient } from "@/lib/auth/browser";
 import { postJson } from "@/lib/fetcher";
-import { acceptInviteSchema, type AcceptInviteInput } from "@/lib/team/schemas";
+import { acceptInviteSchema, type AcceptInviteInput } from "@/lib/team/browser";
 
 /** The invitee chooses a name and a password; the account is created and they are signed in. */
 export function AcceptInviteForm({ token, email, name }: { token: string; email: string; name: string }) {

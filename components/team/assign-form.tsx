@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson, postJson } from "@/lib/fetcher";
-import { assignSchema, type AssignInput } from "@/lib/team/schemas";
+import { assignSchema, type AssignInput } from "@/lib/team/browser";
 import { isoDay } from "@/lib/dates";
 
 type Out = z.output<typeof assignSchema>;

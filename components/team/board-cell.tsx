@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
-import type { RichCell } from "@/lib/team/board-extras";
-import { STATUS_LABELS } from "@/lib/team/schemas";
+import type { RichCell } from "@/lib/team";
+import { STATUS_LABELS } from "@/lib/team/browser";
 import { plural } from "@/lib/plural";
 import { StatusBadge } from "./status-badge";
 

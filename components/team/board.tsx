@@ -7,9 +7,9 @@ import { FormError } from "@/components/ui/field";
 import { serverFirst } from "@/components/ui/server-first";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
-import type { BoardPage } from "@/lib/team/board";
-import type { RichRow } from "@/lib/team/board-extras";
-import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/schemas";
+import type { BoardPage } from "@/lib/team";
+import type { RichRow } from "@/lib/team";
+import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/browser";
 import { isoDay } from "@/lib/dates";
 import { BoardCellView } from "./board-cell";
 

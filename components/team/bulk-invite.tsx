@@ -4,8 +4,8 @@ import { useRouter } from "next/navigation";
 import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
-import type { RosterPreview } from "@/lib/team/bulk";
-import { ROLE_LABELS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/schemas";
+import type { RosterPreview } from "@/lib/team";
+import { ROLE_LABELS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/browser";
 import { plural } from "@/lib/plural";
 
 type ImportResult = { imported: number; skipped: number; message: string };

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { Step } from "@/lib/team/first-day-steps";
+import type { Step } from "@/lib/team/browser";
 
 /** A new manager's checklist: four steps, each with its page and whether it is done. */
 export function FirstDayChecklist({ steps }: { steps: Step[] }) {

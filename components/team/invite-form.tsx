@@ -8,7 +8,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { INVITE_DAYS, INVITE_ROLES, ROLE_LABELS, inviteSchema, type InviteInput } from "@/lib/team/schemas";
+import { INVITE_DAYS, INVITE_ROLES, ROLE_LABELS, inviteSchema, type InviteInput } from "@/lib/team/browser";
 
 type Out = z.output<typeof inviteSchema>;
 

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { SelectField } from "@/components/ui/select-field";
 import { postJson } from "@/lib/fetcher";
-import { INVITE_ROLES, ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
+import { INVITE_ROLES, ROLE_LABELS, type InviteRole } from "@/lib/team/browser";
 import { ActionButton } from "./action-button";
 
 /** The manager's changes on a person's page: team, role (never admin), removal from the organization. */

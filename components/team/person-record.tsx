@@ -2,9 +2,9 @@ import Link from "next/link";
 import { StatusBadge } from "@/components/team/status-badge";
 import { Table } from "@/components/ui/table";
 import { isoDay } from "@/lib/dates";
-import type { assignedWork } from "@/lib/team/assignments";
-import type { boardModules } from "@/lib/team/board";
-import type { personHistory } from "@/lib/team/people";
+import type { assignedWork } from "@/lib/team";
+import type { boardModules } from "@/lib/team";
+import type { personHistory } from "@/lib/team";
 
 type History = Awaited<ReturnType<typeof personHistory>>;
 type Work = Awaited<ReturnType<typeof assignedWork>>;

@@ -1,4 +1,4 @@
-import { STATUS_LABELS, type BoardStatus } from "@/lib/team/schemas";
+import { STATUS_LABELS, type BoardStatus } from "@/lib/team/browser";
 
 /** Colour and a symbol, never colour alone; the words carry the meaning for screen readers. */
 const STYLE: Record<BoardStatus, { cls: string; mark: string; short: string }> = {

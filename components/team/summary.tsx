@@ -3,11 +3,11 @@ import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxi
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
 import { getJson } from "@/lib/fetcher";
-import type { TeamTotal, WeekPoint } from "@/lib/team/board";
+import type { TeamTotal, WeekPoint } from "@/lib/team";
 import { monthDay, startOfIsoDay } from "@/lib/dates";
-import { chartColors } from "@/lib/theme/tokens";
+import { chartColors } from "@/lib/theme/browser";
 import { serverFirst } from "@/components/ui/server-first";
-import { PERCENT_AXIS, PERCENT_CHART_MARGIN, WEEK_AXIS } from "@/lib/team/chart";
+import { PERCENT_AXIS, PERCENT_CHART_MARGIN, WEEK_AXIS } from "@/lib/team/browser";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 

@@ -1,7 +1,7 @@
 import "server-only";
 import Link from "next/link";
 import { getViewer } from "@/lib/access";
-import { waitingCount } from "@/lib/signoffs/queries";
+import { waitingCount } from "@/lib/signoffs";
 
 const TABS = [
   { href: "/team", label: "Board" },

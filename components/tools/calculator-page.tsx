@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { CALCULATOR_INFO, isCalculatorId, type CalculatorId } from "@/lib/hydraulics/shared";
+import { CALCULATOR_INFO, isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
 import { PageTitle } from "@/components/ui/page-title";
 import { Calculator } from "./calculator";
 

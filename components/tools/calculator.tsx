@@ -1,4 +1,4 @@
-import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics/shared";
+import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
 import { ElevationCalculator } from "./elevation";
 import { FlowTestCalculator } from "./flow-test";
 import { FrictionLossCalculator } from "./friction-loss";

@@ -3,7 +3,7 @@
  * leaves out. The values are the input type of the calculator's schema (lib/hydraulics/shared), so
  * the same schema validates them.
  */
-import type { CalculatorFormValues, CalculatorId, CalculatorInputs, SegmentReportInput } from "@/lib/hydraulics/shared";
+import type { CalculatorFormValues, CalculatorId, CalculatorInputs, SegmentReportInput } from "@/lib/hydraulics";
 
 const text = (v: number | undefined) => (v === undefined ? "" : String(v));
 

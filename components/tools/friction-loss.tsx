@@ -2,7 +2,7 @@
 
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics/shared";
+import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
 import { flatFormValues } from "./form-values";

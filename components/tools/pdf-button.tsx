@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import type { CalculatorId } from "@/lib/hydraulics/shared";
+import type { CalculatorId } from "@/lib/hydraulics";
 
 /** Endpoint the lead wires to lib/tools/summary-pdf.ts (`summaryPdfResponse`). */
 export const SUMMARY_PDF_ENDPOINT = "/api/tools/summary";

@@ -1,4 +1,4 @@
-import type { CalculatorReport } from "@/lib/hydraulics/shared";
+import type { CalculatorReport } from "@/lib/hydraulics";
 
 const statusStyle = {
   ok: "border-pass bg-pass-light text-pass",

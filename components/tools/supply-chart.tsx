@@ -1,7 +1,7 @@
 "use client";
 
 import { CartesianGrid, ComposedChart, Line, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { formatForDisplay, type ReportChart } from "@/lib/hydraulics/shared";
+import { formatForDisplay, type ReportChart } from "@/lib/hydraulics";
 
 // palette from tailwind.config.ts
 const WATER = "#1B617A";

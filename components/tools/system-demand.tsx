@@ -3,7 +3,7 @@
 import { useMemo, useRef, useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics/shared";
+import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField, TextField } from "./fields";
 import { MATERIAL_OPTIONS, sizeOptions } from "./friction-loss";

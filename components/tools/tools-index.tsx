@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_IDS, CALCULATOR_INFO } from "@/lib/hydraulics/shared";
+import { CALCULATOR_CAUTION_TEXT, CALCULATOR_IDS, CALCULATOR_INFO } from "@/lib/hydraulics";
 import { PageTitle } from "@/components/ui/page-title";
 
 /** body of /tools: the calculators, each with a line on what it does */

@@ -1,4 +1,4 @@
-import type { CalculatorId } from "@/lib/hydraulics/shared";
+import type { CalculatorId } from "@/lib/hydraulics";
 
 export interface CalculatorProps {
   /** a lesson's worked example, with the content contract's US keys (e.g. { kFactor: 4.9, pressurePsi: 10 }) */

@@ -1,4 +1,4 @@
-import type { Units } from "@/lib/hydraulics/shared";
+import type { Units } from "@/lib/hydraulics";
 
 /** the unit names a form shows beside its fields */
 export function unitLabels(units: Units | undefined) {

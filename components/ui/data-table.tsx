@@ -2,7 +2,7 @@
 import { useState, type ReactNode } from "react";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
-import type { Paged } from "@/lib/admin/schemas";
+import type { Paged } from "@/lib/admin/browser";
 import { utcStamp } from "@/lib/dates";
 import { Table } from "./table";
 

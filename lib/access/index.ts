@@ -83,3 +83,4 @@ export async function requireViewer(rule: Exclude<Rule, "public"> = "signed-in",
   if (!roleSatisfies(viewer.role, rule)) forbidden();
   return viewer;
 }
+export * from "./scope";

@@ -1,6 +1,6 @@
 /** Account settings forms: shared by the browser forms; better-auth checks the same rules on its side. */
 import { z } from "zod";
-import { email, password, personName } from "@/lib/auth/schemas";
+import { email, password, personName } from "@/lib/auth/browser";
 
 export const nameSchema = z.object({ name: personName });
 

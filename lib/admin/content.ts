@@ -4,9 +4,9 @@ import { db } from "@/db/client";
 import { catalogCard, catalogLesson, catalogModule, catalogPath, contentSync, questionVersion } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { audit } from "@/lib/audit";
-import { ContentError, contentRoot, loadCatalogFrom, type Catalog } from "@/lib/content/load";
-import { syncCatalog, type SyncCounts } from "@/lib/content/sync";
-import "@/lib/content/sync-hooks";
+import { ContentError, contentRoot, loadCatalogFrom, type Catalog } from "@/lib/content";
+import { syncCatalog, type SyncCounts } from "@/lib/catalog";
+import "@/lib/catalog";
 import { iso } from "./paging";
 
 type Kind = "modules" | "lessons" | "paths" | "cards" | "questions";

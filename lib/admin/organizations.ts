@@ -5,7 +5,7 @@ import type { z } from "zod";
 import { db } from "@/db/client";
 import { organization, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { CreateOrganizationInput, organizationsQuery, Paged } from "./schemas";
@@ -67,7 +67,7 @@ async function nameTaken(name: string, exceptId?: string): Promise<boolean> {
 }
 
 export async function createOrganization(actor: Actor, input: CreateOrganizationInput, ip: string): Promise<{ id: string }> {
-  if (await nameTaken(input.name)) throw new ApiError(400, "Some fields need attention.", { name: ["An organization with this name exists."] });
+  if (await nameTaken(input.name)) throw new DomainError("invalid", "Some fields need attention.", { name: ["An organization with this name exists."] });
   const id = randomUUID();
   await db.transaction(async (tx) => {
     await tx.insert(organization).values({ id, name: input.name, kind: input.kind, seats: input.seats });
@@ -81,9 +81,9 @@ export async function createOrganization(actor: Actor, input: CreateOrganization
 
 export async function renameOrganization(actor: Actor, id: string, name: string, ip: string): Promise<void> {
   const [current] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, id));
-  if (!current) throw new ApiError(404, "No such organization.");
-  if (current.name === name) throw new ApiError(400, "Some fields need attention.", { name: ["That is already its name."] });
-  if (await nameTaken(name, id)) throw new ApiError(400, "Some fields need attention.", { name: ["An organization with this name exists."] });
+  if (!current) throw new DomainError("not-found", "No such organization.");
+  if (current.name === name) throw new DomainError("invalid", "Some fields need attention.", { name: ["That is already its name."] });
+  if (await nameTaken(name, id)) throw new DomainError("invalid", "Some fields need attention.", { name: ["An organization with this name exists."] });
   await db.transaction(async (tx) => {
     await tx.update(organization).set({ name }).where(eq(organization.id, id));
     await audit({ actor, organizationId: id, action: "organization.rename", targetType: "organization", targetId: id, ip, details: { from: current.name, to: name } }, tx);

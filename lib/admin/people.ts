@@ -4,7 +4,7 @@ import type { z } from "zod";
 import { db, type Tx } from "@/db/client";
 import { organization, session, team, user } from "@/db/schema";
 import type { Role, Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { Paged, peopleQuery } from "./schemas";
@@ -92,7 +92,7 @@ async function findPerson(id: string): Promise<Target> {
     .select({ id: user.id, name: user.name, email: user.email, role: user.role, organizationId: user.organizationId, teamId: user.teamId, banned: user.banned })
     .from(user)
     .where(eq(user.id, id));
-  if (!row) throw new ApiError(404, "No such person.");
+  if (!row) throw new DomainError("not-found", "No such person.");
   return { ...row, banned: Boolean(row.banned) };
 }
 
@@ -110,10 +110,10 @@ async function auditedChange(entry: Parameters<typeof audit>[0], change: (tx: Tx
 
 export async function changeRole(actor: Actor, personId: string, role: Role, reason: string, ctx: RequestContext): Promise<void> {
   const person = await findPerson(personId);
-  if (person.id === actor.id) throw new ApiError(400, "You cannot change your own role; ask another admin.");
-  if (person.role === role) throw new ApiError(400, "Some fields need attention.", { role: [`${person.name} already has this role.`] });
+  if (person.id === actor.id) throw new DomainError("invalid", "You cannot change your own role; ask another admin.");
+  if (person.role === role) throw new DomainError("invalid", "Some fields need attention.", { role: [`${person.name} already has this role.`] });
   if (role !== "admin" && !person.organizationId) {
-    throw new ApiError(400, "Some fields need attention.", { role: ["Move this person into an organization first: every role but admin belongs to one."] });
+    throw new DomainError("invalid", "Some fields need attention.", { role: ["Move this person into an organization first: every role but admin belongs to one."] });
   }
   await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.role", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { from: person.role, to: role } },
@@ -124,8 +124,8 @@ export async function changeRole(actor: Actor, personId: string, role: Role, rea
 export async function moveOrganization(actor: Actor, personId: string, organizationId: string, reason: string | undefined, ctx: RequestContext): Promise<void> {
   const person = await findPerson(personId);
   const [dest] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, organizationId));
-  if (!dest) throw new ApiError(400, "Some fields need attention.", { organizationId: ["No such organization."] });
-  if (person.organizationId === dest.id) throw new ApiError(400, "Some fields need attention.", { organizationId: [`${person.name} is already in ${dest.name}.`] });
+  if (!dest) throw new DomainError("invalid", "Some fields need attention.", { organizationId: ["No such organization."] });
+  if (person.organizationId === dest.id) throw new DomainError("invalid", "Some fields need attention.", { organizationId: [`${person.name} is already in ${dest.name}.`] });
   await db.transaction(async (tx) => {
     // Teams belong to one organization, so the person leaves their team.
     await tx.update(user).set({ organizationId: dest.id, teamId: null }).where(eq(user.id, person.id));
@@ -147,8 +147,8 @@ export async function moveOrganization(actor: Actor, personId: string, organizat
 
 export async function banPerson(actor: Actor, personId: string, reason: string, days: number | null, ctx: RequestContext): Promise<void> {
   const person = await findPerson(personId);
-  if (person.id === actor.id) throw new ApiError(400, "You cannot ban yourself.");
-  if (person.banned) throw new ApiError(400, `${person.name} is already banned.`);
+  if (person.id === actor.id) throw new DomainError("invalid", "You cannot ban yourself.");
+  if (person.banned) throw new DomainError("invalid", `${person.name} is already banned.`);
   await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.ban", targetType: "user", targetId: person.id, reason, ip: ctx.ip, details: { days } },
     // the ban, as better-auth's admin plugin stores it, and every session of the person ended
@@ -164,7 +164,7 @@ export async function banPerson(actor: Actor, personId: string, reason: string, 
 
 export async function unbanPerson(actor: Actor, personId: string, reason: string | undefined, ctx: RequestContext): Promise<void> {
   const person = await findPerson(personId);
-  if (!person.banned) throw new ApiError(400, `${person.name} is not banned.`);
+  if (!person.banned) throw new DomainError("invalid", `${person.name} is not banned.`);
   await auditedChange(
     { actor, organizationId: person.organizationId, action: "user.unban", targetType: "user", targetId: person.id, reason: reason ?? null, ip: ctx.ip },
     (tx) => tx.update(user).set({ banned: false, banReason: null, banExpires: null, updatedAt: new Date() }).where(eq(user.id, person.id)),

@@ -1,6 +1,6 @@
 /** Admin console input: shared by the forms (react-hook-form) and the route handlers. No server code. */
 import { z } from "zod";
-import { ROLES } from "@/lib/access/rules";
+import { ROLES } from "@/lib/access/browser";
 
 export const ORGANIZATION_KINDS = ["contractor", "builder"] as const;
 

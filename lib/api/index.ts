@@ -2,8 +2,9 @@ import "server-only";
 import { ZodError, type ZodType } from "zod";
 import { AccessError, check, getRequestViewer, type Rule, type Viewer } from "@/lib/access";
 import { isDatabaseDown } from "@/lib/db-errors";
+import { DomainError } from "@/lib/errors";
 import { env } from "@/lib/env";
-import { clientIpOf } from "./client-ip";
+import { clientIpOf } from "@/lib/client-ip";
 
 /** An error whose message is safe to show: becomes `{ error }` with its status. */
 export class ApiError extends Error {
@@ -54,7 +55,7 @@ type SignedCtx<P> = { req: Request; viewer: Viewer; params: P };
 
 /** Maps any thrown error to a real status with a message; never a stack trace. */
 export function errorResponse(err: unknown): Response {
-  if (err instanceof ApiError) {
+  if (err instanceof ApiError || err instanceof DomainError) {
     return json({ error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) }, err.status);
   }
   if (err instanceof AccessError) return json({ error: err.message }, err.status);
@@ -105,7 +106,7 @@ export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
 /**
  * The client address for audit rows and rate limits: the connected peer (appended by
  * scripts/serve.mjs), or with TRUSTED_PROXY_HOPS set, the address the first trusted proxy saw.
- * A forged X-Forwarded-For never decides it (lib/api/client-ip.ts).
+ * A forged X-Forwarded-For never decides it (lib/client-ip).
  */
 export function clientIp(req: Request): string {
   return clientIpOf(req.headers);

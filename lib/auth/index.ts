@@ -10,7 +10,7 @@ import * as schema from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { nameProblem, normalizeName } from "@/lib/names";
-import { CLIENT_IP_HEADER } from "@/lib/api/client-ip";
+import { CLIENT_IP_HEADER } from "@/lib/client-ip";
 import { signupContext } from "./signup-context";
 import { assertEmailChangeAllowed, assertFieldLengths, assertPasswordAllowed } from "./guards";
 import { MIN_PASSWORD_LENGTH } from "./password-policy";
@@ -113,7 +113,7 @@ export const auth = betterAuth({
   advanced: {
     useSecureCookies: env.INSECURE_COOKIES !== "1",
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
-    // proxy.ts sets this header from the real peer and TRUSTED_PROXY_HOPS (lib/api/client-ip.ts),
+    // proxy.ts sets this header from the real peer and TRUSTED_PROXY_HOPS (lib/client-ip),
     // replacing any client value: a forged X-Forwarded-For never reaches the rate limit or sessions.
     ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     database: { generateId: () => crypto.randomUUID() },
@@ -173,3 +173,6 @@ function checkedName(name: unknown): string {
   if (problem) throw new APIError("BAD_REQUEST", { message: `Name: ${problem}` });
   return normalizeName(name as string);
 }
+export * from "./schemas";
+export * from "./signup";
+export * from "./signup-context";

@@ -3,7 +3,7 @@ import { createHash, randomBytes, randomUUID } from "node:crypto";
 import { and, count, eq, isNotNull, lt } from "drizzle-orm";
 import { db } from "@/db/client";
 import { account, organization, session, signupIntent, user, verification } from "@/db/schema";
-import { hitRateLimit } from "@/lib/certificates/rate-limit";
+import { hitRateLimit } from "@/lib/rate-limit";
 import { env } from "@/lib/env";
 
 /**

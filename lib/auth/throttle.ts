@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { rateLimitBucket, user } from "@/db/schema";
-import { hitRateLimit } from "@/lib/certificates/rate-limit";
+import { hitRateLimit } from "@/lib/rate-limit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 

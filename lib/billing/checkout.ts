@@ -4,10 +4,10 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { checkout } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
-import { resolveWriteOrg } from "@/lib/team/scope";
+import { resolveWriteOrg } from "@/lib/access";
 import { CURRENCY, PLANS } from "./plans";
 import { quote } from "./pricing";
 import { isProviderUnreachable, paymentProvider } from "./provider";
@@ -40,7 +40,7 @@ async function claimCheckout(viewer: Viewer, orgId: string, seats: number, key: 
   const existing = await findByKey(orgId, key);
   if (existing) return existing;
   const q = quote(seats, PLANS, CURRENCY);
-  if (!q) throw new ApiError(400, "Some fields need attention.", { seats: ["No price is set for this number of seats"] });
+  if (!q) throw new DomainError("invalid", "Some fields need attention.", { seats: ["No price is set for this number of seats"] });
   const id = randomUUID();
   const at = new Date();
   try {
@@ -84,15 +84,15 @@ async function claimCheckout(viewer: Viewer, orgId: string, seats: number, key: 
  */
 export async function startCheckout(viewer: Viewer, input: { seats: number; idempotencyKey: string; org?: string }, ip: string): Promise<StartedCheckout> {
   const stripe = paymentProvider();
-  if (!stripe) throw new ApiError(503, "Buying seats is switched off on this Riser instance: no payment service is configured. Nothing was charged.");
+  if (!stripe) throw new DomainError("unavailable", "Buying seats is switched off on this Riser instance: no payment service is configured. Nothing was charged.");
   const { orgId, orgName } = await resolveWriteOrg(viewer, input.org);
   const row = await claimCheckout(viewer, orgId, input.seats, input.idempotencyKey, ip);
 
   if (row.seats !== input.seats) {
-    throw new ApiError(409, `This purchase was started for ${row.seats} seat${row.seats === 1 ? "" : "s"}. Reload the page to buy a different number.`);
+    throw new DomainError("conflict", `This purchase was started for ${row.seats} seat${row.seats === 1 ? "" : "s"}. Reload the page to buy a different number.`);
   }
-  if (row.status === "paid") throw new ApiError(409, "This purchase is already paid and its seats were added. Reload the page to buy more.");
-  if (row.status === "expired" || row.status === "failed") throw new ApiError(409, "This checkout ended without payment. Reload the page to start a new one.");
+  if (row.status === "paid") throw new DomainError("conflict", "This purchase is already paid and its seats were added. Reload the page to buy more.");
+  if (row.status === "expired" || row.status === "failed") throw new DomainError("conflict", "This checkout ended without payment. Reload the page to start a new one.");
   const started = (url: string, reused: boolean): StartedCheckout => ({ checkoutId: row.id, url, seats: row.seats, amount: row.amount, currency: row.currency, reused });
   if (row.providerUrl) return started(row.providerUrl, true);
 
@@ -124,12 +124,12 @@ export async function startCheckout(viewer: Viewer, input: { seats: number; idem
       .where(eq(checkout.id, row.id));
     if (isProviderUnreachable(err)) {
       console.warn(`[billing] checkout ${row.id}: payment service unreachable: ${message}`);
-      throw new ApiError(503, UNREACHABLE);
+      throw new DomainError("unavailable", UNREACHABLE);
     }
     console.error(`[billing] checkout ${row.id}: the payment service refused the session`, err);
-    throw new ApiError(502, "The payment service could not start this checkout. Nothing was charged and no seats were added. Try again later, or ask Riser's administrator.");
+    throw new DomainError("upstream", "The payment service could not start this checkout. Nothing was charged and no seats were added. Try again later, or ask Riser's administrator.");
   }
-  if (!session.url) throw new ApiError(502, "The payment service did not return a payment page. Nothing was charged.");
+  if (!session.url) throw new DomainError("upstream", "The payment service did not return a payment page. Nothing was charged.");
   await db
     .update(checkout)
     .set({ providerSessionId: session.id, providerUrl: session.url, status: "open", lastError: null, updatedAt: new Date() })

@@ -1,8 +1,8 @@
 import "server-only";
 import { forbidden, notFound } from "next/navigation";
 import { AccessError, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
-import { resolveScope, type OrgScope } from "@/lib/team/scope";
+import { DomainError } from "@/lib/errors";
+import { resolveScope, type OrgScope } from "@/lib/access";
 
 /** The organization a billing page shows: a 403 page for another organization, 404 for none. */
 export async function billingPageScope(viewer: Viewer, org: string | string[] | undefined): Promise<OrgScope> {
@@ -10,7 +10,7 @@ export async function billingPageScope(viewer: Viewer, org: string | string[] | 
     return await resolveScope(viewer, typeof org === "string" && org ? org : null);
   } catch (err) {
     if (err instanceof AccessError) forbidden();
-    if (err instanceof ApiError && err.status === 404) notFound();
+    if (err instanceof DomainError && err.kind === "not-found") notFound();
     throw err;
   }
 }

@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { checkout, organization, paymentEvent, type CheckoutStatus } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
 import type { TrialState } from "./allowance";
-import { seatUsage } from "@/lib/team/seats";
+import { seatUsage } from "@/lib/billing/seats";
 import { CURRENCY, PLANS } from "./plans";
 import type { PriceTier } from "./pricing";
 import { CHECKOUT_STATUS_LABEL } from "./schemas";

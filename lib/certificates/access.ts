@@ -4,9 +4,9 @@ import "server-only";
  * certificate's organization, admins) and revoking (a manager of that organization or an admin).
  */
 import type { Certificate } from "@/db/schema";
-import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
-import { loadCatalog } from "@/lib/content/load";
+import { AccessError, canManageOrganization, organizationFilter, type Viewer } from "@/lib/access";
+import { DomainError } from "@/lib/errors";
+import { loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { renderCertificatePdf } from "./pdf";
 import { certificateById, certificatesOfOrganization, serialOf } from "./queries";
@@ -26,7 +26,7 @@ export function canSeeCertificate(viewer: Viewer, cert: Pick<Certificate, "userI
 export async function certificateForViewer(viewer: Viewer, rawId: string): Promise<Certificate> {
   const id = parseCertificateId(rawId);
   const cert = id === null ? null : await certificateById(id);
-  if (!cert) throw new ApiError(404, "No certificate with that number.");
+  if (!cert) throw new DomainError("not-found", "No certificate with that number.");
   if (!canSeeCertificate(viewer, cert)) throw new AccessError(403, "Only the holder, their organization's managers and admins can download this certificate.");
   return cert;
 }
@@ -67,19 +67,18 @@ export async function certificatePdf(cert: Certificate, generatedAt: Date = new 
  */
 export async function revokeCertificate(viewer: Viewer, rawId: string, reason: string, ip: string | null): Promise<{ id: number; serial: string; revokedAt: Date }> {
   const id = parseCertificateId(rawId);
-  if (id === null) throw new ApiError(404, "No certificate with that number.");
+  if (id === null) throw new DomainError("not-found", "No certificate with that number.");
   const r = await revokeWithAudit(viewer, id, reason, ip, (cert) => {
     if (!canManageOrganization(viewer, cert.organizationId)) {
       throw new AccessError(403, "Only a manager of the holder's organization or an admin can revoke this certificate.");
     }
   });
-  if (!r.ok) throw r.problem === "not-found" ? new ApiError(404, "No certificate with that number.") : new ApiError(409, `Certificate ${r.serial} was already revoked.`);
+  if (!r.ok) throw r.problem === "not-found" ? new DomainError("not-found", "No certificate with that number.") : new DomainError("conflict", `Certificate ${r.serial} was already revoked.`);
   return r;
 }
 
 /** Certificates a manager (own organization) or an admin (all) may revoke; empty for everyone else. */
 export async function revocableCertificates(viewer: Viewer, now: Date = new Date()) {
-  if (viewer.role === "admin") return certificatesOfOrganization(null, { onlyUnrevoked: true, now, limit: 100 });
-  if (viewer.role === "manager" && viewer.organizationId) return certificatesOfOrganization(viewer.organizationId, { onlyUnrevoked: true, now, limit: 100 });
-  return [];
+  const scope = organizationFilter(viewer);
+  return scope === undefined ? [] : certificatesOfOrganization(scope, { onlyUnrevoked: true, now, limit: 100 });
 }

@@ -15,3 +15,13 @@ export {
 } from "./queries";
 export { sendExpiryReminders, type ReminderRun } from "./reminders";
 export { certificateStatus, isExpiringSoon, EXPIRY_REMINDER_DAYS, type CertificateStatus, type CertificateKind } from "./status";
+export * from "./access";
+export * from "./issue";
+export * from "./jobs";
+export * from "./queries";
+export * from "./reminders";
+export * from "./schemas";
+export * from "./seed";
+export * from "./status";
+export * from "./verify";
+export * from "./verify-code";

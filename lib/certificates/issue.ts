@@ -4,7 +4,7 @@ import { newVerificationCode as newCode } from "./verify-code";
 import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { catalogModule, certificate, certificateSerialCounter, moduleCompletion, organization, user, type Certificate } from "@/db/schema";
-import { findModule, loadCatalog } from "@/lib/content/load";
+import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";

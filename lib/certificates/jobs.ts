@@ -1,6 +1,6 @@
 import "server-only";
 import { timingSafeEqual } from "node:crypto";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { env } from "@/lib/env";
 
 /**
@@ -9,10 +9,10 @@ import { env } from "@/lib/env";
  */
 export function assertJobsSecret(req: Request): void {
   const given = req.headers.get("x-jobs-secret");
-  if (!given) throw new ApiError(401, "This job needs the x-jobs-secret header.");
+  if (!given) throw new DomainError("unauthenticated", "This job needs the x-jobs-secret header.");
   const expected = env.JOBS_SECRET;
-  if (!expected) throw new ApiError(403, "Jobs are switched off here: JOBS_SECRET is not set.");
+  if (!expected) throw new DomainError("forbidden", "Jobs are switched off here: JOBS_SECRET is not set.");
   const a = Buffer.from(given);
   const b = Buffer.from(expected);
-  if (a.length !== b.length || !timingSafeEqual(a, b)) throw new ApiError(403, "The x-jobs-secret header does not match.");
+  if (a.length !== b.length || !timingSafeEqual(a, b)) throw new DomainError("forbidden", "The x-jobs-secret header does not match.");
 }

@@ -11,7 +11,7 @@ import "server-only";
 import { degrees, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
 import { C, createPdf, defaultFontDir } from "@/lib/pdf";
-import { palette } from "@/lib/theme/tokens";
+import { palette } from "@/lib/theme";
 import { formatCertificateDate, formatHours, type CertificateKind } from "./status";
 
 export type CertificatePdfData = {

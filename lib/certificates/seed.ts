@@ -13,7 +13,7 @@ import { randomInt, randomUUID } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, certificate, lessonProgress, moduleCompletion, quizAttempt, user } from "@/db/schema";
-import { findModule, loadCatalog } from "@/lib/content/load";
+import { findModule, loadCatalog } from "@/lib/content";
 import { issueCertificateForCompletion } from "./issue";
 import { revokeWithAudit } from "./revoke";
 import { addMonthsUtc } from "./status";

@@ -1,7 +1,7 @@
 import "server-only";
-import { clientIpOf } from "@/lib/api/client-ip";
+import { clientIpOf } from "@/lib/client-ip";
 import { env } from "@/lib/env";
-import { hitRateLimit, type RateLimitResult } from "./rate-limit";
+import { hitRateLimit, type RateLimitResult } from "@/lib/rate-limit";
 
 /** The client address (same rule as lib/api's clientIp: forged X-Forwarded-For values are ignored). */
 export function ipFromHeaders(headers: Headers): string {

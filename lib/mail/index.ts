@@ -28,3 +28,5 @@ export async function sendMail(mail: Mail, tx?: Tx): Promise<{ ok: boolean }> {
   scheduleDelivery(tx ? 400 : 20);
   return { ok: true };
 }
+export * from "./outbox";
+export * from "./worker";

@@ -1,6 +1,6 @@
 /** The theme palette (lib/theme/tokens.ts) as pdf-lib colours. */
 import { rgb, type RGB } from "pdf-lib";
-import { palette, type ColorToken } from "@/lib/theme/tokens";
+import { palette, type ColorToken } from "@/lib/theme/browser";
 
 export function hexToRgb(h: string): RGB {
   const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(h);

@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, lessonOpen, lessonProgress, user } from "@/db/schema";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
 
 export type ModuleProgress = { module: string; completed: string[]; lastAt: Date | null };
@@ -87,7 +87,7 @@ export async function lastCompletedLesson(userId: string): Promise<{ module: str
  */
 export async function markLessonComplete(userId: string, moduleSlug: string, lessonSlug: string): Promise<string[]> {
   const lesson = await findLesson(moduleSlug, lessonSlug);
-  if (!lesson) throw new ApiError(404, `No lesson "${lessonSlug}" in module "${moduleSlug}".`);
+  if (!lesson) throw new DomainError("not-found", `No lesson "${lessonSlug}" in module "${moduleSlug}".`);
   const [done] = await db
     .select({ at: lessonProgress.completedAt })
     .from(lessonProgress)
@@ -97,12 +97,12 @@ export async function markLessonComplete(userId: string, moduleSlug: string, les
       .select({ at: lessonOpen.firstOpenedAt })
       .from(lessonOpen)
       .where(and(eq(lessonOpen.userId, userId), eq(lessonOpen.lessonId, lesson.id)));
-    if (!opened) throw new ApiError(409, "Open the lesson and read it first: reading time is counted from when you open it.");
+    if (!opened) throw new DomainError("conflict", "Open the lesson and read it first: reading time is counted from when you open it.");
     const needed = minimumSeatSeconds(lesson.minutes);
     const left = needed - Math.floor((Date.now() - opened.at.getTime()) / 1000);
     if (left > 0) {
       const mins = Math.ceil(left / 60);
-      throw new ApiError(
+      throw DomainError.fromStatus(
         409,
         `Keep reading: this ${lesson.minutes}-minute lesson counts as done after ${Math.ceil(needed / 60)} minutes of reading time. About ${mins} minute${mins === 1 ? "" : "s"} to go.`,
       );
@@ -119,6 +119,6 @@ export async function markLessonComplete(userId: string, moduleSlug: string, les
 export async function assertCanReadPerson(viewer: Viewer, personId: string): Promise<void> {
   if (personId === viewer.id) return;
   const [person] = await db.select({ organizationId: user.organizationId }).from(user).where(eq(user.id, personId));
-  if (!person) throw new ApiError(404, "No such person.");
+  if (!person) throw new DomainError("not-found", "No such person.");
   if (!canManageOrganization(viewer, person.organizationId)) throw new AccessError(403, "You cannot see this person's progress.");
 }

@@ -7,10 +7,10 @@ import { and, asc, desc, eq, gte, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { questionVersion, quizAttempt, quizAttemptItem, user } from "@/db/schema";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { checkAndRecordCompletion } from "@/lib/completion";
-import { findModule } from "@/lib/content/load";
-import type { Question } from "@/lib/content/schema";
+import { findModule } from "@/lib/content";
+import type { Question } from "@/lib/content";
 import { answerProblem, correctAnswerText, drawAttempt, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
 import { utcStamp } from "@/lib/dates";
 
@@ -22,7 +22,7 @@ type ItemRow = typeof quizAttemptItem.$inferSelect & { body: Question };
 
 function rulesOf(moduleSlug: string) {
   const mod = findModule(moduleSlug);
-  if (!mod) throw new ApiError(404, `No module "${moduleSlug}".`);
+  if (!mod) throw new DomainError("not-found", `No module "${moduleSlug}".`);
   return mod;
 }
 
@@ -104,7 +104,7 @@ export type AttemptView = ReturnType<typeof openView> | ReturnType<typeof result
 async function getAttemptRow(id: string, tx: Tx | typeof db = db, lock = false): Promise<AttemptRow> {
   const q = tx.select().from(quizAttempt).where(eq(quizAttempt.id, id));
   const [row] = lock ? await q.for("update") : await q;
-  if (!row) throw new ApiError(404, "No such attempt.");
+  if (!row) throw new DomainError("not-found", "No such attempt.");
   return row;
 }
 
@@ -156,12 +156,12 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
       .orderBy(asc(quizAttempt.startedAt));
     if (recent.length >= rules.attemptsPerPeriod) {
       const next = new Date(recent[0]!.startedAt.getTime() + rules.periodHours * 3_600_000);
-      throw new ApiError(409, `You have used ${rules.attemptsPerPeriod} attempts in ${rules.periodHours} hours. Your next attempt opens at ${utcStamp(next)}.`);
+      throw new DomainError("conflict", `You have used ${rules.attemptsPerPeriod} attempts in ${rules.periodHours} hours. Your next attempt opens at ${utcStamp(next)}.`);
     }
     const last = recent.at(-1)?.submittedAt;
     if (last && rules.waitMinutes > 0 && now < last.getTime() + rules.waitMinutes * 60_000) {
       const mins = Math.ceil((last.getTime() + rules.waitMinutes * 60_000 - now) / 60_000);
-      throw new ApiError(409, `Review the lessons first: the next attempt opens in ${mins} minute${mins === 1 ? "" : "s"}.`);
+      throw new DomainError("conflict", `Review the lessons first: the next attempt opens in ${mins} minute${mins === 1 ? "" : "s"}.`);
     }
     const versions = await tx
       .select({ id: questionVersion.id, questionId: questionVersion.questionId })
@@ -169,7 +169,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
       .where(and(eq(questionVersion.moduleSlug, moduleSlug), isNull(questionVersion.retiredAt)));
     const versionOf = new Map(versions.map((v) => [v.questionId, v.id]));
     const bank = mod.questions.filter((q) => versionOf.has(q.id));
-    if (bank.length === 0) throw new ApiError(409, "This module's quiz is not ready yet.");
+    if (bank.length === 0) throw new DomainError("conflict", "This module's quiz is not ready yet.");
     const seed = randomInt(0, 2 ** 31);
     const drawn = drawAttempt(bank, rules.questionsPerAttempt, seed);
     const attemptId = randomUUID();
@@ -230,7 +230,7 @@ function validateAnswers(items: ItemRow[], answers: AnswerInput[]) {
     const problem = answerProblem({ question: item.body, optionOrder: item.optionOrder }, a.answer);
     if (problem) fieldErrors[`answers.${a.position}`] = [problem];
   }
-  if (Object.keys(fieldErrors).length) throw new ApiError(400, "Some answers do not fit their questions; nothing was saved.", fieldErrors);
+  if (Object.keys(fieldErrors).length) throw new DomainError("invalid", "Some answers do not fit their questions; nothing was saved.", fieldErrors);
 }
 
 /** Saves answers as the person goes; all or nothing. */
@@ -239,7 +239,7 @@ export async function saveAnswers(viewer: Viewer, id: string, answers: AnswerInp
   const result = await db.transaction(async (tx) => {
     const a = await getAttemptRow(id, tx, true);
     assertOwner(viewer, a);
-    if (a.status === "graded") throw new ApiError(409, "This attempt is already submitted.");
+    if (a.status === "graded") throw new DomainError("conflict", "This attempt is already submitted.");
     if (a.deadlineAt && Date.now() > a.deadlineAt.getTime() + GRACE_MS) {
       await gradeLocked(tx, a, true);
       gradedLate = true;
@@ -252,7 +252,7 @@ export async function saveAnswers(viewer: Viewer, id: string, answers: AnswerInp
   });
   if (gradedLate) {
     await afterGrading(viewer.id, id);
-    throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit.");
+    throw new DomainError("conflict", "Time is up: the attempt was graded with the answers saved before the limit.");
   }
   return result;
 }
@@ -284,7 +284,7 @@ export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: An
     return gradeLocked(tx, a, late, items);
   });
   const completion = graded?.row.passed ? await completeAfterGrading(viewer.id, graded.row.moduleSlug) : null;
-  if (refusedLate) throw new ApiError(409, "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
+  if (refusedLate) throw new DomainError("conflict", "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
   // Every response, first or repeated, is built from the stored rows so that all are identical.
   const view = await viewAttempt(viewer, id);
   return completion === "pending" ? { ...view, completionPending: COMPLETION_PENDING } : view;
@@ -319,7 +319,7 @@ async function writeAnswers(tx: Tx, id: string, answers: AnswerInput[]) {
 export async function listAttempts(viewer: Viewer, personId: string, moduleSlug?: string) {
   if (personId !== viewer.id) {
     const [p] = await db.select({ org: user.organizationId }).from(user).where(eq(user.id, personId));
-    if (!p) throw new ApiError(404, "No such person.");
+    if (!p) throw new DomainError("not-found", "No such person.");
     if (!canManageOrganization(viewer, p.org)) throw new AccessError(403, "You cannot see this person's attempts.");
   }
   const rows = await db

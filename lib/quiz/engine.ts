@@ -11,7 +11,7 @@
  *   attempt; |answer − expected| ≤ expected × tolerancePercent / 100 (+ the same guard).
  * Score = round(100 × correct / questions); passed = score ≥ the module's pass mark.
  */
-import type { Question } from "@/lib/content/schema";
+import type { Question } from "@/lib/content/browser";
 import { formulas } from "./formulas";
 
 /** mulberry32: a small, well-known seeded PRNG — the same seed draws the same attempt. */

@@ -3,7 +3,7 @@
  * `parametricFormula`), each a function of the drawn and fixed params, computed through
  * lib/hydraulics. A missing or bad param throws HydraulicsInputError naming it.
  */
-import type { ParametricFormula } from "../content/schema";
+import type { ParametricFormula } from "@/lib/content/browser";
 import {
   HydraulicsInputError,
   designSprinklerPressurePsi,
@@ -13,7 +13,7 @@ import {
   sprinklerFlowGpm,
   sprinklersNeeded,
   storedWaterGal,
-} from "../hydraulics";
+} from "@/lib/hydraulics";
 
 export type FormulaParams = Record<string, number>;
 export type FormulaFn = (params: FormulaParams) => number;

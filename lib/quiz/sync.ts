@@ -3,8 +3,8 @@ import { createHash } from "node:crypto";
 import { and, eq, isNull, notInArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { questionVersion } from "@/db/schema";
-import type { Catalog } from "@/lib/content/load";
-import type { Question } from "@/lib/content/schema";
+import type { Catalog } from "@/lib/content";
+import type { Question } from "@/lib/content";
 
 /** Stable JSON (sorted keys) so that the hash changes only when the question's content changes. */
 function canonical(value: unknown): string {

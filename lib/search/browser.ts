@@ -1,2 +1,3 @@
-// Types and limits that the browser may import (no index data).
-export { MAX_QUERY_LENGTH, MAX_RESULTS, type SearchHit, type Segment } from "./index";
+// The search area's browser-safe face: the search engine, limits and the document builder.
+export * from "./engine";
+export * from "./docs";

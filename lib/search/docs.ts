@@ -1,5 +1,5 @@
 /** Turns content into plain-text search documents (built once, at build time). */
-import type { Catalog } from "@/lib/content/load";
+import type { Catalog } from "@/lib/content";
 
 export type SearchDoc = {
   id: string;

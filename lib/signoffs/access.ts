@@ -8,7 +8,7 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { signOff, signOffEvidence, type SignOff } from "@/db/schema";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
@@ -20,7 +20,7 @@ export type EvidenceFile = { key: string; contentType: string; name: string; siz
 
 /** The stored object to stream for this viewer: 404 unknown (or no thumbnail), 403 someone else's. */
 export async function evidenceFileForViewer(viewer: Viewer, signOffId: string, evidenceId: string, thumb: boolean): Promise<EvidenceFile> {
-  if (!UUID.test(signOffId) || !UUID.test(evidenceId)) throw new ApiError(404, "No such evidence file.");
+  if (!UUID.test(signOffId) || !UUID.test(evidenceId)) throw new DomainError("not-found", "No such evidence file.");
   const [row] = await db
     .select({
       userId: signOff.userId,
@@ -34,10 +34,10 @@ export async function evidenceFileForViewer(viewer: Viewer, signOffId: string, e
     .from(signOffEvidence)
     .innerJoin(signOff, eq(signOff.id, signOffEvidence.signOffId))
     .where(and(eq(signOffEvidence.id, evidenceId), eq(signOffEvidence.signOffId, signOffId)));
-  if (!row) throw new ApiError(404, "No such evidence file.");
+  if (!row) throw new DomainError("not-found", "No such evidence file.");
   if (!canSeeSignOff(viewer, row)) throw new AccessError(403, "Only the learner, their organization's managers and admins can see this evidence.");
   if (thumb) {
-    if (!row.thumbnailKey) throw new ApiError(404, "This file has no thumbnail (PDFs have none).");
+    if (!row.thumbnailKey) throw new DomainError("not-found", "This file has no thumbnail (PDFs have none).");
     return { key: row.thumbnailKey, contentType: "image/jpeg", name: row.name.replace(/\.[a-z]+$/i, "") + "-thumbnail.jpg", size: null };
   }
   return { key: row.objectKey, contentType: row.contentType, name: row.name, size: row.size };

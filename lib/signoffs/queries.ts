@@ -8,8 +8,8 @@ import { and, asc, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { db } from "@/db/client";
 import { organization, signOff, signOffEvidence, team, user, type SignOffStatus } from "@/db/schema";
-import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
-import { findModule } from "@/lib/content/load";
+import { AccessError, canManageOrganization, organizationFilter, type Viewer } from "@/lib/access";
+import { findModule } from "@/lib/content";
 
 export type EvidenceItem = { id: string; name: string; contentType: string; size: number; thumbnail: boolean };
 
@@ -83,13 +83,9 @@ export type QueueFilter = "submitted" | "approved" | "returned";
  */
 export async function reviewQueue(viewer: Viewer, filter: QueueFilter = "submitted", orgId?: string | null, limit = 100): Promise<QueueItem[]> {
   const conds: SQL[] = [eq(signOff.status, filter)];
-  if (viewer.role === "admin") {
-    if (orgId) conds.push(eq(signOff.organizationId, orgId));
-  } else if (viewer.role === "manager" && viewer.organizationId) {
-    conds.push(eq(signOff.organizationId, viewer.organizationId));
-  } else {
-    throw new AccessError(403, "Only managers and admins review sign-offs.");
-  }
+  const scope = organizationFilter(viewer, orgId);
+  if (scope === undefined) throw new AccessError(403, "Only managers and admins review sign-offs.");
+  if (scope) conds.push(eq(signOff.organizationId, scope));
   const learner = alias(user, "learner");
   const rows = await db
     .select({
@@ -134,8 +130,8 @@ export async function reviewQueue(viewer: Viewer, filter: QueueFilter = "submitt
 
 /** Number of waiting sign-offs in the viewer's queue (for a badge on the team pages). */
 export async function waitingCount(viewer: Viewer, orgId?: string | null): Promise<number> {
-  if (viewer.role !== "admin" && !(viewer.role === "manager" && viewer.organizationId)) return 0;
-  const scope = viewer.role === "admin" ? (orgId ?? null) : viewer.organizationId!;
+  const scope = organizationFilter(viewer, orgId);
+  if (scope === undefined) return 0;
   const where = scope ? and(eq(signOff.status, "submitted"), eq(signOff.organizationId, scope)) : eq(signOff.status, "submitted");
   const [r] = await db.select({ n: sql<number>`count(*)` }).from(signOff).where(where);
   return Number(r?.n ?? 0);

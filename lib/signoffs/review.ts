@@ -8,10 +8,10 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { signOff, user } from "@/db/schema";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { checkAndRecordCompletion } from "@/lib/completion";
-import { findModule } from "@/lib/content/load";
+import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 
@@ -20,17 +20,17 @@ export type ReviewResult = { id: string; status: "approved" | "returned"; review
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 export async function reviewSignOff(viewer: Viewer, id: string, input: { decision: "approve" | "return"; comment: string }, ip: string | null): Promise<ReviewResult> {
-  if (!UUID.test(id)) throw new ApiError(404, "No such sign-off.");
+  if (!UUID.test(id)) throw new DomainError("not-found", "No such sign-off.");
   const status = input.decision === "approve" ? ("approved" as const) : ("returned" as const);
   const comment = input.comment.trim() || null;
   const reviewedAt = new Date();
 
   const row = await db.transaction(async (tx) => {
     const [so] = await tx.select().from(signOff).where(eq(signOff.id, id)).for("update");
-    if (!so) throw new ApiError(404, "No such sign-off.");
+    if (!so) throw new DomainError("not-found", "No such sign-off.");
     if (!canManageOrganization(viewer, so.organizationId)) throw new AccessError(403, "Only a manager of the learner's organization or an admin can review this sign-off.");
     if (so.userId === viewer.id) throw new AccessError(403, "You cannot sign off your own skill: another manager or an admin reviews it.");
-    if (so.status !== "submitted") throw new ApiError(409, `This sign-off was already ${so.status}.`);
+    if (so.status !== "submitted") throw new DomainError("conflict", `This sign-off was already ${so.status}.`);
     await tx
       .update(signOff)
       .set({ status, reviewerId: viewer.id, reviewComment: comment, reviewedAt, activeKey: status === "returned" ? null : so.activeKey })

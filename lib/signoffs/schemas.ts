@@ -1,6 +1,6 @@
 /** Limits and input schemas shared by the sign-off forms (browser) and route handlers (server). */
 import { z } from "zod";
-import { slug } from "@/lib/content/schema";
+import { slug } from "@/lib/content/browser";
 
 /**
  * All files of one submission together. Kept below the 10 MiB that Next's proxy buffers of a

@@ -10,10 +10,11 @@ import { and, eq, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { signOff, signOffEvidence, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError, fieldErrorsOf, json } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
+import { fieldErrorsOf, json } from "@/lib/api";
 import { audit } from "@/lib/audit";
-import { hitRateLimit } from "@/lib/certificates/rate-limit";
-import { findModule } from "@/lib/content/load";
+import { hitRateLimit } from "@/lib/rate-limit";
+import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { deleteObjectsQuietly, isStorageDown, putObject } from "@/lib/storage";
@@ -50,11 +51,11 @@ export async function uploadRateRefusal(viewer: Viewer): Promise<Response | null
 export async function readUpload(req: Request): Promise<Upload> {
   const type = req.headers.get("content-type") ?? "";
   if (!/^multipart\/form-data;/i.test(type)) {
-    throw new ApiError(400, "Send the evidence as a file upload form (multipart/form-data) with the module, the skill and the files.");
+    throw new DomainError("invalid", "Send the evidence as a file upload form (multipart/form-data) with the module, the skill and the files.");
   }
   const declared = Number(req.headers.get("content-length") ?? NaN);
   if (Number.isFinite(declared) && declared > MAX_UPLOAD_BYTES + MULTIPART_OVERHEAD) {
-    throw new ApiError(413, `That upload is ${formatBytes(declared)}; the limit is ${MAX_UPLOAD_LABEL} for all files together. Send fewer or smaller files.`, {
+    throw new DomainError("too-large", `That upload is ${formatBytes(declared)}; the limit is ${MAX_UPLOAD_LABEL} for all files together. Send fewer or smaller files.`, {
       files: [`Up to ${MAX_UPLOAD_LABEL} in all.`],
     });
   }
@@ -62,14 +63,14 @@ export async function readUpload(req: Request): Promise<Upload> {
   try {
     form = await req.formData();
   } catch {
-    throw new ApiError(400, INCOMPLETE, { files: [INCOMPLETE] });
+    throw new DomainError("invalid", INCOMPLETE, { files: [INCOMPLETE] });
   }
   const parsed = submitFields.safeParse({
     module: form.get("module") ?? undefined,
     skill: form.get("skill") ?? undefined,
     note: typeof form.get("note") === "string" ? form.get("note") : undefined,
   });
-  if (!parsed.success) throw new ApiError(400, "Some fields need attention.", fieldErrorsOf(parsed.error));
+  if (!parsed.success) throw new DomainError("invalid", "Some fields need attention.", fieldErrorsOf(parsed.error));
   const files = [...form.getAll("files"), ...form.getAll("file")].filter((v): v is File => typeof v !== "string");
   return { fields: parsed.data, files };
 }
@@ -83,7 +84,7 @@ export type SubmittedSignOff = {
 };
 
 function fileProblem(status: number, message: string): never {
-  throw new ApiError(status, message, { files: [message] });
+  throw DomainError.fromStatus(status, message, { files: [message] });
 }
 
 function isDuplicate(err: unknown): boolean {
@@ -99,9 +100,9 @@ const activeKeyOf = (userId: string, moduleSlug: string, skillId: string) => `${
 export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string | null): Promise<SubmittedSignOff> {
   const { fields, files } = upload;
   const mod = findModule(fields.module);
-  if (!mod) throw new ApiError(404, `No module "${fields.module}".`, { module: ["No such module."] });
+  if (!mod) throw new DomainError("not-found", `No module "${fields.module}".`, { module: ["No such module."] });
   const skill = mod.skills.find((s) => s.id === fields.skill);
-  if (!skill) throw new ApiError(400, `"${mod.meta.title}" has no skill "${fields.skill}".`, { skill: ["No such skill in this module."] });
+  if (!skill) throw new DomainError("invalid", `"${mod.meta.title}" has no skill "${fields.skill}".`, { skill: ["No such skill in this module."] });
 
   if (!files.length) fileProblem(400, "Choose at least one photo or PDF.");
   if (files.length > MAX_FILES) fileProblem(400, `Send up to ${MAX_FILES} files with one sign-off (you chose ${files.length}).`);
@@ -145,7 +146,7 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
     }
   } catch (err) {
     await deleteObjectsQuietly(stored);
-    if (isStorageDown(err)) throw new ApiError(503, "The file store is not reachable right now. Nothing was saved; try again in a minute.");
+    if (isStorageDown(err)) throw new DomainError("unavailable", "The file store is not reachable right now. Nothing was saved; try again in a minute.");
     throw err;
   }
 
@@ -196,10 +197,10 @@ export async function submitSignOff(viewer: Viewer, upload: Upload, ip: string |
   };
 }
 
-function liveConflict(status: string): ApiError {
+function liveConflict(status: string): DomainError {
   return status === "approved"
-    ? new ApiError(409, "This skill is already signed off for you.")
-    : new ApiError(409, "A sign-off for this skill is already waiting for review. You can send new evidence if it is returned.");
+    ? new DomainError("conflict", "This skill is already signed off for you.")
+    : new DomainError("conflict", "A sign-off for this skill is already waiting for review. You can send new evidence if it is returned.");
 }
 
 /** Tells the learner's organization's managers that something waits in their queue (queued in `tx`). */

@@ -3,16 +3,16 @@ import { and, asc, eq, inArray, or, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { assignment, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
-import { loadCatalog } from "@/lib/content/load";
+import { loadCatalog } from "@/lib/content";
 import { after } from "next/server";
 import { mailAssigned } from "./assigned-mail";
 import { itemModules, itemTitle, rowsFor, type BoardCell, type Person } from "./board";
 
 export { itemTitle };
 import { endOfDayUtc, type BoardStatus } from "./schemas";
-import type { OrgScope } from "./scope";
+import type { OrgScope } from "@/lib/access";
 import { isDone } from "./status";
 
 /** Assign one module or path to people and/or whole teams; a repeat updates the due date. */
@@ -24,15 +24,15 @@ export async function createAssignments(
 ) {
   const catalog = loadCatalog();
   const exists = input.kind === "module" ? catalog.modules.some((m) => m.slug === input.slug) : catalog.paths.some((p) => p.slug === input.slug);
-  if (!exists) throw new ApiError(400, "Some fields need attention.", { slug: [`No ${input.kind === "module" ? "module" : "learning path"} “${input.slug}”`] });
+  if (!exists) throw new DomainError("invalid", "Some fields need attention.", { slug: [`No ${input.kind === "module" ? "module" : "learning path"} “${input.slug}”`] });
   const userIds = [...new Set(input.userIds)];
   const teamIds = [...new Set(input.teamIds)];
   const people = userIds.length
     ? await db.select({ id: user.id }).from(user).where(and(inArray(user.id, userIds), eq(user.organizationId, org.orgId)))
     : [];
-  if (people.length !== userIds.length) throw new ApiError(400, "Some fields need attention.", { userIds: ["Choose people of your own organization"] });
+  if (people.length !== userIds.length) throw new DomainError("invalid", "Some fields need attention.", { userIds: ["Choose people of your own organization"] });
   const teams = teamIds.length ? await db.select({ id: team.id }).from(team).where(and(inArray(team.id, teamIds), eq(team.organizationId, org.orgId))) : [];
-  if (teams.length !== teamIds.length) throw new ApiError(400, "Some fields need attention.", { teamIds: ["Choose teams of your own organization"] });
+  if (teams.length !== teamIds.length) throw new DomainError("invalid", "Some fields need attention.", { teamIds: ["Choose teams of your own organization"] });
   const dueAt = endOfDayUtc(input.dueAt);
   const now = new Date();
   const targets = [...userIds.map((id) => ({ userId: id, teamId: null, targetKey: `u:${id}` })), ...teamIds.map((id) => ({ userId: null, teamId: id, targetKey: `t:${id}` }))];
@@ -63,8 +63,8 @@ export async function createAssignments(
 
 export async function deleteAssignment(viewer: Viewer, id: number, canManage: (orgId: string) => boolean, ip: string) {
   const [row] = await db.select().from(assignment).where(eq(assignment.id, id));
-  if (!row) throw new ApiError(404, "No such assignment.");
-  if (!canManage(row.organizationId)) throw new ApiError(403, "That belongs to another organization.");
+  if (!row) throw new DomainError("not-found", "No such assignment.");
+  if (!canManage(row.organizationId)) throw new DomainError("forbidden", "That belongs to another organization.");
   await db.transaction(async (tx) => {
     await tx.delete(assignment).where(eq(assignment.id, id));
     await audit(

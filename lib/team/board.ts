@@ -1,9 +1,9 @@
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
-import { loadCatalog } from "@/lib/content/load";
+import { loadCatalog } from "@/lib/content";
 import type { BoardQuery, BoardStatus } from "./schemas";
-import type { OrgScope } from "./scope";
+import type { OrgScope } from "@/lib/access";
 import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status";
 import { addDays, isoDay } from "@/lib/dates";
 

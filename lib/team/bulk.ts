@@ -5,13 +5,13 @@ import { and, eq, inArray, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { sendMail } from "@/lib/mail";
 import { insertInvitation, inviteMail, pendingEmails } from "./invites";
 import { checkRoster, decodeRoster, parseRoster, type CheckedRow, type RawRosterRow } from "./roster";
 import { ROSTER_MAX_BYTES } from "./schemas";
-import { assertSeatAvailable, seatUsage } from "./seats";
+import { assertSeatAvailable, seatUsage } from "@/lib/billing";
 
 export type RosterPreview = {
   fileHash: string;
@@ -26,24 +26,24 @@ export type RosterPreview = {
 /** Reads the uploaded file from a multipart form (field "file"); refuses anything unusable. */
 export async function readUpload(req: Request): Promise<{ bytes: Uint8Array; fileName: string; form: FormData }> {
   const length = Number(req.headers.get("content-length") ?? 0);
-  if (length > ROSTER_MAX_BYTES + 64 * 1024) throw new ApiError(413, `The file is larger than the ${ROSTER_MAX_BYTES / (1024 * 1024)} MB limit. Split it into smaller files.`);
+  if (length > ROSTER_MAX_BYTES + 64 * 1024) throw new DomainError("too-large", `The file is larger than the ${ROSTER_MAX_BYTES / (1024 * 1024)} MB limit. Split it into smaller files.`);
   let form: FormData;
   try {
     form = await req.formData();
   } catch {
-    throw new ApiError(400, "Send the roster as a file upload (multipart form with a field named “file”).");
+    throw new DomainError("invalid", "Send the roster as a file upload (multipart form with a field named “file”).");
   }
   const file = form.get("file");
-  if (!file || typeof file === "string") throw new ApiError(400, "Choose a CSV file to upload.", { file: ["Choose a CSV file"] });
-  if (file.size > ROSTER_MAX_BYTES) throw new ApiError(413, `The file is ${Math.round(file.size / 1024)} KB; the limit is ${ROSTER_MAX_BYTES / (1024 * 1024)} MB. Split it into smaller files.`);
+  if (!file || typeof file === "string") throw new DomainError("invalid", "Choose a CSV file to upload.", { file: ["Choose a CSV file"] });
+  if (file.size > ROSTER_MAX_BYTES) throw new DomainError("too-large", `The file is ${Math.round(file.size / 1024)} KB; the limit is ${ROSTER_MAX_BYTES / (1024 * 1024)} MB. Split it into smaller files.`);
   return { bytes: new Uint8Array(await file.arrayBuffer()), fileName: file.name || "roster.csv", form };
 }
 
 function rowsOf(bytes: Uint8Array, fileName: string): RawRosterRow[] {
   const decoded = decodeRoster(bytes, fileName);
-  if ("error" in decoded) throw new ApiError(400, decoded.error, { file: [decoded.error] });
+  if ("error" in decoded) throw new DomainError("invalid", decoded.error, { file: [decoded.error] });
   const parsed = parseRoster(decoded.text);
-  if ("error" in parsed) throw new ApiError(400, parsed.error, { file: [parsed.error] });
+  if ("error" in parsed) throw new DomainError("invalid", parsed.error, { file: [parsed.error] });
   return parsed.rows;
 }
 
@@ -86,7 +86,7 @@ export async function previewRoster(org: { orgId: string; orgName: string }, byt
  * Mails go out after the response.
  */
 export async function importRoster(viewer: Viewer, org: { orgId: string; orgName: string }, bytes: Uint8Array, fileName: string, previewHash: string, ip: string) {
-  if (fileHashOf(bytes) !== previewHash) throw new ApiError(409, "The file differs from the one you previewed. Check it again before importing.");
+  if (fileHashOf(bytes) !== previewHash) throw new DomainError("conflict", "The file differs from the one you previewed. Check it again before importing.");
   const raw = rowsOf(bytes, fileName);
   const teamNames = new Map((await db.select({ id: team.id, name: team.name }).from(team).where(eq(team.organizationId, org.orgId))).map((t) => [t.id, t.name]));
   const result = await db.transaction(async (tx) => {

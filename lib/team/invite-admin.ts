@@ -3,12 +3,12 @@ import { and, desc, eq, gt, isNull, or, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { invitation, organization, team } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { sendMail } from "@/lib/mail";
 import { checkAssignItems, hashInviteToken, inviteMail, newInviteToken } from "./invites";
 import { INVITE_DAYS, type AssignItem, type InviteRole } from "./schemas";
-import { assertSeatAvailable } from "./seats";
+import { assertSeatAvailable } from "@/lib/billing";
 
 /**
  * The manager's view of invitations: every invitation with its status, resend (a fresh link on the
@@ -61,10 +61,10 @@ export async function listInvitations(orgId: string, now = new Date()) {
 
 /** The invitation if the viewer manages its organization: unknown → 404, another organization's → 403. */
 async function invitationFor(viewer: Viewer, id: string) {
-  if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) throw new ApiError(404, "No such invitation.");
+  if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) throw new DomainError("not-found", "No such invitation.");
   const [row] = await db.select().from(invitation).where(eq(invitation.id, id));
-  if (!row) throw new ApiError(404, "No such invitation.");
-  if (!canManageOrganization(viewer, row.organizationId)) throw new ApiError(403, "That belongs to another organization.");
+  if (!row) throw new DomainError("not-found", "No such invitation.");
+  if (!canManageOrganization(viewer, row.organizationId)) throw new DomainError("forbidden", "That belongs to another organization.");
   return row;
 }
 
@@ -84,7 +84,7 @@ export async function revokeInvitation(viewer: Viewer, id: string, ip: string) {
   });
   if (!done) {
     const fresh = await invitationFor(viewer, id);
-    throw new ApiError(409, fresh.acceptedAt ? `${row.email} has already accepted; remove the person from their page instead.` : "This invitation was already withdrawn.");
+    throw new DomainError("conflict", fresh.acceptedAt ? `${row.email} has already accepted; remove the person from their page instead.` : "This invitation was already withdrawn.");
   }
   return { email: row.email };
 }
@@ -96,8 +96,8 @@ export async function revokeInvitation(viewer: Viewer, id: string, ip: string) {
 export async function resendInvitation(viewer: Viewer, id: string, ip: string) {
   const row = await invitationFor(viewer, id);
   const orgId = row.organizationId;
-  if (row.acceptedAt) throw new ApiError(409, `${row.email} has already accepted this invitation.`);
-  if (row.revokedAt) throw new ApiError(409, "This invitation was withdrawn or replaced; send a new one from the form.");
+  if (row.acceptedAt) throw new DomainError("conflict", `${row.email} has already accepted this invitation.`);
+  if (row.revokedAt) throw new DomainError("conflict", "This invitation was withdrawn or replaced; send a new one from the form.");
   const now = new Date();
   const token = newInviteToken();
   const expiresAt = new Date(now.getTime() + INVITE_DAYS * 86_400_000);
@@ -108,7 +108,7 @@ export async function resendInvitation(viewer: Viewer, id: string, ip: string) {
       .update(invitation)
       .set({ tokenHash: hashInviteToken(token), expiresAt, lastSentAt: now, sendCount: sql`${invitation.sendCount} + 1` })
       .where(and(eq(invitation.id, id), eq(invitation.organizationId, orgId), isNull(invitation.acceptedAt), isNull(invitation.revokedAt)));
-    if (r.affectedRows !== 1) throw new ApiError(409, "This invitation was accepted or withdrawn a moment ago; reload the list.");
+    if (r.affectedRows !== 1) throw new DomainError("conflict", "This invitation was accepted or withdrawn a moment ago; reload the list.");
     await audit({ actor: viewer, organizationId: orgId, action: "invite.resend", targetType: "invitation", targetId: id, ip, details: { email: row.email, wasExpired } }, tx);
   });
   const [org] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, orgId));
@@ -123,18 +123,18 @@ export async function resendInvitation(viewer: Viewer, id: string, ip: string) {
  */
 export async function addInvitationWork(viewer: Viewer, id: string, items: AssignItem[], ip: string) {
   const row = await invitationFor(viewer, id);
-  if (inviteStatus(row) !== "pending") throw new ApiError(409, "Only an open invitation can carry work; send a new invitation first.");
+  if (inviteStatus(row) !== "pending") throw new DomainError("conflict", "Only an open invitation can carry work; send a new invitation first.");
   checkAssignItems(items);
   const merged = new Map((row.assignOnAccept ?? []).map((i) => [`${i.kind}:${i.slug}`, i]));
   for (const i of items) merged.set(`${i.kind}:${i.slug}`, i);
   const list = [...merged.values()];
-  if (list.length > 10) throw new ApiError(400, "Some fields need attention.", { items: ["At most 10 items per invitation"] });
+  if (list.length > 10) throw new DomainError("invalid", "Some fields need attention.", { items: ["At most 10 items per invitation"] });
   await db.transaction(async (tx) => {
     const [r] = await tx
       .update(invitation)
       .set({ assignOnAccept: list })
       .where(and(eq(invitation.id, id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt)));
-    if (r.affectedRows !== 1) throw new ApiError(409, "This invitation was accepted or withdrawn a moment ago; reload the page.");
+    if (r.affectedRows !== 1) throw new DomainError("conflict", "This invitation was accepted or withdrawn a moment ago; reload the page.");
     await audit({ actor: viewer, organizationId: row.organizationId, action: "invite.assign", targetType: "invitation", targetId: id, ip, details: { email: row.email, items } }, tx);
   });
   return { email: row.email, items: list };

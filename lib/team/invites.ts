@@ -5,15 +5,15 @@ import { db, type Tx } from "@/db/client";
 import { assignment, invitation, organization, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { createAccount } from "@/lib/accounts";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { INVITE_DAYS, ROLE_LABELS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
 import { mailAssigned } from "./assigned-mail";
 import { after } from "next/server";
-import { loadCatalog } from "@/lib/content/load";
-import { assertSeatAvailable } from "./seats";
+import { loadCatalog } from "@/lib/content";
+import { assertSeatAvailable } from "@/lib/billing";
 import { addDays, longDate } from "@/lib/dates";
 
 
@@ -92,7 +92,7 @@ export function checkAssignItems(items: AssignItem[] | undefined) {
   const catalog = loadCatalog();
   for (const i of items) {
     const ok = i.kind === "module" ? catalog.modules.some((m) => m.slug === i.slug) : catalog.paths.some((p) => p.slug === i.slug);
-    if (!ok) throw new ApiError(400, "Some fields need attention.", { assign: [`No ${i.kind === "module" ? "module" : "learning path"} “${i.slug}”`] });
+    if (!ok) throw new DomainError("invalid", "Some fields need attention.", { assign: [`No ${i.kind === "module" ? "module" : "learning path"} “${i.slug}”`] });
   }
 }
 
@@ -101,13 +101,13 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
   let teamName: string | null = null;
   if (input.teamId) {
     const [t] = await db.select({ name: team.name }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, org.orgId), isNull(team.archivedAt)));
-    if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
+    if (!t) throw new DomainError("invalid", "Some fields need attention.", { teamId: ["Choose one of your organization's teams"] });
     teamName = t.name;
   }
   checkAssignItems(input.assign);
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
-    throw new ApiError(409, `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
+    throw new DomainError("conflict", `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
@@ -187,13 +187,13 @@ export function refusalText(l: Exclude<InviteLookup, { state: "ok" }>): { title:
  */
 export async function acceptInvite(input: AcceptInviteInput, headers: Headers, ip: string): Promise<{ email: string; userId: string }> {
   const found = await lookupInvite(input.token);
-  if (found.state !== "ok") throw new ApiError(410, refusalText(found).message);
+  if (found.state !== "ok") throw new DomainError("gone", refusalText(found).message);
   const inv = found.invite;
   // Resolved here, not when inviting: an address that already has an account (in another
   // organization, or none) is told so by its owner's own link; the manager never learns it.
   const [holder] = await db.select({ org: user.organizationId }).from(user).where(eq(user.email, inv.email)).limit(1);
   if (holder) {
-    throw new ApiError(
+    throw DomainError.fromStatus(
       409,
       holder.org === inv.organizationId
         ? `${inv.email} is already a member of ${found.orgName}. Sign in with your password.`
@@ -205,7 +205,7 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
     .update(invitation)
     .set({ acceptedAt: now })
     .where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedAt), isNull(invitation.revokedAt), gt(invitation.expiresAt, now)));
-  if (claim.affectedRows !== 1) throw new ApiError(410, refusalText({ state: "used" }).message);
+  if (claim.affectedRows !== 1) throw new DomainError("gone", refusalText({ state: "used" }).message);
   const release = () => db.update(invitation).set({ acceptedAt: null }).where(and(eq(invitation.id, inv.id), isNull(invitation.acceptedUserId)));
   let userId: string;
   try {
@@ -215,12 +215,12 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
     if (!result.ok) {
       await release();
       const emailProblem = result.fieldErrors?.email?.[0];
-      if (emailProblem) throw new ApiError(409, `${emailProblem} (${inv.email})`);
-      throw new ApiError(400, result.message, result.fieldErrors);
+      if (emailProblem) throw new DomainError("conflict", `${emailProblem} (${inv.email})`);
+      throw new DomainError("invalid", result.message, result.fieldErrors);
     }
     userId = result.userId;
   } catch (err) {
-    if (!(err instanceof ApiError)) await release().catch(() => undefined);
+    if (!(err instanceof DomainError)) await release().catch(() => undefined);
     throw err;
   }
   await db.transaction(async (tx) => {

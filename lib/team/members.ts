@@ -3,7 +3,7 @@ import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { assignment, session, team, user } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import type { InviteRole } from "./schemas";
 
@@ -17,14 +17,14 @@ import type { InviteRole } from "./schemas";
 type Target = { id: string; name: string; email: string; role: string; organizationId: string; teamId: string | null };
 
 async function target(viewer: Viewer, personId: string): Promise<Target> {
-  if (!/^[A-Za-z0-9-]{1,36}$/.test(personId)) throw new ApiError(404, "No such person.");
+  if (!/^[A-Za-z0-9-]{1,36}$/.test(personId)) throw new DomainError("not-found", "No such person.");
   const [p] = await db
     .select({ id: user.id, name: user.name, email: user.email, role: user.role, organizationId: user.organizationId, teamId: user.teamId })
     .from(user)
     .where(eq(user.id, personId));
-  if (!p || !p.organizationId) throw new ApiError(404, "No such person.");
-  if (!canManageOrganization(viewer, p.organizationId)) throw new ApiError(403, "That belongs to another organization.");
-  if (p.role === "admin") throw new ApiError(403, "Administrators are managed on the admin console.");
+  if (!p || !p.organizationId) throw new DomainError("not-found", "No such person.");
+  if (!canManageOrganization(viewer, p.organizationId)) throw new DomainError("forbidden", "That belongs to another organization.");
+  if (p.role === "admin") throw new DomainError("forbidden", "Administrators are managed on the admin console.");
   return { ...p, organizationId: p.organizationId };
 }
 
@@ -34,12 +34,12 @@ export async function updatePerson(viewer: Viewer, personId: string, input: { te
   if (input.teamId !== undefined && input.teamId !== p.teamId) {
     if (input.teamId !== null) {
       const [t] = await db.select({ id: team.id }).from(team).where(and(eq(team.id, input.teamId), eq(team.organizationId, p.organizationId), isNull(team.archivedAt)));
-      if (!t) throw new ApiError(400, "Some fields need attention.", { teamId: ["Choose one of your organization's active teams"] });
+      if (!t) throw new DomainError("invalid", "Some fields need attention.", { teamId: ["Choose one of your organization's active teams"] });
     }
     changes.teamId = input.teamId;
   }
   if (input.role !== undefined && input.role !== p.role) {
-    if (p.id === viewer.id) throw new ApiError(400, "Some fields need attention.", { role: ["You cannot change your own role; ask another manager."] });
+    if (p.id === viewer.id) throw new DomainError("invalid", "Some fields need attention.", { role: ["You cannot change your own role; ask another manager."] });
     changes.role = input.role;
   }
   if (Object.keys(changes).length === 0) return { changed: false, person: p };
@@ -71,10 +71,10 @@ export async function updatePerson(viewer: Viewer, personId: string, input: { te
  */
 export async function removePerson(viewer: Viewer, personId: string, ip: string) {
   const p = await target(viewer, personId);
-  if (p.id === viewer.id) throw new ApiError(400, "You cannot remove yourself from your organization.");
+  if (p.id === viewer.id) throw new DomainError("invalid", "You cannot remove yourself from your organization.");
   await db.transaction(async (tx) => {
     const [r] = await tx.update(user).set({ organizationId: null, teamId: null, role: "learner" }).where(and(eq(user.id, p.id), eq(user.organizationId, p.organizationId)));
-    if (r.affectedRows !== 1) throw new ApiError(409, "This person was changed at the same moment; reload the page.");
+    if (r.affectedRows !== 1) throw new DomainError("conflict", "This person was changed at the same moment; reload the page.");
     await tx.delete(assignment).where(and(eq(assignment.organizationId, p.organizationId), eq(assignment.userId, p.id)));
     await tx.delete(session).where(eq(session.userId, p.id));
     await audit(

@@ -3,7 +3,7 @@ import { asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, certificate, lessonProgress, organization, quizAttempt, team, user } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
-import { certificateStatus } from "@/lib/certificates/status";
+import { certificateStatus } from "@/lib/certificates";
 import type { Person } from "./board";
 import { isExpiring } from "@/lib/expiring";
 

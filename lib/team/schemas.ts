@@ -3,8 +3,8 @@
  * server (route handlers). No server code here.
  */
 import { z } from "zod";
-import { email, password, personName } from "@/lib/auth/schemas";
-import { slug } from "@/lib/content/schema";
+import { email, password, personName } from "@/lib/auth/browser";
+import { slug } from "@/lib/content/browser";
 
 export const INVITE_ROLES = ["learner", "sales", "manager"] as const;
 export type InviteRole = (typeof INVITE_ROLES)[number];

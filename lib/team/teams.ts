@@ -4,7 +4,7 @@ import { and, asc, count, eq, isNotNull, isNull, ne } from "drizzle-orm";
 import { db } from "@/db/client";
 import { team, user } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 
 /**
@@ -38,7 +38,7 @@ async function nameTaken(orgId: string, name: string, exceptId?: string) {
   return (await db.select({ id: team.id }).from(team).where(where).limit(1)).length > 0;
 }
 
-const taken = (name: string) => new ApiError(409, `A team named “${name}” already exists.`, { name: ["Choose another name"] });
+const taken = (name: string) => new DomainError("conflict", `A team named “${name}” already exists.`, { name: ["Choose another name"] });
 
 export async function createTeam(viewer: Viewer, orgId: string, name: string, ip: string): Promise<{ id: string; name: string }> {
   if (await nameTaken(orgId, name)) throw taken(name);
@@ -57,10 +57,10 @@ export async function createTeam(viewer: Viewer, orgId: string, name: string, ip
 
 /** The team if the viewer manages its organization: unknown → 404, another organization's → 403. */
 export async function teamForViewer(viewer: Viewer, id: string) {
-  if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) throw new ApiError(404, "No such team.");
+  if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) throw new DomainError("not-found", "No such team.");
   const [t] = await db.select().from(team).where(eq(team.id, id));
-  if (!t) throw new ApiError(404, "No such team.");
-  if (!canManageOrganization(viewer, t.organizationId)) throw new ApiError(403, "That belongs to another organization.");
+  if (!t) throw new DomainError("not-found", "No such team.");
+  if (!canManageOrganization(viewer, t.organizationId)) throw new DomainError("forbidden", "That belongs to another organization.");
   return t;
 }
 

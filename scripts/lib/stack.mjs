@@ -23,8 +23,8 @@ export function stack({ profile, mode = "production", reset = false, stdio = "in
   function prepare() {
     node("scripts/db.mjs", [reset ? "reset" : "start", `--profile=${cfg.name}`]);
     for (const s of SERVICES) node(s.script, ["start", `--profile=${cfg.name}`]);
-    tsx("db/migrate.ts", [], env);
-    tsx("db/seed.ts", [], env);
+    tsx("scripts/migrate.ts", [], env);
+    tsx("scripts/seed/seed.ts", [], env);
   }
 
   /** A production build into the profile's own folder (skipped when sources are unchanged). */

@@ -26,7 +26,7 @@ export function tsx(script, args = [], env = {}) {
 }
 
 export function contentBuild() {
-  run(bin("tsx"), [path.join(root, "scripts/content-build.ts")], { cwd: root });
+  run(bin("tsx"), ["--conditions=react-server", path.join(root, "scripts/content-build.ts")], { cwd: root });
 }
 
 function hashTree(h, dir) {

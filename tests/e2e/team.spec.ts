@@ -22,7 +22,7 @@ test("the demo manager filters the board to one team and sees its people", async
   expect(shown.sort()).toEqual([...southCrew].sort());
   await expect(page.getByText(`Showing 1–${southCrew.length} of ${southCrew.length} people`)).toBeVisible();
 
-  // A status filter on top: Wendell failed "How a home sprinkler system works" (db/seed-team.ts).
+  // A status filter on top: Wendell failed "How a home sprinkler system works" (scripts/seed/seed-team.ts).
   await page.getByLabel("Status").selectOption({ label: "Failed last attempt" });
   await expect(table.locator("tbody tr")).toHaveCount(1);
   await expect(table.locator("tbody tr")).toHaveAttribute("data-person", "Wendell Ashcombe");

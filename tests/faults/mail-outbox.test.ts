@@ -13,7 +13,6 @@ import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
 import { service } from "../helpers/services";
 
-const profile = process.env.RISER_PROFILE ?? "test";
 const catcher = (cmd: "start" | "stop") => service("mail-catcher", cmd);
 const smtpPort = () => Number(new URL(process.env.SMTP_URL ?? "smtp://127.0.0.1:2535").port);
 const MODULE = "talking-with-homebuyers";

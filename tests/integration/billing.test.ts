@@ -10,7 +10,7 @@ import { auditLog, checkout, invitation, organization, paymentEvent } from "@/db
 import { demoByRole } from "@/db/demo";
 import { CURRENCY, PLANS, TRIAL } from "@/lib/billing/plans";
 import { formatMoney, quote } from "@/lib/billing/pricing";
-import { assertSeatAvailable, BILLING_PATH, SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
+import { assertSeatAvailable, BILLING_PATH, SeatLimitError, seatLimitResponse } from "@/lib/billing/seats";
 import { FAKE, fakeEvents, fakeSessions, newKey, postWebhook, pressOnPayPage, sessionEvent, until } from "../helpers/billing";
 import { anonymous, freshIp, mailsTo, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";

@@ -21,7 +21,7 @@ describe("demo data", () => {
     const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: "development" };
     for (const k of ["RISER_LOCAL", "MAIL_CATCHER_URL", "INSECURE_COOKIES", "STRIPE_API_HOST", "STRIPE_API_PORT", "STRIPE_API_PROTOCOL"]) delete env[k];
     const before = await db.select({ id: user.id }).from(user);
-    const r = tsx("db/seed.ts", [], env);
+    const r = tsx("scripts/seed/seed.ts", [], env);
     expect(r.status, r.stdout + r.stderr).toBe(1);
     expect(r.stderr).toMatch(/Refused: demo data/);
     expect(r.stderr).toMatch(/admin:create/);

@@ -1,7 +1,7 @@
 // Local conveniences (mail catcher and /dev/mail, cookies without Secure, the payment fake over http,
 // the default address) are refused unless the instance is local: RISER_LOCAL=1 on a loopback APP_URL.
 import { describe, expect, it } from "vitest";
-import { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "@/lib/env-local";
+import { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "@/lib/env/local";
 
 const local = {
   NODE_ENV: "production",

@@ -4,7 +4,7 @@ import { PasswordForm } from "@/components/account/password-form";
 import { Section } from "@/components/account/section";
 import { SessionsList } from "@/components/account/sessions-list";
 import { asJson } from "@/components/ui/server-first";
-import { listOwnSessions } from "@/lib/account/sessions";
+import { listOwnSessions } from "@/lib/account";
 import { FormError, FormNotice } from "@/components/ui/field";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { When } from "@/components/ui/data-table";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { adminOverview } from "@/lib/admin/overview";
+import { adminOverview } from "@/lib/admin";
 import { Figure } from "@/components/admin/figure";
 
 export const metadata: Metadata = { title: "Admin" };

@@ -5,9 +5,9 @@ import { StatusBadge } from "@/components/certificates/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
-import { revocableCertificates } from "@/lib/certificates/access";
+import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
-import { formatCertificateDate, formatHours } from "@/lib/certificates/status";
+import { formatCertificateDate, formatHours } from "@/lib/certificates";
 import { plural, pluralNoun } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Certificates" };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { loadCatalog } from "@/lib/content/load";
+import { loadCatalog } from "@/lib/content";
 
 export const metadata: Metadata = { title: "Glossary" };
 

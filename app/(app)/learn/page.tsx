@@ -3,15 +3,15 @@ import Link from "next/link";
 import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { certificatesOfHolder } from "@/lib/certificates/queries";
-import { findModule } from "@/lib/content/load";
+import { certificatesOfHolder } from "@/lib/certificates";
+import { findModule } from "@/lib/content";
 import { lastCompletedLesson } from "@/lib/progress";
-import { assignedWork, type AssignedItem } from "@/lib/team/assignments";
-import type { BoardCell } from "@/lib/team/board";
+import { assignedWork, type AssignedItem } from "@/lib/team";
+import type { BoardCell } from "@/lib/team";
 import { isoDay, weekdayShortDate } from "@/lib/dates";
 import { FirstDayChecklist } from "@/components/team/first-day";
-import { firstDayCounts } from "@/lib/team/first-day";
-import { firstDaySteps, showFirstDay } from "@/lib/team/first-day-steps";
+import { firstDayCounts } from "@/lib/team";
+import { firstDaySteps, showFirstDay } from "@/lib/team";
 
 export const metadata: Metadata = { title: "My training" };
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { completionsOf } from "@/lib/completion";
-import { loadCatalog } from "@/lib/content/load";
+import { loadCatalog } from "@/lib/content";
 import { progressByModule } from "@/lib/progress";
 
 export const metadata: Metadata = { title: "Modules" };

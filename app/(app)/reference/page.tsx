@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { cardTopic } from "@/lib/content/schema";
-import { loadCatalog } from "@/lib/content/load";
+import { cardTopic } from "@/lib/content";
+import { loadCatalog } from "@/lib/content";
 
 export const metadata: Metadata = { title: "Code-reference cards" };
 

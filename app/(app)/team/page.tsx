@@ -6,10 +6,10 @@ import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { asJson } from "@/components/ui/server-first";
 import { requireViewer } from "@/lib/access";
-import { boardModules, boardPage, completionsPerWeek, teamTotals } from "@/lib/team/board";
-import { withCellExtras } from "@/lib/team/board-extras";
-import { boardQuerySchema, parseBoardQuery } from "@/lib/team/schemas";
-import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
+import { boardModules, boardPage, completionsPerWeek, teamTotals } from "@/lib/team";
+import { withCellExtras } from "@/lib/team";
+import { boardQuerySchema, parseBoardQuery } from "@/lib/team";
+import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 
 export const metadata: Metadata = { title: "Team board" };
 

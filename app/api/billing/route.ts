@@ -1,6 +1,6 @@
 import { json, route } from "@/lib/api";
 import { billingOverview, organizationSeatList } from "@/lib/billing";
-import { resolveScope } from "@/lib/team/scope";
+import { resolveScope } from "@/lib/access";
 
 /**
  * GET /api/billing[?org=] → seats, receipts and open checkouts of one organization (managers: their

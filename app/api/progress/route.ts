@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { json, readJson, route } from "@/lib/api";
 import { assertCanReadPerson, markLessonComplete, progressByModule, readingTimes } from "@/lib/progress";
-import { slug } from "@/lib/content/schema";
+import { slug } from "@/lib/content";
 
 /**
  * GET /api/progress?module=…[&userId=…] → completed lessons of a module (own, or a managed person's)

@@ -1,6 +1,6 @@
 import { json, route } from "@/lib/api";
 import { MAX_QUERY_LENGTH, MAX_RESULTS } from "@/lib/search/browser";
-import { searchIndex } from "@/lib/search/server";
+import { searchIndex } from "@/lib/search";
 
 /** GET /api/search?q=…&limit=… → at most 20 hits, title matches first, and a "did you mean" for typos. */
 export const GET = route("signed-in", async ({ req }) => {

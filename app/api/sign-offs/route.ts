@@ -1,5 +1,5 @@
 import { clientIp, json, route } from "@/lib/api";
-import { readUpload, submitSignOff, uploadRateRefusal } from "@/lib/signoffs/submit";
+import { readUpload, submitSignOff, uploadRateRefusal } from "@/lib/signoffs";
 
 /**
  * POST /api/sign-offs (multipart/form-data: module, skill, note, files ×1–3) → 201 { id, status, evidence }.

@@ -4,8 +4,8 @@ import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { verificationByCode } from "@/lib/certificates";
-import { formatCertificateDate, formatHours, KIND_LABEL } from "@/lib/certificates/status";
-import { hitVerifyLimit, ipFromHeaders, tooManyLookupsMessage } from "@/lib/certificates/verify";
+import { formatCertificateDate, formatHours, KIND_LABEL } from "@/lib/certificates";
+import { hitVerifyLimit, ipFromHeaders, tooManyLookupsMessage } from "@/lib/certificates";
 
 export const metadata: Metadata = { title: "Certificate check", robots: { index: false, follow: false } };
 

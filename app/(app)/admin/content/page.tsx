@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { ContentStatus } from "@/components/admin/content-status";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { contentStatus } from "@/lib/admin/content";
+import { contentStatus } from "@/lib/admin";
 import { asJson } from "@/components/ui/server-first";
 
 export const metadata: Metadata = { title: "Content · Admin" };

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { MailLog } from "@/components/admin/mail-log";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { mailBodiesVisible } from "@/lib/admin/mail";
+import { mailBodiesVisible } from "@/lib/admin";
 
 export const metadata: Metadata = { title: "Mail log · Admin" };
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { PeopleConsole } from "@/components/admin/people-console";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { organizationOptions } from "@/lib/admin/organizations";
+import { organizationOptions } from "@/lib/admin";
 
 export const metadata: Metadata = { title: "People · Admin" };
 

@@ -3,12 +3,12 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { buttonLinkClass } from "@/components/ui/button";
 import { requireViewer } from "@/lib/access";
-import { findModule, loadCatalog } from "@/lib/content/load";
+import { findModule, loadCatalog } from "@/lib/content";
 import { progressByModule } from "@/lib/progress";
 import { isoDay } from "@/lib/dates";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
 import { moduleActions } from "@/lib/learner-actions";
-import { listAttempts } from "@/lib/quiz/attempts";
+import { listAttempts } from "@/lib/quiz";
 import { plural } from "@/lib/plural";
 
 type Params = { params: Promise<{ module: string }> };

@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { cards as registry } from "@/content/.generated/registry";
 import { lessonComponents } from "@/components/lesson/mdx";
 import { requireViewer } from "@/lib/access";
-import { findModule, loadCatalog } from "@/lib/content/load";
+import { findModule, loadCatalog } from "@/lib/content";
 
 type Params = { params: Promise<{ card: string }> };
 

@@ -5,13 +5,13 @@ import { RemoveAssignment } from "@/components/team/remove-assignment";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { loadCatalog } from "@/lib/content/load";
-import { listAssignments } from "@/lib/team/assignments";
-import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
+import { loadCatalog } from "@/lib/content";
+import { listAssignments } from "@/lib/team";
+import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 import { Table } from "@/components/ui/table";
 import { isoDay } from "@/lib/dates";
 import { InviteeWork } from "@/components/team/invitee-work";
-import { listInvitations } from "@/lib/team/invite-admin";
+import { listInvitations } from "@/lib/team";
 
 export const metadata: Metadata = { title: "Assign work" };
 

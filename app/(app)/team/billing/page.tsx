@@ -8,8 +8,8 @@ import { SeatFigures } from "@/components/billing/seat-summary";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { billingOverview, paymentsConfigured } from "@/lib/billing";
-import { billingPageScope } from "@/lib/billing/page-scope";
-import { formatMoney } from "@/lib/billing/pricing";
+import { billingPageScope } from "@/lib/billing";
+import { formatMoney } from "@/lib/billing";
 import { AllOrganizations } from "@/components/billing/all-organizations";
 
 export const metadata: Metadata = { title: "Seats and billing" };

@@ -7,11 +7,11 @@ import { OrgPicker } from "@/components/team/org-picker";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { INVITE_STATUS_LABELS, listInvitations } from "@/lib/team/invite-admin";
+import { INVITE_STATUS_LABELS, listInvitations } from "@/lib/team";
 import { plural } from "@/lib/plural";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
-import { allOrganizations, pageScope, teamsInScope } from "@/lib/team/scope";
-import { BILLING_PATH, seatUsage } from "@/lib/team/seats";
+import { ROLE_LABELS, type InviteRole } from "@/lib/team";
+import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
+import { BILLING_PATH, seatUsage } from "@/lib/billing";
 
 export const metadata: Metadata = { title: "Invite people" };
 

@@ -6,7 +6,7 @@ import { SignOffBadge } from "@/components/signoffs/status-badge";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { reviewQueue, waitingCount, type QueueFilter } from "@/lib/signoffs/queries";
+import { reviewQueue, waitingCount, type QueueFilter } from "@/lib/signoffs";
 import { daysSince, isoDay } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Sign-offs to review" };

@@ -4,8 +4,8 @@ import { TeamNav } from "@/components/team/team-nav";
 import { TeamsManager } from "@/components/team/teams-manager";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { allOrganizations, pageScope } from "@/lib/team/scope";
-import { listTeams } from "@/lib/team/teams";
+import { allOrganizations, pageScope } from "@/lib/access";
+import { listTeams } from "@/lib/team";
 
 export const metadata: Metadata = { title: "Teams" };
 

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AcceptInviteForm } from "@/components/team/accept-invite-form";
 import { PageTitle } from "@/components/ui/page-title";
-import { lookupInvite, refusalText } from "@/lib/team/invites";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
+import { lookupInvite, refusalText } from "@/lib/team";
+import { ROLE_LABELS, type InviteRole } from "@/lib/team";
 
 export const metadata: Metadata = { title: "Your invitation", robots: { index: false } };
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { ApiError, json, route } from "@/lib/api";
-import { collectMyRecords, recordsCsv } from "@/lib/account/records";
+import { collectMyRecords, recordsCsv } from "@/lib/account";
 import { csvDownload } from "@/lib/csv";
 
 const format = z.enum(["json", "csv"]);

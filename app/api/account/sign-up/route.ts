@@ -1,7 +1,7 @@
 import { ApiError, clientIp, json, readJson, route } from "@/lib/api";
 import { createOrganizationWithManager } from "@/lib/accounts";
-import { signUpSchema } from "@/lib/auth/schemas";
-import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth/signup";
+import { signUpSchema } from "@/lib/auth";
+import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth";
 
 /**
  * Creates a new organization (with its trial seats) and its first manager; sends the verification

@@ -1,7 +1,7 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, queryOf } from "@/lib/admin/http";
-import { createOrganization, listOrganizations } from "@/lib/admin/organizations";
-import { createOrganizationSchema, organizationsQuery } from "@/lib/admin/schemas";
+import { assertSameOrigin, queryOf } from "@/lib/admin";
+import { createOrganization, listOrganizations } from "@/lib/admin";
+import { createOrganizationSchema, organizationsQuery } from "@/lib/admin";
 
 /** GET /api/admin/organizations?q&page&pageSize&sort&dir → organizations with seats, people and teams. */
 export const GET = route("admin", async ({ req }) => json(await listOrganizations(organizationsQuery.parse(queryOf(req)))));

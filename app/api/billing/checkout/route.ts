@@ -1,7 +1,7 @@
-import { assertSameOrigin } from "@/lib/admin/http";
+import { assertSameOrigin } from "@/lib/admin";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { startCheckout } from "@/lib/billing";
-import { checkoutInput } from "@/lib/billing/schemas";
+import { checkoutInput } from "@/lib/billing";
 
 /**
  * POST /api/billing/checkout { seats, idempotencyKey, org? } → { checkoutId, url }: the payment

@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { acceptInvite } from "@/lib/team/invites";
-import { acceptInviteSchema } from "@/lib/team/schemas";
+import { acceptInvite } from "@/lib/team";
+import { acceptInviteSchema } from "@/lib/team";
 
 /**
  * POST /api/invite/accept { token, name, password, confirm } → 201 { email }: the account exists in

@@ -1,6 +1,6 @@
 import { json, route } from "@/lib/api";
 import { sendExpiryReminders } from "@/lib/certificates";
-import { assertJobsSecret } from "@/lib/certificates/jobs";
+import { assertJobsSecret } from "@/lib/certificates";
 
 /**
  * POST /api/jobs/certificate-reminders (header x-jobs-secret) → { due, sent, failed, skipped }.

@@ -1,5 +1,5 @@
 import { json, route } from "@/lib/api";
-import { assertJobsSecret } from "@/lib/certificates/jobs";
+import { assertJobsSecret } from "@/lib/certificates";
 import { runJobs } from "@/lib/jobs";
 
 /**

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { ApiError, json, readJson, route } from "@/lib/api";
-import { slug } from "@/lib/content/schema";
-import { listAttempts, listOrganizationAttempts, startAttempt } from "@/lib/quiz/attempts";
+import { slug } from "@/lib/content";
+import { listAttempts, listOrganizationAttempts, startAttempt } from "@/lib/quiz";
 
 /** POST /api/quiz/attempts { module } → starts (or resumes) an attempt; questions only, no answers. */
 export const POST = route("signed-in", async ({ req, viewer }) => {

@@ -1,7 +1,7 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { createAssignments } from "@/lib/team/assignments";
-import { assignSchema } from "@/lib/team/schemas";
-import { resolveWriteOrg } from "@/lib/team/scope";
+import { createAssignments } from "@/lib/team";
+import { assignSchema } from "@/lib/team";
+import { resolveWriteOrg } from "@/lib/access";
 
 /**
  * POST /api/team/assignments { kind, slug, userIds, teamIds, dueAt: "YYYY-MM-DD", org? } → 201.

@@ -1,7 +1,7 @@
 import { ApiError, fieldErrorsOf, route } from "@/lib/api";
-import { boardCsv } from "@/lib/team/export";
-import { parseBoardQuery } from "@/lib/team/schemas";
-import { resolveScope } from "@/lib/team/scope";
+import { boardCsv } from "@/lib/team";
+import { parseBoardQuery } from "@/lib/team";
+import { resolveScope } from "@/lib/access";
 
 /** GET /api/team/board.csv?(the board's filters) → every matching person, streamed as CSV. */
 export const GET = route("manager", async ({ req, viewer }) => {

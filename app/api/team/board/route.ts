@@ -1,8 +1,8 @@
 import { ApiError, fieldErrorsOf, json, route } from "@/lib/api";
-import { boardPage } from "@/lib/team/board";
-import { withCellExtras } from "@/lib/team/board-extras";
-import { parseBoardQuery } from "@/lib/team/schemas";
-import { resolveScope } from "@/lib/team/scope";
+import { boardPage } from "@/lib/team";
+import { withCellExtras } from "@/lib/team";
+import { parseBoardQuery } from "@/lib/team";
+import { resolveScope } from "@/lib/access";
 
 /**
  * GET /api/team/board?page=&pageSize=&team=&status=&module=&dueBefore=&sort=&dir=&q=[&org= admins]

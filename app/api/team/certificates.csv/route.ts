@@ -1,6 +1,6 @@
 import { route } from "@/lib/api";
-import { certificatesCsv } from "@/lib/team/export";
-import { resolveScope } from "@/lib/team/scope";
+import { certificatesCsv } from "@/lib/team";
+import { resolveScope } from "@/lib/access";
 
 /** GET /api/team/certificates.csv[?org= admins] → the organization's certificates, streamed as CSV. */
 export const GET = route("manager", async ({ req, viewer }) => {

@@ -1,9 +1,9 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { listInvitations } from "@/lib/team/invite-admin";
-import { inviteOne } from "@/lib/team/invites";
-import { inviteSchema } from "@/lib/team/schemas";
-import { resolveScope, resolveWriteOrg } from "@/lib/team/scope";
-import { SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
+import { listInvitations } from "@/lib/team";
+import { inviteOne } from "@/lib/team";
+import { inviteSchema } from "@/lib/team";
+import { resolveScope, resolveWriteOrg } from "@/lib/access";
+import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 
 /**
  * POST /api/team/invites { email, name?, role, teamId?, org? (admins) } → 201, and the mail with a

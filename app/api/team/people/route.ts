@@ -1,6 +1,6 @@
 import { json, route } from "@/lib/api";
-import { searchPeople } from "@/lib/team/assignments";
-import { resolveScope } from "@/lib/team/scope";
+import { searchPeople } from "@/lib/team";
+import { resolveScope } from "@/lib/access";
 
 /** GET /api/team/people?q=[&org=] → up to 20 people of the organization whose name or e-mail matches. */
 export const GET = route("manager", async ({ req, viewer }) => {

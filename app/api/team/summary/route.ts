@@ -1,6 +1,6 @@
 import { json, route } from "@/lib/api";
-import { completionsPerWeek, teamTotals } from "@/lib/team/board";
-import { resolveScope } from "@/lib/team/scope";
+import { completionsPerWeek, teamTotals } from "@/lib/team";
+import { resolveScope } from "@/lib/access";
 
 /** GET /api/team/summary[?org=] → totals per team and module completions per week (the board's charts). */
 export const GET = route("manager", async ({ req, viewer }) => {

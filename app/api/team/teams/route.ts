@@ -1,7 +1,7 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { createTeamSchema } from "@/lib/team/schemas";
-import { resolveScope, resolveWriteOrg } from "@/lib/team/scope";
-import { createTeam, listTeams } from "@/lib/team/teams";
+import { createTeamSchema } from "@/lib/team";
+import { resolveScope, resolveWriteOrg } from "@/lib/access";
+import { createTeam, listTeams } from "@/lib/team";
 
 /** GET /api/team/teams[?org=] → the organization's teams (archived ones too) with head counts; admins name ?org=. */
 export const GET = route("manager", async ({ req, viewer }) => {

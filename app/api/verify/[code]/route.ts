@@ -1,6 +1,6 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
 import { verificationByCode } from "@/lib/certificates";
-import { hitVerifyLimit, tooManyLookupsMessage } from "@/lib/certificates/verify";
+import { hitVerifyLimit, tooManyLookupsMessage } from "@/lib/certificates";
 
 /**
  * GET /api/verify/:code (public) → { serial, holderName, title, kind, ceHours, issuedAt, expiresAt,

@@ -5,7 +5,7 @@ import { lessons as registry } from "@/content/.generated/registry";
 import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
 import { requireViewer } from "@/lib/access";
-import { findModule } from "@/lib/content/load";
+import { findModule } from "@/lib/content";
 import { recordLessonOpen } from "@/lib/progress";
 
 // Rendered per request (never a shared-cache copy): the session is checked here (proxy.ts checks it

@@ -4,9 +4,9 @@ import { notFound } from "next/navigation";
 import { QuizRunner } from "@/components/quiz/quiz-runner";
 import { requireViewer } from "@/lib/access";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
-import { findModule } from "@/lib/content/load";
+import { findModule } from "@/lib/content";
 import { missingLinks, quizStartLabel } from "@/lib/learner-actions";
-import { listAttempts } from "@/lib/quiz/attempts";
+import { listAttempts } from "@/lib/quiz";
 import { isoDay, isoMinute } from "@/lib/dates";
 import { Table } from "@/components/ui/table";
 

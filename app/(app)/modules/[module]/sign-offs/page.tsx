@@ -5,8 +5,8 @@ import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
 import { SignOffBadge } from "@/components/signoffs/status-badge";
 import { UploadForm } from "@/components/signoffs/upload-form";
 import { requireViewer } from "@/lib/access";
-import { findModule } from "@/lib/content/load";
-import { signOffsOf, type SignOffItem } from "@/lib/signoffs/queries";
+import { findModule } from "@/lib/content";
+import { signOffsOf, type SignOffItem } from "@/lib/signoffs";
 import { isoDay } from "@/lib/dates";
 
 type Params = { params: Promise<{ module: string }> };

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { checkoutFor } from "@/lib/billing";
-import { billingHref } from "@/lib/billing/page-scope";
+import { billingHref } from "@/lib/billing";
 
 export const metadata: Metadata = { title: "Checkout cancelled · Seats and billing" };
 

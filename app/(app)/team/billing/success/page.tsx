@@ -4,7 +4,7 @@ import { CheckoutStatus } from "@/components/billing/checkout-status";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { checkoutFor } from "@/lib/billing";
-import { billingHref } from "@/lib/billing/page-scope";
+import { billingHref } from "@/lib/billing";
 
 export const metadata: Metadata = { title: "Payment · Seats and billing" };
 

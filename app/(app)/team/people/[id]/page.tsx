@@ -8,12 +8,12 @@ import { PersonControls } from "@/components/team/person-controls";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { assignedWork } from "@/lib/team/assignments";
-import { boardModules } from "@/lib/team/board";
-import { personForViewer, personHistory } from "@/lib/team/people";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team/schemas";
+import { assignedWork } from "@/lib/team";
+import { boardModules } from "@/lib/team";
+import { personForViewer, personHistory } from "@/lib/team";
+import { ROLE_LABELS, type InviteRole } from "@/lib/team";
 import { isoDay } from "@/lib/dates";
-import { teamsInScope } from "@/lib/team/scope";
+import { teamsInScope } from "@/lib/access";
 
 export const metadata: Metadata = { title: "Person" };
 

@@ -1,7 +1,7 @@
 import { clientIp, route } from "@/lib/api";
-import { auditCsv } from "@/lib/admin/audit-log";
-import { queryOf } from "@/lib/admin/http";
-import { auditQuery } from "@/lib/admin/schemas";
+import { auditCsv } from "@/lib/admin";
+import { queryOf } from "@/lib/admin";
+import { auditQuery } from "@/lib/admin";
 import { audit } from "@/lib/audit";
 import { csvDownload } from "@/lib/csv";
 import { isoDay } from "@/lib/dates";

@@ -1,6 +1,6 @@
 import { clientIp, json, route } from "@/lib/api";
-import { syncNow } from "@/lib/admin/content";
-import { assertSameOrigin } from "@/lib/admin/http";
+import { syncNow } from "@/lib/admin";
+import { assertSameOrigin } from "@/lib/admin";
 
 /** POST /api/admin/content/sync → syncs content/ into the catalog now (audited: content.sync); 422 with problems when content is invalid. */
 export const POST = route("admin", async ({ req, viewer }) => {

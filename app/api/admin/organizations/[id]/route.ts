@@ -1,7 +1,7 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { assertSameOrigin } from "@/lib/admin/http";
-import { renameOrganization } from "@/lib/admin/organizations";
-import { renameOrganizationSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin } from "@/lib/admin";
+import { renameOrganization } from "@/lib/admin";
+import { renameOrganizationSchema } from "@/lib/admin";
 
 /** POST /api/admin/organizations/:id { name } → renames it (audited: organization.rename). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

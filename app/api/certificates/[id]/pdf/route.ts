@@ -1,5 +1,5 @@
 import { route } from "@/lib/api";
-import { certificateForViewer, certificatePdf } from "@/lib/certificates/access";
+import { certificateForViewer, certificatePdf } from "@/lib/certificates";
 
 /** GET /api/certificates/:id/pdf → the certificate PDF (holder, their organization's managers, admins). */
 export const GET = route<{ id: string }>("signed-in", async ({ viewer, params }) => {

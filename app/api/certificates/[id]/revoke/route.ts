@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { revokeCertificate } from "@/lib/certificates/access";
-import { revokeInput } from "@/lib/certificates/schemas";
+import { revokeCertificate } from "@/lib/certificates";
+import { revokeInput } from "@/lib/certificates";
 
 /**
  * POST /api/certificates/:id/revoke { reason } → { id, serial, revokedAt }. A manager of the

@@ -1,5 +1,5 @@
 import { json, route } from "@/lib/api";
-import { viewAttempt } from "@/lib/quiz/attempts";
+import { viewAttempt } from "@/lib/quiz";
 
 /** GET an attempt: while open, its questions and saved answers; once graded, the results. */
 export const GET = route<{ id: string }>("signed-in", async ({ viewer, params }) => json(await viewAttempt(viewer, params.id)));

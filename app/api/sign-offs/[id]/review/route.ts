@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { reviewSignOff } from "@/lib/signoffs/review";
-import { reviewInput } from "@/lib/signoffs/schemas";
+import { reviewSignOff } from "@/lib/signoffs";
+import { reviewInput } from "@/lib/signoffs";
 
 /**
  * POST /api/sign-offs/:id/review { decision: "approve" | "return", comment } → { id, status, moduleCompleted }.

@@ -1,6 +1,6 @@
 import { canManageOrganization } from "@/lib/access";
 import { ApiError, clientIp, json, route } from "@/lib/api";
-import { deleteAssignment } from "@/lib/team/assignments";
+import { deleteAssignment } from "@/lib/team";
 
 /** DELETE /api/team/assignments/:id → removes one assignment of the viewer's organization. */
 export const DELETE = route<{ id: string }>("manager", async ({ req, viewer, params }) => {

@@ -1,7 +1,7 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
-import { importRoster, readUpload } from "@/lib/team/bulk";
-import { resolveWriteOrg } from "@/lib/team/scope";
-import { SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
+import { importRoster, readUpload } from "@/lib/team";
+import { resolveWriteOrg } from "@/lib/access";
+import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 
 /**
  * POST /api/team/invites/import (multipart: file, fileHash from the preview, org? for admins) →

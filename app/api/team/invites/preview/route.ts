@@ -1,8 +1,8 @@
 import { json, route } from "@/lib/api";
-import { hitRateLimit } from "@/lib/certificates/rate-limit";
-import { previewRoster, readUpload } from "@/lib/team/bulk";
-import { ROSTER_PREVIEW_LIMIT } from "@/lib/team/schemas";
-import { resolveWriteOrg } from "@/lib/team/scope";
+import { hitRateLimit } from "@/lib/rate-limit";
+import { previewRoster, readUpload } from "@/lib/team";
+import { ROSTER_PREVIEW_LIMIT } from "@/lib/team";
+import { resolveWriteOrg } from "@/lib/access";
 
 /**
  * POST /api/team/invites/preview (multipart: file, org? for admins) → every row with its problems

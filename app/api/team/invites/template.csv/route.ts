@@ -1,7 +1,7 @@
 import { route } from "@/lib/api";
 import { csvDownload } from "@/lib/csv";
-import { rosterTemplate } from "@/lib/team/roster";
-import { resolveScope, teamsInScope } from "@/lib/team/scope";
+import { rosterTemplate } from "@/lib/team";
+import { resolveScope, teamsInScope } from "@/lib/access";
 
 /** GET /api/team/invites/template.csv → a roster template with the organization's team names. */
 export const GET = route("manager", async ({ req, viewer }) => {

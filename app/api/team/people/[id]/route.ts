@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { updatePerson } from "@/lib/team/members";
-import { updatePersonSchema } from "@/lib/team/schemas";
+import { updatePerson } from "@/lib/team";
+import { updatePersonSchema } from "@/lib/team";
 
 /** POST /api/team/people/[id] { teamId?, role? } → changes team and/or role (learner, sales, manager). */
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {

@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { updateTeamSchema } from "@/lib/team/schemas";
-import { renameTeam, setTeamArchived } from "@/lib/team/teams";
+import { updateTeamSchema } from "@/lib/team";
+import { renameTeam, setTeamArchived } from "@/lib/team";
 
 /**
  * POST /api/team/teams/[id] { name?, archived? } → rename and/or archive (true) or restore (false).

@@ -1,7 +1,7 @@
 import { json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, requestContext } from "@/lib/admin/http";
-import { banPerson } from "@/lib/admin/people";
-import { banSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin, requestContext } from "@/lib/admin";
+import { banPerson } from "@/lib/admin";
+import { banSchema } from "@/lib/admin";
 
 /** POST /api/admin/people/:id/ban { reason, days? } → better-auth banUser, which ends their sessions (audited: user.ban). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

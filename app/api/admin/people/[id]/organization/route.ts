@@ -1,7 +1,7 @@
 import { json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, requestContext } from "@/lib/admin/http";
-import { moveOrganization } from "@/lib/admin/people";
-import { moveOrganizationSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin, requestContext } from "@/lib/admin";
+import { moveOrganization } from "@/lib/admin";
+import { moveOrganizationSchema } from "@/lib/admin";
 
 /** POST /api/admin/people/:id/organization { organizationId, reason? } → moves the person (audited: user.move). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

@@ -1,7 +1,7 @@
 import { json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, requestContext } from "@/lib/admin/http";
-import { changeRole } from "@/lib/admin/people";
-import { changeRoleSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin, requestContext } from "@/lib/admin";
+import { changeRole } from "@/lib/admin";
+import { changeRoleSchema } from "@/lib/admin";
 
 /** POST /api/admin/people/:id/role { role, reason } → better-auth setRole (audited: user.role). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

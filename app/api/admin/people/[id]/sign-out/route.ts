@@ -1,7 +1,7 @@
 import { json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, requestContext } from "@/lib/admin/http";
-import { signOutPerson } from "@/lib/admin/people";
-import { signOutSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin, requestContext } from "@/lib/admin";
+import { signOutPerson } from "@/lib/admin";
+import { signOutSchema } from "@/lib/admin";
 
 /** POST /api/admin/people/:id/sign-out { reason? } → better-auth revokeUserSessions (audited: user.sign-out). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

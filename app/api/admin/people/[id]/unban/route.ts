@@ -1,7 +1,7 @@
 import { json, readJson, route } from "@/lib/api";
-import { assertSameOrigin, requestContext } from "@/lib/admin/http";
-import { unbanPerson } from "@/lib/admin/people";
-import { unbanSchema } from "@/lib/admin/schemas";
+import { assertSameOrigin, requestContext } from "@/lib/admin";
+import { unbanPerson } from "@/lib/admin";
+import { unbanSchema } from "@/lib/admin";
 
 /** POST /api/admin/people/:id/unban { reason? } → better-auth unbanUser (audited: user.unban). */
 export const POST = route<{ id: string }>("admin", async ({ req, viewer, params }) => {

@@ -1,6 +1,6 @@
 import { json, readJson, route } from "@/lib/api";
-import { saveAnswers } from "@/lib/quiz/attempts";
-import { answersBody } from "@/lib/quiz/input";
+import { saveAnswers } from "@/lib/quiz";
+import { answersBody } from "@/lib/quiz";
 
 /** PUT { answers: [{ position, answer }] } → saved as the person goes (all or nothing). */
 export const PUT = route<{ id: string }>("signed-in", async ({ req, viewer, params }) => {

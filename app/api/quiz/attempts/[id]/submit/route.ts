@@ -1,6 +1,6 @@
 import { json, readJson, route } from "@/lib/api";
-import { submitAttempt } from "@/lib/quiz/attempts";
-import { answersBody } from "@/lib/quiz/input";
+import { submitAttempt } from "@/lib/quiz";
+import { answersBody } from "@/lib/quiz";
 
 /** POST { answers? } → graded on the server once; repeats return the same result. */
 export const POST = route<{ id: string }>("signed-in", async ({ req, viewer, params }) => {

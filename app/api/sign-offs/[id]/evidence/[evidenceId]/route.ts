@@ -1,5 +1,5 @@
 import { ApiError, route } from "@/lib/api";
-import { evidenceFileForViewer } from "@/lib/signoffs/access";
+import { evidenceFileForViewer } from "@/lib/signoffs";
 import { getObject, isStorageDown } from "@/lib/storage";
 
 /**

@@ -1,6 +1,6 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
-import { addInvitationWork } from "@/lib/team/invite-admin";
-import { inviteAssignSchema } from "@/lib/team/schemas";
+import { addInvitationWork } from "@/lib/team";
+import { inviteAssignSchema } from "@/lib/team";
 
 /**
  * POST /api/team/invites/[id]/assign { items: [{ kind, slug, dueAt }] } → the open invitation

@@ -1,6 +1,6 @@
 import { clientIp, json, route } from "@/lib/api";
-import { resendInvitation } from "@/lib/team/invite-admin";
-import { SeatLimitError, seatLimitResponse } from "@/lib/team/seats";
+import { resendInvitation } from "@/lib/team";
+import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 
 /** POST /api/team/invites/[id]/resend→ a fresh link for an open or expired invitation. */
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {

@@ -1,5 +1,5 @@
 import { clientIp, json, route } from "@/lib/api";
-import { revokeInvitation } from "@/lib/team/invite-admin";
+import { revokeInvitation } from "@/lib/team";
 
 /** POST /api/team/invites/[id]/revoke→ the link stops working and the seat is free at once. */
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {

@@ -1,5 +1,5 @@
 import { clientIp, json, route } from "@/lib/api";
-import { removePerson } from "@/lib/team/members";
+import { removePerson } from "@/lib/team";
 
 /** POST /api/team/people/[id]/remove → the person leaves the organization (seat freed; records and certificates stay). */
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {

@@ -1,6 +1,6 @@
 import "server-only";
 // Registers every area's catalog-sync step (imported by the seed and the admin's sync action).
-import { syncQuestionVersions } from "@/lib/quiz/sync";
+import { syncQuestionVersions } from "@/lib/quiz";
 import { onCatalogSync } from "./sync";
 
 onCatalogSync(syncQuestionVersions);

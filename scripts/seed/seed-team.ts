@@ -10,7 +10,7 @@ import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { assignment, catalogLesson, catalogModule, lessonProgress, moduleCompletion, organization, quizAttempt, team, user } from "@/db/schema";
 import { issueCertificateForCompletion } from "@/lib/certificates";
-import { findModule } from "@/lib/content/load";
+import { findModule } from "@/lib/content";
 
 const DAY = 86_400_000;
 

@@ -8,16 +8,16 @@ import "server-only";
 export type Job = { name: string; run: () => Promise<unknown> };
 
 export const JOBS: Job[] = [
-  { name: "certificate-reminders", run: async () => (await import("@/lib/certificates/reminders")).sendExpiryReminders() },
+  { name: "certificate-reminders", run: async () => (await import("@/lib/certificates")).sendExpiryReminders() },
   { name: "completion-retry", run: async () => (await import("@/lib/completion")).retryPendingCompletions() },
-  { name: "certificate-backfill", run: async () => (await import("@/lib/certificates/issue")).issueMissingCertificates() },
-  { name: "rate-limit-prune", run: async () => (await import("@/lib/certificates/rate-limit")).pruneRateLimitBuckets() },
-  { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs/cleanup")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
-  { name: "assignment-reminders", run: async () => (await import("@/lib/team/reminders")).sendDueReminders() },
-  { name: "unverified-accounts-expire", run: async () => (await import("@/lib/auth/signup")).expireUnverifiedAccounts() },
-  { name: "manager-digest", run: async () => (await import("@/lib/team/reminders")).sendManagerDigests() },
+  { name: "certificate-backfill", run: async () => (await import("@/lib/certificates")).issueMissingCertificates() },
+  { name: "rate-limit-prune", run: async () => (await import("@/lib/rate-limit")).pruneRateLimitBuckets() },
+  { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
+  { name: "assignment-reminders", run: async () => (await import("@/lib/team")).sendDueReminders() },
+  { name: "unverified-accounts-expire", run: async () => (await import("@/lib/auth")).expireUnverifiedAccounts() },
+  { name: "manager-digest", run: async () => (await import("@/lib/team")).sendManagerDigests() },
   // last, so that the messages the jobs above queued go out in the same run
-  { name: "mail-outbox", run: async () => (await import("@/lib/mail/outbox")).deliverOutbox() },
+  { name: "mail-outbox", run: async () => (await import("@/lib/mail")).deliverOutbox() },
 ];
 
 export type JobOutcome = { name: string; ok: boolean; ms: number; result?: unknown; error?: string };

@@ -5,9 +5,9 @@ import { APIError } from "better-auth/api";
 import { db } from "@/db/client";
 import { organization, user } from "@/db/schema";
 import { auth } from "@/lib/auth";
-import { TRIAL } from "@/lib/billing/plans";
-import { signupContext, type SignupPlacement } from "@/lib/auth/signup-context";
-import type { SignUpInput } from "@/lib/auth/schemas";
+import { TRIAL } from "@/lib/billing";
+import { signupContext, type SignupPlacement } from "@/lib/auth";
+import type { SignUpInput } from "@/lib/auth";
 import { addDays } from "@/lib/dates";
 
 /** The trial allowance is set with the seat prices, in lib/billing/plans.ts. */

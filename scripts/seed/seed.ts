@@ -1,15 +1,15 @@
 // Demo data: `npm run db:seed` (skips when the database already holds organizations). Local
 // profiles only: the demo people share one published password, so the seed refuses to run unless
 // RISER_LOCAL=1 on a loopback APP_URL (what scripts/ set). The content catalog is synced by
-// db/migrate.ts on every instance; a real instance gets its first admin from `npm run admin:create`.
+// scripts/migrate.ts on every instance; a real instance gets its first admin from `npm run admin:create`.
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import { db, pool } from "@/db/client";
 import { account, organization, team, user } from "@/db/schema";
-import { isLocalInstance } from "@/lib/env-local";
-import { seedCertificates } from "@/lib/certificates/seed";
-import { seedSignOffs } from "@/lib/signoffs/seed";
-import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "./demo";
+import { isLocalInstance } from "@/lib/env";
+import { seedCertificates } from "@/lib/certificates";
+import { seedSignOffs } from "@/lib/signoffs";
+import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "@/db/demo";
 import { seedTeamDemo } from "./seed-team";
 
 if (!isLocalInstance({ RISER_LOCAL: process.env.RISER_LOCAL === "1" ? "1" : "0", APP_URL: process.env.APP_URL ?? "" })) {

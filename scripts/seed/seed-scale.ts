@@ -2,7 +2,7 @@
 // 5,000 learners in 20 teams, lesson progress, graded attempts, completions and certificates across
 // every module, and team assignments with due dates. Fast: multi-row inserts, one password hash.
 //
-//   node_modules/.bin/tsx db/seed-scale.ts --profile=test-b      (or with DATABASE_URL set)
+//   node_modules/.bin/tsx scripts/seed/seed-scale.ts --profile=test-b      (or with DATABASE_URL set)
 //   … --replace    removes an earlier scale organization first; --remove only removes it
 //
 // Needs the catalog synced (run the normal seed first). Plain mysql2, no app modules, so it runs
@@ -10,7 +10,7 @@
 import { randomBytes, randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
-import { DEMO_PASSWORD } from "./demo";
+import { DEMO_PASSWORD } from "@/db/demo";
 
 export const SCALE_ORG = "Tamsett Ridge Sprinklers";
 export const SCALE_MANAGER = { name: "Corra Vellum", email: "corra@tamsett-ridge.example" };
@@ -20,7 +20,7 @@ const DAY = 86_400_000;
 
 async function databaseUrl(): Promise<string> {
   if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
-  const { config } = await import("../scripts/lib/config.mjs");
+  const { config } = await import("../lib/config.mjs");
   return config().env.DATABASE_URL as string;
 }
 

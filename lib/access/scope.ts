@@ -3,8 +3,8 @@ import { and, asc, eq, isNull } from "drizzle-orm";
 import { forbidden, notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { organization, team } from "@/db/schema";
-import { AccessError, type Viewer } from "@/lib/access";
-import { ApiError } from "@/lib/api";
+import type { Viewer } from "./index";
+import { DomainError } from "@/lib/errors";
 
 /**
  * Which organization's data a request may see. Managers: their own, always (asking for another
@@ -13,17 +13,29 @@ import { ApiError } from "@/lib/api";
  */
 export type OrgScope = { orgId: string | null; orgName: string | null };
 
+/**
+ * The one rule for which organization a viewer's lists and counts cover: `null` means every
+ * organization (admins who name none), a string is that organization (admins who name one,
+ * managers always their own), `undefined` means none (everyone else). Checks nothing in the
+ * database; resolveScope below adds that and the 403/404 answers.
+ */
+export function organizationFilter(viewer: Viewer, requested?: string | null): string | null | undefined {
+  if (viewer.role === "admin") return requested || null;
+  if (viewer.role === "manager" && viewer.organizationId) return viewer.organizationId;
+  return undefined;
+}
+
 export async function resolveScope(viewer: Viewer, orgParam?: string | null): Promise<OrgScope> {
   if (viewer.role === "admin") {
     if (!orgParam) return { orgId: null, orgName: null };
     const [org] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, orgParam));
-    if (!org) throw new ApiError(404, "No such organization.");
+    if (!org) throw new DomainError("not-found", "No such organization.");
     return { orgId: org.id, orgName: org.name };
   }
-  if (viewer.role !== "manager" || !viewer.organizationId) throw new AccessError(403, "Only training managers see team data.");
-  if (orgParam && orgParam !== viewer.organizationId) throw new AccessError(403, "That belongs to another organization.");
+  if (viewer.role !== "manager" || !viewer.organizationId) throw new DomainError("forbidden", "Only training managers see team data.");
+  if (orgParam && orgParam !== viewer.organizationId) throw new DomainError("forbidden", "That belongs to another organization.");
   const [org] = await db.select({ id: organization.id, name: organization.name }).from(organization).where(eq(organization.id, viewer.organizationId));
-  if (!org) throw new AccessError(403, "Your organization no longer exists.");
+  if (!org) throw new DomainError("forbidden", "Your organization no longer exists.");
   return { orgId: org.id, orgName: org.name };
 }
 
@@ -32,8 +44,8 @@ export async function pageScope(viewer: Viewer, orgParam?: string | null): Promi
   try {
     return await resolveScope(viewer, orgParam);
   } catch (err) {
-    if (err instanceof AccessError) forbidden();
-    if (err instanceof ApiError && err.status === 404) notFound();
+    if ((err instanceof DomainError && err.kind === "forbidden")) forbidden();
+    if (err instanceof DomainError && err.kind === "not-found") notFound();
     throw err;
   }
 }
@@ -41,7 +53,7 @@ export async function pageScope(viewer: Viewer, orgParam?: string | null): Promi
 /** For changes (invite, assign): one organization is required; admins must name it. */
 export async function resolveWriteOrg(viewer: Viewer, orgParam?: string | null): Promise<{ orgId: string; orgName: string }> {
   const scope = await resolveScope(viewer, orgParam);
-  if (!scope.orgId || !scope.orgName) throw new ApiError(400, "Choose the organization first.", { org: ["Choose the organization"] });
+  if (!scope.orgId || !scope.orgName) throw new DomainError("invalid", "Choose the organization first.", { org: ["Choose the organization"] });
   return { orgId: scope.orgId, orgName: scope.orgName };
 }
 

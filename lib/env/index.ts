@@ -3,9 +3,9 @@
  * a message naming the variable (the scripts in scripts/ set all of these for local use).
  */
 import { z } from "zod";
-import { DEFAULT_APP_URL, localOnlyProblems } from "./env-local";
+import { DEFAULT_APP_URL, localOnlyProblems } from "./local";
 
-export { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "./env-local";
+export { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "./local";
 
 /** An empty variable (`FOO=`) counts as not set. */
 const emptyAsUnset = <T extends z.ZodType>(inner: T) => z.preprocess((v) => (v === "" ? undefined : v), inner);
@@ -100,3 +100,4 @@ function load(): Env {
 }
 
 export const env = load();
+export * from "./local";

@@ -7,7 +7,7 @@ import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { signOff } from "@/db/schema";
-import { findModule } from "@/lib/content/load";
+import { findModule } from "@/lib/content";
 
 /** What is still missing, as lines a learner can read ("sign-off: Makes a CPVC joint …"). */
 export async function missingSignOffs(userId: string, moduleSlug: string): Promise<string[]> {

@@ -3,8 +3,8 @@ import { and, desc, eq, isNull, max, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, quizAttempt } from "@/db/schema";
 import { issueCertificateForCompletion } from "@/lib/certificates";
-import { findModule } from "@/lib/content/load";
-import { missingSignOffs } from "@/lib/signoffs/requirement";
+import { findModule } from "@/lib/content";
+import { missingSignOffs } from "@/lib/completion/signoff-requirement";
 
 export type ModuleStatus = { completedAt: Date | null; bestScore: number | null; lastPassed: boolean | null };
 
@@ -98,3 +98,4 @@ export async function retryPendingCompletions(days = 30, limit = 500): Promise<{
   for (const r of list) if ((await checkAndRecordCompletion(r.userId, r.moduleSlug)) !== null) completed++;
   return { checked: list.length, completed };
 }
+export * from "./signoff-requirement";

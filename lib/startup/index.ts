@@ -6,7 +6,7 @@
 export async function checkEnvironmentAtStart(): Promise<void> {
   if (process.env.NEXT_PHASE === "phase-production-build") return;
   try {
-    await import("./env");
+    await import("@/lib/env");
   } catch (err) {
     console.error(`\n${err instanceof Error ? err.message : String(err)}\n`);
     process.exit(1);

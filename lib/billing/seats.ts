@@ -2,21 +2,21 @@ import "server-only";
 import { and, countDistinct, count, eq, gt, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { invitation, organization, user } from "@/db/schema";
-import { ApiError, json } from "@/lib/api";
-import { seatAllowance, type TrialState } from "@/lib/billing/allowance";
+import { DomainError } from "@/lib/errors";
+import { json } from "@/lib/api";
+import { seatAllowance, type TrialState } from "./allowance";
 import { isoDay } from "@/lib/dates";
 
 export const BILLING_PATH = "/team/billing";
 
-export class SeatLimitError extends ApiError {
+export class SeatLimitError extends DomainError {
   constructor(
     readonly seats: number,
     readonly used: number,
     readonly requested: number,
     trialEndedAt?: Date | null,
   ) {
-    super(
-      409,
+    super("conflict",
       trialEndedAt
         ? `Your organization's trial ended on ${isoDay(trialEndedAt)}; buy seats on the billing page to invite more people.`
         : `Your organization has ${seats} seats; buy more on the billing page.`,

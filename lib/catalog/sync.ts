@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, isNull, notInArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogCard, catalogLesson, catalogModule, catalogPath, contentSync } from "@/db/schema";
-import { loadCatalog, type Catalog } from "./load";
+import { loadCatalog, type Catalog } from "@/lib/content";
 
 export type SyncCounts = { modules: number; lessons: number; paths: number; cards: number; retired: number; questions: number; questionVersionsAdded?: number };
 

@@ -1,0 +1,2 @@
+// The access area's browser-safe face: types, schemas and pure helpers that client components may import.
+export * from "./rules";

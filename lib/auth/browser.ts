@@ -1,0 +1,3 @@
+// The auth area's browser-safe face: types, schemas and pure helpers that client components may import.
+export * from "./client";
+export * from "./schemas";

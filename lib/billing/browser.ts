@@ -1,0 +1,3 @@
+// The billing area's browser-safe face: types, schemas and pure helpers that client components may import.
+export * from "./pricing";
+export * from "./schemas";

@@ -1,0 +1,4 @@
+// The certificates area's browser-safe face: types, schemas and pure helpers that client components may import.
+export * from "./schemas";
+export * from "./status";
+export * from "./verify-code";

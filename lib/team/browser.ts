@@ -1,0 +1,4 @@
+// The team area's browser-safe face: types, schemas and pure helpers that client components may import.
+export * from "./chart";
+export * from "./first-day-steps";
+export * from "./schemas";
