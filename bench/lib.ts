@@ -22,4 +22,4 @@ export function record(name: string, data: unknown) {
   console.log(JSON.stringify(out, null, 2));
 }
 
-export { sessionCookieFor as sessionCookie } from "../tests/helpers/people";
+export { sessionCookieFor as sessionCookie } from "../tests/helpers/fixtures";

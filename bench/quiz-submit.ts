@@ -2,7 +2,7 @@
 // first submit of its own open attempt, so every one is a real grading transaction.
 import { performance } from "node:perf_hooks";
 import { pool } from "@/db/client";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../tests/helpers/people";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../tests/helpers/fixtures";
 import { APP, record, sessionCookie, summary } from "./lib";
 
 const N = Number(process.env.BENCH_ATTEMPTS ?? 1000);

@@ -1,7 +1,6 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
-import { signInAs } from "./helpers";
-import { backdateOpens, throwAwayLearner } from "./reading";
+import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
 
 test("a learner opens a lesson, marks it complete after the reading time and sees the module progress change", async ({ page }) => {
   const email = await throwAwayLearner();

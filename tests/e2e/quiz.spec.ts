@@ -2,8 +2,7 @@ import { expect, test } from "@playwright/test";
 import mysql from "mysql2/promise";
 import { loadCatalogFrom } from "../../lib/content/load";
 import type { Question } from "../../lib/content/schema";
-import { signInAs } from "./helpers";
-import { backdateOpens, throwAwayLearner } from "./reading";
+import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
 
 const MODULE = "talking-with-homebuyers";
 

@@ -8,10 +8,9 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, mailOutbox } from "@/db/schema";
 import { freshIp, postJson, signIn, waitForMail } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
-import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
 import { service } from "../helpers/services";
+import { TEST_PASSWORD, createOrganization, createPeople, readAndComplete } from "../helpers/fixtures";
 
 const catcher = (cmd: "start" | "stop") => service("mail-catcher", cmd);
 const smtpPort = () => Number(new URL(process.env.SMTP_URL ?? "smtp://127.0.0.1:2535").port);

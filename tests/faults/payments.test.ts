@@ -7,8 +7,8 @@ import { db, pool } from "@/db/client";
 import { checkout, organization } from "@/db/schema";
 import { FAKE, fakeSessions, newKey, pressOnPayPage, until } from "../helpers/billing";
 import { freshIp, postJson, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
 import { service } from "../helpers/services";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 const fake = (cmd: "start" | "stop") => service("payments-fake", cmd);
 let client: Client;

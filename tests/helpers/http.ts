@@ -102,3 +102,24 @@ export const linkIn = (text: string) => {
 };
 
 export const uniqueEmail = (tag: string) => `${tag}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 7)}@test.example`;
+
+export async function getJson<T = Record<string, unknown>>(client: Client, path: string): Promise<{ status: number; body: T }> {
+  const res = await client.fetch(path);
+  const text = await res.text();
+  let body: unknown = null;
+  try {
+    body = JSON.parse(text);
+  } catch {
+    body = text;
+  }
+  return { status: res.status, body: body as T };
+}
+
+export async function uploadRoster(client: Client, path: string, bytes: Uint8Array | string, fileName = "roster.csv", fields: Record<string, string> = {}) {
+  const form = new FormData();
+  const data = typeof bytes === "string" ? new TextEncoder().encode(bytes) : bytes;
+  form.set("file", new Blob([Uint8Array.from(data)], { type: "text/csv" }), fileName);
+  for (const [k, v] of Object.entries(fields)) form.set(k, v);
+  const res = await client.fetch(path, { method: "POST", body: form });
+  return { status: res.status, json: (await res.json().catch(() => ({}))) as Record<string, unknown> };
+}

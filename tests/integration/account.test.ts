@@ -7,10 +7,9 @@ import { eq } from "drizzle-orm";
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { certificate, quizAttempt, signOff, user } from "@/db/schema";
+import { certificate, signOff, user } from "@/db/schema";
 import { anonymous as anonymousClient, APP, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { createPerson, createTestOrganization } from "../helpers/admin-people";
-import { readAndComplete } from "../helpers/progress";
+import { createPerson, createTestOrganization, gradedAttempt, readAndComplete } from "../helpers/fixtures";
 
 // the tests' own organization: nobody is added to the demo organizations
 let org: { id: string; name: string };
@@ -136,13 +135,9 @@ describe("download my records", () => {
     await readAndComplete(mine, me.id, "freeze-protection", ["where-homes-freeze"]);
     await readAndComplete(theirs, other.id, "freeze-protection", ["where-homes-freeze"]);
     // attempts written as the quiz engine stores them
-    const myAttempt = randomUUID();
-    const theirAttempt = randomUUID();
     const now = new Date();
-    await db.insert(quizAttempt).values([
-      { id: myAttempt, userId: me.id, organizationId: org.id, moduleSlug: "freeze-protection", seed: 11, status: "graded", startedAt: now, submittedAt: now, score: 90, passed: true, passMark: 80 },
-      { id: theirAttempt, userId: other.id, organizationId: org.id, moduleSlug: "freeze-protection", seed: 12, status: "graded", startedAt: now, submittedAt: now, score: 40, passed: false, passMark: 80 },
-    ]);
+    const myAttempt = await gradedAttempt({ id: me.id, organizationId: org.id }, "freeze-protection", true, now, { score: 90, seed: 11 });
+    const theirAttempt = await gradedAttempt({ id: other.id, organizationId: org.id }, "freeze-protection", false, now, { score: 40, seed: 12 });
 
     // a certificate and a sign-off each, stored the way their areas store them
     const serialNumber = 900_000 + Math.floor(Math.random() * 99_999);

@@ -8,7 +8,7 @@ import { db, pool } from "@/db/client";
 import { auditLog, organization, user } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
 import { APP, anonymous, fetchFrom, freshIp, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { createPerson, createTestOrganization, orgIdByName } from "../helpers/admin-people";
+import { createPerson, createTestOrganization, orgIdByName } from "../helpers/fixtures";
 
 let admin: Client;
 let adminId: string;

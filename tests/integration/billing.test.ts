@@ -13,7 +13,7 @@ import { formatMoney, quote } from "@/lib/billing/pricing";
 import { assertSeatAvailable, BILLING_PATH, SeatLimitError, seatLimitResponse } from "@/lib/billing/seats";
 import { FAKE, fakeEvents, fakeSessions, newKey, postWebhook, pressOnPayPage, sessionEvent, until } from "../helpers/billing";
 import { anonymous, freshIp, mailsTo, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 const maren = demoByRole("manager", "quillmoor");
 let manager: Client;

@@ -6,10 +6,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, lessonProgress, mailOutbox, moduleCompletion, quizAttempt, user } from "@/db/schema";
 import { freshIp, postJson, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
 import { pdfText } from "../helpers/pdf";
-import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
+import { TEST_PASSWORD, createOrganization, createPeople, readAndComplete } from "../helpers/fixtures";
 
 const MODULE = "talking-with-homebuyers"; // 3 attempts per 24 h, 10 minutes between attempts
 let org: { id: string; teamId: string };

@@ -2,7 +2,7 @@
 // learning paths, 50 at once), the PDF route's access rules, public verification (fields, statuses,
 // 404s, rate limit), revocation with its audit row, and the once-only expiry reminder.
 // Expected hours come from the content files (content/modules/*/module.yaml), not from the code.
-import { randomInt, randomUUID } from "node:crypto";
+import { randomUUID } from "node:crypto";
 import path from "node:path";
 import { hashPassword } from "better-auth/crypto";
 import { and, eq, inArray } from "drizzle-orm";
@@ -10,13 +10,14 @@ import { PDFDocument } from "pdf-lib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { demoByRole, DEMO_PASSWORD } from "@/db/demo";
-import { account, auditLog, certificate, certificateSerialCounter, moduleCompletion, organization, quizAttempt, user } from "@/db/schema";
+import { account, auditLog, certificate, certificateSerialCounter, organization, user } from "@/db/schema";
 import { issueCertificateForCompletion } from "@/lib/certificates";
 import { issueMissingCertificates } from "@/lib/certificates/issue";
 import { sendExpiryReminders } from "@/lib/certificates/reminders";
 import { addMonthsUtc, parseSerial } from "@/lib/certificates/status";
 import { loadCatalogFrom } from "@/lib/content/load";
 import { APP, anonymous, mailsTo, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
+import { completion, gradedAttempt } from "../helpers/fixtures";
 import { pdfText, qrFromPdf } from "../helpers/pdf";
 
 const catalog = loadCatalogFrom(path.resolve("content"));
@@ -38,22 +39,8 @@ async function person(tag: string, opts: { name?: string; org?: string | null; l
 
 /** A passed attempt and its completion row, as the quiz engine records them. */
 async function complete(userId: string, moduleSlug: string, completedAt = new Date()): Promise<number> {
-  const attemptId = randomUUID();
-  await db.insert(quizAttempt).values({
-    id: attemptId,
-    userId,
-    organizationId: quillmoorId,
-    moduleSlug,
-    seed: randomInt(1, 2 ** 31),
-    status: "graded",
-    startedAt: new Date(completedAt.getTime() - 600_000),
-    submittedAt: completedAt,
-    score: 100,
-    passed: true,
-    passMark: 80,
-  });
-  const r = await db.insert(moduleCompletion).values({ userId, moduleSlug, attemptId, completedAt });
-  return r[0].insertId;
+  const attemptId = await gradedAttempt({ id: userId, organizationId: quillmoorId }, moduleSlug, true, completedAt, { score: 100 });
+  return completion(userId, moduleSlug, attemptId, completedAt);
 }
 
 const certsOf = (userId: string) => db.select().from(certificate).where(eq(certificate.userId, userId)).orderBy(certificate.id);

@@ -7,8 +7,7 @@ import { lessonOpen, lessonProgress, user } from "@/db/schema";
 import { demoByRole, DEMO_PEOPLE } from "@/db/demo";
 import { loadCatalogFrom } from "@/lib/content/load";
 import { postJson, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createPeople } from "../helpers/people";
-import { backdateOpens, openLessons, readAndComplete } from "../helpers/progress";
+import { TEST_PASSWORD, createPeople, backdateOpens, openLessons, readAndComplete } from "../helpers/fixtures";
 
 const catalog = loadCatalogFrom(path.resolve("content"));
 let learner: Client;

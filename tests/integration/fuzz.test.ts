@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { demoByRole } from "@/db/demo";
 import { anonymous, freshIp, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 // rate-limit counters, sessions and verification tokens may grow; everything else may not
 const TABLES = [

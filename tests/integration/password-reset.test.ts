@@ -3,7 +3,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { pool } from "@/db/client";
 import { APP, fetchFrom, freshIp, linkIn, mailsTo, postJson, anonymous, signIn, waitForMail } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 afterAll(() => pool.end());
 

@@ -10,9 +10,8 @@ const clientWithCookie = (cookie: string): Client => {
   const ip = freshIp();
   return { cookie, ip, fetch: (p, init = {}) => fetchFrom(ip, `${APP}${p}`, { redirect: "manual", ...init, headers: { origin: APP, cookie, ...(init.headers as Record<string, string> | undefined) } }) };
 };
-import { TEST_PASSWORD, createOrganization, createPeople, sessionCookieFor } from "../helpers/people";
-import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog, itemsOf } from "../helpers/quiz";
+import { TEST_PASSWORD, createOrganization, createPeople, sessionCookieFor, readAndComplete } from "../helpers/fixtures";
 
 const MODULE = "hydraulics-and-permits";
 let org: { id: string; teamId: string };

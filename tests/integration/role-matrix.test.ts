@@ -12,9 +12,8 @@ import { demoByRole } from "@/db/demo";
 import { ROUTES, type RouteEntry } from "@/lib/access/routes";
 import { roleSatisfies, type Role } from "@/lib/access/rules";
 import { anonymous, freshIp, postJson, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
-import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
+import { TEST_PASSWORD, createOrganization, createPeople, readAndComplete } from "../helpers/fixtures";
 
 function discoverRoutes(dir: string, prefix = ""): string[] {
   const out: string[] = [];

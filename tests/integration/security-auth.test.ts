@@ -8,7 +8,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { session } from "@/db/schema";
 import { APP, fetchFrom, freshIp, mailsTo, uniqueEmail } from "../helpers/http";
-import { createOrganization, createPeople, TEST_PASSWORD } from "../helpers/people";
+import { createOrganization, createPeople, TEST_PASSWORD } from "../helpers/fixtures";
 
 afterAll(() => pool.end());
 

@@ -8,7 +8,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { account, invitation, organization, user } from "@/db/schema";
 import { anonymous, APP, cookiesOf, fetchFrom, freshIp, linkIn, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { createOrganization, createPeople, sessionCookieFor } from "../helpers/people";
+import { createOrganization, createPeople, sessionCookieFor } from "../helpers/fixtures";
 
 afterAll(() => pool.end());
 

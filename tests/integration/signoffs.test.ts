@@ -17,8 +17,8 @@ import { removeOrphanedEvidence } from "@/lib/signoffs/cleanup";
 import { getObjectBytes, headObject, listObjects, putObject } from "@/lib/storage";
 import { exifHasGps, jpegWithGps } from "../helpers/exif";
 import { APP, anonymous, freshIp, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { readAndComplete } from "../helpers/progress";
 import { answersFor, catalog } from "../helpers/quiz";
+import { readAndComplete } from "../helpers/fixtures";
 
 const PASSWORD = "sign-off-test-pass-2026";
 const PJ = "pipe-and-joining";

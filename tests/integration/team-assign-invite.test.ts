@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { assignment, invitation, user } from "@/db/schema";
 import { anonymous, linkIn, mailsTo, postJson, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { clientOf, daysFromNow, fixtureOrg, fixturePerson, type FixtureOrg } from "../helpers/team";
+import { clientOf, daysFromNow, fixtureOrg, fixturePerson, type FixtureOrg } from "../helpers/fixtures";
 
 const PASSWORD = "assigned-at-invite-55";
 let org: FixtureOrg;

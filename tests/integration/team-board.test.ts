@@ -8,8 +8,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { assignment, user } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
-import { postJson, signIn, type Client } from "../helpers/http";
-import { clientOf, completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, getJson, gradedAttempt, lessonsDone, type FixtureOrg, type FixturePerson } from "../helpers/team";
+import { postJson, signIn, type Client, getJson } from "../helpers/http";
+import { clientOf, completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, gradedAttempt, lessonsDone, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
 
 const FORMULA_TEAM = '=HYPERLINK("http://evil.example","click")'; // a team name a spreadsheet would run
 const MODULE = "freeze-protection"; // 4 lessons, valid 24 months (content/modules/freeze-protection/module.yaml)

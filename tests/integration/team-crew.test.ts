@@ -6,8 +6,8 @@ import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { auditLog, certificate, invitation, session, team, user } from "@/db/schema";
-import { anonymous, linkIn, mailsTo, postJson, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { clientOf, completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, getJson, uploadRoster, type FixtureOrg, type FixturePerson } from "../helpers/team";
+import { anonymous, linkIn, mailsTo, postJson, uniqueEmail, waitForMail, type Client, getJson, uploadRoster } from "../helpers/http";
+import { clientOf, completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
 
 const PASSWORD = "crew-invitee-pass-77";
 let org: FixtureOrg;

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { auditLog, invitation, user } from "@/db/schema";
 import { APP, anonymous, linkIn, mailsTo, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { clientOf, fixtureOrg, fixturePerson, type FixtureOrg, type FixturePerson } from "../helpers/team";
+import { clientOf, fixtureOrg, fixturePerson, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
 
 const PASSWORD = "joined-by-invite-42";
 let org: FixtureOrg;

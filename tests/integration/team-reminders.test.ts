@@ -7,7 +7,7 @@ import { db, pool } from "@/db/client";
 import { assignment, reminderLog } from "@/db/schema";
 import { sendDueReminders, sendManagerDigests } from "@/lib/team/reminders";
 import { anonymous, mailsTo, waitForMail } from "../helpers/http";
-import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, type FixturePerson } from "../helpers/team";
+import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, type FixturePerson } from "../helpers/fixtures";
 
 let learner: FixturePerson;
 let done: FixturePerson;

@@ -8,8 +8,8 @@ import { and, count, eq, inArray, isNull } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { auditLog, invitation, organization, user } from "@/db/schema";
-import { mailsTo, waitForMail, type Client } from "../helpers/http";
-import { clientOf, fixtureOrg, fixturePerson, uploadRoster, type FixtureOrg } from "../helpers/team";
+import { mailsTo, waitForMail, type Client, uploadRoster } from "../helpers/http";
+import { clientOf, fixtureOrg, fixturePerson, type FixtureOrg } from "../helpers/fixtures";
 
 const fixture = readFileSync(path.resolve("tests/fixtures/roster-problems.csv"));
 let org: FixtureOrg;

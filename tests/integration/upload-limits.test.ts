@@ -7,7 +7,7 @@ import { db, pool } from "@/db/client";
 import { signOff } from "@/db/schema";
 import { UPLOADS_PER_WINDOW } from "@/lib/signoffs/submit";
 import { freshIp, signIn, type Client } from "../helpers/http";
-import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/people";
+import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 let org: { id: string; teamId: string };
 const person = async (tag: string) => {

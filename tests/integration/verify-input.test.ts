@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate } from "@/db/schema";
 import { formatVerificationCode, newVerificationCode } from "@/lib/certificates/verify-code";
-import { anonymous } from "../helpers/http";
-import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, getJson } from "../helpers/team";
+import { anonymous, getJson } from "../helpers/http";
+import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson } from "../helpers/fixtures";
 
 let oldCert: typeof certificate.$inferSelect | undefined;
 let newCert: typeof certificate.$inferSelect | undefined;
