@@ -7,7 +7,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { passwordChangeSchema } from "@/lib/account/browser";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 
 type Values = z.infer<typeof passwordChangeSchema>;
 

@@ -7,7 +7,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { emailChangeSchema, nameSchema } from "@/lib/account/browser";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 
 export function NameForm({ name }: { name: string }) {
   const router = useRouter();

@@ -4,7 +4,7 @@ import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import type { OwnSession } from "@/lib/account";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 import { getJson } from "@/lib/fetcher";
 import { serverFirst } from "@/components/ui/server-first";
 import { utcStamp } from "@/lib/dates";

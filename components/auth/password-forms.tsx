@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 import { forgotSchema, resetSchema } from "@/lib/auth/browser";
 
 export function ForgotPasswordForm() {

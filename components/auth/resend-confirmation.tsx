@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 
 /** "Send the link again" for an address that still needs confirming (better-auth's own endpoint, rate-limited there). */
 export function ResendConfirmation({ email }: { email: string }) {

@@ -7,7 +7,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 import { signInSchema } from "@/lib/auth/browser";
 import { ResendConfirmation } from "./resend-confirmation";
 import { safeNext } from "@/lib/safe-next";

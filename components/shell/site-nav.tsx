@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
 import { useState } from "react";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 import { isRole } from "@/lib/access/browser";
 import { navFor, signedOutLinks } from "./nav-items";
 

@@ -6,7 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
-import { authClient } from "@/lib/auth/browser";
+import { authClient } from "@/components/auth/auth-client";
 import { postJson } from "@/lib/fetcher";
 import { acceptInviteSchema, type AcceptInviteInput } from "@/lib/team/browser";
 

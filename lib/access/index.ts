@@ -1,7 +1,6 @@
 import "server-only";
 import { cache } from "react";
 import { headers } from "next/headers";
-import { forbidden, redirect } from "next/navigation";
 import { auth } from "@/lib/auth";
 import { isRole, roleSatisfies, type Role, type Rule } from "./rules";
 
@@ -79,8 +78,11 @@ export function assertManagesOrganization(viewer: Viewer, organizationId: string
 /** For pages and server actions: no session → sign-in page; wrong role → 403 page. */
 export async function requireViewer(rule: Exclude<Rule, "public"> = "signed-in", next?: string): Promise<Viewer> {
   const viewer = await getViewer();
-  if (!viewer) redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
-  if (!roleSatisfies(viewer.role, rule)) forbidden();
+  // loaded here, not at the top: scripts (migrate, seed, jobs) import this area outside Next, where
+  // next/navigation cannot load
+  const { forbidden, redirect } = await import("next/navigation");
+  if (!viewer) return redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
+  if (!roleSatisfies(viewer.role, rule)) return forbidden();
   return viewer;
 }
 export * from "./scope";

@@ -1,6 +1,5 @@
 import "server-only";
 import { and, asc, eq, isNull } from "drizzle-orm";
-import { forbidden, notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { organization, team } from "@/db/schema";
 import type { Viewer } from "./index";
@@ -44,7 +43,9 @@ export async function pageScope(viewer: Viewer, orgParam?: string | null): Promi
   try {
     return await resolveScope(viewer, orgParam);
   } catch (err) {
-    if ((err instanceof DomainError && err.kind === "forbidden")) forbidden();
+    // loaded here, not at the top: scripts import this area outside Next (see requireViewer)
+    const { forbidden, notFound } = await import("next/navigation");
+    if (err instanceof DomainError && err.kind === "forbidden") forbidden();
     if (err instanceof DomainError && err.kind === "not-found") notFound();
     throw err;
   }

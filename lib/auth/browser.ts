@@ -1,3 +1,2 @@
-// The auth area's browser-safe face: types, schemas and pure helpers that client components may import.
-export * from "./client";
+// The auth area's browser-safe face: the form schemas (the React client for better-auth is components/auth/auth-client.ts).
 export * from "./schemas";

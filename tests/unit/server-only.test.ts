@@ -64,7 +64,7 @@ describe("server-only guard", () => {
     // Known members: the roots and modules that import them directly.
     expect(names).toEqual(expect.arrayContaining(["db/client.ts", "lib/auth/index.ts", "lib/mail/index.ts", "lib/audit/index.ts", "lib/access/index.ts", "lib/admin/people.ts", "lib/account/records.ts"]));
     // Browser-safe modules are not flagged: the auth client, shared form schemas, pure access rules.
-    for (const safe of ["lib/auth/client.ts", "lib/auth/schemas.ts", "lib/access/rules.ts", "lib/admin/schemas.ts", "lib/csv/safe.ts"]) {
+    for (const safe of ["lib/auth/browser.ts", "lib/auth/schemas.ts", "lib/access/rules.ts", "lib/admin/schemas.ts", "lib/csv/safe.ts"]) {
       if (imports.has(safe)) expect(names).not.toContain(safe);
     }
   });
