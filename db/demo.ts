@@ -1,4 +1,4 @@
-/** The invented demo scenario (DESIGN.md). Used by the seed and by tests that sign in as demo people. */
+/** The invented demo scenario. Used by the seed and by tests that sign in as demo people. */
 export const DEMO_PASSWORD = "riser-demo-2026";
 
 export const DEMO_ORGS = [

@@ -42,11 +42,11 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/progress", rule: "signed-in", sample: "/api/progress?module=freeze-protection" },
   { route: "/api/auth/[...all]", rule: "public", sample: "/api/auth/get-session" },
   { route: "/api/account/sign-up", rule: "public", method: "POST", okStatus: 400 },
-  // account settings (issue 10)
+  // account settings
   { route: "/account", rule: "signed-in" },
   { route: "/api/account/sessions", rule: "signed-in" },
   { route: "/api/account/records", rule: "signed-in", sample: "/api/account/records?format=json" },
-  // admin console (issue 10)
+  // admin console
   { route: "/admin", rule: "admin" },
   { route: "/admin/organizations", rule: "admin" },
   { route: "/admin/people", rule: "admin" },
@@ -67,7 +67,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/admin/mail", rule: "admin", sample: "/api/admin/mail?status=sent" },
   { route: "/api/admin/audit", rule: "admin", sample: "/api/admin/audit?action=content.sync" },
   { route: "/api/admin/audit/export", rule: "admin" },
-  // certificates (issue 5): ids/codes in samples do not exist, so allowed viewers get 404;
+  // certificates: ids/codes in samples do not exist, so allowed viewers get 404;
   // revoke with body {} → 400 (reason required); the jobs route without x-jobs-secret → 401.
   { route: "/certificates", rule: "signed-in" },
   { route: "/verify", rule: "public" },
@@ -76,7 +76,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/certificates/[id]/pdf", rule: "signed-in", sample: "/api/certificates/0/pdf", okStatus: 404 },
   { route: "/api/certificates/[id]/revoke", rule: "manager", sample: "/api/certificates/0/revoke", method: "POST", okStatus: 400 },
   { route: "/api/jobs/certificate-reminders", rule: "public", method: "POST", okStatus: 401 },
-  // practical sign-offs (issue 8): POST {} as JSON → 400 (a multipart form is required / decision
+  // practical sign-offs: POST {} as JSON → 400 (a multipart form is required / decision
   // missing); the evidence sample names no stored file → 404 for everyone allowed to ask.
   { route: "/modules/[module]/sign-offs", rule: "signed-in", sample: "/modules/pipe-and-joining/sign-offs" },
   { route: "/team/sign-offs", rule: "manager" },
@@ -88,7 +88,7 @@ export const ROUTES: RouteEntry[] = [
     sample: "/api/sign-offs/00000000-0000-4000-8000-000000000000/evidence/00000000-0000-4000-8000-000000000000?thumb=1",
     okStatus: 404,
   },
-  // seats and billing (issue 9): learners get 403 everywhere here. The webhook is public (the
+  // seats and billing: learners get 403 everywhere here. The webhook is public (the
   // signature is its proof): with body {} and no signature it answers 400.
   { route: "/team/billing", rule: "manager" },
   { route: "/team/billing/success", rule: "manager" },
@@ -97,7 +97,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/billing/checkout", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/billing/checkout/[id]", rule: "manager", sample: "/api/billing/checkout/00000000-0000-0000-0000-000000000000", okStatus: 404 },
   { route: "/api/billing/webhook", rule: "public", method: "POST", okStatus: 400 },
-  // team training management (issue 6): POST {} → 400 (fields or the file missing); the person
+  // team training management: POST {} → 400 (fields or the file missing); the person
   // and assignment samples do not exist → 404 for managers and admins; the invite sample token is
   // not valid → the public refusal page (200); the jobs route without x-jobs-secret → 401.
   { route: "/team", rule: "manager" },

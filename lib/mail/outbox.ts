@@ -29,7 +29,7 @@ const BULK_KINDS = ["invite", "digest", "reminder-overdue", "reminder-due-soon",
 const TIMEOUTS = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000, dnsTimeout: 10_000 };
 
 const local = /^smtp:\/\/(127\.0\.0\.1|localhost)(:|\/|$)/.test(env.SMTP_URL);
-// The local catcher's certificate is not trusted: plain SMTP on loopback only (see STACK.md).
+// The local catcher's certificate is not trusted: plain SMTP on loopback only.
 // Pooled: a few SMTP connections reused for many messages (a bulk invitation run is thousands).
 const transport = nodemailer.createTransport({ url: env.SMTP_URL, pool: true, maxConnections: PARALLEL, maxMessages: 100, ...TIMEOUTS, ...(local ? { ignoreTLS: true } : {}) } as Parameters<
   typeof nodemailer.createTransport

@@ -2,7 +2,7 @@ import "server-only";
 /**
  * Font files and parsed fonts shared by every PDF Riser draws.
  *
- * Fonts are TTF files from npm packages (pdf-lib's fontkit embeds TTF reliably; see STACK.md):
+ * Fonts are TTF files from npm packages (pdf-lib's fontkit embeds TTF reliably):
  * Atkinson Hyperlegible, the app's body face, for everything it covers; DejaVu Sans for any run of
  * characters it lacks (Greek, Cyrillic, arrows, superscripts); DejaVu Sans Mono for codes and numbers.
  */

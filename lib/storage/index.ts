@@ -5,7 +5,7 @@ import "server-only";
  * and against a hosted store; only the environment differs (lib/env.ts, S3_*).
  *
  * Checksums are computed only where an operation requires them: with the SDK's default (always),
- * the local fake stores streamed bodies corrupted without an error (see STACK.md). Objects are
+ * the local fake stores streamed bodies corrupted without an error. Objects are
  * never public: the app streams them after its own access check.
  */
 import {
@@ -23,7 +23,7 @@ import { env } from "@/lib/env";
 
 export class StorageUnavailableError extends Error {}
 
-// The SDK is pinned to a release that runs on Node 20 (STACK.md); its notice that later releases
+// The SDK is pinned to a release that runs on Node 20; its notice that later releases
 // will need Node 22 would otherwise print in every process that touches storage.
 process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= "true";
 

@@ -74,7 +74,7 @@ describe("board statuses", () => {
   it("shows all modules by default, in teaching order", async () => {
     const { body } = await board("pageSize=5");
     expect(body.modules[0]!.slug).toBe("how-systems-work");
-    expect(body.modules).toHaveLength(10); // content/modules: nine DESIGN.md modules plus layouts-and-special-spaces
+    expect(body.modules).toHaveLength(10); // content/modules: ten module folders
     expect(Object.keys(body.rows[0]!.cells)).toHaveLength(10);
   });
 });

@@ -26,7 +26,7 @@ function resolves(href: string): boolean {
   return ["glossary", "search", "learn", "certificates", "modules", "reference"].includes(parts[0]!) && parts.length === 1;
 }
 
-describe("curriculum (DESIGN.md's nine modules plus layouts and special spaces, 3–5 lessons each, four paths)", () => {
+describe("curriculum (ten modules, 3–5 lessons each, four paths)", () => {
   it("has the ten modules, at least 48 lessons, 45 cards, 100 terms and the four paths", () => {
     expect(catalog.modules).toHaveLength(10);
     expect(lessons.length).toBeGreaterThanOrEqual(48);

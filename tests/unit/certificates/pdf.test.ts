@@ -80,7 +80,7 @@ describe("certificate PDF", () => {
     expect(text.replace(/\s+/g, " ")).toContain(long);
   });
 
-  it("stays small with embedded fonts (issue 5 target: under 150 kB)", async () => {
+  it("stays small with embedded fonts (target: under 150 kB)", async () => {
     const bytes = await renderCertificatePdf(base, { verifyUrl, generatedAt });
     expect(bytes.byteLength).toBeLessThan(150 * 1024);
   });
