@@ -1,4 +1,6 @@
 #!/usr/bin/env node
+// Over 300 lines on purpose: one self-contained fake service (API, webhook signing and delivery,
+// local pay page, fault switches) that runs as its own process with no imports from the app.
 // Local fake of the payment provider's API (development and tests only). Riser's server talks to
 // it through the provider's own SDK (lib/billing/provider.ts), pointed here by STRIPE_API_HOST/
 // PORT/PROTOCOL. It implements only what Riser uses:

@@ -1,4 +1,6 @@
 "use client";
+// Just over 300 lines: the board table, its filters and its paging share one SWR state; the cell
+// details are in ./board-cell.tsx.
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";

@@ -15,3 +15,4 @@ export * from "./reminders";
 export * from "./roster";
 export * from "./schemas";
 export * from "./teams";
+export * from "./summary";

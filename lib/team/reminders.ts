@@ -4,7 +4,8 @@ import { db } from "@/db/client";
 import { assignment, moduleCompletion, organization, reminderLog, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { itemModules, itemTitle, passedModules, teamTotals, type Person } from "./board";
+import { itemModules, itemTitle, passedModules, type Person } from "./board";
+import { teamTotals } from "./summary";
 import { isoWeek } from "./period";
 import { addDays, isoDay, weekdayLongDate } from "@/lib/dates";
 
