@@ -1,6 +1,4 @@
 import "server-only";
-// Over 300 lines on purpose: starting, saving and grading an attempt share the row lock, the
-// version lookup and the draw; the pure grading rules are in ./engine.ts.
 // Over 300 lines on purpose: starting, saving, grading, viewing and listing attempts share one
 // locking discipline (the attempt row FOR UPDATE) and the same row/item shapes; split, the lock
 // rules would live in several files.
