@@ -13,6 +13,7 @@ import QRCode from "qrcode";
 import { C, createPdf, defaultFontDir } from "@/lib/pdf";
 import { palette } from "@/lib/theme";
 import { formatCertificateDate, formatHours, type CertificateKind } from "./status";
+import { formatVerificationCode } from "./verify-code";
 
 export type CertificatePdfData = {
   serial: string;
@@ -170,7 +171,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   await t.draw(page, options.verifyUrl, { x: LEFT, y: vy, size: urlSize, face: "mono", color: C.water });
   vy -= 16;
   const extra = data.renewsSerial ? `  ·  Renews certificate ${data.renewsSerial}` : "";
-  await t.draw(page, `Verification code ${data.verificationCode}${extra}`, { x: LEFT, y: vy, size: 9, face: "mono", color: C.muted });
+  await t.draw(page, `Verification code ${formatVerificationCode(data.verificationCode)}${extra}`, { x: LEFT, y: vy, size: 9, face: "mono", color: C.muted });
 
   // fine print (honest about what the hours mean and who decides)
   const fine = [

@@ -44,6 +44,12 @@ describe("certificate PDF", () => {
     expect(text).toMatch(/Continuing-education hours/);
   });
 
+  it("prints a new-style verification code in groups of four, as people type it", async () => {
+    const newCode = "7KQ2M9XD3HTVA8RWEC6N4JPB5GFZ"; // 28 characters of the unambiguous alphabet
+    const text = pdfText(await renderCertificatePdf({ ...base, verificationCode: newCode }, { verifyUrl: `https://riser.example/verify/${newCode}`, generatedAt }));
+    expect(text).toContain("7KQ2-M9XD-3HTV-A8RW-EC6N-4JPB-5GFZ");
+  });
+
   it("has a QR code that decodes to the verification URL (page rendered at 150 dpi)", async () => {
     const bytes = await renderCertificatePdf(base, { verifyUrl, generatedAt });
     expect(qrFromPdf(bytes, 150)).toBe(verifyUrl);
