@@ -11,6 +11,7 @@ import { randomBytes, randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
 import { DEMO_PASSWORD } from "@/db/demo";
+import { prng } from "@/lib/quiz/browser";
 
 export const SCALE_ORG = "Tamsett Ridge Sprinklers";
 export const SCALE_MANAGER = { name: "Corra Vellum", email: "corra@tamsett-ridge.example" };
@@ -24,18 +25,8 @@ async function databaseUrl(): Promise<string> {
   return config().env.DATABASE_URL as string;
 }
 
-/** Deterministic PRNG (mulberry32) so that every run builds the same data. */
-function rng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const rand = rng(20261201);
+// the quiz draw's seeded generator (mulberry32), so that every run builds the same data
+const rand = prng(20261201);
 const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)]!;
 const between = (lo: number, hi: number) => lo + Math.floor(rand() * (hi - lo + 1));
 
