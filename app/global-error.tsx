@@ -3,7 +3,7 @@
  * Shown when the root layout itself fails: it replaces the whole document, so it brings its own
  * <html> and <body> and plain styles (the app's stylesheet may be what failed).
  */
-import { palette } from "@/lib/theme";
+import { palette } from "@/lib/theme/browser";
 
 export default function GlobalError({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
   return (

@@ -1,3 +1,2 @@
-import "server-only";
-// The theme area's public face on the server; other areas, pages and routes import only this file or ./browser.
+// The theme area's public face (pure: the palette tokens); client code imports ./browser.
 export * from "./tokens";
