@@ -3,7 +3,6 @@
  * the catalog sync and the server pages. Node-only (fs); never imported by client components.
  * A bad or missing field raises ContentError naming the file and the field.
  */
-import "server-only";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import matter from "gray-matter";
