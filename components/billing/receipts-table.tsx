@@ -1,3 +1,4 @@
+import { Table } from "@/components/ui/table";
 import { formatMoney } from "@/lib/billing/browser";
 import type { Receipt } from "@/lib/billing";
 import { formatDayTime } from "./format";
@@ -31,54 +32,43 @@ export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
               </li>
             ))}
           </ul>
-          <div className="hidden overflow-x-auto rounded border border-line bg-panel sm:block">
-            <table className="w-full border-collapse text-left text-sm" data-testid="receipts">
-              <caption className="sr-only">Payments for seats, newest first</caption>
-              <thead>
-                <tr className="border-b border-line bg-paper">
-                  <th scope="col" className="px-3 py-2">
-                    Date
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Receipt
-                  </th>
-                  <th scope="col" className="px-3 py-2 text-right">
-                    Seats added
-                  </th>
-                  <th scope="col" className="px-3 py-2 text-right">
-                    Seats before → after
-                  </th>
-                  <th scope="col" className="px-3 py-2 text-right">
-                    Amount
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Bought by
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {receipts.map((r) => (
-                  <tr key={r.id} className="border-b border-line last:border-b-0" data-testid={`receipt-${r.number}`}>
-                    <td className="whitespace-nowrap px-3 py-2">{formatDayTime(r.paidAt)}</td>
-                    <td className="px-3 py-2">
-                      <span className="font-mono">{r.number}</span>
-                      <span className="block max-w-48 truncate font-mono text-xs text-muted" title={r.reference}>
-                        {r.reference}
-                      </span>
-                    </td>
-                    <td className="px-3 py-2 text-right font-mono">+{r.seatsAdded}</td>
-                    <td className="whitespace-nowrap px-3 py-2 text-right font-mono">
-                      {r.seatsBefore ?? "?"} → {r.seatsAfter ?? "?"}
-                    </td>
-                    <td className="whitespace-nowrap px-3 py-2 text-right font-mono">
-                      {formatMoney(r.amount, r.currency)} <span className="text-xs text-muted">{r.currency.toUpperCase()}</span>
-                    </td>
-                    <td className="px-3 py-2">{r.boughtBy}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <Table
+            className="hidden sm:block"
+            label="Payments for seats, newest first"
+            rows={receipts}
+            rowKey={(r) => r.id}
+            tableProps={{ "data-testid": "receipts" }}
+            rowProps={(r) => ({ "data-testid": `receipt-${r.number}` })}
+            columns={[
+              { key: "date", header: "Date", className: "whitespace-nowrap", cell: (r) => formatDayTime(r.paidAt) },
+              {
+                key: "receipt",
+                header: "Receipt",
+                cell: (r) => (
+                  <>
+                    <span className="font-mono">{r.number}</span>
+                    <span className="block max-w-48 truncate font-mono text-xs text-muted" title={r.reference}>
+                      {r.reference}
+                    </span>
+                  </>
+                ),
+              },
+              { key: "added", header: "Seats added", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => `+${r.seatsAdded}` },
+              { key: "before-after", header: "Seats before → after", headerClassName: "px-3 py-2 text-right align-bottom", className: "whitespace-nowrap text-right font-mono", cell: (r) => `${r.seatsBefore ?? "?"} → ${r.seatsAfter ?? "?"}` },
+              {
+                key: "amount",
+                header: "Amount",
+                headerClassName: "px-3 py-2 text-right align-bottom",
+                className: "whitespace-nowrap text-right font-mono",
+                cell: (r) => (
+                  <>
+                    {formatMoney(r.amount, r.currency)} <span className="text-xs text-muted">{r.currency.toUpperCase()}</span>
+                  </>
+                ),
+              },
+              { key: "by", header: "Bought by", cell: (r) => r.boughtBy },
+            ]}
+          />
         </>
       )}
     </section>

@@ -27,6 +27,10 @@ type Props<R> = {
   density?: "normal" | "compact";
   className?: string;
   tableProps?: React.TableHTMLAttributes<HTMLTableElement> & { "data-testid"?: string };
+  /** attributes for a row (a test id) */
+  rowProps?: (row: R) => React.HTMLAttributes<HTMLTableRowElement> & { "data-testid"?: string };
+  /** show the caption above the table instead of for screen readers only */
+  captionVisible?: boolean;
 };
 
 /**
@@ -34,13 +38,13 @@ type Props<R> = {
  * caption for screen readers, scoped header cells and zebra-free rows with rules between them.
  * Server- and client-safe (no hooks).
  */
-export function Table<R>({ label, caption, columns, rows, rowKey, empty, density = "normal", className = "", tableProps }: Props<R>) {
+export function Table<R>({ label, caption, columns, rows, rowKey, empty, density = "normal", className = "", tableProps, rowProps, captionVisible = false }: Props<R>) {
   if (rows.length === 0 && empty !== undefined) return <>{empty}</>;
   const pad = density === "compact" ? "px-2 py-2" : "px-3 py-2";
   return (
     <div role="region" aria-label={label} tabIndex={0} className={`relative overflow-x-auto rounded border border-line bg-panel ${className}`}>
       <table className="w-full border-collapse text-left text-sm" {...tableProps}>
-        <caption className="sr-only">{caption ?? label}</caption>
+        <caption className={captionVisible ? "px-3 py-2 text-left font-bold" : "sr-only"}>{caption ?? label}</caption>
         <thead className="bg-paper">
           <tr className="border-b border-line">
             {columns.map((c) => (
@@ -52,7 +56,7 @@ export function Table<R>({ label, caption, columns, rows, rowKey, empty, density
         </thead>
         <tbody>
           {rows.map((r) => (
-            <tr key={rowKey(r)} className="border-b border-line last:border-b-0">
+            <tr key={rowKey(r)} className="border-b border-line last:border-b-0" {...rowProps?.(r)}>
               {columns.map((c) =>
                 c.rowHeader ? (
                   <th key={c.key} scope="row" className={`${pad} align-top font-normal ${c.className ?? ""}`}>
