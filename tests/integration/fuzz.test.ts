@@ -13,8 +13,11 @@ import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixt
 // rate-limit counters, sessions and verification tokens may grow; everything else may not
 const TABLES = [
   "user", "account", "organization", "team", "lesson_open", "lesson_progress", "quiz_attempt", "quiz_attempt_item", "module_completion",
-  "certificate", "sign_off", "sign_off_evidence", "assignment", "invitation", "checkout", "payment_event", "audit_log", "mail_outbox", "mail_log",
+  "certificate", "sign_off", "sign_off_evidence", "assignment", "invitation", "checkout", "payment_event", "audit_log", "mail_outbox",
 ];
+// mail_log is left out on purpose: the outbox worker writes it in the background while it delivers
+// messages earlier tests queued (2,000 roster invitations among them). Any message the fuzz itself
+// caused would first be a new mail_outbox row, and that table is compared.
 const SEED = 20261202;
 
 const hostileString = fc.oneof(
