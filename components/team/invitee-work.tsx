@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { postJson } from "@/lib/fetcher";
 
@@ -68,11 +68,7 @@ export function InviteeWork({ invitees, modules, paths, org }: { invitees: Invit
               {busy ? "Saving…" : "Assign on acceptance"}
             </Button>
           </form>
-          {msg ? (
-            <p role={msg.ok ? "status" : "alert"} className={`mt-2 ${msg.ok ? "" : "text-caution"}`}>
-              {msg.text}
-            </p>
-          ) : null}
+          <div className="mt-2">{msg ? msg.ok ? <FormNotice message={msg.text} /> : <FormError message={msg.text} /> : null}</div>
         </>
       )}
     </section>

@@ -6,6 +6,7 @@ import { SelectField } from "@/components/ui/select-field";
 import { postJson } from "@/lib/fetcher";
 import { INVITE_ROLES, ROLE_LABELS, type InviteRole } from "@/lib/team/browser";
 import { ActionButton } from "./action-button";
+import { FormError, FormNotice } from "@/components/ui/field";
 
 /** The manager's changes on a person's page: team, role (never admin), removal from the organization. */
 export function PersonControls({ person, teams, self }: { person: { id: string; name: string; teamId: string | null; role: string }; teams: { id: string; name: string }[]; self: boolean }) {
@@ -46,11 +47,7 @@ export function PersonControls({ person, teams, self }: { person: { id: string; 
           {busy ? "Saving…" : "Save changes"}
         </Button>
       </form>
-      {msg ? (
-        <p role={msg.ok ? "status" : "alert"} className={`mt-2 ${msg.ok ? "" : "text-caution"}`}>
-          {msg.text}
-        </p>
-      ) : null}
+      <div className="mt-2">{msg ? msg.ok ? <FormNotice message={msg.text} /> : <FormError message={msg.text} /> : null}</div>
       {self ? null : (
         <div className="mt-4 border-t border-line pt-4">
           <h3 className="mb-1 font-bold">Remove from the organization</h3>
