@@ -5,6 +5,7 @@ import { getJson } from "@/lib/fetcher";
 import { serverFirst } from "@/components/ui/server-first";
 import { When } from "@/components/ui/data-table";
 import { SyncButton } from "./sync-button";
+import { Table } from "@/components/ui/table";
 
 const KINDS = [
   { key: "modules", label: "Modules" },
@@ -70,37 +71,32 @@ export function ContentStatus({ initial }: { initial?: Status }) {
             </ul>
           </div>
         ) : null}
-        <div className="relative overflow-x-auto rounded border border-line bg-panel" role="region" aria-label="Synced content counts" tabIndex={0}>
-          <table className="w-full border-collapse text-left text-sm">
-            <caption className="sr-only">Content counts: in the database and in the repository</caption>
-            <thead className="bg-paper">
-              <tr>
-                <th scope="col" className="border-b border-line px-3 py-2">Kind</th>
-                <th scope="col" className="border-b border-line px-3 py-2 text-right">In use</th>
-                <th scope="col" className="border-b border-line px-3 py-2 text-right">Retired</th>
-                <th scope="col" className="border-b border-line px-3 py-2 text-right">In the repository</th>
-              </tr>
-            </thead>
-            <tbody>
-              {KINDS.map((k) => {
-                const db = data.database[k.key];
-                const inRepo = repo.ok ? repo.counts[k.key] : null;
-                const differs = inRepo !== null && inRepo !== db.live;
+        <Table
+          label="Synced content counts"
+          caption="Content counts: in the database and in the repository"
+          rows={KINDS.map((k) => ({ ...k, db: data.database[k.key], inRepo: repo.ok ? repo.counts[k.key] : null }))}
+          rowKey={(r) => r.key}
+          columns={[
+            { key: "kind", header: "Kind", rowHeader: true, className: "text-left", cell: (r) => r.label },
+            { key: "live", header: "In use", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.live },
+            { key: "retired", header: "Retired", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.retired },
+            {
+              key: "repo",
+              header: "In the repository",
+              headerClassName: "px-3 py-2 text-right align-bottom",
+              className: "text-right font-mono",
+              cell: (r) => {
+                const differs = r.inRepo !== null && r.inRepo !== r.db.live;
                 return (
-                  <tr key={k.key} className="border-b border-line last:border-b-0">
-                    <th scope="row" className="px-3 py-2 text-left">{k.label}</th>
-                    <td className="px-3 py-2 text-right font-mono">{db.live}</td>
-                    <td className="px-3 py-2 text-right font-mono">{db.retired}</td>
-                    <td className={`px-3 py-2 text-right font-mono ${differs ? "font-bold text-caution" : ""}`}>
-                      {inRepo ?? "—"}
-                      {differs ? " (not synced yet)" : ""}
-                    </td>
-                  </tr>
+                  <span className={differs ? "font-bold text-caution" : ""}>
+                    {r.inRepo ?? "—"}
+                    {differs ? " (not synced yet)" : ""}
+                  </span>
                 );
-              })}
-            </tbody>
-          </table>
-        </div>
+              },
+            },
+          ]}
+        />
         <p className="text-sm text-muted">Retired quiz questions count old versions kept so that earlier attempts still show what was asked.</p>
       </section>
 

@@ -8,6 +8,7 @@ import { monthDay, startOfIsoDay } from "@/lib/dates";
 import { chartColors } from "@/lib/theme/browser";
 import { serverFirst } from "@/components/ui/server-first";
 import { PERCENT_AXIS, PERCENT_CHART_MARGIN, WEEK_AXIS } from "@/lib/team/browser";
+import { Table } from "@/components/ui/table";
 
 type Summary = { teams: TeamTotal[]; weeks: WeekPoint[] };
 
@@ -37,36 +38,23 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
         <p>No people yet, so there is nothing to total.</p>
       ) : (
         <>
-          <div role="region" aria-label="Totals per team table" tabIndex={0} className="relative mb-6 overflow-x-auto rounded border border-line bg-panel">
-            <table className="w-full border-collapse text-sm">
-              <thead>
-                <tr className="border-b border-line bg-paper text-left">
-                  <th scope="col" className="px-2 py-2">Team</th>
-                  <th scope="col" className="px-2 py-2">People</th>
-                  <th scope="col" className="px-2 py-2">Modules passed</th>
-                  <th scope="col" className="px-2 py-2">Overdue</th>
-                  <th scope="col" className="px-2 py-2">Certificates expiring</th>
-                  <th scope="col" className="px-2 py-2">Expired</th>
-                  <th scope="col" className="px-2 py-2">Failed last attempt</th>
-                </tr>
-              </thead>
-              <tbody className="font-mono">
-                {data.teams.map((t) => (
-                  <tr key={`${t.orgName}/${t.teamId}`} className="border-b border-line last:border-0">
-                    <th scope="row" className="px-2 py-2 text-left font-sans">{label(t)}</th>
-                    <td className="px-2 py-2">{t.people}</td>
-                    <td className="px-2 py-2">
-                      {t.passed} of {t.cells} ({pct(t)}%)
-                    </td>
-                    <td className={`px-2 py-2 ${t.overdue ? "font-bold text-caution" : ""}`}>{t.overdue}</td>
-                    <td className="px-2 py-2">{t.expiring}</td>
-                    <td className="px-2 py-2">{t.expired}</td>
-                    <td className="px-2 py-2">{t.failed}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <Table
+            className="mb-6"
+            label="Totals per team table"
+            caption="Totals per team"
+            density="compact"
+            rows={data.teams}
+            rowKey={(t) => `${t.orgName}/${t.teamId}`}
+            columns={[
+              { key: "team", header: "Team", rowHeader: true, cell: (t) => label(t) },
+              { key: "people", header: "People", className: "font-mono", cell: (t) => t.people },
+              { key: "passed", header: "Modules passed", className: "font-mono", cell: (t) => `${t.passed} of ${t.cells} (${pct(t)}%)` },
+              { key: "overdue", header: "Overdue", className: "font-mono", cell: (t) => <span className={t.overdue ? "font-bold text-caution" : ""}>{t.overdue}</span> },
+              { key: "expiring", header: "Certificates expiring", className: "font-mono", cell: (t) => t.expiring },
+              { key: "expired", header: "Expired", className: "font-mono", cell: (t) => t.expired },
+              { key: "failed", header: "Failed last attempt", className: "font-mono", cell: (t) => t.failed },
+            ]}
+          />
           <div className="grid gap-6 lg:grid-cols-2">
             <figure className="rounded border border-line bg-panel p-3">
               <figcaption className="mb-2 font-bold">Modules completed per week (last 12 weeks)</figcaption>
