@@ -56,7 +56,8 @@ type SignedCtx<P> = { req: Request; viewer: Viewer; params: P };
 /** Maps any thrown error to a real status with a message; never a stack trace. */
 export function errorResponse(err: unknown): Response {
   if (err instanceof ApiError || err instanceof DomainError) {
-    return json({ error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) }, err.status);
+    const details = err instanceof DomainError ? err.details : undefined;
+    return json({ ...details, error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) }, err.status);
   }
   if (err instanceof AccessError) return json({ error: err.message }, err.status);
   if (err instanceof ZodError) return json({ error: "Some fields need attention.", fieldErrors: fieldErrorsOf(err) }, 400);

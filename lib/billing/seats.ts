@@ -3,7 +3,6 @@ import { and, countDistinct, count, eq, gt, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { invitation, organization, user } from "@/db/schema";
 import { DomainError } from "@/lib/errors";
-import { json } from "@/lib/api";
 import { seatAllowance, type TrialState } from "./allowance";
 import { isoDay } from "@/lib/dates";
 
@@ -20,13 +19,11 @@ export class SeatLimitError extends DomainError {
       trialEndedAt
         ? `Your organization's trial ended on ${isoDay(trialEndedAt)}; buy seats on the billing page to invite more people.`
         : `Your organization has ${seats} seats; buy more on the billing page.`,
+      undefined,
+      // the answer carries the figures and where to buy seats beside the message
+      { seats, used, requested, billingUrl: BILLING_PATH },
     );
   }
-}
-
-/** The JSON a route answers for a seat refusal: the message, the figures and where to buy seats. */
-export function seatLimitResponse(err: SeatLimitError): Response {
-  return json({ error: err.message, seats: err.seats, used: err.used, requested: err.requested, billingUrl: BILLING_PATH }, 409);
 }
 
 export type SeatUsage = { seats: number; members: number; pending: number; trial: TrialState; trialEndsAt: Date | null };

@@ -22,6 +22,8 @@ export class DomainError extends Error {
     readonly kind: ErrorKind,
     message: string,
     readonly fieldErrors?: Record<string, string[]>,
+    /** extra figures the answer carries beside the message (a seat refusal's seats and billing link) */
+    readonly details?: Record<string, string | number>,
   ) {
     super(message);
   }

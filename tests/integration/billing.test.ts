@@ -10,7 +10,8 @@ import { auditLog, checkout, invitation, organization, paymentEvent } from "@/db
 import { demoByRole } from "@/db/demo";
 import { CURRENCY, PLANS, TRIAL } from "@/lib/billing/plans";
 import { formatMoney, quote } from "@/lib/billing/pricing";
-import { assertSeatAvailable, BILLING_PATH, SeatLimitError, seatLimitResponse } from "@/lib/billing/seats";
+import { errorResponse } from "@/lib/api";
+import { assertSeatAvailable, BILLING_PATH, SeatLimitError } from "@/lib/billing/seats";
 import { FAKE, fakeEvents, fakeSessions, newKey, postWebhook, pressOnPayPage, sessionEvent, until } from "../helpers/billing";
 import { anonymous, freshIp, mailsTo, postJson, signIn, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
@@ -368,8 +369,10 @@ describe("seat limit (assertSeatAvailable, called by the invite API and the CSV 
     const err = await assertSeatAvailable(t.id, 1).catch((e) => e);
     expect(err).toBeInstanceOf(SeatLimitError);
     expect(err.message).toMatch(/has 4 seats; buy more on the billing page/);
-    const body = await seatLimitResponse(err).json();
-    expect(body).toMatchObject({ seats: 4, used: 4, requested: 1, billingUrl: BILLING_PATH });
+    const answer = errorResponse(err); // the one error mapping every route handler uses
+    expect(answer.status).toBe(409);
+    const body = await answer.json();
+    expect(body).toMatchObject({ error: err.message, seats: 4, used: 4, requested: 1, billingUrl: BILLING_PATH });
 
     // a CSV import of 3 rows is checked as one request for 3 seats
     const res = await buy(t.client, 3);

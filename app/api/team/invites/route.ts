@@ -3,7 +3,6 @@ import { listInvitations } from "@/lib/team";
 import { inviteOne } from "@/lib/team";
 import { inviteSchema } from "@/lib/team";
 import { resolveScope, resolveWriteOrg } from "@/lib/access";
-import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 
 /**
  * POST /api/team/invites { email, name?, role, teamId?, org? (admins) } → 201, and the mail with a
@@ -13,16 +12,11 @@ import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, inviteSchema);
   const org = await resolveWriteOrg(viewer, input.org);
-  try {
-    const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign }, clientIp(req));
-    const message = r.replaced
-      ? `A new invitation went to ${r.email}; the earlier link no longer works.`
-      : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
-    return json({ ok: true, id: r.id, email: r.email, replaced: r.replaced > 0, mailed: r.mailed, message }, 201);
-  } catch (err) {
-    if (err instanceof SeatLimitError) return seatLimitResponse(err);
-    throw err;
-  }
+  const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign }, clientIp(req));
+  const message = r.replaced
+    ? `A new invitation went to ${r.email}; the earlier link no longer works.`
+    : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
+  return json({ ok: true, id: r.id, email: r.email, replaced: r.replaced > 0, mailed: r.mailed, message }, 201);
 });
 
 /** GET /api/team/invites[?org=] → the organization's invitations with their status; admins name ?org=. */

@@ -1,7 +1,7 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
 import { importRoster, readUpload } from "@/lib/team";
 import { resolveWriteOrg } from "@/lib/access";
-import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
+import { plural } from "@/lib/plural";
 
 /**
  * POST /api/team/invites/import (multipart: file, fileHash from the preview, org? for admins) →
@@ -12,11 +12,6 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const fileHash = form.get("fileHash");
   if (typeof fileHash !== "string" || !/^[0-9a-f]{64}$/.test(fileHash)) throw new ApiError(400, "Preview the file first, then import it.");
   const org = await resolveWriteOrg(viewer, (form.get("org") as string | null) || new URL(req.url).searchParams.get("org"));
-  try {
-    const result = await importRoster(viewer, org, bytes, fileName, fileHash, clientIp(req));
-    return json({ ok: true, ...result, message: `${result.imported} invitation${result.imported === 1 ? "" : "s"} sent; ${result.skipped} row${result.skipped === 1 ? "" : "s"} skipped.` }, 201);
-  } catch (err) {
-    if (err instanceof SeatLimitError) return seatLimitResponse(err);
-    throw err;
-  }
+  const result = await importRoster(viewer, org, bytes, fileName, fileHash, clientIp(req));
+  return json({ ok: true, ...result, message: `${plural(result.imported, "invitation")} sent; ${plural(result.skipped, "row")} skipped.` }, 201);
 });

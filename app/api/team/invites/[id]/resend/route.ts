@@ -1,14 +1,8 @@
 import { clientIp, json, route } from "@/lib/api";
 import { resendInvitation } from "@/lib/team";
-import { SeatLimitError, seatLimitResponse } from "@/lib/billing";
 
 /** POST /api/team/invites/[id]/resend→ a fresh link for an open or expired invitation. */
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
-  try {
-    const r = await resendInvitation(viewer, params.id, clientIp(req));
-    return json({ ok: true, mailed: r.mailed, message: `A new link went to ${r.email}; the earlier link no longer works.` });
-  } catch (err) {
-    if (err instanceof SeatLimitError) return seatLimitResponse(err);
-    throw err;
-  }
+  const r = await resendInvitation(viewer, params.id, clientIp(req));
+  return json({ ok: true, mailed: r.mailed, message: `A new link went to ${r.email}; the earlier link no longer works.` });
 });
