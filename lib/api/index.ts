@@ -57,7 +57,11 @@ type SignedCtx<P> = { req: Request; viewer: Viewer; params: P };
 export function errorResponse(err: unknown): Response {
   if (err instanceof ApiError || err instanceof DomainError) {
     const details = err instanceof DomainError ? err.details : undefined;
-    return json({ ...details, error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) }, err.status);
+    const retry = details?.retryAfterSeconds;
+    return json(
+      { ...details, error: err.message, ...(err.fieldErrors ? { fieldErrors: err.fieldErrors } : {}) },
+      { status: err.status, ...(retry !== undefined ? { headers: { "Retry-After": String(retry) } } : {}) },
+    );
   }
   if (err instanceof AccessError) return json({ error: err.message }, err.status);
   if (err instanceof ZodError) return json({ error: "Some fields need attention.", fieldErrors: fieldErrorsOf(err) }, 400);

@@ -11,7 +11,7 @@ import { db, type Tx } from "@/db/client";
 import { signOff, signOffEvidence, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
-import { fieldErrorsOf, json } from "@/lib/api";
+import { fieldErrorsOf } from "@/lib/api";
 import { audit } from "@/lib/audit";
 import { hitRateLimit } from "@/lib/rate-limit";
 import { findModule } from "@/lib/content";
@@ -21,6 +21,7 @@ import { deleteObjectsQuietly, isStorageDown, putObject } from "@/lib/storage";
 import { EvidenceError, prepareEvidence, type PreparedEvidence } from "./evidence";
 import { evidenceKeys } from "./keys";
 import { MAX_FILES, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, formatBytes, submitFields, type SubmitFields } from "./schemas";
+import { plural } from "@/lib/plural";
 
 /** Room for the form's other fields and the multipart boundaries on top of the files themselves. */
 const MULTIPART_OVERHEAD = 64 * 1024;
@@ -34,16 +35,19 @@ export const UPLOADS_PER_WINDOW = 20;
 export const UPLOAD_WINDOW_S = 3600;
 
 /**
- * Counts this upload against the person's allowance before any of its body is read: null when it
- * may go on, else the 429 answer with Retry-After. Per person, not per address (offices share one).
+ * Counts this upload against the person's allowance before any of its body is read; over it, a
+ * "too-many" error that the API layer answers with 429 and Retry-After. Per person, not per address
+ * (offices share one).
  */
-export async function uploadRateRefusal(viewer: Viewer): Promise<Response | null> {
+export async function assertUploadAllowed(viewer: Viewer): Promise<void> {
   const r = await hitRateLimit(`evidence-upload:${viewer.id}`, UPLOADS_PER_WINDOW, UPLOAD_WINDOW_S);
-  if (r.allowed) return null;
+  if (r.allowed) return;
   const mins = Math.max(1, Math.ceil(r.retryAfterSeconds / 60));
-  return json(
-    { error: `You have sent ${UPLOADS_PER_WINDOW} uploads within an hour, the most Riser takes. Try again in ${mins} minute${mins === 1 ? "" : "s"}; nothing was saved.` },
-    { status: 429, headers: { "Retry-After": String(r.retryAfterSeconds) } },
+  throw new DomainError(
+    "too-many",
+    `You have sent ${UPLOADS_PER_WINDOW} uploads within an hour, the most Riser takes. Try again in ${plural(mins, "minute")}; nothing was saved.`,
+    undefined,
+    { retryAfterSeconds: r.retryAfterSeconds },
   );
 }
 

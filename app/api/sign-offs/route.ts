@@ -1,5 +1,5 @@
 import { clientIp, json, route } from "@/lib/api";
-import { readUpload, submitSignOff, uploadRateRefusal } from "@/lib/signoffs";
+import { assertUploadAllowed, readUpload, submitSignOff } from "@/lib/signoffs";
 
 /**
  * POST /api/sign-offs (multipart/form-data: module, skill, note, files ×1–3) → 201 { id, status, evidence }.
@@ -9,8 +9,7 @@ import { readUpload, submitSignOff, uploadRateRefusal } from "@/lib/signoffs";
  * person's upload allowance (20 an hour) · 503 file store unreachable or photo decoding busy.
  */
 export const POST = route("signed-in", async ({ req, viewer }) => {
-  const refused = await uploadRateRefusal(viewer);
-  if (refused) return refused;
+  await assertUploadAllowed(viewer);
   const upload = await readUpload(req);
   const result = await submitSignOff(viewer, upload, clientIp(req));
   return json(result, 201);
