@@ -14,6 +14,9 @@ export function contentSecurityPolicy(production) {
     "img-src 'self' data: blob:",
     "font-src 'self'",
     "connect-src 'self'",
+    // The service worker (/sw.js) and the web app manifest load from this origin only.
+    "worker-src 'self'",
+    "manifest-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

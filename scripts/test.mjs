@@ -34,6 +34,7 @@ try {
   if (want("static")) {
     step("type-check");
     run(bin("tsc"), ["--noEmit"], { cwd: root });
+    run(bin("tsc"), ["--noEmit", "-p", "sw/tsconfig.json"], { cwd: root }); // the service worker (webworker types)
     step("lint");
     run("npm", ["run", "--silent", "lint"], { cwd: root });
   }

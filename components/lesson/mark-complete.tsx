@@ -1,51 +1,104 @@
 "use client";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
+import { useOfflineState, useOnline } from "@/components/offline/use-offline";
 import { getJson, postJson } from "@/lib/fetcher";
+import { flushQueue, offlineSupported, queueMark } from "@/lib/offline/browser";
 
-type Progress = { completed: string[]; readingTimes?: { lesson: string; readingSeconds: number | null }[] };
+type Time = { lesson: string; readingSeconds: number | null; deviceReadingSeconds?: number | null };
+type Progress = { completed: string[]; readingTimes?: Time[] };
+
+/** Seconds this page has been on screen (visible tab) since it loaded: the phone's own measure. */
+function useVisibleSeconds(): () => number {
+  const total = useRef(0);
+  const since = useRef<number | null>(null);
+  useEffect(() => {
+    const tick = () => {
+      if (document.visibilityState === "visible") since.current ??= performance.now();
+      else if (since.current !== null) {
+        total.current += performance.now() - since.current;
+        since.current = null;
+      }
+    };
+    tick();
+    document.addEventListener("visibilitychange", tick);
+    return () => document.removeEventListener("visibilitychange", tick);
+  }, []);
+  return () => (total.current + (since.current !== null ? performance.now() - since.current : 0)) / 1000;
+}
 
 /**
  * Shows whether this lesson is done for the signed-in person and marks it complete. The server
  * decides whether enough reading time has passed since it first served this lesson to the person.
+ * With no connection the mark waits on the phone (lib/offline) with the phone's reading time and
+ * is sent when the connection returns.
  */
 export function MarkComplete({ module, lesson, total, minutes }: { module: string; lesson: string; total: number; minutes: number }) {
   const key = `/api/progress?module=${module}`;
   const { data, error, isLoading, mutate } = useSWR<Progress>(key, getJson);
+  const online = useOnline();
+  const { queue } = useOfflineState();
+  const visibleSeconds = useVisibleSeconds();
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
+  const queued = queue.find((q) => q.module === module && q.lesson === lesson);
   const done = data?.completed.includes(lesson) ?? false;
   const count = data?.completed.length ?? 0;
-  const seconds = data?.readingTimes?.find((t) => t.lesson === lesson)?.readingSeconds ?? null;
+  const time = data?.readingTimes?.find((t) => t.lesson === lesson);
+  const seconds = time?.readingSeconds ?? null;
+  const deviceSeconds = time?.deviceReadingSeconds ?? null;
+
+  // A queued mark that was just sent: show the server's answer.
+  useEffect(() => {
+    if (online && !queued) void mutate();
+  }, [online, queued, mutate]);
 
   async function mark() {
     setSaving(true);
     setProblem(null);
+    if (!navigator.onLine && offlineSupported()) {
+      await queueMark(module, lesson, visibleSeconds());
+      setSaving(false);
+      return;
+    }
     const res = await postJson<{ completed: string[] }>("/api/progress", { module, lesson });
+    if (!res.ok && res.status === 0 && offlineSupported()) {
+      await queueMark(module, lesson, visibleSeconds());
+      await flushQueue();
+    } else if (!res.ok) setProblem(res.error);
     setSaving(false);
-    if (!res.ok) return setProblem(res.error);
     await mutate();
   }
 
+  const showButton = !done && !queued && (data || (error && !online));
   return (
     <div className="rounded border border-line bg-panel p-4" data-testid="lesson-progress">
       {isLoading ? <p className="text-muted">Loading your progress…</p> : null}
-      {error ? <p role="alert" className="text-caution">Your progress could not load: {error.message}</p> : null}
-      {data ? (
-        <div className="flex flex-wrap items-center gap-4">
-          {done ? (
-            <p className="font-bold text-pass" role="status">
-              ✓ Lesson complete{seconds !== null ? <span className="font-normal text-muted"> · reading time {Math.round(seconds / 60)} min</span> : null}
-            </p>
-          ) : (
-            <Button onClick={mark} disabled={saving}>{saving ? "Saving…" : "Mark this lesson complete"}</Button>
-          )}
+      {error && online ? <p role="alert" className="text-caution">Your progress could not load: {error.message}</p> : null}
+      <div className="flex flex-wrap items-center gap-4">
+        {done ? (
+          <p className="font-bold text-pass" role="status">
+            ✓ Lesson complete
+            {seconds !== null ? <span className="font-normal text-muted"> · reading time {Math.round(seconds / 60)} min</span> : null}
+            {deviceSeconds !== null ? <span className="font-normal text-muted" data-testid="device-time"> · {Math.round(deviceSeconds / 60)} min read offline (reported by the phone)</span> : null}
+          </p>
+        ) : null}
+        {queued ? (
+          <p className="font-bold" role="status" data-testid="mark-waiting">
+            ⧗ Marked on this phone — waiting to be sent{online ? "" : " when you are back online"}
+            {queued.note ? <span className="block font-normal text-muted">{queued.note}</span> : null}
+          </p>
+        ) : null}
+        {showButton ? <Button onClick={mark} disabled={saving}>{saving ? "Saving…" : "Mark this lesson complete"}</Button> : null}
+        {data ? (
           <p className="text-sm text-muted" aria-live="polite" data-testid="module-progress">
             {count} of {total} lessons in this module done · counts after {Math.ceil(minutes / 2)} min of reading
           </p>
-        </div>
-      ) : null}
+        ) : !online ? (
+          <p className="text-sm text-muted">No connection: a mark made now is kept on this phone and sent when you are back online.</p>
+        ) : null}
+      </div>
       {problem ? <p role="alert" className="mt-2 text-caution">{problem}</p> : null}
     </div>
   );

@@ -3,7 +3,9 @@ import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
 import { useState } from "react";
 import { authClient } from "@/components/auth/auth-client";
+import { OfflineSync } from "@/components/offline/offline-sync";
 import { isRole } from "@/lib/access/browser";
+import { flushQueue, forgetEverything, listQueue, offlineSupported } from "@/lib/offline/browser";
 import { navFor, signedOutLinks } from "./nav-items";
 
 export function SiteNav() {
@@ -15,6 +17,14 @@ export function SiteNav() {
   const items = data ? navFor(isRole(role) ? role : "learner") : [];
 
   async function signOut() {
+    // Kept lessons and queued marks are personal: send what can be sent, then forget them all
+    // (the sign-out answer also carries Clear-Site-Data for the same reason).
+    if (offlineSupported()) {
+      if (navigator.onLine) await flushQueue().catch(() => undefined);
+      const left = await listQueue().catch(() => []);
+      if (left.length && !window.confirm(`${left.length} lesson mark${left.length === 1 ? " has" : "s have"} not reached Riser yet and will be deleted from this phone. Sign out anyway?`)) return;
+      await forgetEverything();
+    }
     await authClient.signOut();
     router.push("/");
     router.refresh();
@@ -22,6 +32,7 @@ export function SiteNav() {
 
   return (
     <nav aria-label="Main" className="flex flex-1 flex-wrap items-center justify-end gap-2">
+      <OfflineSync userId={data?.user.id ?? null} />
       {isPending ? (
         <span className="text-sm text-paper/70">Loading…</span>
       ) : data ? (

@@ -4,6 +4,7 @@
  */
 import {
   boolean,
+  datetime,
   decimal,
   index,
   int,
@@ -84,6 +85,10 @@ export const lessonProgress = mysqlTable(
       .notNull()
       .references(() => catalogLesson.id),
     completedAt: timestamp("completed_at", { fsp: 3 }).defaultNow().notNull(),
+    // A mark made with no connection and sent later: the reading time and the moment of marking
+    // as the phone reported them (never trusted for the seat-time rule; shown as the phone's).
+    deviceReadingSeconds: int("device_reading_seconds"),
+    deviceMarkedAt: datetime("device_marked_at", { fsp: 3 }),
   },
   (t) => [primaryKey({ columns: [t.userId, t.lessonId] }), index("progress_lesson_idx").on(t.lessonId)],
 );

@@ -40,6 +40,11 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/health", rule: "public" },
   { route: "/api/search", rule: "signed-in", sample: "/api/search?q=sidewall" },
   { route: "/api/progress", rule: "signed-in", sample: "/api/progress?module=freeze-protection" },
+  // job-site mode: the /offline page is static (the list comes from the phone's own storage)
+  { route: "/offline", rule: "public" },
+  { route: "/sw.js", rule: "public" },
+  { route: "/api/offline/modules/[module]", rule: "signed-in", sample: "/api/offline/modules/freeze-protection" },
+  { route: "/api/offline/versions", rule: "signed-in" },
   { route: "/api/auth/[...all]", rule: "public", sample: "/api/auth/get-session" },
   { route: "/api/account/sign-up", rule: "public", method: "POST", okStatus: 400 },
   // account settings

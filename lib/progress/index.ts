@@ -31,12 +31,33 @@ export async function recordLessonOpen(userId: string, moduleSlug: string, lesso
   await db.insert(lessonOpen).ignore().values({ userId, lessonId: lesson.id, firstOpenedAt: new Date() });
 }
 
-export type LessonTime = { lesson: string; firstOpenedAt: string; completedAt: string | null; readingSeconds: number | null };
+/**
+ * `readingSeconds` is the server's own measure (first open → completion). `deviceReadingSeconds` is
+ * set only for a mark made offline and sent later: the time the phone says the lesson was on screen,
+ * recorded and shown as the phone's, never used to decide whether the lesson counts.
+ */
+export type LessonTime = {
+  lesson: string;
+  firstOpenedAt: string;
+  completedAt: string | null;
+  readingSeconds: number | null;
+  deviceReadingSeconds: number | null;
+  deviceMarkedAt: string | null;
+};
+
+/** A mark made with no connection, as the phone reports it (lib/offline queues it). */
+export type DeviceReport = { readingSeconds: number; markedAt: Date };
 
 /** Per lesson of a module: when the person first opened it and the reading time counted at completion. */
 export async function readingTimes(userId: string, moduleSlug: string): Promise<LessonTime[]> {
   const rows = await db
-    .select({ lesson: catalogLesson.slug, openedAt: lessonOpen.firstOpenedAt, completedAt: lessonProgress.completedAt })
+    .select({
+      lesson: catalogLesson.slug,
+      openedAt: lessonOpen.firstOpenedAt,
+      completedAt: lessonProgress.completedAt,
+      deviceSeconds: lessonProgress.deviceReadingSeconds,
+      deviceMarkedAt: lessonProgress.deviceMarkedAt,
+    })
     .from(lessonOpen)
     .innerJoin(catalogLesson, eq(catalogLesson.id, lessonOpen.lessonId))
     .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
@@ -47,6 +68,8 @@ export async function readingTimes(userId: string, moduleSlug: string): Promise<
     firstOpenedAt: r.openedAt.toISOString(),
     completedAt: r.completedAt?.toISOString() ?? null,
     readingSeconds: r.completedAt ? Math.max(0, Math.round((r.completedAt.getTime() - r.openedAt.getTime()) / 1000)) : null,
+    deviceReadingSeconds: r.deviceSeconds ?? null,
+    deviceMarkedAt: r.deviceMarkedAt?.toISOString() ?? null,
   }));
 }
 
@@ -83,9 +106,11 @@ export async function lastCompletedLesson(userId: string): Promise<{ module: str
 
 /**
  * Marks a lesson complete once the seat-time rule is met; a second call changes nothing (one row
- * per person and lesson). Too early → 409 saying how long is left.
+ * per person and lesson). Too early → 409 saying how long is left. A mark queued offline brings the
+ * phone's report (`device`): it is stored beside the row as the phone's, and the same server-side
+ * rule decides whether the lesson counts (a forged report cannot shorten the minimum).
  */
-export async function markLessonComplete(userId: string, moduleSlug: string, lessonSlug: string): Promise<string[]> {
+export async function markLessonComplete(userId: string, moduleSlug: string, lessonSlug: string, device?: DeviceReport): Promise<string[]> {
   const lesson = await findLesson(moduleSlug, lessonSlug);
   if (!lesson) throw new DomainError("not-found", `No lesson "${lessonSlug}" in module "${moduleSlug}".`);
   const [done] = await db
@@ -107,7 +132,18 @@ export async function markLessonComplete(userId: string, moduleSlug: string, les
         `Keep reading: this ${lesson.minutes}-minute lesson counts as done after ${Math.ceil(needed / 60)} minutes of reading time. About ${mins} minute${mins === 1 ? "" : "s"} to go.`,
       );
     }
-    await db.insert(lessonProgress).ignore().values({ userId, lessonId: lesson.id });
+    const now = new Date();
+    await db
+      .insert(lessonProgress)
+      .ignore()
+      .values({
+        userId,
+        lessonId: lesson.id,
+        completedAt: now,
+        deviceReadingSeconds: device ? device.readingSeconds : null,
+        // A phone's clock may run ahead: a mark can never be later than its arrival.
+        deviceMarkedAt: device ? new Date(Math.min(device.markedAt.getTime(), now.getTime())) : null,
+      });
   }
   // The last lesson done after a passing quiz completes the module (lazy import: completion uses this module).
   const { checkAndRecordCompletion } = await import("@/lib/completion");

@@ -44,7 +44,7 @@ function hashTree(h, dir) {
 
 function sourceHash() {
   const h = createHash("sha256");
-  for (const d of ["app", "components", "content", "lib", "db/schema", "public"]) hashTree(h, path.join(root, d));
+  for (const d of ["app", "components", "content", "lib", "db/schema", "public", "sw"]) hashTree(h, path.join(root, d));
   for (const f of ["next.config.mjs", "tailwind.config.ts", "mdx-components.tsx", "package-lock.json", "proxy.ts", "postcss.config.mjs", "instrumentation.ts", "mdx.d.ts", "tsconfig.json"]) {
     if (existsSync(path.join(root, f))) h.update(readFileSync(path.join(root, f)));
   }
@@ -87,5 +87,7 @@ export function buildApp({ force = false, distDir = ".next", env = process.env, 
     RISER_TYPES_CHECKED: typesChecked ? "1" : "",
   };
   run(bin("next"), ["build"], { cwd: root, env: buildEnv });
+  // The service worker is built from what next build wrote (scripts/build-sw.mjs).
+  run(process.execPath, [path.join(root, "scripts/build-sw.mjs"), distDir], { cwd: root, env: buildEnv });
   writeFileSync(stamp, hash);
 }

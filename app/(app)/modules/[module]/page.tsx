@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { KeepModule } from "@/components/offline/keep-module";
 import { buttonLinkClass } from "@/components/ui/button";
 import { requireViewer } from "@/lib/access";
 import { findModule, loadCatalog } from "@/lib/content";
@@ -67,6 +68,7 @@ export default async function ModulePage({ params }: Params) {
           ))}
         </ol>
       </section>
+      <KeepModule module={slug} />
       <section aria-labelledby="complete-h" className="max-w-prose rounded border border-line bg-panel p-4">
         <h2 id="complete-h" className="text-xl">What completes this module</h2>
         <ul className="mt-2 list-disc pl-6">

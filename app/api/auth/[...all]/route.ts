@@ -27,8 +27,19 @@ export async function POST(req: Request) {
   const blocked = adminPath(req);
   if (blocked) return blocked;
   try {
-    return await handlers.POST(req);
+    return forgetOnSignOut(req, await handlers.POST(req));
   } catch (err) {
     return errorResponse(err);
   }
+}
+
+/**
+ * After sign-out the browser drops what this origin stored (lesson pages kept for offline use,
+ * queued marks, the service worker): the page deletes them itself first, this makes sure.
+ */
+function forgetOnSignOut(req: Request, res: Response): Response {
+  if (new URL(req.url).pathname !== "/api/auth/sign-out" || !res.ok) return res;
+  const out = new Response(res.body, res);
+  out.headers.set("Clear-Site-Data", '"cache", "storage"');
+  return out;
 }

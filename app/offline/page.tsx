@@ -1,0 +1,13 @@
+import type { Metadata } from "next";
+import { OfflineOverview } from "@/components/offline/offline-overview";
+
+export const metadata: Metadata = { title: "Kept on this phone" };
+
+/**
+ * /offline: what this phone keeps and what waits to be sent. The page itself holds nothing personal
+ * (the list is read from the phone's own storage), so it is static; the service worker precaches it
+ * and shows it for any page opened offline that needs a connection.
+ */
+export default function OfflinePage() {
+  return <OfflineOverview />;
+}

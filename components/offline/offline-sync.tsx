@@ -1,0 +1,50 @@
+"use client";
+import Link from "next/link";
+import { useEffect } from "react";
+import { claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker } from "@/lib/offline/browser";
+import { useOfflineState, useOnline } from "./use-offline";
+
+/**
+ * Runs on every page: registers the service worker, forgets what another
+ * person kept on this phone, and whenever the connection is there sends queued marks and replaces
+ * kept modules whose content changed. Shows a plain notice while offline.
+ */
+export function OfflineSync({ userId }: { userId: string | null }) {
+  const online = useOnline();
+  const { queue } = useOfflineState();
+
+  useEffect(() => {
+    if (!offlineSupported()) return;
+    void (async () => {
+      await registerServiceWorker();
+      // Offline the session cannot be read (null): nothing is claimed or forgotten then.
+      if (userId) await claimFor(userId);
+      if (navigator.onLine) {
+        await flushQueue();
+        await refreshStale();
+      }
+    })();
+  }, [userId]);
+
+  useEffect(() => {
+    if (!online || !offlineSupported()) return;
+    void flushQueue().then(() => refreshStale());
+  }, [online]);
+
+  if (online && queue.length === 0) return null;
+  return (
+    <div role="status" className="w-full rounded bg-paper px-3 py-2 text-sm text-ink" data-testid="connection-notice">
+      {online ? null : (
+        <p>
+          <strong>No connection.</strong> Modules kept on this phone, their code cards and the calculators still work. Quizzes,
+          certificates, the team board and sign-offs need a connection.
+        </p>
+      )}
+      {queue.length ? (
+        <p data-testid="queue-notice">
+          {queue.length === 1 ? "1 lesson mark is" : `${queue.length} lesson marks are`} waiting to be sent{online ? "" : " when you are back online"}. <Link href="/offline">See what is waiting</Link>
+        </p>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,153 @@
+// The offline area's browser face: keeping modules on the phone (Cache Storage), the queue of marks
+// made with no connection (IndexedDB through idb-keyval), and forgetting both at sign-out.
+// Pure page-side code: the service worker (sw/riser-sw.ts) only reads the caches written here.
+import { clear, createStore, del, entries, get, set, type UseStore } from "idb-keyval";
+import { postJson } from "@/lib/fetcher";
+import { SAVED_CACHE_PREFIX, SERVICE_WORKER_URL, savedCacheName } from "./names";
+
+export * from "./names";
+
+export type SavedModule = { module: string; title: string; version: string; savedAt: string; bytes: number; pages: number; cache: string };
+export type QueuedMark = { module: string; lesson: string; readingSeconds: number; markedAt: string; note?: string };
+type Plan = { module: string; title: string; version: string; urls: string[] };
+
+/** Fired on window whenever what is kept or queued changes, so lists re-read it. */
+export const OFFLINE_CHANGED = "riser:offline-changed";
+const changed = () => window.dispatchEvent(new Event(OFFLINE_CHANGED));
+
+let store: UseStore | null = null;
+const db = () => (store ??= createStore("riser-offline", "kv"));
+
+export const offlineSupported = () => typeof window !== "undefined" && "caches" in window && "indexedDB" in window && "serviceWorker" in navigator;
+
+/** Registers the service worker (production builds only: next dev has none). */
+export async function registerServiceWorker(): Promise<void> {
+  if (!offlineSupported() || process.env.NODE_ENV !== "production") return;
+  await navigator.serviceWorker.register(SERVICE_WORKER_URL, { scope: "/" }).catch(() => undefined);
+}
+
+/** Forgets everything when someone else signs in on this phone (kept pages and queue are personal). */
+export async function claimFor(userId: string): Promise<void> {
+  const owner = await get<string>("owner", db());
+  if (owner && owner !== userId) await forgetEverything();
+  if (owner !== userId) await set("owner", userId, db());
+}
+
+// ---- kept modules ---------------------------------------------------------------------------
+
+export async function listSaved(): Promise<SavedModule[]> {
+  const all = await entries<string, SavedModule>(db());
+  return all.filter(([k]) => k.startsWith("saved:")).map(([, v]) => v).sort((a, b) => a.title.localeCompare(b.title));
+}
+
+export async function savedModule(module: string): Promise<SavedModule | undefined> {
+  return get<SavedModule>(`saved:${module}`, db());
+}
+
+/**
+ * Stores a module's pages in a new cache named after its content version, records it, then drops
+ * any older copy. A failure part-way leaves the previous copy as it was.
+ */
+export async function keepModule(module: string): Promise<SavedModule> {
+  const res = await fetch(`/api/offline/modules/${encodeURIComponent(module)}`, { credentials: "same-origin" });
+  const planBody = (await res.json().catch(() => ({}))) as Plan & { error?: string };
+  if (!res.ok) throw new Error(planBody.error ?? `The module list could not load (${res.status}).`);
+  if (navigator.serviceWorker) await navigator.serviceWorker.ready;
+  const name = savedCacheName(planBody.module, planBody.version);
+  const cache = await caches.open(name);
+  let bytes = 0;
+  try {
+    for (const url of planBody.urls) {
+      const page = await fetch(url, { credentials: "same-origin", redirect: "manual" });
+      if (!page.ok || page.type !== "basic") throw new Error(page.type === "opaqueredirect" ? "Your session has ended: sign in again, then keep the module." : `${url} could not be stored (${page.status}).`);
+      bytes += (await page.clone().arrayBuffer()).byteLength;
+      await cache.put(url, page);
+    }
+  } catch (err) {
+    const previous = await savedModule(planBody.module);
+    if (previous?.cache !== name) await caches.delete(name);
+    throw err instanceof TypeError ? new Error("The connection dropped while saving. Try again with a signal; nothing else changed.") : err;
+  }
+  const saved: SavedModule = { module: planBody.module, title: planBody.title, version: planBody.version, savedAt: new Date().toISOString(), bytes, pages: planBody.urls.length, cache: name };
+  await set(`saved:${planBody.module}`, saved, db());
+  for (const old of await caches.keys()) if (old.startsWith(`${SAVED_CACHE_PREFIX}${planBody.module}@`) && old !== name) await caches.delete(old);
+  changed();
+  return saved;
+}
+
+export async function removeModule(module: string): Promise<void> {
+  const saved = await savedModule(module);
+  if (saved) await caches.delete(saved.cache);
+  for (const name of await caches.keys()) if (name.startsWith(`${SAVED_CACHE_PREFIX}${module}@`)) await caches.delete(name);
+  await del(`saved:${module}`, db());
+  changed();
+}
+
+/** Online: replaces every kept module whose content version changed since it was stored. */
+export async function refreshStale(): Promise<string[]> {
+  const saved = await listSaved();
+  if (!saved.length) return [];
+  const res = await fetch("/api/offline/versions", { credentials: "same-origin" }).catch(() => null);
+  if (!res?.ok) return [];
+  const { modules } = (await res.json()) as { modules: Record<string, string> };
+  const replaced: string[] = [];
+  for (const s of saved) {
+    const current = modules[s.module];
+    if (current === undefined) await removeModule(s.module);
+    else if (current !== s.version && (await keepModule(s.module).catch(() => null))) replaced.push(s.module);
+  }
+  return replaced;
+}
+
+// ---- marks made offline ---------------------------------------------------------------------
+
+export async function listQueue(): Promise<QueuedMark[]> {
+  const all = await entries<string, QueuedMark>(db());
+  return all.filter(([k]) => k.startsWith("queue:")).map(([, v]) => v).sort((a, b) => a.markedAt.localeCompare(b.markedAt));
+}
+
+/** One entry per lesson: marking twice keeps the first mark and the longer reading time. */
+export async function queueMark(module: string, lesson: string, readingSeconds: number): Promise<void> {
+  const key = `queue:${module}/${lesson}`;
+  const prev = await get<QueuedMark>(key, db());
+  const seconds = Math.max(0, Math.round(readingSeconds), prev?.readingSeconds ?? 0);
+  await set(key, { module, lesson, readingSeconds: seconds, markedAt: prev?.markedAt ?? new Date().toISOString() }, db());
+  changed();
+}
+
+/**
+ * Sends every queued mark. Sent (or already done) → removed; the server's seat-time rule not met
+ * yet (409) or no connection → kept, with the server's words as a note; refused for good (the
+ * lesson no longer exists, 400/404) → removed. The progress API is idempotent, so a repeat is harmless.
+ */
+export async function flushQueue(): Promise<{ sent: number; waiting: number }> {
+  let sent = 0;
+  let waiting = 0;
+  for (const item of await listQueue()) {
+    const key = `queue:${item.module}/${item.lesson}`;
+    const res = await postJson("/api/progress", { module: item.module, lesson: item.lesson, offline: { readingSeconds: item.readingSeconds, markedAt: item.markedAt } });
+    if (res.ok) {
+      await del(key, db());
+      sent++;
+    } else if (res.status === 400 || res.status === 404) {
+      await del(key, db());
+    } else {
+      await set(key, { ...item, note: res.status === 0 ? undefined : res.error }, db());
+      waiting++;
+    }
+  }
+  if (sent || waiting) changed();
+  return { sent, waiting };
+}
+
+// ---- sign-out ---------------------------------------------------------------------------------
+
+/** Deletes every kept page and every queued mark on this phone, and tells the worker to do the same. */
+export async function forgetEverything(): Promise<void> {
+  if (!offlineSupported()) return;
+  const names = await caches.keys();
+  await Promise.all(names.filter((n) => n.startsWith(SAVED_CACHE_PREFIX)).map((n) => caches.delete(n)));
+  await clear(db());
+  navigator.serviceWorker.controller?.postMessage({ type: "riser:forget" });
+  changed();
+}
