@@ -1,7 +1,7 @@
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { route } from "@/lib/api";
-import { SERVICE_WORKER_URL } from "@/lib/offline/browser";
+import { SERVICE_WORKER_URL } from "@/lib/offline";
 
 export const dynamic = "force-dynamic";
 

@@ -50,6 +50,9 @@ test("keep a module, read it and calculate offline, queue a mark, send it online
   await signInAs(page, email);
   await page.goto(`/modules/${MODULE}`);
   await page.evaluate(() => navigator.serviceWorker.ready);
+  // Chromium's own installability check (the one Lighthouse's installable-manifest audit reports).
+  const cdp = await context.newCDPSession(page);
+  expect((await cdp.send("Page.getInstallabilityErrors")).installabilityErrors).toEqual([]);
   await page.getByRole("button", { name: "Keep on this phone" }).click();
   await expect(page.getByTestId("kept-status")).toContainText("Kept on this phone", { timeout: 30_000 });
 
@@ -126,7 +129,19 @@ test("a kept module whose content version changed is replaced when the phone is 
       const res = name ? await (await caches.open(name)).match(lesson) : undefined;
       return res ? (await res.text()).includes("stale copy") : null;
     }, LESSON);
-  await expect.poll(after, { timeout: 20_000 }).toBe(false);
+  const storedVersion = () =>
+    page.evaluate(
+      () =>
+        new Promise<string>((resolve) => {
+          const open = indexedDB.open("riser-offline");
+          open.onsuccess = () => {
+            const get = open.result.transaction("kv", "readonly").objectStore("kv").get("saved:freeze-protection");
+            get.onsuccess = () => resolve(get.result.version);
+          };
+        }),
+    );
+  await expect.poll(storedVersion, { timeout: 20_000 }).toBe(before);
+  expect(await after()).toBe(false);
   expect(await page.evaluate(() => caches.keys().then((k) => k.filter((n) => n.startsWith("riser-saved-")).length))).toBe(1);
   expect(before).toMatch(/^[0-9a-f]{16}$/);
 });
