@@ -57,7 +57,7 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
   async function mark() {
     setSaving(true);
     setProblem(null);
-    if (!navigator.onLine && offlineSupported()) {
+    if (!online && offlineSupported()) {
       await queueMark(module, lesson, visibleSeconds());
       setSaving(false);
       return;
@@ -71,11 +71,13 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
     await mutate();
   }
 
-  const showButton = !done && !queued && (data || (error && !online));
+  // Progress that could not load for want of a connection (no HTTP status) still lets a mark be queued.
+  const noNetwork = !!error && !(error as { status?: number }).status;
+  const showButton = !done && !queued && (data || noNetwork);
   return (
     <div className="rounded border border-line bg-panel p-4" data-testid="lesson-progress">
       {isLoading ? <p className="text-muted">Loading your progress…</p> : null}
-      {error && online ? <p role="alert" className="text-caution">Your progress could not load: {error.message}</p> : null}
+      {error && !noNetwork ? <p role="alert" className="text-caution">Your progress could not load: {error.message}</p> : null}
       <div className="flex flex-wrap items-center gap-4">
         {done ? (
           <p className="font-bold text-pass" role="status">
@@ -95,7 +97,7 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
           <p className="text-sm text-muted" aria-live="polite" data-testid="module-progress">
             {count} of {total} lessons in this module done · counts after {Math.ceil(minutes / 2)} min of reading
           </p>
-        ) : !online ? (
+        ) : noNetwork || !online ? (
           <p className="text-sm text-muted">No connection: a mark made now is kept on this phone and sent when you are back online.</p>
         ) : null}
       </div>

@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useEffect } from "react";
-import { claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker } from "@/lib/offline/browser";
+import { checkConnection, claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker } from "@/lib/offline/browser";
 import { useOfflineState, useOnline } from "./use-offline";
 
 /**
@@ -19,15 +19,18 @@ export function OfflineSync({ userId }: { userId: string | null }) {
       await registerServiceWorker();
       // Offline the session cannot be read (null): nothing is claimed or forgotten then.
       if (userId) await claimFor(userId);
-      if (navigator.onLine) {
-        await flushQueue();
-        await refreshStale();
-      }
+      await checkConnection();
     })();
   }, [userId]);
 
+  // Whenever the connection is there: send what waits and replace stale copies. While it is not,
+  // look again every 20 s (a phone walking out of a basement fires no event).
   useEffect(() => {
-    if (!online || !offlineSupported()) return;
+    if (!offlineSupported()) return;
+    if (!online) {
+      const timer = setInterval(() => void checkConnection(), 20_000);
+      return () => clearInterval(timer);
+    }
     void flushQueue().then(() => refreshStale());
   }, [online]);
 

@@ -1,19 +1,10 @@
 "use client";
 import { useEffect, useState, useSyncExternalStore } from "react";
-import { listQueue, listSaved, OFFLINE_CHANGED, offlineSupported, type QueuedMark, type SavedModule } from "@/lib/offline/browser";
+import { isReachable, listQueue, listSaved, OFFLINE_CHANGED, offlineSupported, subscribeConnection, type QueuedMark, type SavedModule } from "@/lib/offline/browser";
 
-function subscribeOnline(onChange: () => void) {
-  window.addEventListener("online", onChange);
-  window.addEventListener("offline", onChange);
-  return () => {
-    window.removeEventListener("online", onChange);
-    window.removeEventListener("offline", onChange);
-  };
-}
-
-/** Whether the browser says it is online, following its online/offline events. */
+/** Whether Riser can be reached from this phone (lib/offline: browser events, then Riser's own answer). */
 export function useOnline(): boolean {
-  return useSyncExternalStore(subscribeOnline, () => navigator.onLine, () => true);
+  return useSyncExternalStore(subscribeConnection, isReachable, () => true);
 }
 
 type OfflineState = { ready: boolean; supported: boolean; saved: SavedModule[]; queue: QueuedMark[] };

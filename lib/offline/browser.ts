@@ -33,6 +33,50 @@ export async function claimFor(userId: string): Promise<void> {
   if (owner !== userId) await set("owner", userId, db());
 }
 
+// ---- connection -------------------------------------------------------------------------------
+// navigator.onLine alone is not trusted: a phone on a dead Wi-Fi or one bar says "online". The
+// connection counts as there when Riser itself answers (a small static file, never cached).
+
+let reachable = typeof navigator === "undefined" ? true : navigator.onLine;
+const listeners = new Set<() => void>();
+
+function setReachable(value: boolean) {
+  if (value === reachable) return;
+  reachable = value;
+  for (const l of listeners) l();
+}
+
+export const isReachable = () => reachable;
+
+/** Asks Riser itself whether it can be reached (5 s at most); updates everyone listening. */
+export async function checkConnection(): Promise<boolean> {
+  const ctl = new AbortController();
+  const timer = setTimeout(() => ctl.abort(), 5000);
+  try {
+    const res = await fetch("/manifest.webmanifest", { method: "HEAD", cache: "no-store", signal: ctl.signal });
+    setReachable(res.status < 500 || res.status === 503);
+  } catch {
+    setReachable(false);
+  } finally {
+    clearTimeout(timer);
+  }
+  return reachable;
+}
+
+/** For useSyncExternalStore: browser online/offline events, then Riser's own answer. */
+export function subscribeConnection(onChange: () => void): () => void {
+  listeners.add(onChange);
+  const online = () => void checkConnection();
+  const offline = () => setReachable(false);
+  window.addEventListener("online", online);
+  window.addEventListener("offline", offline);
+  return () => {
+    listeners.delete(onChange);
+    window.removeEventListener("online", online);
+    window.removeEventListener("offline", offline);
+  };
+}
+
 // ---- kept modules ---------------------------------------------------------------------------
 
 export async function listSaved(): Promise<SavedModule[]> {
@@ -56,13 +100,18 @@ export async function keepModule(module: string): Promise<SavedModule> {
   const name = savedCacheName(planBody.module, planBody.version);
   const cache = await caches.open(name);
   let bytes = 0;
+  const store = async (url: string) => {
+    const page = await fetch(url, { credentials: "same-origin", redirect: "manual" });
+    if (!page.ok || page.type !== "basic") throw new Error(page.type === "opaqueredirect" ? "Your session has ended: sign in again, then keep the module." : `${url} could not be stored (${page.status}).`);
+    bytes += (await page.clone().arrayBuffer()).byteLength;
+    await cache.put(url, page);
+  };
   try {
-    for (const url of planBody.urls) {
-      const page = await fetch(url, { credentials: "same-origin", redirect: "manual" });
-      if (!page.ok || page.type !== "basic") throw new Error(page.type === "opaqueredirect" ? "Your session has ended: sign in again, then keep the module." : `${url} could not be stored (${page.status}).`);
-      bytes += (await page.clone().arrayBuffer()).byteLength;
-      await cache.put(url, page);
-    }
+    // A few pages at a time: quicker on a weak signal, gentle on the server.
+    const queue = [...planBody.urls];
+    await Promise.all(Array.from({ length: 3 }, async () => {
+      for (let url = queue.shift(); url; url = queue.shift()) await store(url);
+    }));
   } catch (err) {
     const previous = await savedModule(planBody.module);
     if (previous?.cache !== name) await caches.delete(name);
@@ -126,6 +175,7 @@ export async function flushQueue(): Promise<{ sent: number; waiting: number }> {
   for (const item of await listQueue()) {
     const key = `queue:${item.module}/${item.lesson}`;
     const res = await postJson("/api/progress", { module: item.module, lesson: item.lesson, offline: { readingSeconds: item.readingSeconds, markedAt: item.markedAt } });
+    setReachable(res.ok || res.status !== 0);
     if (res.ok) {
       await del(key, db());
       sent++;
