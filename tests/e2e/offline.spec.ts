@@ -101,7 +101,7 @@ test("keep a module, read it and calculate offline, queue a mark, send it online
   await expect(page.locator("body")).not.toContainText(title!);
 });
 
-test("a kept module whose content version changed is replaced when the phone is online", async ({ page }) => {
+test("a kept module whose content version changed is replaced when online; the next person to sign in finds nothing kept", async ({ page }) => {
   test.setTimeout(60_000);
   await signInAs(page, await throwAwayLearner());
   await page.goto(`/modules/${MODULE}`);
@@ -146,4 +146,10 @@ test("a kept module whose content version changed is replaced when the phone is 
   expect(await after()).toBe(false);
   expect(await page.evaluate(() => caches.keys().then((k) => k.filter((n) => n.startsWith("riser-saved-")).length))).toBe(1);
   expect(before).toMatch(/^[0-9a-f]{16}$/);
+
+  // Someone else signs in on this phone without the first person signing out: nothing is left for them.
+  await signInAs(page, await throwAwayLearner());
+  await expect.poll(async () => (await phoneStorage(page)).cacheNames).toEqual([]);
+  await page.goto("/offline");
+  await expect(page.getByText("Nothing yet.")).toBeVisible();
 });
