@@ -61,6 +61,18 @@ describe("installable", () => {
   });
 });
 
+describe("sign-out", () => {
+  it("tells the browser to drop what this site stored (kept pages, queued marks, the worker)", async () => {
+    const person = await createPerson({ tag: "offline-signout" });
+    const client = await clientOf(person.id);
+    const res = await client.fetch("/api/auth/sign-out", { method: "POST", headers: { "content-type": "application/json" }, body: "{}" });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("clear-site-data")).toBe('"cache", "storage"');
+    // the session really ended
+    expect((await client.fetch("/api/offline/versions")).status).toBe(401);
+  });
+});
+
 describe("what a phone keeps for a module", () => {
   it("lists the module, its lessons, linked cards, the glossary and the calculators, with a content version", async () => {
     const person = await createPerson({ tag: "offline-plan" });
