@@ -2,6 +2,7 @@
 // the phone is gone at sign-in; keep a module, read it and use a calculator with no connection, mark
 // a lesson complete offline and send it when back online; a changed module replaces its stale copy;
 // signing out leaves nothing readable.
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import mysql from "mysql2/promise";
 import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
@@ -104,6 +105,8 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   expect(installabilityErrors.map((e) => e.errorId).filter((id) => id !== "in-incognito")).toEqual([]);
   await page.getByRole("button", { name: "Keep on this phone" }).click();
   await expect(page.getByTestId("kept-status")).toContainText("Kept on this phone", { timeout: 30_000 });
+  const axe = () => new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
+  expect((await axe()).violations.map((v) => `module page: ${v.id} ${v.nodes[0]?.target}`)).toEqual([]);
   const version = (await getValue<{ version: string }>(page, `saved:${MODULE}`))!.version;
   expect(version).toMatch(/^[0-9a-f]{16}$/);
 
