@@ -84,6 +84,9 @@ export async function collectMyRecords(userId: string): Promise<MyRecords> {
       // the server's own first-open stamp: reading time = completedAt − firstOpenedAt
       firstOpenedAt: lessonOpen.firstOpenedAt,
       completedAt: lessonProgress.completedAt,
+      // a mark made offline: the reading time and moment of marking as the phone reported them
+      deviceReadingSeconds: lessonProgress.deviceReadingSeconds,
+      deviceMarkedAt: lessonProgress.deviceMarkedAt,
     })
     .from(lessonProgress)
     .innerJoin(catalogLesson, eq(catalogLesson.id, lessonProgress.lessonId))
@@ -139,7 +142,10 @@ function pick(r: RecordRow, keys: string[]): CsvValue {
 /** One CSV with a `record` column (lesson, attempt, completion, certificate, sign-off). */
 export function recordsCsv(r: MyRecords): string {
   const out: Record<string, CsvValue>[] = [];
-  for (const l of r.lessons) out.push({ record: "lesson", module: l.module, item: l.lessonTitle, status: "done", date_utc: l.completedAt, reference: l.lesson });
+  for (const l of r.lessons) {
+    const phone = l.deviceReadingSeconds === null || l.deviceReadingSeconds === undefined ? null : `marked offline; reading time reported by the phone: ${l.deviceReadingSeconds} s`;
+    out.push({ record: "lesson", module: l.module, item: l.lessonTitle, status: "done", date_utc: l.completedAt, reference: l.lesson, details: phone });
+  }
   for (const a of r.attempts) {
     out.push({
       record: "attempt",

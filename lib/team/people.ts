@@ -48,7 +48,14 @@ export async function personHistory(personId: string, now = new Date()) {
       .orderBy(desc(quizAttempt.startedAt))
       .limit(100),
     db
-      .select({ module: catalogModule.slug, moduleTitle: catalogModule.title, lesson: catalogLesson.title, position: catalogLesson.position, completedAt: lessonProgress.completedAt })
+      .select({
+        module: catalogModule.slug,
+        moduleTitle: catalogModule.title,
+        lesson: catalogLesson.title,
+        position: catalogLesson.position,
+        completedAt: lessonProgress.completedAt,
+        deviceReadingSeconds: lessonProgress.deviceReadingSeconds,
+      })
       .from(lessonProgress)
       .innerJoin(catalogLesson, eq(catalogLesson.id, lessonProgress.lessonId))
       .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))

@@ -5,7 +5,7 @@ import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, lessonProgress } from "@/db/schema";
-import { backdateOpens, clientOf, createPerson, openLessons } from "../helpers/fixtures";
+import { backdateOpens, clientOf, createOrganization, createPerson, openLessons } from "../helpers/fixtures";
 import { anonymous, getJson, postJson } from "../helpers/http";
 
 const MODULE = "freeze-protection";
@@ -97,7 +97,8 @@ describe("what a phone keeps for a module", () => {
 
 describe("a lesson marked complete with no connection and sent later", () => {
   it("stores the phone's reading time beside the server's, counts only under the server's rule, and a repeat leaves one row", async () => {
-    const person = await createPerson({ tag: "offline-mark" });
+    const org = await createOrganization("Offline Mark Test Co");
+    const person = await createPerson({ tag: "offline-mark", organizationId: org.id });
     const client = await clientOf(person.id);
     await openLessons(client, MODULE, [LESSON]);
     const forged = { module: MODULE, lesson: LESSON, offline: { readingSeconds: 20 * 3600, markedAt: new Date().toISOString() } };
@@ -121,6 +122,16 @@ describe("a lesson marked complete with no connection and sent later", () => {
     const t = body.readingTimes.find((x) => x.lesson === LESSON)!;
     expect(t.deviceReadingSeconds).toBe(540);
     expect(t.readingSeconds).toBeGreaterThanOrEqual(24 * 3600 - 5);
+    // the person's own records say which reading time came from the phone
+    const records = await getJson<{ lessons: { lesson: string; deviceReadingSeconds: number | null }[] }>(client, "/api/account/records?format=json");
+    expect(records.body.lessons.find((l) => l.lesson === LESSON)?.deviceReadingSeconds).toBe(540);
+    const csv = await (await client.fetch("/api/account/records?format=csv")).text();
+    expect(csv).toContain("reading time reported by the phone: 540 s");
+    // and so does the person's page their training manager sees
+    const manager = await createPerson({ tag: "offline-manager", role: "manager", organizationId: org.id });
+    const page = await (await clientOf(manager.id)).fetch(`/team/people/${person.id}`);
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain("9 min reported by the phone");
   });
 
   it("clamps a mark dated in the future to its arrival, and refuses a malformed report with field errors", async () => {
