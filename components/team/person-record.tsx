@@ -93,7 +93,7 @@ export function PersonLessons({ lessons }: { lessons: History["lessons"] }) {
             {list.map((l) => (
               <li key={l.position}>
                 {l.lesson} <span className="font-mono text-muted">{day(l.completedAt)}</span>
-                {l.deviceReadingSeconds !== null ? <span className="text-muted"> · marked offline, {Math.round(l.deviceReadingSeconds / 60)} min reported by the phone</span> : null}
+                {l.deviceReadingSeconds !== null ? <span className="text-muted">{` · marked offline, ${Math.round(l.deviceReadingSeconds / 60)} min reported by the phone`}</span> : null}
               </li>
             ))}
           </ul>
