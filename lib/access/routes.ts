@@ -76,6 +76,13 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/certificates/[id]/pdf", rule: "signed-in", sample: "/api/certificates/0/pdf", okStatus: 404 },
   { route: "/api/certificates/[id]/revoke", rule: "manager", sample: "/api/certificates/0/revoke", method: "POST", okStatus: 400 },
   { route: "/api/jobs/certificate-reminders", rule: "public", method: "POST", okStatus: 401 },
+  // portable credentials: keys, issuer, status lists and each certificate's credential are public
+  // (the credential by its verification code only; the sample code does not exist → 404).
+  { route: "/.well-known/jwks.json", rule: "public" },
+  { route: "/.well-known/did.json", rule: "public" },
+  { route: "/api/credentials/issuer", rule: "public" },
+  { route: "/api/credentials/status/[list]", rule: "public", sample: "/api/credentials/status/1" },
+  { route: "/api/verify/[code]/credential", rule: "public", sample: "/api/verify/not-a-code/credential", okStatus: 404 },
   // practical sign-offs: POST {} as JSON → 400 (a multipart form is required / decision
   // missing); the evidence sample names no stored file → 404 for everyone allowed to ask.
   { route: "/modules/[module]/sign-offs", rule: "signed-in", sample: "/modules/pipe-and-joining/sign-offs" },

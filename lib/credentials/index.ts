@@ -1,0 +1,12 @@
+import "server-only";
+/**
+ * Portable credentials: every certificate as an Open Badges 3.0 OpenBadgeCredential signed as a
+ * VC-JWT (./badge, ./issue), the revocation status lists (./status), the signing keys and their
+ * published forms (./keys), and each person's training history with CE hours per reporting period.
+ */
+export { issuerProfile, buildOpenBadgeCredential, buildAchievement, criteriaNarrative, dateTimeZ, type OpenBadgeCredential } from "./badge";
+export { achievementFacts, credentialForCode, signedCredential } from "./issue";
+export { buildKeyRing, didDocument, jwks, keyRing, signCredential, type KeyRing, type PublishedKey } from "./keys";
+export { parseListNumber, revokedIndexes, signedStatusList } from "./status";
+export { buildStatusListCredential, encodeStatusList } from "./status-list";
+export * from "./urls";
