@@ -5,19 +5,13 @@ import "server-only";
  * `credential_status_entry`; the auto-increment id is the position, so two issues never share one).
  * Certificates issued before this existed get theirs on first request (`ensureCredentialEntry`).
  */
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { certificate, credentialStatusEntry, user } from "@/db/schema";
+import { identityHashOf } from "./identity-hash";
 
-/**
- * Open Badges 3.0 IdentityHash: "sha256$" + lowercase hex SHA-256 of the UTF-8 identifier with the
- * salt appended (OB 3.0 §B.1 IdentityObject / IdentityHash). The address is trimmed and lower-cased
- * first, so that a verifier who types it with capitals gets the same hash.
- */
-export function identityHashOf(email: string, salt: string): string {
-  return `sha256$${createHash("sha256").update(`${email.trim().toLowerCase()}${salt}`, "utf8").digest("hex")}`;
-}
+export { identityHashOf };
 
 export const newIdentitySalt = () => randomBytes(16).toString("hex");
 

@@ -6,7 +6,8 @@ import "server-only";
  */
 export { issuerProfile, buildOpenBadgeCredential, buildAchievement, criteriaNarrative, dateTimeZ, type OpenBadgeCredential } from "./badge";
 export { achievementFacts, credentialForCode, signedCredential } from "./issue";
-export { buildKeyRing, didDocument, jwks, keyRing, signCredential, type KeyRing, type PublishedKey } from "./keys";
+export { buildKeyRing, didDocument, jwks, signCredential, type KeyRing, type PublishedKey } from "./keyring";
+export { keyRing } from "./keys";
 export { parseListNumber, revokedIndexes, signedStatusList } from "./status";
 export { buildStatusListCredential, encodeStatusList } from "./status-list";
 export * from "./urls";

@@ -11,7 +11,8 @@ import { ensureCredentialEntry, parseVerifyInput } from "@/lib/certificates";
 import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { buildOpenBadgeCredential, criteriaNarrative, type BadgeAchievementFacts, type OpenBadgeCredential } from "./badge";
-import { keyRing, signCredential } from "./keys";
+import { signCredential } from "./keyring";
+import { keyRing } from "./keys";
 
 /** Description and criteria of a module or path from the content; the title when it is gone. */
 export function achievementFacts(kind: "module" | "path", slug: string, title: string): BadgeAchievementFacts {

@@ -9,7 +9,8 @@ import { db } from "@/db/client";
 import { certificate, credentialStatusEntry } from "@/db/schema";
 import { env } from "@/lib/env";
 import { DomainError } from "@/lib/errors";
-import { keyRing, signCredential } from "./keys";
+import { signCredential } from "./keyring";
+import { keyRing } from "./keys";
 import { buildStatusListCredential, encodeStatusList } from "./status-list";
 import { issuerUrl, listRange, statusListUrl, statusSlot } from "./urls";
 
