@@ -9,7 +9,7 @@ import { renderHistoryPdf } from "./history-pdf";
 
 export async function historyDownload(viewer: Viewer, personId: string, format: string | null): Promise<Response> {
   const f = format ?? "pdf";
-  if (f !== "pdf" && f !== "csv") throw new DomainError("invalid", 'format must be "pdf" or "csv".');
+  if (f !== "pdf" && f !== "csv") throw new DomainError("invalid", "Unknown format: ask for format=pdf (the printable document) or format=csv (the spreadsheet).");
   const person = await historyPersonFor(viewer, personId);
   const h = await trainingHistory(person);
   if (f === "csv") return csvDownload(historyFileName(person.name, "csv", h.generatedAt), historyCsv(h));

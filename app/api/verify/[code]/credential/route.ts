@@ -9,7 +9,7 @@ import { credentialForCode, signedCredential } from "@/lib/credentials";
  */
 export const GET = route<{ code: string }>("public", async ({ req, params }) => {
   const format = new URL(req.url).searchParams.get("format") ?? "json";
-  if (format !== "json" && format !== "jwt") throw new ApiError(400, 'format must be "json" or "jwt".');
+  if (format !== "json" && format !== "jwt") throw new ApiError(400, 'Unknown format: ask for format=json (the credential) or format=jwt (the signed credential).');
   const limit = await hitVerifyLimit(clientIp(req));
   if (!limit.allowed) {
     return json({ error: tooManyLookupsMessage(limit.retryAfterSeconds) }, { status: 429, headers: { "Retry-After": String(limit.retryAfterSeconds) } });
