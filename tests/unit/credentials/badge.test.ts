@@ -44,7 +44,8 @@ describe("OpenBadgeCredential", () => {
   });
 
   it("the schema is live: a credential without validFrom, or with a plain e-mail identity lacking its hash, fails it", () => {
-    const { validFrom: _dropped, ...noDate } = build();
+    const noDate: Record<string, unknown> = { ...build() };
+    delete noDate.validFrom;
     expect(validateCredential(noDate)).toBe(false);
     const c = build();
     const broken = { ...c, credentialSubject: { ...c.credentialSubject, identifier: [{ type: "IdentityObject", identityType: "emailAddress", email }] } };
