@@ -4,6 +4,7 @@ import { StatusBadge } from "@/components/certificates/status-badge";
 import { buttonLinkClass } from "@/components/ui/button";
 import type { HolderCertificate } from "@/lib/certificates";
 import { daysUntil, formatCertificateDate, formatHours, KIND_LABEL, verificationUrl } from "@/lib/certificates/browser";
+import { credentialUrl } from "@/lib/credentials/browser";
 import { env } from "@/lib/env";
 
 /** One of the holder's certificates: status, dates, hours, share link, PDF and renewal. */
@@ -67,6 +68,16 @@ export function CertificateCard({ c, now }: { c: HolderCertificate; now: Date })
         <p>
           <a href={`/api/certificates/${c.id}/pdf`} className={buttonLinkClass} download>
             Download PDF<span className="sr-only"> of {c.serial}</span>
+          </a>
+        </p>
+        <p className="text-sm" data-testid={`credential-links-${c.serial}`}>
+          Open Badges credential (for digital wallets and licensing bodies):{" "}
+          <a href={credentialUrl(env.APP_URL, c.verificationCode, "json")} download>
+            JSON<span className="sr-only"> of {c.serial}</span>
+          </a>{" "}
+          ·{" "}
+          <a href={credentialUrl(env.APP_URL, c.verificationCode, "jwt")} download>
+            signed (JWT)<span className="sr-only"> of {c.serial}</span>
           </a>
         </p>
         {c.status === "valid" ? <ShareLink url={url} serial={c.serial} /> : <p className="text-sm"><a href={url}>Public check page</a> (shows the status above)</p>}

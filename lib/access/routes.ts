@@ -81,6 +81,19 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/certificates/[id]/pdf", rule: "signed-in", sample: "/api/certificates/0/pdf", okStatus: 404 },
   { route: "/api/certificates/[id]/revoke", rule: "manager", sample: "/api/certificates/0/revoke", method: "POST", okStatus: 400 },
   { route: "/api/jobs/certificate-reminders", rule: "public", method: "POST", okStatus: 401 },
+  // portable credentials: keys, issuer, status lists and each certificate's credential are public
+  // (the credential by its verification code only; the sample code does not exist → 404).
+  { route: "/.well-known/jwks.json", rule: "public" },
+  { route: "/.well-known/did.json", rule: "public" },
+  { route: "/api/credentials/issuer", rule: "public" },
+  { route: "/api/credentials/status/[list]", rule: "public", sample: "/api/credentials/status/1" },
+  { route: "/api/verify/[code]/credential", rule: "public", sample: "/api/verify/not-a-code/credential", okStatus: 404 },
+  // training history downloads (PDF by default); the person sample does not exist → 404 for managers
+  // and admins; the reporting-period POST {} → 400 (fields missing)
+  { route: "/api/account/training-history", rule: "signed-in", sample: "/api/account/training-history?format=csv" },
+  { route: "/api/team/people/[id]/training-history", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000/training-history", okStatus: 404 },
+  { route: "/api/team/reporting-period", rule: "manager" },
+  { route: "/api/team/reporting-period", rule: "manager", method: "POST", okStatus: 400 },
   // practical sign-offs: POST {} as JSON → 400 (a multipart form is required / decision
   // missing); the evidence sample names no stored file → 404 for everyone allowed to ask.
   { route: "/modules/[module]/sign-offs", rule: "signed-in", sample: "/modules/pipe-and-joining/sign-offs" },

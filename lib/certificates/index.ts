@@ -25,3 +25,4 @@ export * from "./seed";
 export * from "./status";
 export * from "./verify";
 export * from "./verify-code";
+export * from "./credential-entry";

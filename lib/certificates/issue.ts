@@ -8,6 +8,7 @@ import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
+import { addCredentialEntry } from "./credential-entry";
 
 export type IssuedCertificate = Pick<Certificate, "id" | "serial" | "kind" | "subjectSlug" | "subjectTitle" | "verificationCode" | "expiresAt">;
 
@@ -170,6 +171,8 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
       .insert(certificate)
       .values({ ...values, ...serial, verificationCode })
       .$returningId()) as [{ id: number }];
+    // its status-list position and holder hash for the portable credential (lib/credentials)
+    await addCredentialEntry(tx, id, holder.email);
     issued.push({ id, serial: serial.serial, kind: values.kind, subjectSlug: values.subjectSlug, subjectTitle: values.subjectTitle, verificationCode, expiresAt: values.expiresAt });
   }
   // the mails are queued in this transaction: each exists exactly when its certificate does

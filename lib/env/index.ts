@@ -3,7 +3,8 @@
  * a message naming the variable (the scripts in scripts/ set all of these for local use).
  */
 import { z } from "zod";
-import { DEFAULT_APP_URL, localOnlyProblems } from "./local";
+import { credentialKeyProblems } from "./credential-key";
+import { DEFAULT_APP_URL, isLocalInstance, localOnlyProblems } from "./local";
 
 export { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "./local";
 
@@ -69,7 +70,12 @@ const schema = z.object({
   STRIPE_API_HOST: emptyAsUnset(z.string().min(1).optional()),
   STRIPE_API_PORT: emptyAsUnset(z.coerce.number().int().min(1).max(65535).optional()),
   STRIPE_API_PROTOCOL: emptyAsUnset(z.enum(["http", "https"]).optional()),
+  /** Ed25519 key signing portable credentials (PKCS#8 PEM or JWK; lib/env/credential-key.ts); required in production */
+  CREDENTIAL_SIGNING_KEY: emptyAsUnset(z.string().optional()),
+  /** earlier public keys still published (JSON array of JWKs or a JWK Set) */
+  CREDENTIAL_RETIRED_KEYS: emptyAsUnset(z.string().optional()),
 }).superRefine((e, ctx) => {
+  for (const issue of credentialKeyProblems({ ...e, local: isLocalInstance(e) })) ctx.addIssue({ code: "custom", path: [issue.variable], message: issue.message });
   // Local conveniences are impossible to switch on in a real deployment.
   for (const issue of localOnlyProblems(e)) ctx.addIssue({ code: "custom", path: [issue.variable], message: issue.message });
   // A key pair comes whole; with neither, the SDK's own chain (e.g. an instance role) supplies one.
@@ -101,3 +107,4 @@ function load(): Env {
 
 export const env = load();
 export * from "./local";
+export * from "./credential-key";

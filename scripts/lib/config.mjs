@@ -1,7 +1,7 @@
 // Local profiles: "dev" for npm start, "test" for npm test. Each has its own ports and data
 // directory, so tests never touch development data.
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
-import { randomBytes } from "node:crypto";
+import { generateKeyPairSync, randomBytes } from "node:crypto";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 
@@ -37,6 +37,20 @@ function secretFor(name) {
   return readFileSync(file, "utf8").trim();
 }
 
+/**
+ * The profile's Ed25519 key for signing portable credentials (PKCS#8 PEM), made once in
+ * .data/<profile>/ (never committed). A hosted instance sets CREDENTIAL_SIGNING_KEY itself.
+ */
+function credentialKeyFor(dir) {
+  mkdirSync(dir, { recursive: true });
+  const file = path.join(dir, "credential-signing-key.pem");
+  if (!existsSync(file)) {
+    const { privateKey } = generateKeyPairSync("ed25519");
+    writeFileSync(file, privateKey.export({ format: "pem", type: "pkcs8" }), { mode: 0o600 });
+  }
+  return readFileSync(file, "utf8").trim();
+}
+
 export function config(name = profileFromArgs()) {
   const p = profilePorts(name);
   const dir = path.join(dataRoot, name);
@@ -67,6 +81,7 @@ export function config(name = profileFromArgs()) {
       // the app is served by scripts/serve.mjs with no proxy in front: trust no forwarded address
       TRUSTED_PROXY_HOPS: "0",
       JOBS_SECRET: secretFor(`${name}-jobs`),
+      CREDENTIAL_SIGNING_KEY: credentialKeyFor(dir),
       NEXT_TELEMETRY_DISABLED: "1",
       // sign-off evidence: the local fake S3 server (scripts/s3-fake.mjs); s3rver's fixed key pair
       S3_ENDPOINT: `http://127.0.0.1:${p.s3Port}`,

@@ -9,13 +9,20 @@ import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
 import { formatCertificateDate, formatHours } from "@/lib/certificates";
 import { plural, pluralNoun } from "@/lib/plural";
+import { ReportingPeriodForm } from "@/components/credentials/reporting-period-form";
+import { buttonLinkClass } from "@/components/ui/button";
+import { describeSetting, periodSettingOf } from "@/lib/credentials";
 
 export const metadata: Metadata = { title: "Certificates" };
 
 export default async function CertificatesPage() {
   const viewer = await requireViewer("signed-in", "/certificates");
   const now = new Date();
-  const [mine, revocable] = await Promise.all([certificatesOfHolder(viewer.id, now), revocableCertificates(viewer, now)]);
+  const [mine, revocable, period] = await Promise.all([
+    certificatesOfHolder(viewer.id, now),
+    revocableCertificates(viewer, now),
+    periodSettingOf(viewer.organizationId ?? null),
+  ]);
   const current = mine.filter((c) => c.status === "valid");
   const past = mine.filter((c) => c.status !== "valid");
   // one certificate per module counts (a renewal and the one it renews may both be valid for a while)
@@ -65,6 +72,23 @@ export default async function CertificatesPage() {
           ) : null}
         </>
       )}
+      <section aria-labelledby="history-heading" className="mt-10">
+        <h2 id="history-heading" className="text-2xl">
+          Training history
+        </h2>
+        <p className="mt-1 max-w-prose text-muted">
+          One document with every certificate and module completion, its status and verification code, and your CE hours totalled by{" "}
+          {describeSetting(period)}.
+        </p>
+        <p className="mt-3 flex flex-wrap gap-3">
+          <a href="/api/account/training-history?format=pdf" className={buttonLinkClass} download>
+            Training history (PDF)
+          </a>
+          <a href="/api/account/training-history?format=csv" className={buttonLinkClass} download>
+            Training history (CSV)
+          </a>
+        </p>
+      </section>
       <p className="mt-8 max-w-prose text-sm text-muted">
         Hours are Riser&apos;s estimate of the study time for each module. Whether they count toward a licence or registration is for
         your licensing body or the authority having jurisdiction to decide.
@@ -79,6 +103,12 @@ export default async function CertificatesPage() {
             Revoke a certificate that was earned improperly or issued in error. The reason is required and is kept in the audit log; the
             public check then shows the certificate as revoked.
           </p>
+          {viewer.role === "manager" && viewer.organizationId ? (
+            <div className="mt-4">
+              <h3 className="mb-2 text-xl">Reporting period for CE hours</h3>
+              <ReportingPeriodForm current={period} text={describeSetting(period)} />
+            </div>
+          ) : null}
           {revocable.length === 0 ? <p className="mt-3">No certificates to show.</p> : null}
           <ul className="mt-4 flex flex-col gap-3">
             {revocable.map((c) => (

@@ -5,7 +5,9 @@ import { notFound } from "next/navigation";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { verificationByCode } from "@/lib/certificates";
 import { formatCertificateDate, formatHours, KIND_LABEL } from "@/lib/certificates";
-import { hitVerifyLimit, ipFromHeaders, tooManyLookupsMessage } from "@/lib/certificates";
+import { hitVerifyLimit, ipFromHeaders, parseVerifyInput, tooManyLookupsMessage } from "@/lib/certificates";
+import { credentialUrl } from "@/lib/credentials/browser";
+import { env } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Certificate check", robots: { index: false, follow: false } };
 
@@ -31,6 +33,7 @@ export default async function VerifyCodePage({ params }: { params: Promise<{ cod
   }
   const record = await verificationByCode(code);
   if (!record) notFound();
+  const lookup = parseVerifyInput(code);
   const now = new Date();
   const expiresAt = new Date(record.expiresAt);
   const borders = { valid: "border-l-pass", expired: "border-l-muted", revoked: "border-l-caution" } as const;
@@ -81,6 +84,15 @@ export default async function VerifyCodePage({ params }: { params: Promise<{ cod
           copy cannot show a later expiry or revocation.
         </p>
       </section>
+      {lookup?.kind === "code" ? (
+        <p className="mt-5 max-w-prose text-sm" data-testid="verify-credential">
+          The same certificate as a signed Open Badges 3.0 credential, which a digital wallet or licensing body can check on its own
+          (revocation through the published status list, expiry in the credential):{" "}
+          <a href={credentialUrl(env.APP_URL, lookup.code, "json")}>credential (JSON)</a> ·{" "}
+          <a href={credentialUrl(env.APP_URL, lookup.code, "jwt")}>signed (JWT)</a> ·{" "}
+          <a href="/.well-known/jwks.json">public keys</a>
+        </p>
+      ) : null}
       <p className="mt-5 max-w-prose text-sm text-muted">
         The hours are Riser&apos;s estimate of the study time for this material. Whether they count toward a licence or registration
         is for the licensing body or authority having jurisdiction to decide.

@@ -80,6 +80,10 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
 
       <section aria-labelledby="certs" className="mb-8">
         <h2 id="certs" className="mb-3 text-2xl">Certificates</h2>
+        <p className="mb-3 flex flex-wrap gap-3" data-testid="person-training-history">
+          <a href={`/api/team/people/${p.id}/training-history?format=pdf`} download>Training history (PDF)</a>
+          <a href={`/api/team/people/${p.id}/training-history?format=csv`} download>Training history (CSV)</a>
+        </p>
         <PersonCertificates certificates={history.certificates} />
       </section>
 
