@@ -38,6 +38,10 @@ export const ROUTES: RouteEntry[] = [
   { route: "/glossary", rule: "signed-in" },
   { route: "/search", rule: "signed-in" },
   { route: "/api/health", rule: "public" },
+  { route: "/api/health/live", rule: "public" },
+  // readiness details and metrics need the bearer METRICS_SECRET: 401 for every role without it
+  { route: "/api/health/ready", rule: "public", okStatus: 401 },
+  { route: "/api/metrics", rule: "public", okStatus: 401 },
   { route: "/api/search", rule: "signed-in", sample: "/api/search?q=sidewall" },
   { route: "/api/progress", rule: "signed-in", sample: "/api/progress?module=freeze-protection" },
   { route: "/api/auth/[...all]", rule: "public", sample: "/api/auth/get-session" },

@@ -5,6 +5,9 @@ import "server-only";
  * and on two machines at once. Add a job: one entry here, importing its module lazily (so that
  * the environment is set before any server module loads).
  */
+import { log, withLogContext } from "@/lib/log";
+import { metrics } from "@/lib/metrics";
+
 export type Job = { name: string; run: () => Promise<unknown> };
 
 export const JOBS: Job[] = [
@@ -26,14 +29,27 @@ export type JobOutcome = { name: string; ok: boolean; ms: number; result?: unkno
 export async function runJobs(names: string[] = []): Promise<JobOutcome[]> {
   const out: JobOutcome[] = [];
   for (const job of JOBS.filter((j) => !names.length || names.includes(j.name))) {
-    const t0 = Date.now();
-    try {
-      out.push({ name: job.name, ok: true, ms: Date.now() - t0, result: await job.run() });
-      out[out.length - 1]!.ms = Date.now() - t0;
-    } catch (err) {
-      console.error(`[jobs] ${job.name} failed:`, err);
-      out.push({ name: job.name, ok: false, ms: Date.now() - t0, error: err instanceof Error ? err.message : String(err) });
-    }
+    out.push(await withLogContext({ job: job.name, runId: crypto.randomUUID() }, () => runOne(job)));
   }
   return out;
+}
+
+/** One job run: logged (start, end, result or error) and counted in the metrics. */
+async function runOne(job: Job): Promise<JobOutcome> {
+  const t0 = Date.now();
+  log().info("job started");
+  try {
+    const result = await job.run();
+    const ms = Date.now() - t0;
+    metrics.jobRuns.inc({ job: job.name, outcome: "ok" });
+    metrics.jobDuration.observe({ job: job.name }, ms / 1000);
+    log().info({ ms, result }, "job finished");
+    return { name: job.name, ok: true, ms, result };
+  } catch (err) {
+    const ms = Date.now() - t0;
+    metrics.jobRuns.inc({ job: job.name, outcome: "error" });
+    metrics.jobDuration.observe({ job: job.name }, ms / 1000);
+    log().error({ ms, err }, "job failed");
+    return { name: job.name, ok: false, ms, error: err instanceof Error ? err.message : String(err) };
+  }
 }

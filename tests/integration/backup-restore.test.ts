@@ -101,7 +101,7 @@ afterAll(async () => {
 });
 
 describe("npm run db:backup and db:restore", () => {
-  it("backs up, refuses a non-empty target and a newer schema, then restores a wiped instance exactly", async () => {
+  it("backs up, refuses a non-empty target and a newer schema, then restores a wiped instance exactly", { timeout: 240_000 }, async () => {
     expect(Object.keys(before.files).length).toBeGreaterThan(0); // demo sign-offs carry evidence photos
     expect((before.verified[revokedCode] as { status: string }).status).toBe("revoked");
 
