@@ -57,6 +57,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/admin/content", rule: "admin" },
   { route: "/admin/mail", rule: "admin" },
   { route: "/admin/audit", rule: "admin" },
+  { route: "/admin/jobs", rule: "admin" },
   { route: "/api/admin/organizations", rule: "admin" },
   { route: "/api/admin/organizations", rule: "admin", method: "POST", okStatus: 400 },
   { route: "/api/admin/organizations/[id]", rule: "admin", sample: "/api/admin/organizations/no-such-org", method: "POST", okStatus: 400 },
