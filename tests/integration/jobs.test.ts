@@ -4,7 +4,7 @@
 // another server holds is skipped without a record; every run is recorded and shown at /admin/jobs.
 import { execFile } from "node:child_process";
 import { promisify } from "node:util";
-import { and, eq, gte, inArray, sql } from "drizzle-orm";
+import { and, eq, gt, inArray, sql } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { jobLease, jobRun } from "@/db/schema";
@@ -26,26 +26,28 @@ async function viaCli(jobs: string[]): Promise<Outcome[]> {
   return jobs.map((name) => ({ name, ok: true, skipped: new RegExp(`\\[jobs\\] ${name}: skipped`).test(stdout) }));
 }
 
-const runsSince = (jobs: string[], since: Date) => db.select().from(jobRun).where(and(inArray(jobRun.job, jobs), gte(jobRun.startedAt, since))).orderBy(jobRun.startedAt);
+/** The newest run id so far: runs recorded later have larger ids. */
+const lastRunId = async () => (await db.select({ id: sql<number>`COALESCE(MAX(${jobRun.id}), 0)` }).from(jobRun))[0]!.id;
+const runsAfter = (jobs: string[], afterId: number) => db.select().from(jobRun).where(and(inArray(jobRun.job, jobs), gt(jobRun.id, afterId))).orderBy(jobRun.startedAt, jobRun.id);
 
 afterAll(() => pool.end());
 
 describe("scheduled jobs", () => {
   it("skip a job whose lease another server holds, and run and record it once the lease is free", async () => {
     const job = "rate-limit-prune";
-    const t0 = new Date(Date.now() - 1000);
+    const t0 = await lastRunId();
     await db
       .insert(jobLease)
       .values({ job, runId: "held-by-another-server", leaseUntil: sql`NOW(3) + INTERVAL 60 SECOND` })
       .onDuplicateKeyUpdate({ set: { runId: "held-by-another-server", leaseUntil: sql`NOW(3) + INTERVAL 60 SECOND` } });
     const [held] = await viaApi([job]);
     expect(held).toMatchObject({ name: job, ok: true, skipped: true });
-    expect(await runsSince([job], t0)).toEqual([]);
+    expect(await runsAfter([job], t0)).toEqual([]);
 
     await db.update(jobLease).set({ runId: null, leaseUntil: new Date(0) }).where(eq(jobLease.job, job));
     const [ran] = await viaApi([job]);
     expect(ran!.skipped).toBeUndefined();
-    const runs = await runsSince([job], t0);
+    const runs = await runsAfter([job], t0);
     expect(runs).toHaveLength(1);
     expect(runs[0]).toMatchObject({ job, status: "ok", trigger: "api" });
     expect(runs[0]!.finishedAt!.getTime()).toBeGreaterThanOrEqual(runs[0]!.startedAt.getTime());
@@ -56,10 +58,10 @@ describe("scheduled jobs", () => {
 
   it("started on the app server three times and by cron at once, never run twice at the same time", async () => {
     const jobs = ["certificate-reminders", "evidence-orphans", "rate-limit-prune"];
-    const t0 = new Date(Date.now() - 1000);
+    const t0 = await lastRunId();
     const results = (await Promise.all([viaApi(jobs), viaApi(jobs), viaApi(jobs), viaCli(jobs)])).flat();
     expect(results.every((r) => r.ok)).toBe(true);
-    const runs = await runsSince(jobs, t0);
+    const runs = await runsAfter(jobs, t0);
     for (const job of jobs) {
       const mine = runs.filter((r) => r.job === job);
       const skipped = results.filter((r) => r.name === job && r.skipped).length;
