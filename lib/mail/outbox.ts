@@ -97,7 +97,7 @@ async function deliverOne(row: Row): Promise<"sent" | "retry" | "failed"> {
       await tx.insert(mailLog).values({ to: row.to, subject: row.subject, kind: row.kind, status: "sent", error: null, body: keepBody ? row.body : null });
     });
     metrics.mail.inc({ outcome: "sent" });
-    log().info({ outboxId: row.id, kind: row.kind, tries }, "mail sent");
+    log().debug({ outboxId: row.id, kind: row.kind, tries }, "mail sent"); // counted in riser_mail_total; failures log at warn/error
     return "sent";
   }
   const final = tries >= MAX_TRIES;
