@@ -41,7 +41,7 @@ export type LogOptions = { level?: string; format?: "json" | "pretty"; destinati
 export function createLogger(opts: LogOptions = {}): Logger {
   const format = opts.format ?? (process.env.LOG_FORMAT === "json" || process.env.LOG_FORMAT === "pretty" ? process.env.LOG_FORMAT : process.env.RISER_LOCAL === "1" ? "pretty" : "json");
   const destination =
-    opts.destination ?? (format === "pretty" ? pretty({ colorize: Boolean(process.stdout.isTTY), sync: true, singleLine: true, ignore: "pid,hostname,service", translateTime: "SYS:HH:MM:ss.l" }) : pino.destination({ sync: true }));
+    opts.destination ?? (format === "pretty" ? pretty({ colorize: Boolean(process.stdout.isTTY), sync: true, singleLine: true, errorLikeObjectKeys: ["err"], ignore: "pid,hostname,service", translateTime: "SYS:HH:MM:ss.l" }) : pino.destination({ sync: true }));
   return pino(
     {
       level: opts.level ?? process.env.LOG_LEVEL ?? "info",
