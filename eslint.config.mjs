@@ -15,5 +15,11 @@ const config = [
       "drizzle/enforce-update-with-where": ["error", { drizzleObjectName: ["db", "tx"] }],
     },
   },
+  {
+    // server code logs through lib/log (structured, ids only, e-mails masked); the browser may still use console
+    files: ["lib/**/*.ts", "app/**/*.ts", "instrumentation.ts", "proxy.ts"],
+    ignores: ["lib/**/browser.ts"],
+    rules: { "no-console": "error" },
+  },
 ];
 export default config;

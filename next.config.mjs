@@ -15,7 +15,7 @@ const nextConfig = {
     tsconfigPath: process.env.NEXT_TSCONFIG_PATH || "tsconfig.json",
   },
   experimental: { authInterrupts: true },
-  serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode"],
+  serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode", "prom-client"],
   async headers() {
     // Security headers for every response (pages and API); CSP without unsafe-eval in production.
     return [{ source: "/:path*", headers: securityHeaders(isProd) }];

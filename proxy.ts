@@ -1,13 +1,15 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
+import { REQUEST_ID_HEADER, requestIdFor } from "@/lib/request-id";
 import { applySecurityHeaders } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
  * clear page or JSON (a TCP probe, remembered for one second); (2) statically generated lesson
  * pages get their session checked here, since the page itself holds no per-person data; (3) the
- * client address is worked out once (lib/client-ip) and handed to better-auth.
+ * client address is worked out once (lib/client-ip) and handed to better-auth; (4) every request gets
+ * a request id (lib/request-id), on the request for the handlers' logs and on the response.
  * Every dynamic page, action and route handler checks access again where the data is (lib/access).
  */
 let lastProbe = { at: 0, up: true };
@@ -48,17 +50,24 @@ const outagePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><
 <body style="font-family:system-ui,sans-serif;background:#F7F4EE;color:#14202B;max-width:40rem;margin:3rem auto;padding:0 1rem">
 <h1>Riser is briefly unavailable</h1><p>Our database is not answering right now. Nothing you saved is lost. This page will work again as soon as it is back &mdash; try again in a minute.</p></body></html>`;
 
+/** Health, readiness and metrics answer for themselves, database or not (app/api/health, app/api/metrics). */
+const SELF_REPORTING = /^\/api\/(health(\/(live|ready))?|metrics)$/;
+
 export async function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
-  if (pathname === "/api/health") return NextResponse.next();
+  const requestId = requestIdFor(req.headers);
+  // handlers read the id from the request: always this one, never what the client sent
+  const headers = new Headers(req.headers);
+  headers.set(REQUEST_ID_HEADER, requestId);
+  if (SELF_REPORTING.test(pathname)) return NextResponse.next({ request: { headers } });
   if (!(await databaseUp())) {
     // The proxy's own answers carry the same security headers as every other response.
-    const headers = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store" }), production);
+    const answer = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store", [REQUEST_ID_HEADER]: requestId }), production);
     if (pathname.startsWith("/api/")) {
-      return NextResponse.json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers });
+      return NextResponse.json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: answer });
     }
-    headers.set("content-type", "text/html; charset=utf-8");
-    return new NextResponse(outagePage, { status: 503, headers });
+    answer.set("content-type", "text/html; charset=utf-8");
+    return new NextResponse(outagePage, { status: 503, headers: answer });
   }
   if (/^\/modules\/[^/]+\/[^/]+$/.test(pathname) && !pathname.endsWith("/quiz")) {
     const { auth } = await import("@/lib/auth");
@@ -74,9 +83,10 @@ export async function proxy(req: NextRequest) {
   }
   // better-auth reads the client address from this header (lib/auth): set here from the real peer
   // and the trusted proxies only, overwriting whatever the client sent under that name.
-  const headers = new Headers(req.headers);
   headers.set(CLIENT_IP_HEADER, clientIpOf(req.headers));
-  return NextResponse.next({ request: { headers } });
+  const res = NextResponse.next({ request: { headers } });
+  res.headers.set(REQUEST_ID_HEADER, requestId);
+  return res;
 }
 
 export const config = {

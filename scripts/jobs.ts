@@ -1,6 +1,6 @@
 // Scheduled jobs: `npm run jobs:run` runs every job once; `npm run jobs:run -- certificate-reminders`
-// runs the named ones. Run it from cron (e.g. hourly) or let an external scheduler call the jobs'
-// routes instead. Every job must be safe to run twice and on two machines at once.
+// runs the named ones. Run it from cron (e.g. every 15 minutes) on any number of hosts, or let an
+// external scheduler POST /api/jobs/run instead: a job already running elsewhere is skipped.
 // Add a job: one entry in JOBS in lib/jobs.ts (import lazily, so that the environment is set
 // first); POST /api/jobs/run runs the same list.
 import { spawnSync } from "node:child_process";
@@ -37,16 +37,12 @@ if (unknown.length) {
   process.exit(2);
 }
 
-let failed = 0;
-for (const job of JOBS.filter((j) => !names.length || names.includes(j.name))) {
-  const t0 = Date.now();
-  try {
-    const result = await job.run();
-    console.log(`[jobs] ${job.name}: ${JSON.stringify(result)} (${Date.now() - t0} ms)`);
-  } catch (err) {
-    failed++;
-    console.error(`[jobs] ${job.name} failed:`, err);
-  }
+// the same runner as POST /api/jobs/run: one run per job across all servers, recorded for /admin/jobs
+const { runJobs } = await import("@/lib/jobs");
+const outcomes = await runJobs(names, "cli");
+for (const o of outcomes) {
+  const what = o.skipped ? "skipped (another server is running it)" : o.ok ? JSON.stringify(o.result) : `FAILED: ${o.error}`;
+  (o.ok ? console.log : console.error)(`[jobs] ${o.name}: ${what} (${o.ms} ms)`);
 }
 await (await import("@/db/client")).pool.end();
-process.exit(failed ? 1 : 0);
+process.exit(outcomes.some((o) => !o.ok) ? 1 : 0);

@@ -9,6 +9,7 @@ export const ADMIN_SECTIONS = [
   { href: "/admin/content", label: "Content" },
   { href: "/admin/mail", label: "Mail log" },
   { href: "/admin/audit", label: "Audit log" },
+  { href: "/admin/jobs", label: "Jobs" },
 ] as const;
 
 export function AdminNav() {

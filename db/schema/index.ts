@@ -8,3 +8,4 @@ export * from "./billing";
 export * from "./signoffs";
 export * from "./records";
 export * from "./credentials";
+export * from "./ops";

@@ -38,6 +38,10 @@ export const ROUTES: RouteEntry[] = [
   { route: "/glossary", rule: "signed-in" },
   { route: "/search", rule: "signed-in" },
   { route: "/api/health", rule: "public" },
+  { route: "/api/health/live", rule: "public" },
+  // readiness details and metrics need the bearer METRICS_SECRET: 401 for every role without it
+  { route: "/api/health/ready", rule: "public", okStatus: 401 },
+  { route: "/api/metrics", rule: "public", okStatus: 401 },
   { route: "/api/search", rule: "signed-in", sample: "/api/search?q=sidewall" },
   { route: "/api/progress", rule: "signed-in", sample: "/api/progress?module=freeze-protection" },
   // job-site mode: the /offline page is static (the list comes from the phone's own storage)
@@ -58,6 +62,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/admin/content", rule: "admin" },
   { route: "/admin/mail", rule: "admin" },
   { route: "/admin/audit", rule: "admin" },
+  { route: "/admin/jobs", rule: "admin" },
   { route: "/api/admin/organizations", rule: "admin" },
   { route: "/api/admin/organizations", rule: "admin", method: "POST", okStatus: 400 },
   { route: "/api/admin/organizations/[id]", rule: "admin", sample: "/api/admin/organizations/no-such-org", method: "POST", okStatus: 400 },

@@ -5,6 +5,9 @@ import { isDatabaseDown } from "@/lib/db-errors";
 import { DomainError } from "@/lib/errors";
 import { env } from "@/lib/env";
 import { clientIpOf } from "@/lib/client-ip";
+import { addLogBindings, log, withLogContext } from "@/lib/log";
+import { observeRequest, routePattern } from "@/lib/metrics";
+import { REQUEST_ID_HEADER } from "@/lib/request-id";
 
 /** An error whose message is safe to show: becomes `{ error }` with its status. */
 export class ApiError extends Error {
@@ -68,7 +71,7 @@ export function errorResponse(err: unknown): Response {
   if (isDatabaseDown(err)) {
     return json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: { "Retry-After": "10" } });
   }
-  console.error("[api] unexpected error", err);
+  log().error({ err }, "unexpected error in a route handler");
   return json({ error: "Something went wrong on our side. Nothing was saved." }, 500);
 }
 
@@ -92,19 +95,42 @@ export function assertSameOrigin(req: Request): void {
 /**
  * The one wrapper for route handlers: refuses changes sent from another site (403), checks the
  * access rule (401/403), then runs the handler and maps errors. Route params arrive awaited.
+ * Runs inside a log context (the request id proxy.ts set, then the person's and organization's
+ * ids), writes one log line per request and counts it in the metrics by route pattern.
  */
 export function route<P = Record<string, string>>(rule: "public", fn: (ctx: Ctx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 export function route<P = Record<string, string>>(rule: Exclude<Rule, "public">, fn: (ctx: SignedCtx<P>) => Promise<Response>): (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 export function route<P>(rule: Rule, fn: (ctx: never) => Promise<Response>) {
   return async (req: Request, ctx: { params: Promise<P> }) => {
-    try {
-      assertSameOrigin(req);
-      const viewer = check(await getRequestViewer(req), rule);
-      const params = ctx?.params ? await ctx.params : ({} as P);
-      return await (fn as (c: Ctx<P>) => Promise<Response>)({ req, viewer, params });
-    } catch (err) {
-      return errorResponse(err);
-    }
+    const started = performance.now();
+    // proxy.ts always sets this header (overwriting any client value); a new id if it did not run
+    const requestId = req.headers.get(REQUEST_ID_HEADER) ?? crypto.randomUUID();
+    return withLogContext({ requestId }, async () => {
+      let params: P | undefined;
+      let res: Response;
+      try {
+        params = ctx?.params ? await ctx.params : ({} as P);
+        assertSameOrigin(req);
+        const viewer = check(await getRequestViewer(req), rule);
+        if (viewer) addLogBindings({ personId: viewer.id, organizationId: viewer.organizationId });
+        res = await (fn as (c: Ctx<P>) => Promise<Response>)({ req, viewer, params });
+      } catch (err) {
+        res = errorResponse(err);
+      }
+      const seconds = (performance.now() - started) / 1000;
+      const { pathname } = new URL(req.url);
+      const pattern = routePattern(pathname, params as Record<string, unknown> | undefined);
+      observeRequest(pattern, req.method, res.status, seconds);
+      log()[res.status >= 500 ? "error" : "info"]({ method: req.method, route: pattern, status: res.status, ms: Math.round(seconds * 1000) }, "request");
+      if (!res.headers.has(REQUEST_ID_HEADER)) {
+        try {
+          res.headers.set(REQUEST_ID_HEADER, requestId);
+        } catch {
+          // immutable headers (a Response passed through): the proxy already set it
+        }
+      }
+      return res;
+    });
   };
 }
 

@@ -1,4 +1,5 @@
 import "server-only";
+import { log } from "@/lib/log";
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
@@ -123,10 +124,10 @@ export async function startCheckout(viewer: Viewer, input: { seats: number; idem
       .set({ lastError: message.slice(0, 2000), updatedAt: new Date() })
       .where(eq(checkout.id, row.id));
     if (isProviderUnreachable(err)) {
-      console.warn(`[billing] checkout ${row.id}: payment service unreachable: ${message}`);
+      log().warn({ checkoutId: row.id, error: message }, "payment service unreachable");
       throw new DomainError("unavailable", UNREACHABLE);
     }
-    console.error(`[billing] checkout ${row.id}: the payment service refused the session`, err);
+    log().error({ checkoutId: row.id, err }, "the payment service refused the checkout session");
     throw new DomainError("upstream", "The payment service could not start this checkout. Nothing was charged and no seats were added. Try again later, or ask Riser's administrator.");
   }
   if (!session.url) throw new DomainError("upstream", "The payment service did not return a payment page. Nothing was charged.");

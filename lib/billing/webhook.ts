@@ -1,4 +1,5 @@
 import "server-only";
+import { log } from "@/lib/log";
 import { and, eq, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { checkout, organization, paymentEvent, user, type CheckoutStatus, type PaymentOutcome } from "@/db/schema";
@@ -54,13 +55,13 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
   if (!SESSION_EVENTS.has(event.type)) return { outcome: "unhandled", seatsAdded: 0 };
   const session = event.data?.object as ProviderSession | undefined;
   if (!session || typeof session.id !== "string") {
-    console.warn(`[billing] webhook ${event.id} (${event.type}) carries no checkout session; nothing changed`);
+    log().warn({ eventId: event.id, eventType: event.type }, "payment webhook carries no checkout session; nothing changed");
     return { outcome: "unknown", seatsAdded: 0 };
   }
   const found = await findCheckout(session);
   const metaOrg = session.metadata?.organizationId;
   if (!found || (metaOrg && metaOrg !== found.organizationId)) {
-    console.warn(`[billing] webhook ${event.id} (${event.type}): session ${session.id} names no checkout of a known organization (${metaOrg ?? "none"}); nothing changed`);
+    log().warn({ eventId: event.id, eventType: event.type, sessionId: session.id, organizationId: metaOrg ?? null }, "payment webhook names no checkout of a known organization; nothing changed");
     return { outcome: "unknown", seatsAdded: 0 };
   }
 
@@ -82,7 +83,7 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
         if (c.status === "paid") outcome = "already_paid";
         else if (session.amount_total !== c.amount || (session.currency ?? "").toLowerCase() !== c.currency) {
           outcome = "amount_mismatch";
-          console.error(`[billing] webhook ${event.id}: session ${session.id} paid ${session.amount_total} ${session.currency}, checkout ${c.id} expects ${c.amount} ${c.currency}; no seats added`);
+          log().error({ eventId: event.id, sessionId: session.id, paid: session.amount_total, currency: session.currency, checkoutId: c.id, expected: c.amount, expectedCurrency: c.currency }, "payment amount does not match the checkout; no seats added");
         } else {
           const [org] = await tx.select({ seats: organization.seats, trialEndsAt: organization.trialEndsAt }).from(organization).where(eq(organization.id, c.organizationId)).for("update");
           if (!org) throw new Error("organization vanished");

@@ -6,7 +6,9 @@ import { db, type Tx } from "@/db/client";
 import { catalogModule, certificate, certificateSerialCounter, moduleCompletion, organization, user, type Certificate } from "@/db/schema";
 import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
+import { log } from "@/lib/log";
 import { sendMail } from "@/lib/mail";
+import { metrics } from "@/lib/metrics";
 import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
 import { addCredentialEntry } from "./credential-entry";
 
@@ -80,6 +82,10 @@ export async function issueCertificateForCompletion(completionId: number, opts: 
       if (attempt >= 5 || !isRetryable(err)) throw err;
       await new Promise((r) => setTimeout(r, 20 * attempt + Math.random() * 30));
     }
+  }
+  for (const c of result.issued) {
+    metrics.certificatesIssued.inc({ kind: c.kind });
+    log().info({ certificateId: c.id, serial: c.serial, kind: c.kind, personId: completion.userId }, "certificate issued");
   }
   return result.issued;
 }

@@ -18,6 +18,7 @@ import { issueCertificateForCompletion } from "./issue";
 import { revokeWithAudit } from "./revoke";
 import { addMonthsUtc } from "./status";
 import { DAY_MS } from "@/lib/dates";
+import { log } from "@/lib/log";
 
 
 async function completeModule(person: { id: string; organizationId: string | null }, moduleSlug: string, completedAt: Date) {
@@ -55,7 +56,7 @@ async function completeModule(person: { id: string; organizationId: string | nul
 export async function seedCertificates(now: Date = new Date()): Promise<void> {
   const [any] = await db.select({ id: certificate.id }).from(certificate).limit(1);
   if (any) {
-    console.log("[seed] certificates exist: left as they are");
+    log().info("seed: certificates exist, left as they are");
     return;
   }
   const emails = ["kasimir@quillmoor.example", "rafaela@quillmoor.example", "callum@quillmoor.example", "maren@quillmoor.example"];
@@ -63,7 +64,7 @@ export async function seedCertificates(now: Date = new Date()): Promise<void> {
   const by = (email: string) => people.find((p) => p.email === email);
   const [kasimir, rafaela, callum, maren] = emails.map(by);
   if (!kasimir || !rafaela || !callum || !maren) {
-    console.log("[seed] demo people missing: no demo certificates");
+    log().info("seed: demo people missing, no demo certificates");
     return;
   }
 
@@ -92,5 +93,5 @@ export async function seedCertificates(now: Date = new Date()): Promise<void> {
       () => {},
     );
   }
-  console.log(`[seed] demo certificates: ${count} (valid, expiring, expired, revoked)`);
+  log().info(`seed: demo certificates: ${count} (valid, expiring, expired, revoked)`);
 }

@@ -10,6 +10,7 @@
  * No server code: also usable in the browser.
  */
 import Papa from "papaparse";
+import { log } from "@/lib/log";
 
 const FORMULA_START = /^[=+\-@\t\r]/;
 
@@ -89,7 +90,7 @@ export async function csvResponse(fileName: string, header: string[], lines: () 
         }
         controller.enqueue(enc.encode(csvLines(value)));
       } catch (err) {
-        console.error("[csv] export failed part-way", err);
+        log().error({ err }, "CSV export failed part-way");
         controller.error(err);
       }
     },

@@ -40,6 +40,8 @@ const schema = z.object({
   /** unverified accounts (and the trial organizations they created) are removed after this many hours */
   UNVERIFIED_ACCOUNT_TTL_H: z.coerce.number().int().min(1).default(48),
   JOBS_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
+  /** bearer secret of GET /api/metrics and /api/health/ready (without it both answer 401 to everyone) */
+  METRICS_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
   /** public certificate look-ups (page + JSON) allowed per client address per window */
   VERIFY_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(30),
   VERIFY_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),

@@ -1,6 +1,7 @@
 import "server-only";
 import { db, type Tx } from "@/db/client";
 import { mailOutbox } from "@/db/schema";
+import { log } from "@/lib/log";
 import { isDuplicateKey, scheduleDelivery } from "./outbox";
 
 /** `key`: optional caller key; a message with a key already queued is not queued again. */
@@ -21,7 +22,9 @@ export async function sendMail(mail: Mail, tx?: Tx): Promise<{ ok: boolean }> {
     nextAttemptAt: new Date(),
   };
   try {
-    await (tx ?? db).insert(mailOutbox).values(values);
+    const [r] = await (tx ?? db).insert(mailOutbox).values(values);
+    // the request id of this line ties the request to the outbox row the worker later logs
+    log().debug({ outboxId: r.insertId, kind: values.kind }, "mail queued");
   } catch (err) {
     if (!(mail.key && isDuplicateKey(err))) throw err; // the same keyed message is already queued
   }

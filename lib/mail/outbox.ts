@@ -5,6 +5,8 @@ import { and, desc, eq, inArray, isNull, lte, lt, notInArray, or, sql } from "dr
 import { db } from "@/db/client";
 import { mailLog, mailOutbox } from "@/db/schema";
 import { env } from "@/lib/env";
+import { log, withLogContext } from "@/lib/log";
+import { metrics } from "@/lib/metrics";
 
 /**
  * Delivery of the mail outbox. Every message is a row (lib/mail sendMail); `deliverOutbox` claims due
@@ -94,10 +96,14 @@ async function deliverOne(row: Row): Promise<"sent" | "retry" | "failed"> {
         .where(eq(mailOutbox.id, row.id));
       await tx.insert(mailLog).values({ to: row.to, subject: row.subject, kind: row.kind, status: "sent", error: null, body: keepBody ? row.body : null });
     });
+    metrics.mail.inc({ outcome: "sent" });
+    log().debug({ outboxId: row.id, kind: row.kind, tries }, "mail sent"); // counted in riser_mail_total; failures log at warn/error
     return "sent";
   }
   const final = tries >= MAX_TRIES;
-  console.error(`[mail] "${row.subject}" to ${row.to}: try ${tries} failed (${error})${final ? "; giving up" : ""}`);
+  metrics.mail.inc({ outcome: final ? "failed" : "retry" });
+  // the recipient is never logged: the outbox row id finds it in the admin mail log
+  log()[final ? "error" : "warn"]({ outboxId: row.id, kind: row.kind, tries, error, final }, final ? "mail failed; giving up" : "mail try failed; will retry");
   await db.transaction(async (tx) => {
     await tx
       .update(mailOutbox)
@@ -160,13 +166,13 @@ export async function drainNow(): Promise<void> {
   try {
     do {
       s.again = false;
-      await deliverOutbox();
+      await withLogContext({ worker: "mail-outbox", runId: crypto.randomUUID() }, () => deliverOutbox());
     } while (s.again);
   } catch (err) {
     // the database may be down: the interval tries again; log at most once a minute
     if (Date.now() - s.lastErrorLog > 60_000) {
       s.lastErrorLog = Date.now();
-      console.error("[mail] outbox delivery paused:", err instanceof Error ? err.message : err);
+      log().error({ worker: "mail-outbox", error: err instanceof Error ? err.message : String(err) }, "mail outbox delivery paused");
     }
   } finally {
     s.running = false;

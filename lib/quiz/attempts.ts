@@ -1,4 +1,6 @@
 import "server-only";
+import { log } from "@/lib/log";
+import { metrics } from "@/lib/metrics";
 // Over 300 lines on purpose: starting, saving, grading, viewing and listing attempts share one
 // locking discipline (the attempt row FOR UPDATE) and the same row/item shapes; split, the lock
 // rules would live in several files.
@@ -283,6 +285,10 @@ export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: An
     if (late && finalAnswers.length) refusedLate = true;
     return gradeLocked(tx, a, late, items);
   });
+  if (graded) {
+    metrics.quizSubmits.inc({ result: graded.row.passed ? "passed" : "failed" });
+    log().info({ attemptId: id, module: graded.row.moduleSlug, score: graded.row.score, passed: graded.row.passed }, "quiz attempt graded");
+  }
   const completion = graded?.row.passed ? await completeAfterGrading(viewer.id, graded.row.moduleSlug) : null;
   if (refusedLate) throw new DomainError("conflict", "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
   // Every response, first or repeated, is built from the stored rows so that all are identical.
@@ -302,7 +308,7 @@ async function completeAfterGrading(userId: string, moduleSlug: string): Promise
     await checkAndRecordCompletion(userId, moduleSlug);
     return "done";
   } catch (err) {
-    console.error(`[quiz] completion of ${moduleSlug} for ${userId} failed after grading; the job retries it`, err);
+    log().error({ err, module: moduleSlug, personId: userId }, "completion failed after grading; the completion-retry job records it");
     return "pending";
   }
 }

@@ -18,6 +18,7 @@ import { env } from "@/lib/env";
 import { putObject } from "@/lib/storage";
 import { evidenceKeys } from "./keys";
 import { DAY_MS } from "@/lib/dates";
+import { log } from "@/lib/log";
 
 
 /** A drawn stand-in for a job-site photo: two pipe runs meeting at a fitting, with a caption band. */
@@ -108,8 +109,8 @@ const DEMO: DemoSignOff[] = [
 
 export async function seedSignOffs(now: Date = new Date()): Promise<void> {
   const [any] = await db.select({ id: signOff.id }).from(signOff).limit(1);
-  if (any) return console.log("[seed] sign-offs exist: left as they are");
-  if (!env.S3_BUCKET) return console.log("[seed] no object store configured (S3_BUCKET): no demo sign-offs");
+  if (any) return log().info("seed: sign-offs exist, left as they are");
+  if (!env.S3_BUCKET) return log().info("seed: no object store configured (S3_BUCKET), no demo sign-offs");
   const emails = [...new Set(DEMO.flatMap((d) => [d.email, d.reviewer].filter((e): e is string => Boolean(e))))];
   const people = await db.select({ id: user.id, email: user.email, organizationId: user.organizationId }).from(user).where(inArray(user.email, emails));
   const by = new Map(people.map((p) => [p.email, p]));
@@ -144,5 +145,5 @@ export async function seedSignOffs(now: Date = new Date()): Promise<void> {
     });
     count++;
   }
-  console.log(`[seed] demo sign-offs: ${count}`);
+  log().info(`seed: demo sign-offs: ${count}`);
 }

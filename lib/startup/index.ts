@@ -8,7 +8,8 @@ export async function checkEnvironmentAtStart(): Promise<void> {
   try {
     await import("@/lib/env");
   } catch (err) {
-    console.error(`\n${err instanceof Error ? err.message : String(err)}\n`);
+    const { log } = await import("@/lib/log");
+    log().fatal(`\n${err instanceof Error ? err.message : String(err)}\n`);
     process.exit(1);
   }
 }

@@ -11,6 +11,7 @@ import "server-only";
 import {
   DeleteObjectCommand,
   GetObjectCommand,
+  HeadBucketCommand,
   HeadObjectCommand,
   ListObjectsV2Command,
   NoSuchKey,
@@ -20,6 +21,7 @@ import {
   S3ServiceException,
 } from "@aws-sdk/client-s3";
 import { env } from "@/lib/env";
+import { log } from "@/lib/log";
 
 export class StorageUnavailableError extends Error {}
 
@@ -106,7 +108,7 @@ export async function deleteObjectsQuietly(keys: string[]): Promise<void> {
   await Promise.all(
     keys.map((k) =>
       deleteObject(k).catch((err) => {
-        console.error(`[storage] could not delete ${k} (the orphan cleanup job will retry):`, err instanceof Error ? err.message : err);
+        log().warn({ key: k, error: err instanceof Error ? err.message : String(err) }, "could not delete an object (the orphan clean-up job will retry)");
       }),
     ),
   );
@@ -122,4 +124,9 @@ export async function* listObjects(prefix: string): AsyncGenerator<ListedObject[
     yield (r.Contents ?? []).filter((o) => o.Key).map((o) => ({ key: o.Key!, size: o.Size ?? 0, lastModified: o.LastModified ?? new Date(0) }));
     token = r.IsTruncated ? r.NextContinuationToken : undefined;
   } while (token);
+}
+
+/** Whether the bucket answers (readiness): throws when the store is unreachable or refuses us. */
+export async function storeReachable(timeoutMs = 2_500): Promise<void> {
+  await client().send(new HeadBucketCommand({ Bucket: bucket() }), { abortSignal: AbortSignal.timeout(timeoutMs) });
 }

@@ -82,6 +82,8 @@ export function config(name = profileFromArgs()) {
       TRUSTED_PROXY_HOPS: "0",
       JOBS_SECRET: secretFor(`${name}-jobs`),
       CREDENTIAL_SIGNING_KEY: credentialKeyFor(dir),
+      // bearer secret of /api/metrics and /api/health/ready
+      METRICS_SECRET: secretFor(`${name}-metrics`),
       NEXT_TELEMETRY_DISABLED: "1",
       // sign-off evidence: the local fake S3 server (scripts/s3-fake.mjs); s3rver's fixed key pair
       S3_ENDPOINT: `http://127.0.0.1:${p.s3Port}`,

@@ -1,4 +1,5 @@
 import { ApiError, json, route } from "@/lib/api";
+import { log } from "@/lib/log";
 import { isSignatureError, processPaymentEvent, verifyWebhook } from "@/lib/billing";
 import { env } from "@/lib/env";
 
@@ -19,7 +20,7 @@ export const POST = route("public", async ({ req }) => {
     event = verifyWebhook(raw, req.headers.get("stripe-signature"), env.STRIPE_WEBHOOK_SECRET);
   } catch (err) {
     if (isSignatureError(err) || err instanceof SyntaxError) {
-      console.warn(`[billing] webhook refused: ${err instanceof Error ? err.message.split("\n")[0] : "bad signature"}`);
+      log().warn({ error: err instanceof Error ? err.message.split("\n")[0] : "bad signature" }, "payment webhook refused");
       throw new ApiError(400, "The webhook signature does not match. Nothing was changed.");
     }
     throw err;
