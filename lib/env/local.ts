@@ -25,6 +25,7 @@ type LocalView = {
   STRIPE_API_HOST?: string;
   STRIPE_API_PORT?: number;
   STRIPE_API_PROTOCOL?: "http" | "https";
+  SESSION_CACHE_MAX_AGE_S?: number;
 };
 
 /** Settings that only a local instance may use, each with the reason it is refused elsewhere. */
@@ -38,6 +39,7 @@ export function localOnlyProblems(e: LocalView): { variable: string; message: st
   if (local) return out;
   if (e.MAIL_CATCHER_URL) out.push({ variable: "MAIL_CATCHER_URL", message: "the local mail catcher (and /dev/mail) is for local use only: unset it and send through SMTP_URL" });
   if (e.INSECURE_COOKIES === "1") out.push({ variable: "INSECURE_COOKIES", message: "cookies without Secure are for local use only: serve over https and unset it" });
+  if (e.SESSION_CACHE_MAX_AGE_S !== undefined) out.push({ variable: "SESSION_CACHE_MAX_AGE_S", message: "a shorter session cache is for local tests only: unset it (the session cache is trusted for 60 s)" });
   if (e.STRIPE_API_PROTOCOL === "http") out.push({ variable: "STRIPE_API_PROTOCOL", message: "payment API calls over plain http are for the local fake only: unset STRIPE_API_HOST, STRIPE_API_PORT and STRIPE_API_PROTOCOL" });
   if (e.NODE_ENV === "production" && e.APP_URL === DEFAULT_APP_URL) out.push({ variable: "APP_URL", message: "must be set to the public https:// address of this instance" });
   if (e.NODE_ENV === "production" && !e.APP_URL.startsWith("https://")) out.push({ variable: "APP_URL", message: "must be an https:// address in production" });

@@ -38,6 +38,12 @@ describe("local-only settings", () => {
     expect(localOnlyProblems({ ...bare, APP_URL: "https://training.example.com" })).toEqual([]);
   });
 
+  it("a shorter session cache (the bound test's setting) is refused outside a local instance", () => {
+    const hosted = { NODE_ENV: "production", RISER_LOCAL: "0" as const, INSECURE_COOKIES: "0" as const, APP_URL: "https://training.example.com" };
+    expect(variables({ ...hosted, SESSION_CACHE_MAX_AGE_S: 2 })).toEqual(["SESSION_CACHE_MAX_AGE_S"]);
+    expect(localOnlyProblems({ ...local, SESSION_CACHE_MAX_AGE_S: 2 })).toEqual([]);
+  });
+
   it("knows loopback addresses", () => {
     for (const u of ["http://127.0.0.1:3000", "http://localhost:3000", "http://[::1]:3000", "http://127.9.8.7/"]) expect(isLoopbackUrl(u), u).toBe(true);
     for (const u of ["http://10.0.0.5:3000", "https://127.0.0.1.example.com", "http://0.0.0.0:3000", "not a url"]) expect(isLoopbackUrl(u), u).toBe(false);
