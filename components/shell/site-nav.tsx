@@ -1,21 +1,44 @@
 "use client";
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
-import { useState } from "react";
-import { authClient } from "@/components/auth/auth-client";
+import { useEffect, useState } from "react";
+import { postJson } from "@/lib/fetcher";
 import { isRole } from "@/lib/access/browser";
 import { navFor, signedOutLinks } from "./nav-items";
 
+type NavSession = { user: { name: string; role?: string } } | null;
+
+/**
+ * The header's menu for whoever is signed in. It asks better-auth's session endpoint directly (on
+ * every page change, answered from the signed session copy without a database read) instead of
+ * loading the auth client library into every page's first-load JavaScript.
+ */
 export function SiteNav() {
-  const { data, isPending } = authClient.useSession();
   const pathname = usePathname();
   const router = useRouter();
   const [open, setOpen] = useState(false);
-  const role = (data?.user as { role?: string } | undefined)?.role;
+  const [data, setData] = useState<NavSession>(null);
+  const [isPending, setPending] = useState(true);
+  useEffect(() => {
+    let live = true;
+    fetch("/api/auth/get-session", { cache: "no-store" })
+      .then((r) => (r.ok ? (r.json() as Promise<NavSession>) : null))
+      .catch(() => null)
+      .then((s) => {
+        if (!live) return;
+        setData(s?.user ? s : null);
+        setPending(false);
+      });
+    return () => {
+      live = false;
+    };
+  }, [pathname]);
+  const role = data?.user.role;
   const items = data ? navFor(isRole(role) ? role : "learner") : [];
 
   async function signOut() {
-    await authClient.signOut();
+    await postJson("/api/auth/sign-out", {});
+    setData(null);
     router.push("/");
     router.refresh();
   }
