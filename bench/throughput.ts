@@ -3,6 +3,7 @@
 // after the signed-in paths so that a busy machine moves all of them alike. Signed-in requests
 // carry what a browser holds after sign-in: the session cookie and its signed cache copy (renewed
 // from the Set-Cookie answers when it expires). Writes bench/results/throughput.json.
+import os from "node:os";
 import autocannon from "autocannon";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/db/client";
@@ -45,6 +46,7 @@ const ratio = (r: Run) => +(r.reqPerSec / home).toFixed(2);
 record("throughput", {
   connections: CONNECTIONS,
   seconds: SECONDS,
+  machine: { cpus: os.cpus().length, loadavg: os.loadavg().map((l) => +l.toFixed(2)) },
   baseline: { homeReqPerSec: home, healthReqPerSec: runs.health.reqPerSec },
   runs,
   ratios: { lesson: ratio(runs.lesson), learn: ratio(runs.learn), modules: ratio(runs.modules), certificates: ratio(runs.certificates), search: ratio(runs.search), health: ratio(runs.health) },
