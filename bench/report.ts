@@ -80,6 +80,10 @@ const lh = read("lighthouse");
 if (lh) {
   for (const p of lh.pages as Json[]) {
     const calc = p.kind === "calculator";
+    if (p.error || (p.finalUrl && !String(p.finalUrl).includes(p.path))) {
+      rows.push({ what: `Lighthouse mobile, ${p.path}`, figure: p.error ? "not measured (Lighthouse failed; see lighthouse.json)" : `not measured (ended at ${p.finalUrl})`, target: "—", ratio: "—" });
+      continue;
+    }
     rows.push({
       what: `Lighthouse mobile, ${p.path}`,
       figure: `perf ${p.performance}, LCP ${p.lcpS} s, TBT ${p.tbtMs} ms`,

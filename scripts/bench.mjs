@@ -11,7 +11,7 @@ import { run } from "./lib/proc.mjs";
 import { stack } from "./lib/stack.mjs";
 import { ensureDependencies } from "./lib/steps.mjs";
 
-const ALL = ["throughput", "search", "lesson-js", "quiz-submit", "certificate-pdf", "team-board"];
+const ALL = ["throughput", "search", "lesson-js", "quiz-submit", "certificate-pdf", "team-board", "lighthouse"];
 const wanted = process.argv.slice(2).filter((a) => !a.startsWith("--"));
 const names = (wanted.length ? wanted : ALL).filter((n) => existsSync(path.join(root, "bench", `${n}.ts`)));
 const app = stack({ profile: "test-h", reset: true, stdio: "ignore" });
