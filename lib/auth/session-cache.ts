@@ -15,13 +15,10 @@
  * bundles share one map). Servers that never saw a change agree on version 0, so a copy written by one
  * server is trusted by the others; a server where the person changed misses until its copy is rewritten.
  */
-import { env, isLocalInstance } from "@/lib/env";
+import { env, sessionCacheSeconds } from "@/lib/env";
 
-/** The longest a cached session may be trusted (README "Security model"). */
-export const SESSION_CACHE_MAX_SECONDS = 60;
-
-export const SESSION_CACHE_SECONDS =
-  env.SESSION_CACHE_MAX_AGE_S !== undefined && isLocalInstance(env) ? Math.min(env.SESSION_CACHE_MAX_AGE_S, SESSION_CACHE_MAX_SECONDS) : SESSION_CACHE_MAX_SECONDS;
+/** How long a cached session is trusted here: 60 s (README "Security model"). */
+export const SESSION_CACHE_SECONDS = sessionCacheSeconds(env);
 
 const KEY = Symbol.for("riser.session-cache-versions");
 type Registry = { versions: Map<string, number> };

@@ -25,7 +25,6 @@ type LocalView = {
   STRIPE_API_HOST?: string;
   STRIPE_API_PORT?: number;
   STRIPE_API_PROTOCOL?: "http" | "https";
-  SESSION_CACHE_MAX_AGE_S?: number;
 };
 
 /** Settings that only a local instance may use, each with the reason it is refused elsewhere. */
@@ -39,7 +38,6 @@ export function localOnlyProblems(e: LocalView): { variable: string; message: st
   if (local) return out;
   if (e.MAIL_CATCHER_URL) out.push({ variable: "MAIL_CATCHER_URL", message: "the local mail catcher (and /dev/mail) is for local use only: unset it and send through SMTP_URL" });
   if (e.INSECURE_COOKIES === "1") out.push({ variable: "INSECURE_COOKIES", message: "cookies without Secure are for local use only: serve over https and unset it" });
-  if (e.SESSION_CACHE_MAX_AGE_S !== undefined) out.push({ variable: "SESSION_CACHE_MAX_AGE_S", message: "a shorter session cache is for local tests only: unset it (the session cache is trusted for 60 s)" });
   if (e.STRIPE_API_PROTOCOL === "http") out.push({ variable: "STRIPE_API_PROTOCOL", message: "payment API calls over plain http are for the local fake only: unset STRIPE_API_HOST, STRIPE_API_PORT and STRIPE_API_PROTOCOL" });
   if (e.NODE_ENV === "production" && e.APP_URL === DEFAULT_APP_URL) out.push({ variable: "APP_URL", message: "must be set to the public https:// address of this instance" });
   if (e.NODE_ENV === "production" && !e.APP_URL.startsWith("https://")) out.push({ variable: "APP_URL", message: "must be an https:// address in production" });
@@ -48,4 +46,16 @@ export function localOnlyProblems(e: LocalView): { variable: string; message: st
 
 /** True on a developer's machine or a test run: RISER_LOCAL=1 and a loopback APP_URL. */
 export const isLocalInstance = (e: { RISER_LOCAL: "0" | "1"; APP_URL: string }) => e.RISER_LOCAL === "1" && isLoopbackUrl(e.APP_URL);
+
+/** The longest a signed session copy is trusted anywhere (lib/auth/session-cache.ts). */
+export const SESSION_CACHE_MAX_SECONDS = 60;
+
+/**
+ * Seconds a signed session copy is trusted: 60, or a shorter SESSION_CACHE_MAX_AGE_S on a local
+ * instance only (the bound test); anywhere else the variable is ignored.
+ */
+export function sessionCacheSeconds(e: { RISER_LOCAL: "0" | "1"; APP_URL: string; SESSION_CACHE_MAX_AGE_S?: number }): number {
+  const asked = e.SESSION_CACHE_MAX_AGE_S;
+  return asked !== undefined && isLocalInstance(e) ? Math.min(Math.max(1, asked), SESSION_CACHE_MAX_SECONDS) : SESSION_CACHE_MAX_SECONDS;
+}
 
