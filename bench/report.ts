@@ -18,7 +18,7 @@ const rows: Row[] = [];
 /** Marks figures that come from an earlier run than the baselines (a bench run for some names only). */
 const runAt = (r: Json | null) => (r ? Date.parse(r.at ?? r.date) : NaN);
 const older = (r: Json | null) => (tp && r && runAt(tp) - runAt(r) > 3_600_000 ? ` (earlier run, ${String(r.at ?? r.date).slice(0, 10)})` : "");
-const rps = (r: Json) => `${r.reqPerSec} req/s, p50 ${r.p50} ms, p99 ${r.p99} ms${r.non2xx ? `, ${r.non2xx} non-2xx` : ""}`;
+const rps = (r: Json) => `${r.reqPerSec} req/s, p50 ${r.p50} ms, p99 ${r.p99} ms${r.non2xx ? `, ${r.non2xx} non-2xx` : ""}${r.errors ? `, ${r.errors} unanswered within 10 s` : ""}`;
 
 if (tp) {
   const r = tp.runs;
@@ -30,6 +30,13 @@ if (tp) {
   paged("`/modules`, signed in", r.modules, 0.4);
   paged("`/certificates`, signed in", r.certificates, 0.4);
   paged("`/api/search?q=antifreeze`, signed in", r.search, 0.8);
+}
+// SQL statements per request (MariaDB general log; machine load does not move these)
+const st = read("statements");
+if (st) {
+  for (const [what, m] of Object.entries(st.perRequest as Record<string, Json>)) {
+    rows.push({ what: `SQL statements per request: ${what}`, figure: `${m.after} (before ${m.before})`, target: "no session read; one statement per data need", met: m.after < m.before, ratio: "—" });
+  }
 }
 const quiz = read("quiz-submit");
 if (quiz) {
