@@ -53,7 +53,9 @@ export class Jar {
   /** What a browser holds after its first signed-in page: asks the app once. */
   static async signedIn(cookie: string): Promise<Jar> {
     const jar = new Jar(cookie);
-    const r = await fetch(`${APP}/api/auth/get-session`, { headers: { cookie } });
+    // once more on a dropped connection: a kept-alive one may have been closed during a long pause
+    const ask = () => fetch(`${APP}/api/auth/get-session`, { headers: { cookie } });
+    const r = await ask().catch(ask);
     jar.update(r);
     await r.arrayBuffer();
     return jar;
