@@ -9,7 +9,8 @@ import { applySecurityHeaders } from "@/lib/security-headers.mjs";
  * clear page or JSON (a TCP probe, remembered for one second); (2) statically generated lesson
  * pages get their session checked here, since the page itself holds no per-person data; (3) the
  * client address is worked out once (lib/client-ip) and handed to better-auth; (4) every request gets
- * a request id (lib/request-id), on the request for the handlers' logs and on the response.
+ * a request id (lib/request-id), on the request for the handlers' logs and on the response; (5) a
+ * signed-in request's cached session copy is renewed when it has expired.
  * Every dynamic page, action and route handler checks access again where the data is (lib/access).
  */
 let lastProbe = { at: 0, up: true };
@@ -69,10 +70,13 @@ export async function proxy(req: NextRequest) {
     answer.set("content-type", "text/html; charset=utf-8");
     return new NextResponse(outagePage, { status: 503, headers: answer });
   }
+  // A signed-in request: the session is checked from its signed cookie copy (lib/auth/session-cache.ts,
+  // no database round trip); an expired copy is read again from the database and renewed here, for
+  // the route below (request cookie) and for the browser (Set-Cookie).
+  const signedIn = !pathname.startsWith("/api/auth/") && SESSION_COOKIE.test(req.headers.get("cookie") ?? "");
+  const checked = signedIn ? await checkSession(req.headers) : { session: null, setCookies: [] };
   if (/^\/modules\/[^/]+\/[^/]+$/.test(pathname) && !pathname.endsWith("/quiz")) {
-    const { auth } = await import("@/lib/auth");
-    const session = await auth.api.getSession({ headers: req.headers }).catch(() => null);
-    if (!session || (session.user as { banned?: boolean }).banned) {
+    if (!checked.session || (checked.session.user as { banned?: boolean }).banned) {
       const url = req.nextUrl.clone();
       url.pathname = "/sign-in";
       url.search = `?next=${encodeURIComponent(pathname)}`;
@@ -84,9 +88,38 @@ export async function proxy(req: NextRequest) {
   // better-auth reads the client address from this header (lib/auth): set here from the real peer
   // and the trusted proxies only, overwriting whatever the client sent under that name.
   headers.set(CLIENT_IP_HEADER, clientIpOf(req.headers));
+  if (checked.setCookies.length) headers.set("cookie", withCookies(req.headers.get("cookie") ?? "", checked.setCookies));
   const res = NextResponse.next({ request: { headers } });
   res.headers.set(REQUEST_ID_HEADER, requestId);
+  for (const c of checked.setCookies) res.headers.append("set-cookie", c);
   return res;
+}
+
+const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_token=/;
+
+async function checkSession(requestHeaders: Headers) {
+  const { auth } = await import("@/lib/auth");
+  const r = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true }).catch(() => null);
+  return { session: r?.response ?? null, setCookies: r?.headers.getSetCookie() ?? [] };
+}
+
+/** The request's Cookie header with the cookies just set (or expired) applied. */
+function withCookies(cookieHeader: string, setCookies: string[]): string {
+  const jar = new Map<string, string>();
+  for (const part of cookieHeader.split(";")) {
+    const i = part.indexOf("=");
+    if (i > 0) jar.set(part.slice(0, i).trim(), part.slice(i + 1).trim());
+  }
+  for (const c of setCookies) {
+    const [pair = "", ...attrs] = c.split(";");
+    const i = pair.indexOf("=");
+    if (i <= 0) continue;
+    const name = pair.slice(0, i).trim();
+    const value = pair.slice(i + 1).trim();
+    if (!value || attrs.some((a) => /^\s*max-age\s*=\s*0\s*$/i.test(a))) jar.delete(name);
+    else jar.set(name, value);
+  }
+  return [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
 }
 
 export const config = {

@@ -1,5 +1,6 @@
 // First-load JavaScript of a lesson page: the script files the HTML references, with their sizes
-// as served (uncompressed and gzip).
+// as served (uncompressed and gzip). Scripts marked `nomodule` (the legacy polyfills) are listed
+// apart: browsers that run modules — every browser Riser supports — never download them.
 import { gzipSync } from "node:zlib";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/db/client";
@@ -13,7 +14,11 @@ const pages = ["/modules/hydraulics-and-permits/flow-pressure-and-k-factor", "/m
 const out: Record<string, unknown> = {};
 for (const p of pages) {
   const html = await (await fetch(`${APP}${p}`, { headers: { cookie } })).text();
-  const srcs = [...new Set([...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]!))];
+  const tags = [...html.matchAll(/<script[^>]+src="([^"]+)"[^>]*>/g)];
+  const srcs = [...new Set(tags.filter((m) => !/nomodule/i.test(m[0])).map((m) => m[1]!))];
+  const legacy = [...new Set(tags.filter((m) => /nomodule/i.test(m[0])).map((m) => m[1]!))];
+  let legacyGz = 0;
+  for (const s of legacy) legacyGz += gzipSync(Buffer.from(await (await fetch(new URL(s, APP))).arrayBuffer())).length;
   let raw = 0;
   let gz = 0;
   for (const s of srcs) {
@@ -21,7 +26,7 @@ for (const p of pages) {
     raw += buf.length;
     gz += gzipSync(buf).length;
   }
-  out[p] = { scripts: srcs.length, kB: +(raw / 1024).toFixed(1), gzipKB: +(gz / 1024).toFixed(1), htmlKB: +(Buffer.byteLength(html) / 1024).toFixed(1) };
+  out[p] = { scripts: srcs.length, kB: +(raw / 1024).toFixed(1), gzipKB: +(gz / 1024).toFixed(1), htmlKB: +(Buffer.byteLength(html) / 1024).toFixed(1), nomoduleGzipKB: +(legacyGz / 1024).toFixed(1) };
 }
 await pool.end();
 record("lesson-js", { pages: out });

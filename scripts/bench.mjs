@@ -1,7 +1,9 @@
 #!/usr/bin/env node
 // npm run bench [-- name …]: runs the benchmarks in bench/ against a production build on its own
 // profile (test-h: own MariaDB, ports and build folder), writes bench/results/<name>.json.
-// Figures go in the README's performance section by hand; timings never go in tests.
+// Then bench/report.ts prints one table (each figure, its target, the same-run baselines and the
+// ratio), writes bench/results/summary.md and regenerates the README's performance table.
+// Timings never go in tests.
 import { existsSync } from "node:fs";
 import path from "node:path";
 import { root } from "./lib/config.mjs";
@@ -9,7 +11,7 @@ import { run } from "./lib/proc.mjs";
 import { stack } from "./lib/stack.mjs";
 import { ensureDependencies } from "./lib/steps.mjs";
 
-const ALL = ["search", "lesson-js", "quiz-submit", "certificate-pdf", "team-board"];
+const ALL = ["throughput", "search", "lesson-js", "quiz-submit", "certificate-pdf", "team-board", "lighthouse"];
 const wanted = process.argv.slice(2).filter((a) => !a.startsWith("--"));
 const names = (wanted.length ? wanted : ALL).filter((n) => existsSync(path.join(root, "bench", `${n}.ts`)));
 const app = stack({ profile: "test-h", reset: true, stdio: "ignore" });
@@ -23,6 +25,7 @@ try {
     console.log(`\n=== bench: ${n} ===`);
     run(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", `bench/${n}.ts`], { cwd: root, env: app.env });
   }
+  run(path.join(root, "node_modules/.bin/tsx"), ["bench/report.ts"], { cwd: root, env: app.env });
 } finally {
   await app.stop();
 }

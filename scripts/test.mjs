@@ -17,6 +17,9 @@ const app = stack({
   profile: process.argv.find((a) => a.startsWith("--profile="))?.split("=")[1] ?? "test",
   reset: true,
   stdio: "inherit",
+  // the session cookie copy is trusted for 3 s instead of 60 (local instances only, lib/env), so
+  // that tests/integration/session-cache.test.ts can prove the bound in seconds
+  extraEnv: { SESSION_CACHE_MAX_AGE_S: "3" },
 });
 const { env } = app;
 const t0 = Date.now();

@@ -1,19 +1,41 @@
 "use client";
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
-import { useState } from "react";
-import { authClient } from "@/components/auth/auth-client";
+import { useEffect, useState } from "react";
 import { OfflineSync } from "@/components/offline/offline-sync";
+import { postJson } from "@/lib/fetcher";
 import { isRole } from "@/lib/access/browser";
 import { flushQueue, forgetEverything, listQueue, offlineSupported } from "@/lib/offline/browser";
 import { navFor, signedOutLinks } from "./nav-items";
 
+type NavSession = { user: { id: string; name: string; role?: string } } | null;
+
+/**
+ * The header's menu for whoever is signed in. It asks better-auth's session endpoint directly (on
+ * every page change, answered from the signed session copy without a database read) instead of
+ * loading the auth client library into every page's first-load JavaScript.
+ */
 export function SiteNav() {
-  const { data, isPending } = authClient.useSession();
   const pathname = usePathname();
   const router = useRouter();
   const [open, setOpen] = useState(false);
-  const role = (data?.user as { role?: string } | undefined)?.role;
+  const [data, setData] = useState<NavSession>(null);
+  const [isPending, setPending] = useState(true);
+  useEffect(() => {
+    let live = true;
+    fetch("/api/auth/get-session", { cache: "no-store" })
+      .then((r) => (r.ok ? (r.json() as Promise<NavSession>) : null))
+      .catch(() => null)
+      .then((s) => {
+        if (!live) return;
+        setData(s?.user ? s : null);
+        setPending(false);
+      });
+    return () => {
+      live = false;
+    };
+  }, [pathname]);
+  const role = data?.user.role;
   const items = data ? navFor(isRole(role) ? role : "learner") : [];
 
   async function signOut() {
@@ -25,7 +47,8 @@ export function SiteNav() {
       if (left.length && !window.confirm(`${left.length} lesson mark${left.length === 1 ? " has" : "s have"} not reached Riser yet and will be deleted from this phone. Sign out anyway?`)) return;
       await forgetEverything();
     }
-    await authClient.signOut();
+    await postJson("/api/auth/sign-out", {});
+    setData(null);
     router.push("/");
     router.refresh();
   }

@@ -6,6 +6,7 @@ import { organization, session, team, user } from "@/db/schema";
 import type { Role, Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
+import { forgetCachedSessions } from "@/lib/auth";
 import { containing, iso, offsetOf, ordered } from "./paging";
 import type { Paged, peopleQuery } from "./schemas";
 
@@ -106,6 +107,8 @@ async function auditedChange(entry: Parameters<typeof audit>[0], change: (tx: Tx
     await change(tx);
     await audit(entry, tx);
   });
+  // every change here is to a person (role, ban, sessions): their cached sessions stop at once
+  if (entry.targetType === "user" && entry.targetId) forgetCachedSessions(entry.targetId);
 }
 
 export async function changeRole(actor: Actor, personId: string, role: Role, reason: string, ctx: RequestContext): Promise<void> {
@@ -143,6 +146,7 @@ export async function moveOrganization(actor: Actor, personId: string, organizat
       tx,
     );
   });
+  forgetCachedSessions(person.id);
 }
 
 export async function banPerson(actor: Actor, personId: string, reason: string, days: number | null, ctx: RequestContext): Promise<void> {

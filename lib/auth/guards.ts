@@ -4,6 +4,7 @@ import { APIError, getSessionFromCtx } from "better-auth/api";
 import { db } from "@/db/client";
 import { session } from "@/db/schema";
 import { passwordProblem } from "./password-policy";
+import { forgetCachedSessions } from "./session-cache";
 
 /**
  * Checks better-auth's own endpoints do not make (run from the before hook in lib/auth/index.ts):
@@ -47,6 +48,7 @@ export async function assertEmailChangeAllowed(ctx: HookCtx): Promise<void> {
   if (!ok) throw new APIError("BAD_REQUEST", { message: "The current password is not right.", code: "INVALID_PASSWORD" });
   // whoever else holds a session for this account is signed out before the address can move
   await db.delete(session).where(and(eq(session.userId, current.user.id), ne(session.token, current.session.token)));
+  forgetCachedSessions(current.user.id);
 }
 
 /** New passwords (sign-up, reset, change) are checked against the blocklist (lib/auth/password-policy.ts). */

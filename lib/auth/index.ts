@@ -16,6 +16,7 @@ import { assertEmailChangeAllowed, assertFieldLengths, assertPasswordAllowed } f
 import { MIN_PASSWORD_LENGTH } from "./password-policy";
 import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
+import { SESSION_CACHE_SECONDS, cachedSessionVersion, forgetCachedSessions } from "./session-cache";
 
 const signInEmailOf = (body: unknown) => {
   const email = (body as { email?: unknown } | undefined)?.email;
@@ -95,7 +96,12 @@ export const auth = betterAuth({
       teamId: { type: "string", required: false, input: false },
     },
   },
-  session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
+  session: {
+    expiresIn: 60 * 60 * 24 * 7,
+    updateAge: 60 * 60 * 24,
+    // a signed copy of the session in a cookie, trusted for at most 60 s (lib/auth/session-cache.ts)
+    cookieCache: { enabled: true, strategy: "compact", maxAge: SESSION_CACHE_SECONDS, version: (_session, u) => cachedSessionVersion(u?.id) },
+  },
   rateLimit: {
     enabled: true,
     storage: "database",
@@ -159,8 +165,11 @@ export const auth = betterAuth({
       // every name change (account settings, admin tools) passes the same rule as sign-up
       update: {
         before: async (data) => ("name" in data && data.name !== undefined ? { data: { ...data, name: checkedName(data.name) } } : { data }),
+        after: async (u) => forgetCachedSessions(u.id),
       },
     },
+    // sign-out, revoked sessions, password changes and resets: cached copies stop at once here
+    session: { delete: { after: async (s) => forgetCachedSessions(s.userId) } },
   },
   plugins: [admin({ defaultRole: "learner", adminRoles: ["admin"], bannedUserMessage: "This account is banned from Riser. If you think this is a mistake, ask your training manager." }), nextCookies()],
 });
@@ -176,3 +185,4 @@ function checkedName(name: unknown): string {
 export * from "./schemas";
 export * from "./signup";
 export * from "./signup-context";
+export { forgetCachedSessions, SESSION_CACHE_SECONDS } from "./session-cache";

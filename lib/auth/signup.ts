@@ -5,6 +5,7 @@ import { db } from "@/db/client";
 import { account, organization, session, signupIntent, user, verification } from "@/db/schema";
 import { hitRateLimit } from "@/lib/rate-limit";
 import { env } from "@/lib/env";
+import { forgetCachedSessions } from "./session-cache";
 
 /**
  * Sign-up protection (lib/accounts.ts and app/api/account/sign-up use these):
@@ -107,6 +108,7 @@ export async function afterEmailVerified(verified: { id: string; email: string }
     await tx.delete(signupIntent).where(eq(signupIntent.userId, verified.id));
     await tx.insert(verification).values({ id: randomUUID(), identifier: `reset-password:${token}`, value: verified.id, expiresAt: new Date(Date.now() + 3_600_000) });
   });
+  forgetCachedSessions(verified.id);
   choosePassword.set(verified.email.toLowerCase(), token);
 }
 

@@ -6,7 +6,7 @@ import { z } from "zod";
 import { credentialKeyProblems } from "./credential-key";
 import { DEFAULT_APP_URL, isLocalInstance, localOnlyProblems } from "./local";
 
-export { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "./local";
+export { isLocalInstance, isLoopbackUrl, localOnlyProblems, sessionCacheSeconds } from "./local";
 
 /** An empty variable (`FOO=`) counts as not set. */
 const emptyAsUnset = <T extends z.ZodType>(inner: T) => z.preprocess((v) => (v === "" ? undefined : v), inner);
@@ -45,6 +45,11 @@ const schema = z.object({
   /** public certificate look-ups (page + JSON) allowed per client address per window */
   VERIFY_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(30),
   VERIFY_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),
+  /**
+   * Local use only (tests): seconds a signed session cookie copy is trusted, 1-60, instead of 60
+   * (lib/auth/session-cache.ts). Ignored outside a local instance.
+   */
+  SESSION_CACHE_MAX_AGE_S: emptyAsUnset(z.coerce.number().int().min(1).max(60).optional()),
   /** "1" when the instance serves over plain http on loopback (local use): cookies without Secure. */
   INSECURE_COOKIES: z.enum(["0", "1"]).default("0"),
   /**

@@ -47,3 +47,15 @@ export function localOnlyProblems(e: LocalView): { variable: string; message: st
 /** True on a developer's machine or a test run: RISER_LOCAL=1 and a loopback APP_URL. */
 export const isLocalInstance = (e: { RISER_LOCAL: "0" | "1"; APP_URL: string }) => e.RISER_LOCAL === "1" && isLoopbackUrl(e.APP_URL);
 
+/** The longest a signed session copy is trusted anywhere (lib/auth/session-cache.ts). */
+export const SESSION_CACHE_MAX_SECONDS = 60;
+
+/**
+ * Seconds a signed session copy is trusted: 60, or a shorter SESSION_CACHE_MAX_AGE_S on a local
+ * instance only (the bound test); anywhere else the variable is ignored.
+ */
+export function sessionCacheSeconds(e: { RISER_LOCAL: "0" | "1"; APP_URL: string; SESSION_CACHE_MAX_AGE_S?: number }): number {
+  const asked = e.SESSION_CACHE_MAX_AGE_S;
+  return asked !== undefined && isLocalInstance(e) ? Math.min(Math.max(1, asked), SESSION_CACHE_MAX_SECONDS) : SESSION_CACHE_MAX_SECONDS;
+}
+

@@ -24,11 +24,30 @@ async function findLesson(moduleSlug: string, lessonSlug: string) {
   return lesson ?? null;
 }
 
+/**
+ * Lesson ids by slug for the page's first-open stamp, kept for a minute per process (catalog rows
+ * change only at a content sync), and the (person, lesson) pairs this process has already stamped:
+ * the stamp is the first open and is never moved or removed, so a repeat view needs no statement.
+ */
+const LESSON_IDS_TTL_MS = 60_000;
+const lessonIds = new Map<string, { id: number | null; at: number }>();
+const stamped = new Set<string>();
+const STAMPED_MAX = 200_000;
+
 /** The server's stamp of the person's first open of a lesson (called when the lesson page renders). */
 export async function recordLessonOpen(userId: string, moduleSlug: string, lessonSlug: string): Promise<void> {
-  const lesson = await findLesson(moduleSlug, lessonSlug);
-  if (!lesson) return;
-  await db.insert(lessonOpen).ignore().values({ userId, lessonId: lesson.id, firstOpenedAt: new Date() });
+  const key = `${moduleSlug}/${lessonSlug}`;
+  let known = lessonIds.get(key);
+  if (!known || Date.now() - known.at > LESSON_IDS_TTL_MS) {
+    known = { id: (await findLesson(moduleSlug, lessonSlug))?.id ?? null, at: Date.now() };
+    lessonIds.set(key, known);
+  }
+  if (known.id === null) return;
+  const pair = `${userId} ${known.id}`;
+  if (stamped.has(pair)) return;
+  await db.insert(lessonOpen).ignore().values({ userId, lessonId: known.id, firstOpenedAt: new Date() });
+  if (stamped.size >= STAMPED_MAX) stamped.clear();
+  stamped.add(pair);
 }
 
 /**

@@ -122,13 +122,17 @@ async function gradeLocked(tx: Tx, a: AttemptRow, late: boolean, loaded?: ItemRo
   const items = loaded ?? (await loadItems(a.id, tx));
   if (a.status === "graded") return { row: a, items };
   const marked = items.map((i) => ({ ...i, correct: gradeItem({ question: i.body, params: i.params }, (i.answer ?? null) as Answer) }));
-  if (marked.length) {
-    const cases = sql.join(marked.map((i) => sql`WHEN ${i.position} THEN ${i.correct ? 1 : 0}`), sql` `);
-    await tx.execute(sql`UPDATE quiz_attempt_item SET correct = CASE position ${cases} END WHERE attempt_id = ${a.id}`);
-  }
   const s = score(marked.filter((i) => i.correct).length, marked.length);
   const graded = { status: "graded", score: s, passed: s >= a.passMark, submittedAt: new Date(), lateGraded: late };
-  await tx.update(quizAttempt).set(graded).where(eq(quizAttempt.id, a.id));
+  if (marked.length) {
+    // the items and the attempt in one statement (one round trip inside the lock)
+    const cases = sql.join(marked.map((i) => sql`WHEN ${i.position} THEN ${i.correct ? 1 : 0}`), sql` `);
+    await tx.execute(
+      sql`UPDATE quiz_attempt a JOIN quiz_attempt_item i ON i.attempt_id = a.id SET i.correct = CASE i.position ${cases} END, a.status = ${graded.status}, a.score = ${graded.score}, a.passed = ${graded.passed}, a.submitted_at = ${graded.submittedAt}, a.late_graded = ${graded.lateGraded} WHERE a.id = ${a.id}`,
+    );
+  } else {
+    await tx.update(quizAttempt).set(graded).where(eq(quizAttempt.id, a.id));
+  }
   return { row: { ...a, ...graded, submittedAt: new Date(Math.floor(graded.submittedAt.getTime())) }, items: marked };
 }
 
@@ -291,8 +295,11 @@ export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: An
   }
   const completion = graded?.row.passed ? await completeAfterGrading(viewer.id, graded.row.moduleSlug) : null;
   if (refusedLate) throw new DomainError("conflict", "Time is up: the attempt was graded with the answers saved before the limit. See your results.");
-  // Every response, first or repeated, is built from the stored rows so that all are identical.
-  const view = await viewAttempt(viewer, id);
+  // A repeat reads the stored rows; the first grading answers from the rows it has just written
+  // (the same values, so every response is identical) instead of reading them again.
+  const view = graded
+    ? resultView(graded.row, graded.items, graded.row.passed === true || (await attemptsLeft(graded.row.userId, graded.row.moduleSlug)) === 0)
+    : await viewAttempt(viewer, id);
   return completion === "pending" ? { ...view, completionPending: COMPLETION_PENDING } : view;
 }
 

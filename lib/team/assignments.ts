@@ -146,7 +146,9 @@ export async function assignedWork(person: Person, now = new Date()): Promise<{ 
       ),
     )
     .orderBy(asc(assignment.dueAt), asc(assignment.id));
-  const [row] = await rowsFor([person], now);
+  // the person's direct and team assignments just read are all the board rule needs for them
+  const known = rows.map((a) => ({ kind: a.kind, target_slug: a.targetSlug, user_id: a.userId, team_id: a.teamId, due_at: a.dueAt }));
+  const [row] = await rowsFor([person], now, undefined, known);
   const cells = row?.cells ?? {};
   const items = rows.map((a): AssignedItem => {
     const mods = itemModules(a.kind, a.targetSlug);

@@ -73,6 +73,7 @@ export async function rows<T>(query: SQL): Promise<T[]> {
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 const date = (v: unknown): Date | null => (v === null || v === undefined ? null : v instanceof Date ? v : new Date(String(v)));
 
+export type AssignmentFact = { kind: string; target_slug: string; user_id: string | null; team_id: string | null; due_at: unknown };
 type ModuleInfo = { slug: string; title: string; lessons: number; validityMonths: number };
 
 /** Modules on the board, in teaching order (optionally one). */
@@ -159,7 +160,7 @@ FROM user u LEFT JOIN team t ON t.id = u.team_id WHERE ${peopleWhere(f)} ${order
  * it); a whole-organization scope reads them by that column. Lesson counts only tell "in
  * progress" from "not started", so a scope-wide aggregate that needs neither skips them.
  */
-async function factsFor(people: Person[], f: PeopleFilter, only?: string, lessons = true): Promise<Map<string, Map<string, CellFacts>>> {
+async function factsFor(people: Person[], f: PeopleFilter, only?: string, lessons = true, known?: AssignmentFact[]): Promise<Map<string, Map<string, CellFacts>>> {
   const out = new Map<string, Map<string, CellFacts>>();
   if (people.length === 0) return out;
   const orgOf = new Map(people.map((p) => [p.id, p.organizationId]));
@@ -184,12 +185,14 @@ SELECT c.user_id, c.module_slug, c.completed_at FROM module_completion c WHERE $
     rows<{ user_id: string; organization_id: string | null; subject_slug: string; expires_at: unknown; revoked_at: unknown }>(sql`
 SELECT c.user_id, c.organization_id, c.subject_slug, c.expires_at, c.revoked_at FROM certificate c
 WHERE ${earned(sql`c.organization_id`, sql`c.user_id`)} AND c.kind = 'module' ${mod(sql`c.subject_slug`)}`),
-    rows<{ kind: string; target_slug: string; user_id: string | null; team_id: string | null; due_at: unknown }>(sql`
+    known
+      ? Promise.resolve(known)
+      : rows<AssignmentFact>(sql`
 SELECT a.kind, a.target_slug, a.user_id, a.team_id, a.due_at FROM assignment a
 WHERE a.organization_id IN (${sql.join(
-      orgIds.map((id) => sql`${id}`),
-      sql`, `,
-    )})`),
+          orgIds.map((id) => sql`${id}`),
+          sql`, `,
+        )})`),
     lessons
       ? rows<{ id: number; slug: string }>(sql`SELECT cl.id, cm.slug FROM catalog_lesson cl JOIN catalog_module cm ON cm.id = cl.module_id WHERE cl.retired_at IS NULL`)
       : Promise.resolve([]),
@@ -298,9 +301,10 @@ export async function passedModules(people: Person[], now = new Date()): Promise
 }
 
 /** Board rows (cells and summary) for an explicit list of people. */
-export async function rowsFor(people: Person[], now = new Date(), only?: string): Promise<BoardRow[]> {
+/** `known`: the people's assignments when the caller has already read them (one query saved). */
+export async function rowsFor(people: Person[], now = new Date(), only?: string, known?: AssignmentFact[]): Promise<BoardRow[]> {
   const modules = boardModules(only);
-  const facts = await factsFor(people, { ids: people.map((p) => p.id) }, only);
+  const facts = await factsFor(people, { ids: people.map((p) => p.id) }, only, true, known);
   return people.map((p) => toRow(p, toCells(facts.get(p.id), modules, now)));
 }
 

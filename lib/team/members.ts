@@ -5,6 +5,7 @@ import { assignment, session, team, user } from "@/db/schema";
 import { canManageOrganization, type Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
+import { forgetCachedSessions } from "@/lib/auth";
 import type { InviteRole } from "./schemas";
 
 /**
@@ -61,6 +62,7 @@ export async function updatePerson(viewer: Viewer, personId: string, input: { te
       tx,
     );
   });
+  forgetCachedSessions(p.id);
   return { changed: true, person: { ...p, ...changes } };
 }
 
@@ -82,5 +84,6 @@ export async function removePerson(viewer: Viewer, personId: string, ip: string)
       tx,
     );
   });
+  forgetCachedSessions(p.id);
   return { removed: true, name: p.name, email: p.email };
 }

@@ -1,9 +1,12 @@
 // Scale data for the team board benchmark (bench/team-board.ts): one invented organization with
-// 5,000 learners in 20 teams, lesson progress, graded attempts, completions and certificates across
+// 5,000 learners in 20 teams (or --learners=50000 --teams=200), lesson progress, graded attempts, completions and certificates across
 // every module, and team assignments with due dates. Fast: multi-row inserts, one password hash.
 //
 //   node_modules/.bin/tsx scripts/seed/seed-scale.ts --profile=test-b      (or with DATABASE_URL set)
 //   … --replace    removes an earlier scale organization first; --remove only removes it
+//
+// Local profiles only, like the demo seed: its people share the published demo password, so it
+// refuses a DATABASE_URL unless RISER_LOCAL=1 on a loopback APP_URL.
 //
 // Needs the catalog synced (run the normal seed first). Plain mysql2, no app modules, so it runs
 // without the react-server condition.
@@ -16,11 +19,18 @@ import { prng } from "@/lib/quiz/browser";
 export const SCALE_ORG = "Tamsett Ridge Sprinklers";
 export const SCALE_MANAGER = { name: "Corra Vellum", email: "corra@tamsett-ridge.example" };
 const LEARNERS = Number(process.argv.find((a) => a.startsWith("--learners="))?.split("=")[1] ?? 5000);
-const TEAMS = 20;
+const TEAMS = Number(process.argv.find((a) => a.startsWith("--teams="))?.split("=")[1] ?? 20);
 const DAY = 86_400_000;
 
 async function databaseUrl(): Promise<string> {
-  if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
+  if (process.env.DATABASE_URL) {
+    // loaded here: the environment check needs the app's variables, which a profile run sets
+    const { isLocalInstance } = await import("@/lib/env");
+    if (!isLocalInstance({ RISER_LOCAL: process.env.RISER_LOCAL === "1" ? "1" : "0", APP_URL: process.env.APP_URL ?? "" })) {
+      throw new Error("Refused: scale data (people with the published demo password) loads only on a local profile (RISER_LOCAL=1 and a loopback APP_URL).");
+    }
+    return process.env.DATABASE_URL;
+  }
   const { config } = await import("../lib/config.mjs");
   return config().env.DATABASE_URL as string;
 }
@@ -82,7 +92,7 @@ async function main() {
     for (let t = 1; t <= TEAMS; t++) {
       const id = randomUUID();
       teamIds.push(id);
-      teamRows.push([id, orgId, `Crew ${String(t).padStart(2, "0")}`]);
+      teamRows.push([id, orgId, `Crew ${String(t).padStart(TEAMS > 99 ? 3 : 2, "0")}`]);
     }
     await insertMany(conn, "team", ["id", "organization_id", "name"], teamRows);
 

@@ -1,7 +1,7 @@
 // Local conveniences (mail catcher and /dev/mail, cookies without Secure, the payment fake over http,
 // the default address) are refused unless the instance is local: RISER_LOCAL=1 on a loopback APP_URL.
 import { describe, expect, it } from "vitest";
-import { isLocalInstance, isLoopbackUrl, localOnlyProblems } from "@/lib/env/local";
+import { isLocalInstance, isLoopbackUrl, localOnlyProblems, sessionCacheSeconds } from "@/lib/env/local";
 
 const local = {
   NODE_ENV: "production",
@@ -36,6 +36,15 @@ describe("local-only settings", () => {
     expect(localOnlyProblems({ ...bare, APP_URL: "http://127.0.0.1:3000" }).map((p) => p.message).join(" ")).toMatch(/public https:\/\/ address/);
     expect(variables({ ...bare, APP_URL: "http://training.example.com" })).toEqual(["APP_URL"]);
     expect(localOnlyProblems({ ...bare, APP_URL: "https://training.example.com" })).toEqual([]);
+  });
+
+  it("a shorter session cache (the bound test's setting) is honoured on a local instance only, never above 60 s", () => {
+    const hosted = { RISER_LOCAL: "0" as const, APP_URL: "https://training.example.com" };
+    expect(sessionCacheSeconds({ ...hosted, SESSION_CACHE_MAX_AGE_S: 2 })).toBe(60);
+    expect(sessionCacheSeconds({ ...hosted, RISER_LOCAL: "1", SESSION_CACHE_MAX_AGE_S: 2 })).toBe(60); // RISER_LOCAL off loopback unlocks nothing
+    expect(sessionCacheSeconds(hosted)).toBe(60);
+    expect(sessionCacheSeconds({ ...local, SESSION_CACHE_MAX_AGE_S: 2 })).toBe(2);
+    expect(sessionCacheSeconds({ ...local, SESSION_CACHE_MAX_AGE_S: 600 })).toBe(60);
   });
 
   it("knows loopback addresses", () => {

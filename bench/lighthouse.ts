@@ -1,0 +1,54 @@
+// Lighthouse 12.2.3 (pinned; runs on Node 20) with Debian's chromium, mobile emulation (its
+// default), performance only, signed in as a demo learner: a lesson page, /learn and the
+// system-demand calculator. Writes bench/results/lighthouse.json. A page that Lighthouse cannot
+// measure is recorded with its error rather than stopping the other benches.
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { eq } from "drizzle-orm";
+import { db, pool } from "@/db/client";
+import { user } from "@/db/schema";
+import { demoByRole } from "@/db/demo";
+import { APP, Jar, record, sessionCookie } from "./lib";
+
+const PAGES = [
+  { path: "/modules/freeze-protection/where-homes-freeze", kind: "lesson" },
+  { path: "/learn", kind: "learner" },
+  { path: "/tools/system-demand", kind: "calculator" },
+];
+
+const [learner] = await db.select({ id: user.id }).from(user).where(eq(user.email, demoByRole("learner").email));
+const tokenCookie = await sessionCookie(learner!.id);
+await pool.end();
+const dir = mkdtempSync(path.join(tmpdir(), "riser-lh-"));
+const chrome = process.env.CHROME_PATH ?? "/usr/bin/chromium";
+
+const pages = [];
+for (const p of PAGES) {
+  // a fresh cache copy for each page (it is trusted for 60 s; one Lighthouse run can take longer)
+  const headersFile = path.join(dir, "headers.json");
+  writeFileSync(headersFile, JSON.stringify({ cookie: (await Jar.signedIn(tokenCookie)).header }));
+  const out = path.join(dir, `${p.kind}.json`);
+  const r = spawnSync(
+    "npx",
+    ["-y", "lighthouse@12.2.3", `${APP}${p.path}`, "--quiet", "--only-categories=performance", "--output=json", `--output-path=${out}`, `--extra-headers=${headersFile}`, "--chrome-flags=--headless=new --no-sandbox --disable-gpu"],
+    { env: { ...process.env, CHROME_PATH: chrome }, encoding: "utf8", timeout: 300_000 },
+  );
+  if (r.status !== 0) {
+    pages.push({ ...p, error: (r.stderr || r.error?.message || `exit ${r.status}`).slice(-400) });
+    continue;
+  }
+  const lh = JSON.parse(readFileSync(out, "utf8"));
+  const a = lh.audits;
+  pages.push({
+    ...p,
+    finalUrl: lh.finalDisplayedUrl,
+    performance: Math.round(lh.categories.performance.score * 100),
+    lcpS: +(a["largest-contentful-paint"].numericValue / 1000).toFixed(2),
+    tbtMs: Math.round(a["total-blocking-time"].numericValue),
+    fcpS: +(a["first-contentful-paint"].numericValue / 1000).toFixed(2),
+    cls: +a["cumulative-layout-shift"].numericValue.toFixed(3),
+  });
+}
+record("lighthouse", { lighthouse: "12.2.3", chrome, formFactor: "mobile (Lighthouse default emulation and throttling)", pages });
