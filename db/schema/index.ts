@@ -7,3 +7,4 @@ export * from "./team";
 export * from "./billing";
 export * from "./signoffs";
 export * from "./records";
+export * from "./editions";
