@@ -8,7 +8,7 @@ import type { Viewer } from "@/lib/access";
 import { audit } from "@/lib/audit";
 import { DomainError } from "@/lib/errors";
 import { cardTopic } from "@/lib/content";
-import { amendmentSchema } from "./browser";
+import { TOPIC_LABELS, amendmentSchema } from "./browser";
 
 /**
  * Local amendments: one short plain-text note per organization and card topic, written by a
@@ -70,4 +70,10 @@ export async function removeAmendment(viewer: Viewer, orgId: string, topic: stri
     await audit({ actor: viewer, organizationId: orgId, action: "amendment.remove", targetType: "local_amendment", targetId: t.data, ip, details: { body: old.body } }, tx);
   });
   return { topic: t.data };
+}
+
+/** Local rules ready for a page: topic label, text, author and day. */
+export async function localRulesFor(orgId: string | null, topics: string[]) {
+  const rows = await amendmentsFor(orgId, topics);
+  return rows.map((r) => ({ topic: r.topic, label: TOPIC_LABELS[r.topic as keyof typeof TOPIC_LABELS] ?? r.topic, body: r.body, authorName: r.authorName, date: r.updatedAt.toISOString().slice(0, 10) }));
 }
