@@ -40,7 +40,7 @@ CREATE TABLE `refresher_completion` (
 	`id` int AUTO_INCREMENT NOT NULL,
 	`user_id` varchar(36) NOT NULL,
 	`module_slug` varchar(80) NOT NULL,
-	`score` int NOT NULL,
+	`score` int,
 	`completed_at` datetime(3) NOT NULL,
 	CONSTRAINT `refresher_completion_id` PRIMARY KEY(`id`)
 );

@@ -74,7 +74,8 @@ export const refresherCompletion = mysqlTable(
       .notNull()
       .references(() => user.id, { onDelete: "cascade" }),
     moduleSlug: varchar("module_slug", { length: 80 }).notNull(),
-    score: int("score").notNull(),
+    /** percent on the changed questions; null when only lessons changed (re-read, no quiz) */
+    score: int("score"),
     completedAt: datetime("completed_at", { fsp: 3 }).notNull(),
   },
   (t) => [index("refresher_user_module_idx").on(t.userId, t.moduleSlug, t.completedAt)],
