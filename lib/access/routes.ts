@@ -138,4 +138,7 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/team/jurisdictions/[id]", rule: "manager", sample: "/api/team/jurisdictions/00000000-0000-4000-8000-000000000000", method: "DELETE", okStatus: 404 },
   { route: "/api/team/amendments", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/team/amendments/[topic]", rule: "manager", sample: "/api/team/amendments/no-such-topic", method: "DELETE", okStatus: 404 },
+  // refreshers after material content changes: POST {} → 400 (module missing)
+  { route: "/api/refreshers", rule: "signed-in" },
+  { route: "/api/refreshers", rule: "signed-in", method: "POST", okStatus: 400 },
 ];

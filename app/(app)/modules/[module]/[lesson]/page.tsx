@@ -6,6 +6,7 @@ import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
 import { LocalRules, editionComponents } from "@/components/lesson/edition";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
+import { lessonChangesDue } from "@/lib/refreshers";
 import { requireViewer } from "@/lib/access";
 import { findModule, lessonTopics } from "@/lib/content";
 import { recordLessonOpen } from "@/lib/progress";
@@ -34,7 +35,11 @@ export default async function LessonPage({ params }: Params) {
   const prev = mod.lessons[index - 1];
   const next = mod.lessons[index + 1];
   const { default: Body } = await load();
-  const [code, rules] = await Promise.all([adoptedCode(viewer.organizationId), localRulesFor(viewer.organizationId, lessonTopics(mod.slug, lesson.slug))]);
+  const [code, rules, changes] = await Promise.all([
+    adoptedCode(viewer.organizationId),
+    localRulesFor(viewer.organizationId, lessonTopics(mod.slug, lesson.slug)),
+    lessonChangesDue(viewer, mod.slug, lesson.slug),
+  ]);
 
   return (
     <article className="flex flex-col gap-6">
@@ -60,6 +65,11 @@ export default async function LessonPage({ params }: Params) {
         <strong>Edition note:</strong> {lesson.meta.edition}
         {code ? ` Your organization works to NFPA 13D ${code.edition} (${code.name}, ${code.state}${code.ircP2904 ? "; IRC P2904 in force" : ""}): passages for it show first.` : null}
       </p>
+      {changes.map((c) => (
+        <p key={c.id} className="max-w-prose rounded border-l-4 border-copper bg-copper-light p-3" data-testid="lesson-change">
+          <strong>Changed since you completed it:</strong> <mark className="bg-transparent font-bold">{c.whatChanged}</mark>
+        </p>
+      ))}
       <LocalRules rules={rules} />
       <div className="prose-riser">
         <Body components={{ ...lessonComponents, ...editionComponents(code?.edition ?? null) }} />
