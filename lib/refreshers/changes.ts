@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, inArray, max } from "drizzle-orm";
 import { db } from "@/db/client";
-import { materialChange, moduleCompletion, refresherCompletion } from "@/db/schema";
+import { materialChange, moduleCompletion, refresherCompletion, user } from "@/db/schema";
 import type { Catalog } from "@/lib/content";
 import { dueChanges, type ChangeFact } from "./due";
 
@@ -48,4 +48,11 @@ export async function dueFor(userIds: string[], moduleSlug?: string): Promise<Ma
   const facts = (rows: { userId: string; moduleSlug: string; at: Date | string | null }[]) =>
     rows.filter((r) => r.at !== null).map((r) => ({ userId: r.userId, moduleSlug: r.moduleSlug, at: r.at instanceof Date ? r.at : new Date(`${String(r.at).replace(" ", "T")}Z`) }));
   return dueChanges(facts(completions), facts(refreshers), changes);
+}
+
+/** How many people of an organization owe a refresher (the managers' weekly digest). */
+export async function refresherCountFor(orgId: string): Promise<number> {
+  const people = await db.select({ id: user.id }).from(user).where(eq(user.organizationId, orgId));
+  const due = await dueFor(people.map((p) => p.id));
+  return new Set([...due.keys()].map((k) => k.slice(0, k.indexOf("|")))).size;
 }

@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { certificate, materialChange, questionVersion, quizAttemptItem, refresherCompletion } from "@/db/schema";
 import { syncCatalog } from "@/lib/catalog";
+import { refresherCountFor } from "@/lib/refreshers";
 import { loadCatalogFrom, type Catalog } from "@/lib/content/load";
 import type { Question } from "@/lib/content/schema";
 import { clientOf, completedWithCertificate, completion, daysFromNow, fixtureOrg, fixturePerson, gradedAttempt, type FixturePerson } from "../helpers/fixtures";
@@ -111,6 +112,7 @@ describe("a material change", () => {
     expect(due[0]!.questions.map((q) => q.id)).toEqual([QUESTION]);
     expect(await refreshersOf(neverClient)).toEqual([]);
     expect(await refreshersOf(afterClient)).toEqual([]);
+    expect(await refresherCountFor(org.id)).toBe(1); // the managers' weekly digest line
   });
 
   it("shows on the home page, on the changed lesson, on the board and in the CSV", async () => {
