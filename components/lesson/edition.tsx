@@ -23,7 +23,7 @@ export function editionComponents(current: number | null) {
     if (current !== null && !mine) {
       return (
         <details className="my-4 rounded border border-line bg-panel px-4 py-2" data-edition={label} data-current="false">
-          <summary className="min-h-11 cursor-pointer py-2 font-bold text-muted">Other edition: {label}</summary>
+          <summary className="min-h-11 cursor-pointer py-2 font-bold text-muted">{`Other edition: ${label}`}</summary>
           <div className="mt-2 [&>p:first-child]:mt-0">{children}</div>
         </details>
       );
@@ -50,10 +50,10 @@ export function LocalRules({ rules }: { rules: { topic: string; label: string; b
     <>
       {rules.map((r) => (
         <aside key={r.topic} className="max-w-prose rounded border-l-4 border-copper bg-copper-light p-4" aria-label={`Local rule: ${r.label}`} data-testid="local-rule">
-          <p className="font-bold text-copper">Local rule: {r.label}</p>
+          <p className="font-bold text-copper">{`Local rule: ${r.label}`}</p>
           <p className="mt-1 whitespace-pre-line">{r.body}</p>
           <p className="mt-1 text-sm text-muted">
-            {r.authorName}, {r.date}. Set by your organization; it adds to the lesson, and the AHJ has the last word.
+            {`${r.authorName}, ${r.date}. Set by your organization; it adds to the lesson, and the AHJ has the last word.`}
           </p>
         </aside>
       ))}

@@ -30,14 +30,8 @@ export default async function CodePage({ searchParams }: { searchParams: Promise
             <ul className="flex flex-col gap-2">
               {places.map((p) => (
                 <li key={p.id} className="flex flex-wrap items-center gap-3 rounded border border-line bg-panel px-3 py-2" data-testid="jurisdiction">
-                  <span className="font-bold">
-                    {p.name}, {p.state}
-                  </span>
-                  <span className="text-sm">
-                    NFPA 13D {p.edition}
-                    {p.ircP2904 ? " · IRC P2904" : ""}
-                    {p.isDefault ? " · default" : ""}
-                  </span>
+                  <span className="font-bold">{`${p.name}, ${p.state}`}</span>
+                  <span className="text-sm">{`NFPA 13D ${p.edition}${p.ircP2904 ? " · IRC P2904" : ""}${p.isDefault ? " · default" : ""}`}</span>
                   <span className="ml-auto flex flex-wrap gap-2">
                     {p.isDefault ? null : <RowAction url={`/api/team/jurisdictions/${p.id}`} method="POST" body={{ isDefault: true }} label="Make default" ariaLabel={`Make ${p.name} the default`} />}
                     <RowAction url={`/api/team/jurisdictions/${p.id}`} method="DELETE" label="Remove" ariaLabel={`Remove ${p.name}`} confirm={`Remove ${p.name}, ${p.state}?`} />
@@ -54,9 +48,7 @@ export default async function CodePage({ searchParams }: { searchParams: Promise
                 <li key={r.topic} className="flex flex-wrap items-start gap-3 rounded border border-line bg-panel px-3 py-2" data-testid="local-rule">
                   <span className="font-bold">{TOPIC_LABELS[r.topic as keyof typeof TOPIC_LABELS] ?? r.topic}</span>
                   <span className="max-w-prose whitespace-pre-line">{r.body}</span>
-                  <span className="text-sm text-muted">
-                    {r.authorName}, {isoDay(r.updatedAt)}
-                  </span>
+                  <span className="text-sm text-muted">{`${r.authorName}, ${isoDay(r.updatedAt)}`}</span>
                   <span className="ml-auto">
                     <RowAction url={`/api/team/amendments/${r.topic}${q}`} method="DELETE" label="Remove" ariaLabel={`Remove the local rule on ${r.topic}`} confirm="Remove this local rule?" />
                   </span>
