@@ -8,7 +8,7 @@ import { editionLabel, editionsOf, type EditionSpec } from "@/lib/content/browse
  * click away in a labelled <details>. Without a default every passage shows, each labelled.
  * <Editions> around several passages puts the one for the current edition first.
  */
-type Props = EditionSpec & { children: ReactNode };
+type Props = EditionSpec & { children?: ReactNode };
 
 function applies(spec: EditionSpec, current: number | null): boolean {
   const r = editionsOf(spec);
@@ -35,7 +35,7 @@ export function editionComponents(current: number | null) {
       </section>
     );
   }
-  function Editions({ children }: { children: ReactNode }) {
+  function Editions({ children }: { children?: ReactNode }) {
     const items = Children.toArray(children);
     const isMine = (c: ReactNode) => isValidElement<Props>(c) && applies(c.props, current);
     return <div data-editions="">{[...items.filter(isMine), ...items.filter((c) => !isMine(c))]}</div>;

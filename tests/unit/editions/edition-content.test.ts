@@ -121,7 +121,7 @@ describe("rendered passages", () => {
   const page = (current: number | null) => {
     const { Edition, Editions } = editionComponents(current);
     return renderToStaticMarkup(
-      createElement(Editions, { children: [createElement(Edition, { key: "n", from: "2022", children: "NEW RULE" }), createElement(Edition, { key: "o", from: "2013", to: "2019", children: "OLD RULE" })] }),
+      createElement(Editions, null, createElement(Edition, { from: "2022" }, "NEW RULE"), createElement(Edition, { from: "2013", to: "2019" }, "OLD RULE")),
     );
   };
   it("puts the adopted edition's passage first and open, the others one click away and labelled", () => {
