@@ -15,9 +15,10 @@ export function BoardCellView({ cell, person, module, personId }: { cell: RichCe
   const done = cell.status === "passed" || cell.status === "expiring";
   return (
     <details className="group relative" data-testid="board-cell">
-      <summary className="flex cursor-pointer list-none flex-col items-start gap-0.5 rounded p-0.5 focus-visible:outline focus-visible:outline-2" aria-label={`${person}, ${module}: ${STATUS_LABELS[cell.status]}${cell.waitingSignOffs ? ", sign-off waiting for your review" : ""}. Show details`}>
+      <summary className="flex cursor-pointer list-none flex-col items-start gap-0.5 rounded p-0.5 focus-visible:outline focus-visible:outline-2" aria-label={`${person}, ${module}: ${STATUS_LABELS[cell.status]}${cell.waitingSignOffs ? ", sign-off waiting for your review" : ""}${cell.refresherDue ? ", refresher due" : ""}. Show details`}>
         <StatusBadge status={cell.status} compact />
         {cell.waitingSignOffs ? <span className="whitespace-nowrap text-xs font-bold text-copper">waiting for your review</span> : null}
+        {cell.refresherDue ? <span className="whitespace-nowrap text-xs font-bold text-copper" data-testid="refresher-due">refresher due</span> : null}
         {!done && cell.dueAt ? <span className="whitespace-nowrap text-xs text-muted">due {shortDate(cell.dueAt)}</span> : null}
         {(cell.status === "expiring" || cell.status === "expired") && cell.expiresAt ? (
           <span className="whitespace-nowrap text-xs text-muted">{cell.status === "expired" ? "ended" : "ends"} {shortDate(cell.expiresAt)}</span>

@@ -9,6 +9,7 @@ const TABS = [
   { href: "/team/invite", label: "Invite people" },
   { href: "/team/assign", label: "Assign work" },
   { href: "/team/sign-offs", label: "Sign-offs" },
+  { href: "/team/code", label: "Adopted code" },
 ];
 
 /** Sub-navigation of the manager's pages; keeps ?org= for admins; the Sign-offs tab counts what waits for review. */

@@ -43,6 +43,8 @@ export const catalogLesson = mysqlTable(
     title: varchar("title", { length: 200 }).notNull(),
     minutes: int("minutes").notNull(),
     position: int("position").notNull(),
+    /** the lesson's content revision (frontmatter `revision`) */
+    revision: int("revision").notNull().default(1),
     retiredAt: timestamp("retired_at", { fsp: 3 }),
     syncedAt: timestamp("synced_at", { fsp: 3 }).notNull(),
   },

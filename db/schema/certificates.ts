@@ -30,6 +30,8 @@ export const certificate = mysqlTable(
     subjectSlug: varchar("subject_slug", { length: 80 }).notNull(),
     subjectTitle: varchar("subject_title", { length: 200 }).notNull(),
     ceHours: decimal("ce_hours", { precision: 5, scale: 2 }).notNull(),
+    /** the NFPA 13D edition the material was taught to (the passing attempt's); null: none set */
+    edition: int("edition"),
     /** the module completion that earned it (for a path: the completion that finished the path) */
     completionId: int("completion_id").notNull(),
     issuedAt: datetime("issued_at", { fsp: 3 }).notNull(),

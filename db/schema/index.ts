@@ -9,3 +9,4 @@ export * from "./signoffs";
 export * from "./records";
 export * from "./credentials";
 export * from "./ops";
+export * from "./editions";

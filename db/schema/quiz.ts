@@ -38,6 +38,8 @@ export const quizAttempt = mysqlTable(
     passed: boolean("passed"),
     passMark: int("pass_mark").notNull(),
     lateGraded: boolean("late_graded").notNull().default(false),
+    /** the NFPA 13D edition the questions were drawn for (the organization's default); null: none set */
+    edition: int("edition"),
   },
   (t) => [index("attempt_user_module_idx").on(t.userId, t.moduleSlug, t.startedAt), index("attempt_org_idx").on(t.organizationId, t.moduleSlug)],
 );

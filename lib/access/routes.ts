@@ -153,4 +153,15 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/team/invites/[id]/resend", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/resend", method: "POST", okStatus: 404 },
   { route: "/api/team/invites/[id]/assign", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/assign", method: "POST", okStatus: 400 },
   { route: "/api/team/invites/[id]/revoke", rule: "manager", sample: "/api/team/invites/00000000-0000-4000-8000-000000000000/revoke", method: "POST", okStatus: 404 },
+  // adopted code: jurisdictions with their NFPA 13D edition, and local rules per topic. POST {} → 400;
+  // the id sample does not exist → 404; DELETE of a topic without a rule → 404 (admins without ?org= → 400).
+  { route: "/team/code", rule: "manager" },
+  { route: "/api/team/jurisdictions", rule: "manager" },
+  { route: "/api/team/jurisdictions", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/jurisdictions/[id]", rule: "manager", sample: "/api/team/jurisdictions/00000000-0000-4000-8000-000000000000", method: "DELETE", okStatus: 404 },
+  { route: "/api/team/amendments", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/amendments/[topic]", rule: "manager", sample: "/api/team/amendments/no-such-topic", method: "DELETE", okStatus: 404 },
+  // refreshers after material content changes: POST {} → 400 (module missing)
+  { route: "/api/refreshers", rule: "signed-in" },
+  { route: "/api/refreshers", rule: "signed-in", method: "POST", okStatus: 400 },
 ];

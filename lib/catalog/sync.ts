@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { catalogCard, catalogLesson, catalogModule, catalogPath, contentSync } from "@/db/schema";
 import { loadCatalog, type Catalog } from "@/lib/content";
 
-export type SyncCounts = { modules: number; lessons: number; paths: number; cards: number; retired: number; questions: number; questionVersionsAdded?: number };
+export type SyncCounts = { modules: number; lessons: number; paths: number; cards: number; retired: number; questions: number; questionVersionsAdded?: number; materialChanges?: number };
 
 type SyncHook = (catalog: Catalog, now: Date) => Promise<Partial<SyncCounts>>;
 const hooks: SyncHook[] = [];
@@ -37,7 +37,7 @@ export async function syncCatalog(catalog: Catalog = loadCatalog()): Promise<Syn
       const [row] = await tx.select({ id: catalogModule.id }).from(catalogModule).where(eq(catalogModule.slug, m.slug));
       const moduleId = row!.id;
       for (const [i, l] of m.lessons.entries()) {
-        const lv = { title: l.meta.title, minutes: l.meta.minutes, position: i + 1, retiredAt: null, syncedAt: now };
+        const lv = { title: l.meta.title, minutes: l.meta.minutes, position: i + 1, revision: l.meta.revision ?? 1, retiredAt: null, syncedAt: now };
         await tx.insert(catalogLesson).values({ moduleId, slug: l.slug, ...lv }).onDuplicateKeyUpdate({ set: lv });
       }
       const keep = m.lessons.map((l) => l.slug);

@@ -55,6 +55,7 @@ export async function certificatePdf(cert: Certificate, generatedAt: Date = new 
       revokedAt: cert.revokedAt,
       renewsSerial: await serialOf(cert.renewsCertificateId),
       parts,
+      edition: cert.edition,
     },
     { verifyUrl: verificationUrl(env.APP_URL, cert.verificationCode), generatedAt },
   );

@@ -3,7 +3,7 @@ import { randomBytes } from "node:crypto";
 import { newVerificationCode as newCode } from "./verify-code";
 import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
-import { catalogModule, certificate, certificateSerialCounter, moduleCompletion, organization, user, type Certificate } from "@/db/schema";
+import { catalogModule, certificate, certificateSerialCounter, moduleCompletion, organization, quizAttempt, user, type Certificate } from "@/db/schema";
 import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { log } from "@/lib/log";
@@ -114,6 +114,8 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
     .from(catalogModule)
     .where(eq(catalogModule.slug, completion.moduleSlug));
   const facts = moduleFacts(completion.moduleSlug, catalogRow);
+  // the edition the passing attempt was drawn for (the organization's default edition then)
+  const [taught] = await tx.select({ edition: quizAttempt.edition }).from(quizAttempt).where(eq(quizAttempt.id, completion.attemptId));
   if (!facts) throw new Error(`module ${completion.moduleSlug} of completion ${completion.id} is not in the catalog`);
 
   const base = {
@@ -134,6 +136,7 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
     subjectSlug: completion.moduleSlug,
     subjectTitle: facts.title,
     ceHours: facts.ceHours.toFixed(2),
+    edition: taught?.edition ?? null,
     expiresAt: moduleExpiresAt,
     renewsCertificateId: previous?.id ?? null,
   });

@@ -30,6 +30,8 @@ export type CertificatePdfData = {
   renewsSerial?: string | null;
   /** for a path: the titles of its modules */
   parts?: string[];
+  /** the NFPA 13D edition the material was taught to (module certificates) */
+  edition?: number | null;
 };
 
 export type CertificatePdfOptions = {
@@ -142,6 +144,10 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
       y -= 12.5;
     }
     y -= 4;
+  }
+  if (data.edition) {
+    await t.draw(page, `Taught to NFPA 13D, ${data.edition} edition (the organization's adopted edition)`, { x: LEFT, y: y + 6, size: 9.5, color: C.muted });
+    y -= 16;
   }
 
   // details panel: hours, dates, serial

@@ -2,3 +2,4 @@ import "server-only";
 // The content area's public face on the server; other areas, pages and routes import only this file or ./browser.
 export * from "./load";
 export * from "./schema";
+export * from "./editions";

@@ -21,6 +21,16 @@ import {
   type ModuleMeta,
   type Question,
 } from "./schema";
+import { editionsOf, editionTags } from "./editions";
+
+/** Edition tags that do not parse, and a "what changed" line without a raised revision. */
+function revisionAndEditionProblems(file: string, body: string, meta: { revision?: number; changed?: string }, problems: string[]) {
+  for (const t of editionTags(body)) {
+    const r = editionsOf(t.spec);
+    if ("problem" in r) problems.push(`${file}: ${t.raw}: ${r.problem}`);
+  }
+  if (meta.changed && (meta.revision ?? 1) < 2) problems.push(`${file}: field "changed": raise "revision" (to 2 or more) when you mark a material change`);
+}
 
 export class ContentError extends Error {
   constructor(readonly problems: string[]) {
@@ -110,7 +120,10 @@ export function loadCatalogFrom(root: string): Catalog {
       }
       const parsed = readMdx(file, problems);
       const lm = parsed && validate(lessonMeta, parsed.data, rel(file), problems);
-      if (parsed && lm) lessons.push({ module: slug, slug: lessonSlug, meta: lm, body: parsed.content, file });
+      if (parsed && lm) {
+        revisionAndEditionProblems(rel(file), parsed.content, lm, problems);
+        lessons.push({ module: slug, slug: lessonSlug, meta: lm, body: parsed.content, file });
+      }
     }
     const quizFile = path.join(dir, "quiz.yaml");
     let questions: Question[] = [];
@@ -119,6 +132,7 @@ export function loadCatalogFrom(root: string): Catalog {
       if (bank) {
         questions = bank.questions;
         for (const q of questions) {
+          if (q.changed && (q.revision ?? 1) < 2) problems.push(`${rel(quizFile)}: question "${q.id}" field "changed": raise "revision" (to 2 or more) when you mark a material change`);
           if (!meta.lessons.includes(q.lesson)) problems.push(`${rel(quizFile)}: question "${q.id}" field "lesson": "${q.lesson}" is not a lesson of this module`);
           if (q.type === "single" && !q.options.some((o) => o.id === q.correct)) problems.push(`${rel(quizFile)}: question "${q.id}" field "correct": no option "${q.correct}"`);
           if (q.type === "multiple") for (const c of q.correct) if (!q.options.some((o) => o.id === c)) problems.push(`${rel(quizFile)}: question "${q.id}" field "correct": no option "${c}"`);
@@ -151,7 +165,10 @@ export function loadCatalogFrom(root: string): Catalog {
       const file = path.join(cardsDir, f);
       const parsed = readMdx(file, problems);
       const meta = parsed && validate(cardMeta, parsed.data, rel(file), problems);
-      if (parsed && meta) cards.push({ slug: f.replace(/\.mdx$/, ""), meta, body: parsed.content, file });
+      if (parsed && meta) {
+        revisionAndEditionProblems(rel(file), parsed.content, {}, problems);
+        cards.push({ slug: f.replace(/\.mdx$/, ""), meta, body: parsed.content, file });
+      }
     }
   }
 
@@ -193,4 +210,13 @@ export function loadCatalog(): Catalog {
 
 export function findModule(slug: string): Module | undefined {
   return loadCatalog().modules.find((m) => m.slug === slug);
+}
+
+/** The card topics a lesson teaches: its own `topics` plus the topic of every card that lists it as related. */
+export function lessonTopics(moduleSlug: string, lessonSlug: string, catalog: Catalog = loadCatalog()): string[] {
+  const lesson = catalog.modules.find((m) => m.slug === moduleSlug)?.lessons.find((l) => l.slug === lessonSlug);
+  const key = `${moduleSlug}/${lessonSlug}`;
+  const topics = new Set<string>(lesson?.meta.topics ?? []);
+  for (const c of catalog.cards) if (c.meta.relatedLessons.includes(key)) topics.add(c.meta.topic);
+  return [...topics].sort();
 }

@@ -4,6 +4,17 @@
  * A bad or missing field fails `npm run content:build` (and so the build) naming file and field.
  */
 import { z } from "zod";
+import { EDITIONS } from "./editions";
+
+/** NFPA 13D edition years a question may be limited to. */
+const editionList = z
+  .array(z.number().int().refine((n) => (EDITIONS as readonly number[]).includes(n), { message: `must be one of ${EDITIONS.join(", ")}` }))
+  .min(1)
+  .optional();
+/** Content revision (absent = 1). Raising it with `changed` set marks a material change. */
+const revision = z.number().int().min(1).max(999).optional();
+/** One line for the people who completed before: what changed and why it matters. */
+const changed = z.string().min(10).max(200).optional();
 
 export const slug = z
   .string()
@@ -50,6 +61,10 @@ export const lessonMeta = z.object({
   sources: z.array(z.string().min(5)).min(1),
   edition: z.string().min(20),
   updated: isoDate,
+  revision,
+  changed,
+  /** card topics this lesson teaches (local amendments on them show here); cards that list the lesson in relatedLessons add theirs */
+  topics: z.array(z.lazy(() => cardTopic)).optional(),
 });
 export type LessonMeta = z.infer<typeof lessonMeta>;
 
@@ -130,6 +145,10 @@ const qBase = {
   explanation: z.string().min(20),
   /** slug of the lesson (in this module) the explanation points to */
   lesson: slug,
+  /** the NFPA 13D editions the question is right for; absent = every edition */
+  editions: editionList,
+  revision,
+  changed,
 };
 /** the named computations a parametric question may use; implemented by lib/quiz/formulas.ts over lib/hydraulics */
 export const parametricFormula = z.enum([

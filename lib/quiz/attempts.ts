@@ -13,7 +13,8 @@ import { DomainError } from "@/lib/errors";
 import { checkAndRecordCompletion } from "@/lib/completion";
 import { findModule } from "@/lib/content";
 import type { Question } from "@/lib/content";
-import { answerProblem, correctAnswerText, drawAttempt, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
+import { adoptedCode } from "@/lib/editions";
+import { answerProblem, correctAnswerText, drawAttempt, editionBank, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
 import { utcStamp } from "@/lib/dates";
 
 /** Answers sent after the time limit plus this grace are refused; the attempt is graded as saved. */
@@ -141,6 +142,8 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
   const mod = rulesOf(moduleSlug);
   const rules = mod.meta.quiz;
   const now = Date.now();
+  // the organization's default adopted edition: only questions that hold in it are drawn
+  const edition = (await adoptedCode(viewer.organizationId))?.edition ?? null;
   let expiredToComplete = false;
   const id = await db.transaction(async (tx) => {
     // One start at a time per person: lock their user row.
@@ -174,7 +177,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
       .from(questionVersion)
       .where(and(eq(questionVersion.moduleSlug, moduleSlug), isNull(questionVersion.retiredAt)));
     const versionOf = new Map(versions.map((v) => [v.questionId, v.id]));
-    const bank = mod.questions.filter((q) => versionOf.has(q.id));
+    const bank = editionBank(mod.questions.filter((q) => versionOf.has(q.id)), edition);
     if (bank.length === 0) throw new DomainError("conflict", "This module's quiz is not ready yet.");
     const seed = randomInt(0, 2 ** 31);
     const drawn = drawAttempt(bank, rules.questionsPerAttempt, seed);
@@ -189,6 +192,7 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
       startedAt: new Date(now),
       deadlineAt: rules.timeLimitMinutes ? new Date(now + rules.timeLimitMinutes * 60_000) : null,
       passMark: mod.meta.passMark,
+      edition,
     });
     await tx.insert(quizAttemptItem).values(
       drawn.map((d, i) => ({ attemptId, position: i + 1, questionVersionId: versionOf.get(d.question.id)!, optionOrder: d.optionOrder, params: d.params, answer: null })),

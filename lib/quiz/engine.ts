@@ -11,7 +11,7 @@
  *   attempt; |answer − expected| ≤ expected × tolerancePercent / 100 (+ the same guard).
  * Score = round(100 × correct / questions); passed = score ≥ the module's pass mark.
  */
-import type { Question } from "@/lib/content/browser";
+import { questionApplies, type Question } from "@/lib/content/browser";
 import { formulas } from "./formulas";
 
 /** mulberry32: a small, well-known seeded PRNG — the same seed draws the same attempt. */
@@ -61,6 +61,14 @@ export function drawAttempt(bank: Question[], count: number, seed: number): Draw
       optionOrder: question.type === "single" || question.type === "multiple" ? shuffle(question.options.map((o) => o.id), rand) : null,
       params: question.type === "parametric" ? drawParams(question, rand) : null,
     }));
+}
+
+/**
+ * The questions of a bank that hold in `edition` (questions without `editions` hold in all; with no
+ * edition chosen only those are kept). Keeps the bank's order, so the seeded draw stays deterministic.
+ */
+export function editionBank(bank: Question[], edition: number | null): Question[] {
+  return bank.filter((q) => questionApplies(q, edition));
 }
 
 /** The expected numeric answer of a parametric question for its drawn values. */

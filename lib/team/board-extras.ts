@@ -2,14 +2,16 @@ import "server-only";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { certificate, signOff } from "@/db/schema";
+import { dueFor } from "@/lib/refreshers";
 import type { BoardCell, BoardRow } from "./board";
 
 /**
  * What a board cell shows beyond its status: practical sign-offs waiting for the manager's
- * review, and the serial of the certificate of the latest completion (module certificates only).
+ * review, the serial of the certificate of the latest completion (module certificates only), and
+ * whether a refresher is due after a material content change (the certificate stays valid).
  * Read for the people of one page or one CSV chunk, after the board rows are built.
  */
-export type CellExtras = { waitingSignOffs: number; serial: string | null };
+export type CellExtras = { waitingSignOffs: number; serial: string | null; refresherDue: boolean };
 export type RichCell = BoardCell & CellExtras;
 export type RichRow = Omit<BoardRow, "cells"> & { cells: Record<string, RichCell> };
 
@@ -17,6 +19,7 @@ export async function withCellExtras(rows: BoardRow[]): Promise<RichRow[]> {
   const ids = rows.map((r) => r.id);
   const waiting = new Map<string, number>();
   const serials = new Map<string, string>();
+  const refreshers = await dueFor(ids);
   if (ids.length) {
     const [pending, certs] = await Promise.all([
       db
@@ -35,7 +38,7 @@ export async function withCellExtras(rows: BoardRow[]): Promise<RichRow[]> {
   return rows.map((r) => ({
     ...r,
     cells: Object.fromEntries(
-      Object.entries(r.cells).map(([slug, c]) => [slug, { ...c, waitingSignOffs: waiting.get(`${r.id}|${slug}`) ?? 0, serial: c.completedAt ? (serials.get(`${r.id}|${slug}`) ?? null) : null }]),
+      Object.entries(r.cells).map(([slug, c]) => [slug, { ...c, waitingSignOffs: waiting.get(`${r.id}|${slug}`) ?? 0, serial: c.completedAt ? (serials.get(`${r.id}|${slug}`) ?? null) : null, refresherDue: refreshers.has(`${r.id}|${slug}`) }]),
     ),
   }));
 }

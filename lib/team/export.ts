@@ -34,7 +34,7 @@ export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Respons
           const c = r.cells[m.slug];
           if (!c) return ["", "", "", "", ""];
           const label = STATUS_LABELS[c.status];
-          const waiting = c.waitingSignOffs ? "; sign-off waiting for review" : "";
+          const waiting = (c.waitingSignOffs ? "; sign-off waiting for review" : "") + (c.refresherDue ? "; refresher due" : "");
           const status =
             c.status === "expiring" || c.status === "expired"
               ? `${label} (${day(c.expiresAt)})`

@@ -8,6 +8,7 @@ import { itemModules, itemTitle, passedModules, type Person } from "./board";
 import { teamTotals } from "./summary";
 import { isoWeek } from "./period";
 import { addDays, isoDay, weekdayLongDate } from "@/lib/dates";
+import { refresherCountFor } from "@/lib/refreshers";
 
 export { isoWeek };
 
@@ -178,6 +179,7 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
       .select({ n: sql<number>`COUNT(*)` })
       .from(assignment)
       .where(and(eq(assignment.organizationId, orgId), gte(assignment.createdAt, weekAgo), lte(assignment.createdAt, now)));
+    const refreshers = await refresherCountFor(orgId);
     const sum = (k: "people" | "overdue" | "expiring" | "expired") => totals.reduce((n, t) => n + t[k], 0);
     const lines = totals.map((t) => {
       const pct = t.cells ? Math.round((t.passed / t.cells) * 100) : 0;
@@ -188,7 +190,7 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
         to: m.email,
         kind: "digest",
         subject: `Weekly training summary for ${m.orgName} (${week})`,
-        text: `Hello ${m.name},\n\nWhere ${m.orgName} stands this week (${week}):\n\n${lines.join("\n") || "- No people yet."}\n\nOverdue modules: ${sum("overdue")}\nCertificates expiring within 30 days: ${sum("expiring")}\nExpired certificates: ${sum("expired")}\nModules completed in the last 7 days: ${Number(done?.n ?? 0)}\nAssignments falling due in the next 7 days: ${Number(openAssignments?.n ?? 0)}\nWork assigned in the last 7 days: ${Number(newlyAssigned?.n ?? 0)} (each person was e-mailed once when it was assigned)\n\nThe team board, with filters and exports: ${env.APP_URL}/team`,
+        text: `Hello ${m.name},\n\nWhere ${m.orgName} stands this week (${week}):\n\n${lines.join("\n") || "- No people yet."}\n\nOverdue modules: ${sum("overdue")}\nCertificates expiring within 30 days: ${sum("expiring")}\nExpired certificates: ${sum("expired")}\nPeople with a refresher due after a lesson changed: ${refreshers}\nModules completed in the last 7 days: ${Number(done?.n ?? 0)}\nAssignments falling due in the next 7 days: ${Number(openAssignments?.n ?? 0)}\nWork assigned in the last 7 days: ${Number(newlyAssigned?.n ?? 0)} (each person was e-mailed once when it was assigned)\n\nThe team board, with filters and exports: ${env.APP_URL}/team`,
       });
       if (res.ok) sent++;
       else {

@@ -7,7 +7,7 @@ import { and, eq } from "drizzle-orm";
 import { PDFDocument } from "pdf-lib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { assignment, certificate, signOffEvidence } from "@/db/schema";
+import { assignment, certificate, jurisdiction, localAmendment, signOffEvidence } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
 import { ROUTES, type RouteEntry } from "@/lib/access/routes";
 import { roleSatisfies, type Role } from "@/lib/access/rules";
@@ -79,7 +79,8 @@ describe("role matrix", () => {
  * must get 403 or 404 and never a byte of that organization's data.
  */
 describe("role matrix across organizations", () => {
-  const foreign = { orgId: "", learnerId: "", learnerEmail: "", learnerName: "", attemptId: "", certificateId: 0, serial: "", signOffId: "", evidenceId: "", checkoutId: "", assignmentId: 0 };
+  const foreign = { orgId: "", learnerId: "", learnerEmail: "", learnerName: "", attemptId: "", certificateId: 0, serial: "", signOffId: "", evidenceId: "", checkoutId: "", assignmentId: 0, jurisdictionId: "" };
+  const FOREIGN_RULE = "Cross-organization local rule: pressure-test every loop twice";
 
   beforeAll(async () => {
     const org = await createOrganization("Cross-Org Sprinkler Co");
@@ -118,6 +119,10 @@ describe("role matrix across organizations", () => {
     const as = await postJson(mc, "/api/team/assignments", { kind: "module", slug: MODULE, userIds: [learner!.id], dueAt: due });
     expect(as.status, as.text).toBeLessThan(300);
     foreign.assignmentId = (await db.select().from(assignment).where(eq(assignment.organizationId, org.id)))[0]!.id;
+    const j = await postJson(mc, "/api/team/jurisdictions", { name: "Quarry Bend", state: "OR", edition: 2019, ircP2904: true });
+    expect(j.status, j.text).toBe(201);
+    foreign.jurisdictionId = j.json.id as string;
+    expect((await postJson(mc, "/api/team/amendments", { topic: "freeze", body: FOREIGN_RULE })).status).toBe(200);
   }, 120_000);
   afterAll(() => pool.end());
 
@@ -135,6 +140,9 @@ describe("role matrix across organizations", () => {
     { method: "GET", path: `/api/billing/checkout/${foreign.checkoutId}` },
     { method: "DELETE", path: `/api/team/assignments/${foreign.assignmentId}` },
     { method: "GET", path: `/team/people/${foreign.learnerId}` },
+    { method: "POST", path: `/api/team/jurisdictions/${foreign.jurisdictionId}`, body: { edition: 2025 } },
+    { method: "DELETE", path: `/api/team/jurisdictions/${foreign.jurisdictionId}` },
+    { method: "DELETE", path: `/api/team/amendments/freeze?org=${foreign.orgId}` },
   ];
 
   for (const who of ["learner", "sales", "manager"] as const) {
@@ -157,6 +165,13 @@ describe("role matrix across organizations", () => {
       const [cert] = await db.select({ revokedAt: certificate.revokedAt }).from(certificate).where(eq(certificate.id, foreign.certificateId));
       expect(cert!.revokedAt).toBeNull();
       expect(await db.select().from(assignment).where(eq(assignment.id, foreign.assignmentId))).toHaveLength(1);
+      const [j] = await db.select().from(jurisdiction).where(eq(jurisdiction.id, foreign.jurisdictionId));
+      expect(j!.edition).toBe(2019);
+      expect(await db.select().from(localAmendment).where(eq(localAmendment.organizationId, foreign.orgId))).toHaveLength(1);
+      // the other organization's local rule never shows on the viewer's lessons and cards of that topic
+      for (const page of ["/reference/antifreeze-systems", "/modules/freeze-protection/antifreeze-limits"]) {
+        expect(await (await client.fetch(page)).text(), `${page} as ${who}`).not.toContain(FOREIGN_RULE);
+      }
     });
   }
 });

@@ -12,6 +12,8 @@ import { isoDay, weekdayShortDate } from "@/lib/dates";
 import { FirstDayChecklist } from "@/components/team/first-day";
 import { firstDayCounts } from "@/lib/team";
 import { firstDaySteps, showFirstDay } from "@/lib/team";
+import { RefresherCard } from "@/components/refreshers/refresher-card";
+import { refreshersOf } from "@/lib/refreshers";
 
 export const metadata: Metadata = { title: "My training" };
 
@@ -40,7 +42,7 @@ export default async function LearnPage() {
   const person = viewer.organizationId
     ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
     : null;
-  const [work, last, certs] = await Promise.all([person ? assignedWork(person) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id)]);
+  const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id), refreshersOf(viewer)]);
   const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0);
   // A manager whose organization is not set up yet lands on the first-day checklist.
   const counts = viewer.role === "manager" && viewer.organizationId ? await firstDayCounts(viewer.organizationId) : null;
@@ -54,6 +56,18 @@ export default async function LearnPage() {
         lead={firstDay ? "Set up your crew first; your own training is below." : "Your assigned work, where you left off, and your certificates."}
       />
       {firstDay ? <FirstDayChecklist steps={firstDay} /> : null}
+
+      {refreshers.length ? (
+        <section aria-labelledby="refreshers" className="mb-8">
+          <h2 id="refreshers" className="mb-1 text-2xl">Refresher due</h2>
+          <p className="mb-3 text-muted">Lessons you completed have changed. Your certificates stay valid.</p>
+          <ul className="flex flex-col gap-3">
+            {refreshers.map((r) => (
+              <RefresherCard key={r.module} r={r} />
+            ))}
+          </ul>
+        </section>
+      ) : null}
 
       {next ? (
         <section aria-labelledby="resume" className="mb-8 rounded border border-water/40 bg-water-light p-4">

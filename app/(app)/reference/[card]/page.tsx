@@ -3,6 +3,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { cards as registry } from "@/content/.generated/registry";
 import { lessonComponents } from "@/components/lesson/mdx";
+import { LocalRules, editionComponents } from "@/components/lesson/edition";
+import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { requireViewer } from "@/lib/access";
 import { findModule, loadCatalog } from "@/lib/content";
 
@@ -15,11 +17,12 @@ export async function generateMetadata({ params }: Params): Promise<Metadata> {
 
 export default async function CardPage({ params }: Params) {
   const { card: slug } = await params;
-  await requireViewer("signed-in", `/reference/${slug}`);
+  const viewer = await requireViewer("signed-in", `/reference/${slug}`);
   const card = loadCatalog().cards.find((c) => c.slug === slug);
   const load = registry[slug];
   if (!card || !load) notFound();
   const { default: Body } = await load();
+  const [code, rules] = await Promise.all([adoptedCode(viewer.organizationId), localRulesFor(viewer.organizationId, [card.meta.topic])]);
   return (
     <article className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb" className="text-sm"><Link href="/reference">Code-reference cards</Link></nav>
@@ -27,8 +30,9 @@ export default async function CardPage({ params }: Params) {
         <h1 className="text-3xl">{card.meta.title}</h1>
         <p className="mt-2 max-w-prose text-lg text-muted">{card.meta.summary}</p>
       </header>
-      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>Edition note:</strong> {card.meta.edition}</p>
-      <div className="prose-riser"><Body components={lessonComponents} /></div>
+      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>Edition note:</strong> {card.meta.edition}{code ? ` Your organization works to NFPA 13D ${code.edition}: passages for it show first.` : null}</p>
+      <LocalRules rules={rules} />
+      <div className="prose-riser"><Body components={{ ...lessonComponents, ...editionComponents(code?.edition ?? null) }} /></div>
       <section aria-labelledby="related" className="max-w-prose">
         <h2 id="related" className="text-xl">Related lessons</h2>
         <ul className="mt-2 list-disc pl-6">

@@ -4,8 +4,11 @@ import { notFound } from "next/navigation";
 import { lessons as registry } from "@/content/.generated/registry";
 import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
+import { LocalRules, editionComponents } from "@/components/lesson/edition";
+import { adoptedCode, localRulesFor } from "@/lib/editions";
+import { lessonChangesDue } from "@/lib/refreshers";
 import { requireViewer } from "@/lib/access";
-import { findModule } from "@/lib/content";
+import { findModule, lessonTopics } from "@/lib/content";
 import { recordLessonOpen } from "@/lib/progress";
 
 // Rendered per request (never a shared-cache copy): the session is checked here (proxy.ts checks it
@@ -32,6 +35,11 @@ export default async function LessonPage({ params }: Params) {
   const prev = mod.lessons[index - 1];
   const next = mod.lessons[index + 1];
   const { default: Body } = await load();
+  const [code, rules, changes] = await Promise.all([
+    adoptedCode(viewer.organizationId),
+    localRulesFor(viewer.organizationId, lessonTopics(mod.slug, lesson.slug)),
+    lessonChangesDue(viewer, mod.slug, lesson.slug),
+  ]);
 
   return (
     <article className="flex flex-col gap-6">
@@ -55,9 +63,16 @@ export default async function LessonPage({ params }: Params) {
       </section>
       <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note">
         <strong>Edition note:</strong> {lesson.meta.edition}
+        {code ? ` Your organization works to NFPA 13D ${code.edition} (${code.name}, ${code.state}${code.ircP2904 ? "; IRC P2904 in force" : ""}): passages for it show first.` : null}
       </p>
+      {changes.map((c) => (
+        <p key={c.id} className="max-w-prose rounded border-l-4 border-copper bg-copper-light p-3" data-testid="lesson-change">
+          <strong>Changed since you completed it:</strong> <mark className="bg-transparent font-bold">{c.whatChanged}</mark>
+        </p>
+      ))}
+      <LocalRules rules={rules} />
       <div className="prose-riser">
-        <Body components={lessonComponents} />
+        <Body components={{ ...lessonComponents, ...editionComponents(code?.edition ?? null) }} />
       </div>
       <section aria-labelledby="sources" className="max-w-prose text-sm">
         <h2 id="sources" className="text-lg">Sources for the numbers in this lesson</h2>
