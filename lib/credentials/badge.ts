@@ -14,6 +14,8 @@ export type BadgeCertificate = {
   issuedAt: Date;
   expiresAt: Date;
   verificationCode: string;
+  /** the NFPA 13D edition the material was taught to (module certificates with an adopted edition) */
+  edition?: number | null;
 };
 
 export type BadgeAchievementFacts = {
@@ -60,8 +62,6 @@ export function buildAchievement(appUrl: string, c: Pick<BadgeCertificate, "kind
     criteria: { narrative: facts.criteria },
     creditsAvailable: c.ceHours,
     inLanguage: "en",
-    // ── The edition of the code the material was taught to belongs here (for example as `version`
-    // ── or an `alignment` to the standard's edition); it is added to certificates separately.
     resultDescription: [{ id: `${id}#completion`, type: ["ResultDescription"], name: "Completion", resultType: "Status" }],
   };
 }
@@ -89,6 +89,9 @@ export function buildOpenBadgeCredential(appUrl: string, c: BadgeCertificate, fa
       identifier: [{ type: "IdentityObject", identityType: "emailAddress", hashed: true, identityHash: entry.identityHash, salt: entry.salt }],
       achievement,
       creditsEarned: c.ceHours,
+      // The achievement is one per module; the edition differs per certificate, so it travels with
+      // the holder's subject (OB 3.0 AchievementSubject.narrative), as the PDF prints it.
+      ...(c.edition ? { narrative: `Material taught to NFPA 13D, ${c.edition} edition. The adopted edition with its local amendments and the authority having jurisdiction govern.` } : {}),
       result: [{ type: ["Result"], resultDescription: achievement.resultDescription[0]!.id, status: "Completed" }],
     },
     credentialStatus: {

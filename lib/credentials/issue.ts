@@ -49,6 +49,7 @@ export async function credentialForCode(raw: string): Promise<OpenBadgeCredentia
       issuedAt: c.issuedAt,
       expiresAt: c.expiresAt,
       verificationCode: c.verificationCode,
+      edition: c.edition,
     },
     achievementFacts(c.kind, c.subjectSlug, c.subjectTitle),
     entry,

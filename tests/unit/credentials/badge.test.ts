@@ -43,6 +43,15 @@ describe("OpenBadgeCredential", () => {
     expect(ok).toBe(true);
   });
 
+  it("carries the edition taught in the holder's narrative and still validates (AchievementSubject.narrative, OB 3.0 schema)", () => {
+    const withEdition = buildOpenBadgeCredential(APP, { ...cert, edition: 2022 }, facts, { position: 42, salt, identityHash: identityHashOf(email, salt) });
+    expect(validateCredential(withEdition)).toBe(true);
+    expect(withEdition.credentialSubject.narrative).toContain("NFPA 13D, 2022 edition");
+    // the achievement is one per module: the edition never changes it
+    expect(withEdition.credentialSubject.achievement).toEqual(build().credentialSubject.achievement);
+    expect("narrative" in build().credentialSubject).toBe(false);
+  });
+
   it("the schema is live: a credential without validFrom, or with a plain e-mail identity lacking its hash, fails it", () => {
     const noDate: Record<string, unknown> = { ...build() };
     delete noDate.validFrom;
