@@ -24,7 +24,12 @@ export async function reflowProblems(page: Page, label: string): Promise<string[
       const name = (el: Element) => `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ""} “${(el.getAttribute("aria-label") || el.textContent || "").trim().replace(/\s+/g, " ").slice(0, 40)}”`;
       const out: string[] = [];
       const doc = document.documentElement;
-      if (doc.scrollWidth > doc.clientWidth + 1) out.push(`${label}: the page scrolls sideways (${doc.scrollWidth} > ${doc.clientWidth})`);
+      if (doc.scrollWidth > doc.clientWidth + 1) {
+        // name the outermost boxes that stick out (not inside a scroll region of their own)
+        const wide = [...document.querySelectorAll<HTMLElement>("body *")].filter((el) => el.getBoundingClientRect().right > doc.clientWidth + 1 && !el.parentElement?.closest("[role=region]"));
+        const outer = wide.filter((el) => !wide.includes(el.parentElement as HTMLElement));
+        out.push(`${label}: the page scrolls sideways (${doc.scrollWidth} > ${doc.clientWidth}): ${outer.slice(0, 3).map(name).join(", ")}`);
+      }
       for (const el of document.querySelectorAll<HTMLElement>("body *")) {
         const cs = getComputedStyle(el);
         if (!["auto", "scroll"].includes(cs.overflowX) || el.scrollWidth <= el.clientWidth + 1 || el.clientWidth === 0) continue;
@@ -84,6 +89,7 @@ export async function targetSizeProblems(page: Page, label: string): Promise<str
       const name = (el: Element) => `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ""} “${(el.getAttribute("aria-label") || el.textContent || "").trim().replace(/\s+/g, " ").slice(0, 40)}”`;
       const sel = 'a[href], button, input:not([type="hidden"]), select, textarea, summary, [role="button"], [role="link"], [role="tab"], [role="checkbox"], [role="radio"]';
       const visible = (el: HTMLElement) => {
+        if (!el.checkVisibility({ contentVisibilityAuto: true, opacityProperty: true, visibilityProperty: true })) return false; // closed <details>, hidden
         const r = el.getBoundingClientRect();
         const cs = getComputedStyle(el);
         return r.width > 0 && r.height > 0 && cs.visibility !== "hidden" && !el.closest("[inert], .sr-only, [hidden]") && Number(cs.opacity) > 0;
@@ -114,7 +120,7 @@ export async function targetSizeProblems(page: Page, label: string): Promise<str
           const nx = Math.max(o.r.left, Math.min(cx, o.r.right)), ny = Math.max(o.r.top, Math.min(cy, o.r.bottom));
           return Math.hypot(nx - cx, ny - cy) < 12;
         });
-        if (clash) out.push(`${label}: ${name(t.el)} is ${Math.round(t.r.width)}×${Math.round(t.r.height)} px with another target closer than 12 px to its centre`);
+        if (clash && !out.some((o) => o.includes(name(t.el)))) out.push(`${label}: ${name(t.el)} is ${Math.round(t.r.width)}×${Math.round(t.r.height)} px with another target closer than 12 px to its centre`);
       }
       return out;
     },

@@ -83,7 +83,9 @@ async function auditRole(browser: Browser, who: Who, problems: string[]) {
   try {
     if (who !== "anonymous") await signInAs(page, PEOPLE[who]);
     await resolveSamples(page, who);
+    let seen = problems.length;
     for (const r of pagesFor(who)) {
+      if (process.env.A11Y_ONLY && !r.route.startsWith(process.env.A11Y_ONLY)) continue; // local loops only
       const url = resolved[r.route] ?? r.sample ?? r.route;
       const label = `${who} ${url}`;
       await page.setViewportSize({ width: 320, height: 720 });
@@ -101,7 +103,8 @@ async function auditRole(browser: Browser, who: Who, problems: string[]) {
       problems.push(...(await axeProblems(page, `${label} @1280`)));
       await page.setViewportSize({ width: 320, height: 720 });
       problems.push(...(await textSpacingProblems(page, `${label} @320`)));
-      if (process.env.A11Y_VERBOSE) console.log(label, problems.length);
+      if (process.env.A11Y_VERBOSE) console.log(label, problems.slice(seen).join("\n"));
+      seen = problems.length;
     }
   } finally {
     await context.close();
@@ -109,7 +112,7 @@ async function auditRole(browser: Browser, who: Who, problems: string[]) {
 }
 
 test("every page, for each role allowed to see it, passes axe, reflow, text spacing, target size, status and motion checks", async ({ browser }) => {
-  test.setTimeout(300_000);
+  test.setTimeout(Number(process.env.A11Y_TIMEOUT ?? 300_000));
   const problems: string[] = [];
   for (const who of ["learner", "manager", "sales", "admin", "anonymous"] as const) {
     if (process.env.A11Y_ROLES && !process.env.A11Y_ROLES.split(",").includes(who)) continue; // local loops only
