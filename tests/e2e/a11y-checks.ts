@@ -142,6 +142,23 @@ export async function statusPillProblems(page: Page, label: string): Promise<str
   );
 }
 
+/**
+ * Charts (WCAG 1.1.1, 1.4.1): every drawn chart is hidden from assistive technology and its figure
+ * carries the same figures as text: a table, or a caption of at least a sentence.
+ */
+export async function chartProblems(page: Page, label: string): Promise<string[]> {
+  return page.locator(".recharts-responsive-container, .recharts-wrapper").evaluateAll(
+    (charts, label) =>
+      charts.flatMap((c) => {
+        const fig = c.closest("figure");
+        const hidden = Boolean(c.closest("[aria-hidden='true']"));
+        const text = Boolean(fig?.querySelector("table")) || (fig?.querySelector("figcaption")?.textContent?.trim().length ?? 0) >= 40 || (fig?.querySelector("p")?.textContent?.trim().length ?? 0) >= 30;
+        return hidden && text ? [] : [`${label}: a chart without ${hidden ? "" : "aria-hidden and "}${text ? "" : "a table or text with its figures"}`];
+      }),
+    label,
+  );
+}
+
 /** prefers-reduced-motion: with "reduce" emulated no element animates or transitions (2.3.3). */
 export async function motionProblems(page: Page, label: string): Promise<string[]> {
   return page.evaluate((label) => {

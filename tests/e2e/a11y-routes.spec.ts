@@ -9,7 +9,7 @@ import { expect, test, type Browser, type Page } from "@playwright/test";
 import { demoByRole } from "../../db/demo";
 import { ROUTES } from "../../lib/access/routes";
 import type { Role } from "../../lib/access/rules";
-import { axeProblems, motionProblems, reflowProblems, statusPillProblems, targetSizeProblems, textSpacingProblems } from "./a11y-checks";
+import { axeProblems, chartProblems, motionProblems, reflowProblems, statusPillProblems, targetSizeProblems, textSpacingProblems } from "./a11y-checks";
 import { signInAs } from "./helpers";
 
 type Who = Role | "anonymous";
@@ -94,6 +94,7 @@ async function auditRole(browser: Browser, who: Who, problems: string[]) {
       await page.locator("main h1").first().waitFor();
       problems.push(...(await reflowProblems(page, `${label} @320`)));
       problems.push(...(await statusPillProblems(page, label)));
+      problems.push(...(await chartProblems(page, label)));
       problems.push(...(await motionProblems(page, label)));
       await interact(page);
       problems.push(...(await targetSizeProblems(page, `${label} @320`)));
