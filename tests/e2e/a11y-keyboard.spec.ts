@@ -82,7 +82,7 @@ test("a manager filters the board, opens a person, assigns a module with a date 
   await page.keyboard.press("ArrowRight");
   await expect(form.getByRole("radio", { name: "Module" })).toBeChecked();
   await page.keyboard.press("Tab");
-  const which = form.getByLabel("Module", { exact: true });
+  const which = form.getByRole("combobox", { name: "Module" });
   await expectFocusOn(page, which, "module select");
   await page.keyboard.type("Talking with");
   await expect(which).toHaveValue(MODULE);
