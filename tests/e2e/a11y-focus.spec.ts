@@ -9,6 +9,7 @@ import { signInAs } from "./helpers";
 
 /** Every text the live region takes on, in order (a screen reader speaks each change). */
 async function recordLiveRegion(page: Page, testId: string) {
+  await page.getByTestId(testId).waitFor({ state: "attached" });
   await page.evaluate((testId) => {
     const w = window as unknown as { spoken: string[] };
     w.spoken = [];
@@ -40,7 +41,7 @@ test("navigation focuses the new heading; search counts are announced once per p
   await page.keyboard.press("Tab"); // the search box follows the heading
   await expect(page.getByRole("searchbox")).toBeFocused();
   await page.keyboard.type("sidewall", { delay: 80 });
-  await expect(page.getByTestId("search-announcement")).toHaveText(/^\d+ results?$/);
+  await expect(page.getByTestId("search-announcement")).toHaveText(/^\d+ results?$/, { timeout: 20_000 });
   await page.waitForTimeout(1000); // nothing more may follow
   expect(await spoken()).toHaveLength(1);
 });
