@@ -7,7 +7,7 @@
 // Fixtures that are not the behaviour under test go through the helpers: a throw-away learner,
 // the learner's evidence sent through the same API the upload form uses, and the reading-time
 // backdating of first opens (the server's own stamps, tests/e2e/helpers.ts).
-import { expect, test, type Locator, type Page } from "@playwright/test";
+import { expect as baseExpect, test, type Locator, type Page } from "@playwright/test";
 import mysql from "mysql2/promise";
 import sharp from "sharp";
 import { demoByRole } from "../../db/demo";
@@ -16,7 +16,8 @@ import type { Question } from "../../lib/content/schema";
 import { focusState } from "./a11y-checks";
 import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
 
-test.describe.configure({ mode: "serial" });
+test.describe.configure({ mode: "serial", timeout: 180_000 }); // two long walks through the product
+const expect = baseExpect.configure({ timeout: 30_000 }); // board and search answers on a busy 2-core machine
 
 const MODULE = "talking-with-homebuyers";
 const SKILL = "pj-cpvc-joint-and-cure"; // a pipe-and-joining skill (content/modules/pipe-and-joining)
@@ -196,12 +197,17 @@ test("the learner signs in, reads, marks complete, uses the glossary, passes the
       await tabTo(page, inputs.first(), step);
       await page.keyboard.type(String(q.answer));
     } else if (q.type === "multiple") {
-      for (const [j, o] of q.options.entries()) {
+      // options may be shown in another order than stored: match them by their text
+      const shown = (await box.locator("label").allInnerTexts()).map((t) => t.trim());
+      const right = q.options.filter((o) => q.correct.includes(o.id)).map((o) => o.text);
+      for (const [j, text] of shown.entries()) {
         await tabTo(page, inputs.nth(j), `${step}, option ${j + 1}`);
-        if (q.correct.includes(o.id)) await page.keyboard.press("Space");
+        if (right.includes(text)) await page.keyboard.press("Space");
       }
     } else if (q.type === "single" || q.type === "truefalse") {
-      const right = q.type === "truefalse" ? (q.correct ? 0 : 1) : q.options.findIndex((o) => o.id === q.correct);
+      const shown = (await box.locator("label").allInnerTexts()).map((t) => t.trim());
+      const right = shown.indexOf(q.type === "truefalse" ? (q.correct ? "True" : "False") : q.options.find((o) => o.id === q.correct)!.text);
+      expect(right, `${step}: the right answer is shown`).toBeGreaterThanOrEqual(0);
       await tabTo(page, inputs.first(), step);
       if (right === 0) await page.keyboard.press("Space");
       for (let k = 0; k < right; k++) await page.keyboard.press("ArrowDown");
