@@ -63,7 +63,11 @@ export async function textSpacingProblems(page: Page, label: string): Promise<st
     await new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
     const out: string[] = [];
     const doc = document.documentElement;
-    if (doc.scrollWidth > doc.clientWidth + 1) out.push(`${label}: with text spacing the page scrolls sideways (${doc.scrollWidth} > ${doc.clientWidth})`);
+    if (doc.scrollWidth > doc.clientWidth + 1) {
+      const wide = [...document.querySelectorAll<HTMLElement>("body *")].filter((el) => el.getBoundingClientRect().right > doc.clientWidth + 1 && !el.parentElement?.closest("[role=region]"));
+      const outer = wide.filter((el) => !wide.includes(el.parentElement as HTMLElement));
+      out.push(`${label}: with text spacing the page scrolls sideways (${doc.scrollWidth} > ${doc.clientWidth}): ${outer.slice(0, 3).map(name).join(", ")}`);
+    }
     for (const el of document.querySelectorAll<HTMLElement>("body *")) {
       if (!el.textContent?.trim() || el.clientWidth <= 1 || el.clientHeight <= 1) continue;
       if (el.closest("svg, [aria-hidden='true']")) continue;
@@ -152,7 +156,8 @@ export async function chartProblems(page: Page, label: string): Promise<string[]
       charts.flatMap((c) => {
         const fig = c.closest("figure");
         const hidden = Boolean(c.closest("[aria-hidden='true']"));
-        const text = Boolean(fig?.querySelector("table")) || (fig?.querySelector("figcaption")?.textContent?.trim().length ?? 0) >= 40 || (fig?.querySelector("p")?.textContent?.trim().length ?? 0) >= 30;
+        // the figure's own words besides the drawing: a table, a caption or a sentence pointing to one
+        const text = Boolean(fig?.querySelector("table")) || (fig?.textContent ?? "").length - (c.textContent ?? "").length >= 30;
         return hidden && text ? [] : [`${label}: a chart without ${hidden ? "" : "aria-hidden and "}${text ? "" : "a table or text with its figures"}`];
       }),
     label,
