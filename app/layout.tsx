@@ -1,6 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
+import { RouteFocus } from "@/components/ui/route-focus";
 import { bodyFont, monoFont } from "./fonts";
 import "./globals.css";
 import { palette } from "@/lib/theme";
@@ -24,6 +25,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
           {children}
         </main>
         <SiteFooter />
+        <RouteFocus />
       </body>
     </html>
   );

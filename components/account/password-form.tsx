@@ -5,6 +5,7 @@ import { useForm } from "react-hook-form";
 import { useSWRConfig } from "swr";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { passwordChangeSchema } from "@/lib/account/browser";
 import { authClient } from "@/components/auth/auth-client";
@@ -15,7 +16,7 @@ export function PasswordForm() {
   const { mutate } = useSWRConfig();
   const [error, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState, reset } = useForm<Values>({
+  const { register, handleSubmit, setError, formState, reset, control } = useForm<Values>({
     resolver: zodResolver(passwordChangeSchema),
     defaultValues: { currentPassword: "", newPassword: "", confirm: "", signOutOthers: true },
   });
@@ -34,6 +35,7 @@ export function PasswordForm() {
   }
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <FormNotice message={notice} />
       <Field label="Current password" type="password" autoComplete="current-password" {...register("currentPassword")} error={formState.errors.currentPassword?.message} />

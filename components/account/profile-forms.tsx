@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { emailChangeSchema, nameSchema } from "@/lib/account/browser";
 import { authClient } from "@/components/auth/auth-client";
@@ -13,7 +14,7 @@ export function NameForm({ name }: { name: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof nameSchema>>({ resolver: zodResolver(nameSchema), defaultValues: { name } });
+  const { register, handleSubmit, formState, control } = useForm<z.infer<typeof nameSchema>>({ resolver: zodResolver(nameSchema), defaultValues: { name } });
   async function onSubmit(v: z.infer<typeof nameSchema>) {
     setError(null);
     setNotice(null);
@@ -24,6 +25,7 @@ export function NameForm({ name }: { name: string }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <FormNotice message={notice} />
       <Field label="Name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
@@ -37,7 +39,7 @@ export function NameForm({ name }: { name: string }) {
 export function EmailForm({ email }: { email: string }) {
   const [error, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState, reset } = useForm<z.infer<typeof emailChangeSchema>>({ resolver: zodResolver(emailChangeSchema), defaultValues: { email: "", password: "" } });
+  const { register, handleSubmit, setError, formState, reset, control } = useForm<z.infer<typeof emailChangeSchema>>({ resolver: zodResolver(emailChangeSchema), defaultValues: { email: "", password: "" } });
   async function onSubmit(v: z.infer<typeof emailChangeSchema>) {
     setFormError(null);
     setNotice(null);
@@ -54,6 +56,7 @@ export function EmailForm({ email }: { email: string }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-3">
+      <ErrorSummary control={control} />
       <p>
         Current address: <strong className="wrap-anywhere">{email}</strong>
       </p>

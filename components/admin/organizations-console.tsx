@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import { useSWRConfig } from "swr";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import type { OrganizationRow } from "@/lib/admin";
 import { createOrganizationSchema, renameOrganizationSchema } from "@/lib/admin/browser";
@@ -20,7 +21,7 @@ const KIND_LABEL: Record<string, string> = { contractor: "Sprinkler contractor",
 
 function CreateForm({ onDone }: { onDone: (m: string) => void }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, reset, formState } = useForm<z.input<typeof createOrganizationSchema>, unknown, z.output<typeof createOrganizationSchema>>({
+  const { register, handleSubmit, setError, reset, formState, control } = useForm<z.input<typeof createOrganizationSchema>, unknown, z.output<typeof createOrganizationSchema>>({
     resolver: zodResolver(createOrganizationSchema),
     defaultValues: { name: "", kind: "contractor", seats: 3 },
   });
@@ -33,6 +34,7 @@ function CreateForm({ onDone }: { onDone: (m: string) => void }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="grid grid-cols-1 gap-3 rounded border border-line bg-panel p-4 sm:grid-cols-[2fr_1fr_1fr_auto] sm:items-start">
+      <ErrorSummary control={control} />
       <div className="sm:col-span-4">
         <FormError message={error} />
       </div>
@@ -56,7 +58,7 @@ function CreateForm({ onDone }: { onDone: (m: string) => void }) {
 
 function RenameForm({ org, onDone }: { org: OrganizationRow; onDone: (m: string) => void }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof renameOrganizationSchema>, unknown, z.output<typeof renameOrganizationSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof renameOrganizationSchema>, unknown, z.output<typeof renameOrganizationSchema>>({
     resolver: zodResolver(renameOrganizationSchema),
     defaultValues: { name: org.name },
   });
@@ -68,6 +70,7 @@ function RenameForm({ org, onDone }: { org: OrganizationRow; onDone: (m: string)
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <Field label="New name" {...register("name")} error={formState.errors.name?.message} />
       <Button type="submit" disabled={formState.isSubmitting} className="self-start">

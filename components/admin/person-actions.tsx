@@ -4,6 +4,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError } from "@/components/ui/field";
 import { ROLES } from "@/lib/access/browser";
 import { banSchema, changeRoleSchema, moveOrganizationSchema, signOutSchema, unbanSchema } from "@/lib/admin/browser";
@@ -28,7 +29,7 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 
 function RoleForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof changeRoleSchema>, unknown, z.output<typeof changeRoleSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof changeRoleSchema>, unknown, z.output<typeof changeRoleSchema>>({
     resolver: zodResolver(changeRoleSchema),
     defaultValues: { role: ROLES.includes(person.role as never) ? (person.role as (typeof ROLES)[number]) : "learner", reason: "" },
   });
@@ -40,6 +41,7 @@ function RoleForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <SelectField label="New role" options={ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r]! }))} {...register("role")} error={formState.errors.role?.message} />
       <TextAreaField label="Reason for the role change" hint="Required. Saved in the audit log." {...register("reason")} error={formState.errors.reason?.message} />
@@ -53,7 +55,7 @@ function RoleForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
 function MoveForm({ person, organizations, onDone }: { person: PersonRow; organizations: Org[]; onDone: Done }) {
   const [error, setFormError] = useState<string | null>(null);
   const choices = organizations.filter((o) => o.id !== person.organizationId);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof moveOrganizationSchema>, unknown, z.output<typeof moveOrganizationSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof moveOrganizationSchema>, unknown, z.output<typeof moveOrganizationSchema>>({
     resolver: zodResolver(moveOrganizationSchema),
     defaultValues: { organizationId: "", reason: "" },
   });
@@ -66,6 +68,7 @@ function MoveForm({ person, organizations, onDone }: { person: PersonRow; organi
   if (!choices.length) return <p className="text-muted">There is no other organization to move to.</p>;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <SelectField
         label="Move to organization"
@@ -84,7 +87,7 @@ function MoveForm({ person, organizations, onDone }: { person: PersonRow; organi
 
 function BanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof banSchema>, unknown, z.output<typeof banSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof banSchema>, unknown, z.output<typeof banSchema>>({
     resolver: zodResolver(banSchema),
     defaultValues: { reason: "", days: "" },
   });
@@ -96,6 +99,7 @@ function BanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <TextAreaField label="Reason for the ban" hint="Required. Saved in the audit log." {...register("reason")} error={formState.errors.reason?.message} />
       <Field label="Ban for how many days" hint="Leave empty to ban until an admin lifts it." inputMode="numeric" {...register("days")} error={formState.errors.days?.message} />
@@ -108,7 +112,7 @@ function BanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
 
 function UnbanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof unbanSchema>, unknown, z.output<typeof unbanSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof unbanSchema>, unknown, z.output<typeof unbanSchema>>({
     resolver: zodResolver(unbanSchema),
     defaultValues: { reason: "" },
   });
@@ -120,6 +124,7 @@ function UnbanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <p>
         Banned{person.banExpires ? ` until ${person.banExpires.slice(0, 10)}` : " until lifted"}
@@ -135,7 +140,7 @@ function UnbanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
 
 function SignOutForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   const [error, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof signOutSchema>, unknown, z.output<typeof signOutSchema>>({
+  const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof signOutSchema>, unknown, z.output<typeof signOutSchema>>({
     resolver: zodResolver(signOutSchema),
     defaultValues: { reason: "" },
   });
@@ -147,6 +152,7 @@ function SignOutForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <p className="text-sm text-muted">Ends every session of this person now; they can sign in again.</p>
       <TextAreaField label="Reason for the sign-out (optional)" {...register("reason")} error={formState.errors.reason?.message} />

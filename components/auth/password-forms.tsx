@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/components/auth/auth-client";
 import { forgotSchema, resetSchema } from "@/lib/auth/browser";
@@ -12,7 +13,7 @@ import { forgotSchema, resetSchema } from "@/lib/auth/browser";
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof forgotSchema>>({ resolver: zodResolver(forgotSchema) });
+  const { register, handleSubmit, formState, control } = useForm<z.infer<typeof forgotSchema>>({ resolver: zodResolver(forgotSchema) });
   async function onSubmit(v: z.infer<typeof forgotSchema>) {
     setError(null);
     const { error } = await authClient.requestPasswordReset({ email: v.email, redirectTo: "/reset-password" });
@@ -23,6 +24,7 @@ export function ForgotPasswordForm() {
   if (sent) return <FormNotice message="If that address has a Riser account, a reset link is on its way. It works for one hour." />;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <Field label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>Send the reset link</Button>
@@ -33,7 +35,7 @@ export function ForgotPasswordForm() {
 export function ResetPasswordForm({ token }: { token: string | null }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof resetSchema>>({ resolver: zodResolver(resetSchema) });
+  const { register, handleSubmit, formState, control } = useForm<z.infer<typeof resetSchema>>({ resolver: zodResolver(resetSchema) });
   if (!token) return <FormError message="This reset link is incomplete or has expired. Ask for a new one." />;
   async function onSubmit(v: z.infer<typeof resetSchema>) {
     setError(null);
@@ -43,6 +45,7 @@ export function ResetPasswordForm({ token }: { token: string | null }) {
   }
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <Field label="New password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("password")} error={formState.errors.password?.message} />
       <Field label="New password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />

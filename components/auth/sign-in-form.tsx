@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/components/auth/auth-client";
 import { signInSchema } from "@/lib/auth/browser";
@@ -18,7 +19,7 @@ export function SignInForm() {
   const router = useRouter();
   const params = useSearchParams();
   const [error, setError] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(signInSchema) });
+  const { register, handleSubmit, formState, control } = useForm<Values>({ resolver: zodResolver(signInSchema) });
   const [unconfirmed, setUnconfirmed] = useState<string | null>(null);
 
   async function onSubmit(values: Values) {
@@ -43,6 +44,7 @@ export function SignInForm() {
 
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <ErrorSummary control={control} />
       {verifiedNotice(params.get("verified"), params.get("error"), error) ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
       {params.get("verified") && params.get("error") ? (
         <FormError message={params.get("error") === "TOKEN_EXPIRED" ? "That confirmation link has expired. Sign in below; if your address still needs confirming, you can send yourself a new link." : "That confirmation link is not valid. Sign in below; if your address still needs confirming, you can send yourself a new link."} />

@@ -3,6 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { signUpSchema, type SignUpInput } from "@/lib/auth/browser";
 import { postJson } from "@/lib/fetcher";
@@ -11,7 +12,7 @@ import { ResendConfirmation } from "./resend-confirmation";
 export function SignUpForm() {
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<{ message: string; email: string } | null>(null);
-  const { register, handleSubmit, formState, setError: setFieldError } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
+  const { register, handleSubmit, formState, setError: setFieldError, control } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
 
   async function onSubmit(values: SignUpInput) {
     setError(null);
@@ -37,6 +38,7 @@ export function SignUpForm() {
   }
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
       <Field label="Work e-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />

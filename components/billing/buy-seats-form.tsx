@@ -4,6 +4,7 @@ import { useEffect, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
 import { formatMoney, quote, type PriceTier } from "@/lib/billing/browser";
@@ -58,6 +59,7 @@ export function BuySeatsForm({ plans, currency, org, enabled }: { plans: PriceTi
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-xl flex-col gap-4 rounded border border-line bg-panel p-4" aria-labelledby="buy-h">
+      <ErrorSummary control={control} />
       <h2 id="buy-h" className="text-2xl">
         Buy seats
       </h2>

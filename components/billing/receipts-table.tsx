@@ -47,7 +47,7 @@ export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
                 cell: (r) => (
                   <>
                     <span className="font-mono">{r.number}</span>
-                    <span className="block max-w-48 truncate font-mono text-xs text-muted" title={r.reference}>
+                    <span className="block max-w-48 font-mono text-xs break-all text-muted" title={r.reference}>
                       {r.reference}
                     </span>
                   </>

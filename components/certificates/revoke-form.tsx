@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { FormError } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
 import { revokeInput, type RevokeInput } from "@/lib/certificates/browser";
@@ -14,7 +15,7 @@ export function RevokeForm({ id, serial, holderName }: { id: number; serial: str
   const fieldId = useId();
   const [open, setOpen] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
-  const { register, handleSubmit, formState, setError } = useForm<RevokeInput>({ resolver: zodResolver(revokeInput) });
+  const { register, handleSubmit, formState, setError, control } = useForm<RevokeInput>({ resolver: zodResolver(revokeInput) });
 
   async function onSubmit(values: RevokeInput) {
     setProblem(null);
@@ -38,6 +39,7 @@ export function RevokeForm({ id, serial, holderName }: { id: number; serial: str
   const error = formState.errors.reason?.message;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-2 rounded border border-caution bg-caution-light p-3">
+      <ErrorSummary control={control} />
       <label htmlFor={fieldId} className="font-bold">
         Why revoke {serial} ({holderName})?
       </label>

@@ -15,6 +15,7 @@ export function StatusBadge({ status, expiringSoon, size = "sm" }: { status: Cer
     <span
       className={`inline-flex items-center gap-1 rounded border font-bold ${size === "lg" ? "px-3 py-1 text-xl" : "px-2 py-0.5 text-sm"} ${cls}`}
       data-testid="certificate-status"
+      data-status-pill
     >
       <span aria-hidden="true">{MARK[status]}</span>
       {text}

@@ -3,6 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field } from "@/components/ui/field";
 import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/browser";
 import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/certificates/browser";
@@ -13,7 +14,7 @@ import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/ce
  */
 export function VerifyForm({ initial, serverError }: { initial?: string; serverError?: string }) {
   const router = useRouter();
-  const { register, handleSubmit, formState } = useForm<VerifyCodeInput>({
+  const { register, handleSubmit, formState, control } = useForm<VerifyCodeInput>({
     resolver: zodResolver(verifyCodeInput),
     defaultValues: { code: initial ?? "" },
   });
@@ -27,6 +28,7 @@ export function VerifyForm({ initial, serverError }: { initial?: string; serverE
       onSubmit={handleSubmit((v) => router.push(`/verify/${encodeURIComponent(verifyPathSegment(parseVerifyInput(v.code)!))}`))}
       className="flex max-w-xl flex-col gap-4 rounded border border-line bg-panel p-4"
     >
+      <ErrorSummary control={control} />
       <Field
         label="Verification code"
         hint={VERIFY_INPUT_HINT}

@@ -1,14 +1,18 @@
 "use client";
 import Link from "next/link";
+import { useEffect, useRef } from "react";
 import { Button } from "@/components/ui/button";
 import type { GradedAttempt } from "./types";
 
 export function QuizResults({ result, onRetry }: { result: GradedAttempt; onRetry: () => void }) {
+  const heading = useRef<HTMLHeadingElement>(null);
+  // The submit button is gone once the grade shows: the focus moves to the result it announces.
+  useEffect(() => heading.current?.focus(), []);
   const review = [...new Map(result.feedback.filter((f) => !f.correct).map((f) => [f.lesson.href, f.lesson])).values()];
   return (
     <section aria-labelledby="result-h" className="flex flex-col gap-4" data-testid="quiz-result">
       <div className={`rounded border-l-4 p-4 ${result.passed ? "border-pass bg-pass-light" : "border-caution bg-caution-light"}`}>
-        <h2 id="result-h" className="text-2xl">{result.passed ? "Passed" : "Not passed yet"}: {result.score}%</h2>
+        <h2 id="result-h" ref={heading} tabIndex={-1} className="text-2xl">{result.passed ? "Passed" : "Not passed yet"}: {result.score}%</h2>
         <p className="mt-1">
           {result.correctCount} of {result.total} correct; the pass mark is {result.passMark}%.
           {result.lateGraded ? " The time limit ran out, so the answers saved before it were graded." : ""}

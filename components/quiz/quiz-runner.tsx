@@ -3,6 +3,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { LiveMessage } from "@/components/ui/live-message";
 import { postJson } from "@/lib/fetcher";
 import { QuestionField } from "./question-field";
 import { QuizResults } from "./quiz-results";
@@ -135,12 +136,13 @@ export function QuizRunner({ module, canStart, blockedReason, startLabel = "Star
   const total = open.questions.length;
   const answered = open.questions.filter((q) => isAnswered(answers[q.position])).length;
   const mins = left !== null ? Math.floor(left / 60000) : null;
+  const saveText = saveState === "saving" ? "Saving…" : saveState === "saved" ? "Answers saved" : saveState === "offline" ? "Offline — answers kept here, saved when back online" : "";
   const secs = left !== null ? Math.floor((left % 60000) / 1000) : null;
 
   return (
     <div className="flex flex-col gap-4">
-      <div className="sticky top-0 z-10 flex flex-wrap items-center gap-4 rounded border border-line bg-panel p-3">
-        <p aria-live="polite" data-testid="quiz-progress">Answered {answered} of {total}</p>
+      <div data-sticky-bar="top" className="sticky top-0 z-10 flex flex-wrap items-center gap-4 rounded border border-line bg-panel p-3">
+        <p data-testid="quiz-progress">Answered {answered} of {total}</p>
         <div className="h-2 min-w-24 flex-1 rounded bg-line" role="progressbar" aria-label="Questions answered" aria-valuemin={0} aria-valuemax={total} aria-valuenow={answered}>
           <div className="h-2 rounded bg-water" style={{ width: `${(answered / total) * 100}%` }} />
         </div>
@@ -149,9 +151,8 @@ export function QuizRunner({ module, canStart, blockedReason, startLabel = "Star
             {String(mins).padStart(2, "0")}:{String(secs).padStart(2, "0")} left
           </p>
         ) : null}
-        <p className="text-sm text-muted" aria-live="polite">
-          {saveState === "saving" ? "Saving…" : saveState === "saved" ? "Answers saved" : saveState === "offline" ? "Offline — answers kept here, saved when back online" : ""}
-        </p>
+        <p className="text-sm text-muted">{saveText}</p>
+        <LiveMessage message={saveState === "saving" ? "" : saveText} delay={1000} testId="quiz-save-announcement" />
       </div>
       {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
       <ol className="flex flex-col gap-4">

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useState } from "react";
 import useSWR from "swr";
+import { LiveMessage } from "@/components/ui/live-message";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { SearchHit } from "@/lib/search/browser";
@@ -21,6 +22,7 @@ export function SearchBox() {
     router.replace(debounced ? `/search?q=${encodeURIComponent(debounced)}` : "/search", { scroll: false });
   }, [debounced, router]);
 
+  const noResults = `No results for “${debounced}”. Try a shorter word or a trade term.`;
   return (
     <div className="flex flex-col gap-4">
       <form role="search" onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-1">
@@ -36,7 +38,8 @@ export function SearchBox() {
           className="min-h-11 rounded border border-ink/40 bg-panel px-3 py-2"
         />
       </form>
-      <div aria-live="polite" aria-busy={isLoading}>
+      <LiveMessage message={!debounced || !data || isLoading ? "" : data.hits.length === 0 ? noResults : plural(data.hits.length, "result")} testId="search-announcement" />
+      <div aria-busy={isLoading}>
         {!debounced ? <p className="text-muted">Type a word to search. Results appear as you type.</p> : null}
         {error ? <p role="alert" className="text-caution">Search is not available right now: {error.message}</p> : null}
         {debounced && isLoading && !data ? <p className="text-muted">Searching…</p> : null}
@@ -49,10 +52,9 @@ export function SearchBox() {
             ?
           </p>
         ) : null}
-        {debounced && data && data.hits.length === 0 ? <p>No results for “{debounced}”. Try a shorter word or a trade term.</p> : null}
+        {debounced && data && data.hits.length === 0 ? <p>{noResults}</p> : null}
         {debounced && data && data.hits.length > 0 ? (
           <>
-            <p className="sr-only">{plural(data.hits.length, "result")}</p>
             <ol className="flex flex-col gap-3">
               {data.hits.map((h) => (
                 <li key={h.id} className="rounded border border-line bg-panel p-3">

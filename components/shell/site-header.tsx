@@ -3,7 +3,7 @@ import { SiteNav } from "./site-nav";
 
 export function SiteHeader() {
   return (
-    <header className="border-b-4 border-copper bg-ink text-paper">
+    <header className="on-dark border-b-4 border-copper bg-ink text-paper">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
         <Link href="/" className="flex items-center gap-2 text-xl font-bold text-paper no-underline">
           <RiserMark />

@@ -28,7 +28,7 @@ export function EvidenceThumbs({ signOffId, items }: { signOffId: string; items:
                 PDF
               </span>
             )}
-            <span className="mt-1 block truncate text-sm text-water underline">{e.name}</span>
+            <span className="mt-1 block text-sm break-all text-water underline">{e.name}</span>
             <span className="block font-mono text-xs text-muted">{formatBytes(e.size)}</span>
           </a>
         </li>

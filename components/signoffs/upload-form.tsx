@@ -4,7 +4,9 @@ import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { FormError, FormNotice } from "@/components/ui/field";
+import { LiveMessage } from "@/components/ui/live-message";
 import { ACCEPT, MAX_FILES, MAX_UPLOAD_LABEL, checkChosenFiles, uploadFormInput, type UploadFormInput } from "@/lib/signoffs/browser";
 
 type ServerAnswer = { status: number; body: { error?: string; fieldErrors?: Record<string, string[]> } };
@@ -30,6 +32,9 @@ function send(form: FormData, onProgress: (pct: number) => void): Promise<Server
   });
 }
 
+/** Upload progress in words; spoken in quarter steps so a screen reader is not flooded. */
+const progressText = (pct: number | null) => `${pct ?? 0}% — keep this page open`;
+
 /** The learner's evidence upload for one skill: files, a note, progress, and every error in words. */
 export function UploadForm({ module, skill, skillTitle }: { module: string; skill: string; skillTitle: string }) {
   const router = useRouter();
@@ -39,7 +44,7 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
   const [problem, setProblem] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
-  const { register, handleSubmit, formState, setError } = useForm<UploadFormInput>({ resolver: zodResolver(uploadFormInput), defaultValues: { note: "" } });
+  const { register, handleSubmit, formState, setError, control } = useForm<UploadFormInput>({ resolver: zodResolver(uploadFormInput), defaultValues: { note: "" } });
 
   async function onSubmit(values: UploadFormInput) {
     setProblem(null);
@@ -70,6 +75,7 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
   const busy = progress !== null;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3" aria-label={`Send evidence: ${skillTitle}`}>
+      <ErrorSummary control={control} extra={[fileError ? { field: `${id}-files`, message: fileError } : null]} />
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-files`} className="font-bold">
           Photos or PDF
@@ -121,11 +127,12 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
       <FormError message={problem} />
       <FormNotice message={done} />
       {busy ? (
-        <div className="flex items-center gap-3" role="status">
+        <div className="flex items-center gap-3">
           <progress max={100} value={progress} className="h-3 w-48" aria-label="Upload progress" />
-          <span className="font-mono text-sm">{progress}% — keep this page open</span>
+          <span className="font-mono text-sm">{progressText(progress)}</span>
         </div>
       ) : null}
+      <LiveMessage message={busy ? progressText(Math.floor((progress ?? 0) / 25) * 25) : ""} delay={1000} testId="upload-announcement" />
       <div>
         <Button type="submit" disabled={busy}>
           {busy ? "Sending…" : "Send for sign-off"}

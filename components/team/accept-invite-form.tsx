@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/components/auth/auth-client";
 import { postJson } from "@/lib/fetcher";
@@ -15,7 +16,7 @@ export function AcceptInviteForm({ token, email, name }: { token: string; email:
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [created, setCreated] = useState(false);
-  const { register, handleSubmit, formState, setError: setFieldError } = useForm<AcceptInviteInput>({
+  const { register, handleSubmit, formState, setError: setFieldError, control } = useForm<AcceptInviteInput>({
     resolver: zodResolver(acceptInviteSchema),
     defaultValues: { token, name, password: "", confirm: "" },
   });
@@ -48,6 +49,7 @@ export function AcceptInviteForm({ token, email, name }: { token: string; email:
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <div className="flex flex-col gap-1">
         <span className="font-bold">E-mail</span>

@@ -7,6 +7,7 @@ import { Controller, useForm, useWatch } from "react-hook-form";
 import useSWR from "swr";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson, postJson } from "@/lib/fetcher";
@@ -72,6 +73,7 @@ export function AssignForm({ modules, paths, teams, org }: { modules: Item[]; pa
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-2xl flex-col gap-5" aria-label="Assign work">
+      <ErrorSummary control={control} />
       <FormError message={error} />
       <FormNotice message={done} />
       <fieldset className="flex flex-col gap-2">

@@ -35,8 +35,8 @@ export function BoardCellView({ cell, person, module, personId }: { cell: RichCe
           {cell.expiresAt ? <li>Valid until {shortDate(cell.expiresAt)}</li> : null}
         </ul>
         <p className="mt-2 flex flex-wrap gap-3">
-          {cell.waitingSignOffs ? <Link href="/team/sign-offs">Review the sign-off</Link> : null}
-          <Link href={`/team/people/${personId}`}>Open {person}</Link>
+          {cell.waitingSignOffs ? <Link href="/team/sign-offs" className="inline-flex min-h-6 items-center">Review the sign-off</Link> : null}
+          <Link href={`/team/people/${personId}`} className="inline-flex min-h-6 items-center">Open {person}</Link>
         </p>
       </div>
     </details>

@@ -148,10 +148,10 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
       <h2 id="board-heading" className="mb-3 text-2xl">
         People and modules
       </h2>
-      <form role="search" aria-label="Filter the board" className="mb-4 grid gap-3 rounded border border-line bg-panel p-3 sm:grid-cols-2 lg:grid-cols-6" onSubmit={(e) => e.preventDefault()}>
-        <div className="flex flex-col gap-1">
+      <form role="search" aria-label="Filter the board" className="mb-4 grid grid-cols-1 gap-3 rounded border border-line bg-panel p-3 sm:grid-cols-2 lg:grid-cols-6" onSubmit={(e) => e.preventDefault()}>
+        <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="board-team" className="text-sm font-bold">Team</label>
-          <select id="board-team" value={f.team} onChange={(e) => set({ team: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="board-team" value={f.team} onChange={(e) => set({ team: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
             <option value="">All teams</option>
             {teams.map((t) => (
               <option key={t.id} value={t.id}>{showOrgNames ? `${t.orgName} · ${t.name}` : t.name}</option>
@@ -159,31 +159,31 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
             <option value="none">No team</option>
           </select>
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="board-status" className="text-sm font-bold">Status</label>
-          <select id="board-status" value={f.status} onChange={(e) => set({ status: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="board-status" value={f.status} onChange={(e) => set({ status: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
             <option value="">Any status</option>
             {BOARD_STATUSES.map((s) => (
               <option key={s} value={s}>{STATUS_LABELS[s]}</option>
             ))}
           </select>
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="board-module" className="text-sm font-bold">Module</label>
-          <select id="board-module" value={f.module} onChange={(e) => set({ module: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="board-module" value={f.module} onChange={(e) => set({ module: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
             <option value="">All modules</option>
             {modules.map((m) => (
               <option key={m.slug} value={m.slug}>{m.title}</option>
             ))}
           </select>
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="board-due" className="text-sm font-bold">Open work due by</label>
-          <input id="board-due" type="date" value={f.dueBefore} onChange={(e) => set({ dueBefore: e.target.value })} className="min-h-11 rounded border border-ink/40 bg-panel px-2" />
+          <input id="board-due" type="date" value={f.dueBefore} onChange={(e) => set({ dueBefore: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2" />
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="board-q" className="text-sm font-bold">Name or e-mail</label>
-          <input id="board-q" type="search" value={search} onChange={(e) => setSearch(e.target.value)} className="min-h-11 rounded border border-ink/40 bg-panel px-2" />
+          <input id="board-q" type="search" value={search} onChange={(e) => setSearch(e.target.value)} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2" />
         </div>
         <div className="flex items-end">
           <button
@@ -292,7 +292,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
           <label htmlFor="board-size" className="ml-auto text-sm font-bold">
             Per page
           </label>
-          <select id="board-size" value={f.pageSize} onChange={(e) => set({ pageSize: Number(e.target.value) })} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="board-size" value={f.pageSize} onChange={(e) => set({ pageSize: Number(e.target.value) })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
             {PAGE_SIZES.map((n) => (
               <option key={n} value={n}>{n}</option>
             ))}

@@ -6,6 +6,7 @@ import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
 import { INVITE_DAYS, INVITE_ROLES, ROLE_LABELS, inviteSchema, type InviteInput } from "@/lib/team/browser";
@@ -18,7 +19,7 @@ export function InviteForm({ teams, org }: { teams: { id: string; name: string }
   const ids = { role: useId(), team: useId() };
   const [error, setError] = useState<{ message: string; billing?: string } | null>(null);
   const [done, setDone] = useState<string | null>(null);
-  const { register, handleSubmit, formState, reset, setError: setFieldError } = useForm<InviteInput, unknown, Out>({
+  const { register, handleSubmit, formState, reset, setError: setFieldError, control } = useForm<InviteInput, unknown, Out>({
     resolver: zodResolver(inviteSchema),
     defaultValues: { email: "", name: "", role: "learner", teamId: "", org: org ?? undefined },
   });
@@ -39,6 +40,7 @@ export function InviteForm({ teams, org }: { teams: { id: string; name: string }
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-xl flex-col gap-4" aria-label="Invite one person">
+      <ErrorSummary control={control} />
       {error ? (
         <div className="flex flex-col gap-1">
           <FormError message={error.message} />

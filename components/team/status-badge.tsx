@@ -14,7 +14,7 @@ const STYLE: Record<BoardStatus, { cls: string; mark: string; short: string }> =
 export function StatusBadge({ status, compact = false }: { status: BoardStatus; compact?: boolean }) {
   const s = STYLE[status];
   return (
-    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded border px-1.5 py-0.5 text-xs font-bold ${s.cls}`} title={STATUS_LABELS[status]}>
+    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded border px-1.5 py-0.5 text-xs font-bold ${s.cls}`} title={STATUS_LABELS[status]} data-status-pill>
       <span aria-hidden="true">{s.mark}</span>
       {compact ? (
         <>

@@ -65,7 +65,7 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
                     <XAxis dataKey="label" tick={{ fontSize: WEEK_AXIS.fontSize, fill: chartColors.axis, angle: WEEK_AXIS.angle, textAnchor: WEEK_AXIS.textAnchor }} interval={WEEK_AXIS.interval} height={WEEK_AXIS.height} />
                     <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
-                    <Bar dataKey="completions" name="Completions" fill={chartColors.primary} />
+                    <Bar dataKey="completions" name="Completions" fill={chartColors.primary} isAnimationActive={false} />
                   </BarChart>
                 </ResponsiveContainer>
               </div>
@@ -96,7 +96,7 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
                     <XAxis type="number" domain={[0, 100]} ticks={[...PERCENT_AXIS.ticks]} unit="%" tick={{ fontSize: PERCENT_AXIS.fontSize, fill: chartColors.axis }} />
                     <YAxis type="category" dataKey="team" width={110} tick={{ fontSize: 11, fill: chartColors.axis }} />
                     <Tooltip />
-                    <Bar dataKey="passed" name="Passed (%)" fill={chartColors.secondary} />
+                    <Bar dataKey="passed" name="Passed (%)" fill={chartColors.secondary} isAnimationActive={false} />
                   </BarChart>
                 </ResponsiveContainer>
               </div>

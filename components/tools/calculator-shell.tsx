@@ -170,7 +170,7 @@ function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport
       ) : (
         <p className="text-sm font-bold text-caution">Fix the highlighted fields to see the result.</p>
       )}
-      <a href={`#${id}-result`} className="shrink-0 text-sm">
+      <a href={`#${id}-result`} className="inline-flex min-h-6 shrink-0 items-center text-sm">
         Full result
       </a>
     </div>

@@ -64,7 +64,7 @@ test("an admin changes a person's role through the people screen", async ({ brow
   await dialog.getByLabel("New role").selectOption("manager");
   await dialog.getByRole("button", { name: "Change role" }).click();
   // The reason is required: a field error, and nothing changes.
-  await expect(dialog.getByText(/Give a reason/)).toBeVisible();
+  await expect(dialog.getByRole("alert").filter({ hasText: /Give a reason/ })).toBeVisible(); // the field's own error (the error summary repeats it)
   await dialog.getByLabel("Reason for the role change").fill("Runs the Design office from next month");
   await dialog.getByRole("button", { name: "Change role" }).click();
   await expect(dialog).toBeHidden();
@@ -166,10 +166,10 @@ test("the password form asks for the current password and says when it is wrong"
   await page.getByLabel("New password", { exact: true }).fill("another-good-pass-1");
   await page.getByLabel("New password again").fill("another-good-pass-1");
   await page.getByRole("button", { name: "Change the password" }).click();
-  await expect(page.getByText("Enter your current password", { exact: true })).toBeVisible();
+  await expect(page.getByRole("alert").filter({ hasText: /^Enter your current password$/ })).toBeVisible();
   await page.getByLabel("Current password").fill("not-the-password-9");
   await page.getByRole("button", { name: "Change the password" }).click();
-  await expect(page.getByText("That is not your current password")).toBeVisible();
+  await expect(page.getByRole("alert").filter({ hasText: "That is not your current password" })).toBeVisible();
   await page.getByLabel("Current password").fill(PASSWORD);
   await page.getByRole("button", { name: "Change the password" }).click();
   await expect(page.getByRole("status").filter({ hasText: "Your password is changed" })).toBeVisible();

@@ -41,7 +41,7 @@ test("the check page takes a typed code, explains a malformed one, and shows not
   await page.goto("/verify");
   await page.getByLabel("Verification code").fill("not-a-code");
   await page.getByRole("button", { name: "Check certificate" }).click();
-  await expect(page.getByText("That is neither a Riser verification code nor a certificate serial")).toBeVisible();
+  await expect(page.getByRole("alert").filter({ hasText: "That is neither a Riser verification code nor a certificate serial" })).toBeVisible(); // the field's own error (the error summary repeats it)
   await page.getByLabel("Verification code").fill("AAAAAAAAAAAAAAAAAAAAAAAA");
   await page.getByRole("button", { name: "Check certificate" }).click();
   await expect(page.getByRole("heading", { name: "No certificate matches this code" })).toBeVisible();
@@ -66,7 +66,7 @@ test("a manager's revoke form insists on a reason before anything is sent", asyn
   const row = page.locator("li", { hasText: "Rafaela Quint" }).first();
   await row.getByRole("button", { name: /Revoke/ }).click();
   await row.getByRole("button", { name: "Revoke certificate" }).click();
-  await expect(row.getByText("Give the reason for revoking")).toBeVisible();
+  await expect(row.getByRole("alert").filter({ hasText: "Give the reason for revoking" })).toBeVisible(); // the field's own error (the error summary repeats it)
   await row.getByRole("button", { name: "Cancel" }).click();
   await expect(row.getByTestId("certificate-status")).toHaveText(/Valid/);
 });

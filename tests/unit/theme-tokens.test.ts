@@ -30,6 +30,21 @@ describe("palette tokens", () => {
     for (const t of ["ink", "muted", "copper", "water", "caution", "pass"] as const) expect(contrast(palette[t], palette.paper), t).toBeGreaterThanOrEqual(4.5);
   });
 
+  it("status pills, buttons and the header keep 4.5:1 text on their own fills", () => {
+    // text colour on the fill it sits on: pills (light fills), buttons (white on copper and caution), the header
+    const pairs = [["water", "water-light"], ["pass", "pass-light"], ["caution", "caution-light"], ["copper", "copper-light"], ["muted", "panel"], ["panel", "copper"], ["panel", "caution"], ["paper", "ink"]] as const;
+    for (const [fg, bg] of pairs) expect(contrast(tokens[fg]!, tokens[bg]!), `${fg} on ${bg}`).toBeGreaterThanOrEqual(4.5);
+  });
+
+  it("the focus ring keeps 3:1 against what surrounds it (WCAG 1.4.11 non-text contrast)", () => {
+    for (const bg of ["paper", "panel"] as const) expect(contrast(palette.water, palette[bg]), `water ring on ${bg}`).toBeGreaterThanOrEqual(3);
+    // on the dark header the ring is paper: water on ink would be about 2.4:1
+    expect(contrast(palette.water, palette.ink)).toBeLessThan(3);
+    expect(css).toMatch(/\.on-dark :focus-visible\s*{\s*outline-color: var\(--color-paper\)/);
+    expect(contrast(palette.paper, palette.ink)).toBeGreaterThanOrEqual(3);
+    expect(readFileSync(path.join(process.cwd(), "components/shell/site-header.tsx"), "utf8")).toMatch(/<header className="on-dark /);
+  });
+
   it("no component or page outside the calculators repeats a palette hex value", () => {
     const values = Object.values(palette).filter((v) => v !== "#FFFFFF");
     const pattern = new RegExp(values.join("|"), "i");
