@@ -1,5 +1,5 @@
 /** Organizations (a sprinkler contractor or a home builder), their teams, and the audit and mail logs. */
-import { datetime, index, int, json, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { boolean, datetime, index, int, json, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 
 export const organization = mysqlTable("organization", {
   id: varchar("id", { length: 36 }).primaryKey(),
@@ -7,6 +7,8 @@ export const organization = mysqlTable("organization", {
   kind: varchar("kind", { length: 20 }).notNull().default("contractor"), // contractor | builder
   seats: int("seats").notNull().default(3),
   trialEndsAt: datetime("trial_ends_at"),
+  /** the organization's managers must use two-step sign-in (TOTP) before team pages and APIs work */
+  requireManagerTwoFactor: boolean("require_manager_two_factor").default(false).notNull(),
   createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
 });
 
