@@ -1,5 +1,5 @@
 import createMDX from "@next/mdx";
-import { securityHeaders } from "./lib/security-headers.mjs";
+import { otherSecurityHeaders } from "./lib/security-headers.mjs";
 
 const isProd = process.env.NODE_ENV === "production";
 
@@ -17,8 +17,9 @@ const nextConfig = {
   experimental: { authInterrupts: true },
   serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode"],
   async headers() {
-    // Security headers for every response (pages and API); CSP without unsafe-eval in production.
-    return [{ source: "/:path*", headers: securityHeaders(isProd) }];
+    // Security headers for every response (pages and API). The Content-Security-Policy comes from
+    // proxy.ts: pages need a fresh script nonce per request, which a fixed header cannot carry.
+    return [{ source: "/:path*", headers: otherSecurityHeaders }];
   },
 };
 

@@ -1,7 +1,7 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
-import { applySecurityHeaders } from "@/lib/security-headers.mjs";
+import { applySecurityHeaders, contentSecurityPolicy, newNonce } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
@@ -48,9 +48,23 @@ const outagePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><
 <body style="font-family:system-ui,sans-serif;background:#F7F4EE;color:#14202B;max-width:40rem;margin:3rem auto;padding:0 1rem">
 <h1>Riser is briefly unavailable</h1><p>Our database is not answering right now. Nothing you saved is lost. This page will work again as soon as it is back &mdash; try again in a minute.</p></body></html>`;
 
+/**
+ * Passes the request on with its Content-Security-Policy: a fresh nonce per request, set on the request
+ * (Next reads the nonce from it while rendering and stamps its scripts) and on the response.
+ * Pages render per request for this (app/layout.tsx); see lib/security-headers.mjs for the policy.
+ */
+function nextWithCsp(req: NextRequest, requestHeaders: Headers): NextResponse {
+  // JSON and files run no script: only pages get a nonce
+  const csp = contentSecurityPolicy(production, req.nextUrl.pathname.startsWith("/api/") ? undefined : newNonce());
+  requestHeaders.set("content-security-policy", csp);
+  const res = NextResponse.next({ request: { headers: requestHeaders } });
+  res.headers.set("content-security-policy", csp);
+  return res;
+}
+
 export async function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
-  if (pathname === "/api/health") return NextResponse.next();
+  if (pathname === "/api/health") return nextWithCsp(req, new Headers(req.headers));
   if (!(await databaseUp())) {
     // The proxy's own answers carry the same security headers as every other response.
     const headers = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store" }), production);
@@ -76,7 +90,7 @@ export async function proxy(req: NextRequest) {
   // and the trusted proxies only, overwriting whatever the client sent under that name.
   const headers = new Headers(req.headers);
   headers.set(CLIENT_IP_HEADER, clientIpOf(req.headers));
-  return NextResponse.next({ request: { headers } });
+  return nextWithCsp(req, headers);
 }
 
 export const config = {
