@@ -1,8 +1,6 @@
 import createMDX from "@next/mdx";
 import { otherSecurityHeaders } from "./lib/security-headers.mjs";
 
-const isProd = process.env.NODE_ENV === "production";
-
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",

@@ -24,6 +24,8 @@ export const user = mysqlTable(
     // Riser
     organizationId: varchar("organization_id", { length: 36 }),
     teamId: varchar("team_id", { length: 36 }),
+    /** when the person joined their current organization by a move (null: from the start) */
+    organizationSince: datetime("organization_since", { fsp: 3 }),
   },
   // user_org_name_idx: the team board pages an organization's people in name order (lib/team/board.ts)
   (t) => [index("user_org_idx").on(t.organizationId, t.teamId), index("user_org_name_idx").on(t.organizationId, t.name)],

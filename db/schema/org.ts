@@ -27,6 +27,25 @@ export const team = mysqlTable(
   (t) => [uniqueIndex("team_org_name_uq").on(t.organizationId, t.name)],
 );
 
+/**
+ * A membership that ended when an admin moved the person to another organization: the organization
+ * left keeps read-only sight of the person's records dated between joinedAt (null: from the start)
+ * and leftAt (lib/access/records.ts). Written in the move's transaction.
+ */
+export const formerMembership = mysqlTable(
+  "former_membership",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    userId: varchar("user_id", { length: 36 }).notNull(),
+    organizationId: varchar("organization_id", { length: 36 })
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    joinedAt: datetime("joined_at", { fsp: 3 }),
+    leftAt: datetime("left_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("former_membership_org_user_idx").on(t.organizationId, t.userId, t.leftAt)],
+);
+
 /** Append-only in the app's code paths: written only through lib/audit. */
 export const auditLog = mysqlTable(
   "audit_log",

@@ -117,3 +117,4 @@ export async function requireViewer(rule: Exclude<Rule, "public"> = "signed-in",
   return viewer;
 }
 export * from "./scope";
+export * from "./records";
