@@ -7,7 +7,7 @@ import { StatusBadge } from "@/components/team/status-badge";
 import { PersonControls } from "@/components/team/person-controls";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
-import { requireViewer, type RecordWindow, type Viewer } from "@/lib/access";
+import { requireViewer, type RecordWindow } from "@/lib/access";
 import { assignedWork } from "@/lib/team";
 import { boardModules } from "@/lib/team";
 import { personForViewer, personHistory } from "@/lib/team";
@@ -26,7 +26,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
   if (found.state === "missing") notFound();
   if (found.state === "forbidden") forbidden();
   const p = found.person;
-  if (found.state === "former") return <FormerMember viewer={viewer} person={p} window={found.window} />;
+  if (found.state === "former") return <FormerMember person={p} window={found.window} />;
   const [{ items, cells }, history, teams] = await Promise.all([
     assignedWork(p),
     personHistory(p.id, new Date(), found.window),
@@ -95,7 +95,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
  * A person an admin moved to another organization, seen by a manager of the one they left: read only,
  * the records of the time they were its member (lib/access/records.ts), and no controls.
  */
-async function FormerMember({ viewer, person, window }: { viewer: Viewer; person: { id: string; name: string }; window: RecordWindow }) {
+async function FormerMember({ person, window }: { person: { id: string; name: string }; window: RecordWindow }) {
   const history = await personHistory(person.id, new Date(), window);
   return (
     <>
@@ -113,9 +113,6 @@ async function FormerMember({ viewer, person, window }: { viewer: Viewer; person
         <h2 id="certs" className="mb-3 text-2xl">Certificates</h2>
         <PersonCertificates certificates={history.certificates} />
       </section>
-      <div className="mb-8">
-        <PersonSignOffs viewer={viewer} personId={person.id} />
-      </div>
     </>
   );
 }
