@@ -79,7 +79,8 @@ export async function personHistory(personId: string, now = new Date(), window: 
       .limit(100),
   ]);
   return {
-    attempts: attempts.filter((a) => inWindow(window, a.startedAt)),
+    // an attempt counts when it was graded (where the person belonged then), or started if never submitted
+    attempts: attempts.filter((a) => inWindow(window, a.submittedAt ?? a.startedAt)),
     lessons: lessons.filter((l) => inWindow(window, l.completedAt)),
     certificates: certs.filter((c) => window.allCertificates || inWindow(window, c.issuedAt)).map((c) => {
       const status = certificateStatus(c, now);
