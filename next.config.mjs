@@ -1,7 +1,5 @@
 import createMDX from "@next/mdx";
-import { securityHeaders } from "./lib/security-headers.mjs";
-
-const isProd = process.env.NODE_ENV === "production";
+import { otherSecurityHeaders } from "./lib/security-headers.mjs";
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
@@ -17,8 +15,9 @@ const nextConfig = {
   experimental: { authInterrupts: true },
   serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode", "prom-client"],
   async headers() {
-    // Security headers for every response (pages and API); CSP without unsafe-eval in production.
-    return [{ source: "/:path*", headers: securityHeaders(isProd) }];
+    // Security headers for every response (pages and API). The Content-Security-Policy comes from
+    // proxy.ts: pages need a fresh script nonce per request, which a fixed header cannot carry.
+    return [{ source: "/:path*", headers: otherSecurityHeaders }];
   },
 };
 

@@ -2,7 +2,7 @@ import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
 import { REQUEST_ID_HEADER, requestIdFor } from "@/lib/request-id";
-import { applySecurityHeaders } from "@/lib/security-headers.mjs";
+import { applySecurityHeaders, contentSecurityPolicy, newNonce } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
@@ -54,13 +54,30 @@ const outagePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><
 /** Health, readiness and metrics answer for themselves, database or not (app/api/health, app/api/metrics). */
 const SELF_REPORTING = /^\/api\/(health(\/(live|ready))?|metrics)$/;
 
+/**
+ * Passes the request on with its Content-Security-Policy: a fresh nonce per request, set on the request
+ * (Next reads the nonce from it while rendering and stamps its scripts) and on the response.
+ * Pages render per request for this (app/layout.tsx); see lib/security-headers.mjs for the policy.
+ * The request id goes on the response too.
+ */
+function nextWithCsp(req: NextRequest, requestHeaders: Headers): NextResponse {
+  // JSON and files run no script: only pages get a nonce
+  const csp = contentSecurityPolicy(production, req.nextUrl.pathname.startsWith("/api/") ? undefined : newNonce());
+  requestHeaders.set("content-security-policy", csp);
+  const res = NextResponse.next({ request: { headers: requestHeaders } });
+  res.headers.set("content-security-policy", csp);
+  const requestId = requestHeaders.get(REQUEST_ID_HEADER);
+  if (requestId) res.headers.set(REQUEST_ID_HEADER, requestId);
+  return res;
+}
+
 export async function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
   const requestId = requestIdFor(req.headers);
   // handlers read the id from the request: always this one, never what the client sent
   const headers = new Headers(req.headers);
   headers.set(REQUEST_ID_HEADER, requestId);
-  if (SELF_REPORTING.test(pathname)) return NextResponse.next({ request: { headers } });
+  if (SELF_REPORTING.test(pathname)) return nextWithCsp(req, headers);
   if (!(await databaseUp())) {
     // The proxy's own answers carry the same security headers as every other response.
     const answer = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store", [REQUEST_ID_HEADER]: requestId }), production);
@@ -89,8 +106,7 @@ export async function proxy(req: NextRequest) {
   // and the trusted proxies only, overwriting whatever the client sent under that name.
   headers.set(CLIENT_IP_HEADER, clientIpOf(req.headers));
   if (checked.setCookies.length) headers.set("cookie", withCookies(req.headers.get("cookie") ?? "", checked.setCookies));
-  const res = NextResponse.next({ request: { headers } });
-  res.headers.set(REQUEST_ID_HEADER, requestId);
+  const res = nextWithCsp(req, headers);
   for (const c of checked.setCookies) res.headers.append("set-cookie", c);
   return res;
 }

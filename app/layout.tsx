@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { RouteFocus } from "@/components/ui/route-focus";
@@ -13,7 +14,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: palette.ink };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page renders per request: its scripts carry the nonce of that request's CSP (proxy.ts).
+  // Prerendered HTML would hold no nonce, and the policy allows no other inline script.
+  await connection();
   return (
     <html lang="en" className={`${bodyFont.variable} ${monoFont.variable}`}>
       <body>

@@ -1,5 +1,10 @@
 /** The invented demo scenario. Used by the seed and by tests that sign in as demo people. */
 export const DEMO_PASSWORD = "riser-demo-2026";
+/**
+ * The demo admin's authenticator secret (admins must use two-step sign-in). Local demo data only, as
+ * published as the password; README gives it in the base32 form authenticator apps take.
+ */
+export const DEMO_ADMIN_TOTP_SECRET = "riser-demo-admin-authenticator";
 
 export const DEMO_ORGS = [
   { key: "quillmoor", name: "Quillmoor Fire Protection", kind: "contractor", seats: 25, teams: ["North crew", "South crew", "Design office"] },

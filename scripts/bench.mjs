@@ -14,7 +14,9 @@ import { ensureDependencies } from "./lib/steps.mjs";
 const ALL = ["throughput", "search", "lesson-js", "quiz-submit", "certificate-pdf", "team-board", "lighthouse"];
 const wanted = process.argv.slice(2).filter((a) => !a.startsWith("--"));
 const names = (wanted.length ? wanted : ALL).filter((n) => existsSync(path.join(root, "bench", `${n}.ts`)));
-const app = stack({ profile: "test-h", reset: true, stdio: "ignore" });
+// --profile=test-x runs on another test profile (default test-h)
+const profile = process.argv.find((a) => a.startsWith("--profile="))?.split("=")[1] ?? "test-h";
+const app = stack({ profile, reset: true, stdio: "ignore" });
 
 ensureDependencies();
 try {

@@ -1,6 +1,6 @@
 "use client";
 import { createAuthClient } from "better-auth/react";
-import { adminClient } from "better-auth/client/plugins";
+import { adminClient, twoFactorClient } from "better-auth/client/plugins";
 
-/** The browser's auth client: same origin, so no base URL. */
-export const authClient = createAuthClient({ plugins: [adminClient()] });
+/** The browser's auth client: same origin, so no base URL. The sign-in form handles the second step itself. */
+export const authClient = createAuthClient({ plugins: [adminClient(), twoFactorClient()] });

@@ -11,6 +11,7 @@ import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/components/auth/auth-client";
 import { signInSchema } from "@/lib/auth/browser";
 import { ResendConfirmation } from "./resend-confirmation";
+import { SecondStepForm } from "./second-step-form";
 import { safeNext } from "@/lib/safe-next";
 
 type Values = z.infer<typeof signInSchema>;
@@ -21,10 +22,17 @@ export function SignInForm() {
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState, control } = useForm<Values>({ resolver: zodResolver(signInSchema) });
   const [unconfirmed, setUnconfirmed] = useState<string | null>(null);
+  const [secondStep, setSecondStep] = useState(false);
+
+  function signedIn() {
+    // only same-origin path and query are followed (lib/safe-next.ts)
+    router.push(safeNext(params.get("next"), window.location.origin));
+    router.refresh();
+  }
 
   async function onSubmit(values: Values) {
     setError(null);
-    const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
+    const { data, error } = await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
       if (error.code === "BANNED_USER") setError("This account is banned from Riser. If you think this is a mistake, ask your training manager.");
       else if (error.status === 403) {
@@ -37,9 +45,21 @@ export function SignInForm() {
       else setError(error.message ?? "Sign-in failed. Try again.");
       return;
     }
-    // only same-origin path and query are followed (lib/safe-next.ts)
-    router.push(safeNext(params.get("next"), window.location.origin));
-    router.refresh();
+    // the password was right and the account uses two-step sign-in: ask for the code
+    if (data && "twoFactorRedirect" in data && data.twoFactorRedirect) return setSecondStep(true);
+    signedIn();
+  }
+
+  if (secondStep) {
+    return (
+      <SecondStepForm
+        onDone={signedIn}
+        onRestart={(message) => {
+          setSecondStep(false);
+          setError(message);
+        }}
+      />
+    );
   }
 
   return (

@@ -19,9 +19,13 @@ export const user = mysqlTable(
     banned: boolean("banned").default(false),
     banReason: text("ban_reason"),
     banExpires: timestamp("ban_expires", { fsp: 3 }),
+    // two-factor plugin
+    twoFactorEnabled: boolean("two_factor_enabled").default(false),
     // Riser
     organizationId: varchar("organization_id", { length: 36 }),
     teamId: varchar("team_id", { length: 36 }),
+    /** when the person joined their current organization by a move (null: from the start) */
+    organizationSince: datetime("organization_since", { fsp: 3 }),
   },
   // user_org_name_idx: the team board pages an organization's people in name order (lib/team/board.ts)
   (t) => [index("user_org_idx").on(t.organizationId, t.teamId), index("user_org_name_idx").on(t.organizationId, t.name)],
@@ -78,6 +82,27 @@ export const verification = mysqlTable(
     updatedAt: timestamp("updated_at", { fsp: 3 }).defaultNow().$onUpdate(() => new Date()).notNull(),
   },
   (t) => [index("verification_identifier_idx").on(t.identifier)],
+);
+
+/**
+ * better-auth's two-factor plugin: one row per person who started TOTP enrolment. The secret and the
+ * backup codes are stored encrypted with BETTER_AUTH_SECRET; `verified` turns true when the first code
+ * from the authenticator app is accepted (only then is two-step sign-in switched on).
+ */
+export const twoFactor = mysqlTable(
+  "two_factor",
+  {
+    id: varchar("id", { length: 36 }).primaryKey(),
+    secret: text("secret").notNull(),
+    backupCodes: text("backup_codes").notNull(),
+    userId: varchar("user_id", { length: 36 })
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    verified: boolean("verified").default(true),
+    failedVerificationCount: int("failed_verification_count").default(0),
+    lockedUntil: timestamp("locked_until", { fsp: 3 }),
+  },
+  (t) => [index("two_factor_user_idx").on(t.userId)],
 );
 
 export const rateLimit = mysqlTable("rate_limit", {

@@ -1,5 +1,5 @@
 /** Organizations (a sprinkler contractor or a home builder), their teams, and the audit and mail logs. */
-import { datetime, index, int, json, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { boolean, datetime, index, int, json, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 
 export const organization = mysqlTable("organization", {
   id: varchar("id", { length: 36 }).primaryKey(),
@@ -7,6 +7,8 @@ export const organization = mysqlTable("organization", {
   kind: varchar("kind", { length: 20 }).notNull().default("contractor"), // contractor | builder
   seats: int("seats").notNull().default(3),
   trialEndsAt: datetime("trial_ends_at"),
+  /** the organization's managers must use two-step sign-in (TOTP) before team pages and APIs work */
+  requireManagerTwoFactor: boolean("require_manager_two_factor").default(false).notNull(),
   createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
 });
 
@@ -23,6 +25,25 @@ export const team = mysqlTable(
     archivedAt: datetime("archived_at", { fsp: 3 }),
   },
   (t) => [uniqueIndex("team_org_name_uq").on(t.organizationId, t.name)],
+);
+
+/**
+ * A membership that ended when an admin moved the person to another organization: the organization
+ * left keeps read-only sight of the person's records dated between joinedAt (null: from the start)
+ * and leftAt (lib/access/records.ts). Written in the move's transaction.
+ */
+export const formerMembership = mysqlTable(
+  "former_membership",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    userId: varchar("user_id", { length: 36 }).notNull(),
+    organizationId: varchar("organization_id", { length: 36 })
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    joinedAt: datetime("joined_at", { fsp: 3 }),
+    leftAt: datetime("left_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("former_membership_org_user_idx").on(t.organizationId, t.userId, t.leftAt)],
 );
 
 /** Append-only in the app's code paths: written only through lib/audit. */

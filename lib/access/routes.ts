@@ -145,6 +145,8 @@ export const ROUTES: RouteEntry[] = [
   // do not exist → 404 for managers and admins (admins without ?org= get 400: choose the organization).
   { route: "/team/teams", rule: "manager" },
   { route: "/api/team/teams", rule: "manager", sample: "/api/team/teams", okStatus: 200 },
+  { route: "/api/team/security", rule: "manager" },
+  { route: "/api/team/security", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/team/teams", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/team/teams/[id]", rule: "manager", sample: "/api/team/teams/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },
   { route: "/api/team/people/[id]", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },

@@ -2,7 +2,7 @@ import "server-only";
 import { and, count, eq, gt, isNull, like, or, sql, type SQL } from "drizzle-orm";
 import type { z } from "zod";
 import { db, type Tx } from "@/db/client";
-import { organization, session, team, user } from "@/db/schema";
+import { assignment, formerMembership, organization, session, signOff, team, user } from "@/db/schema";
 import type { Role, Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
@@ -130,8 +130,23 @@ export async function moveOrganization(actor: Actor, personId: string, organizat
   if (!dest) throw new DomainError("invalid", "Some fields need attention.", { organizationId: ["No such organization."] });
   if (person.organizationId === dest.id) throw new DomainError("invalid", "Some fields need attention.", { organizationId: [`${person.name} is already in ${dest.name}.`] });
   await db.transaction(async (tx) => {
+    // The records rule after a move (lib/access/records.ts): the organization left keeps read-only
+    // sight of the time the person was its member; its assignments to them end (team ones end with
+    // the team); sign-offs still waiting for review go to the new organization's managers.
+    const now = new Date();
+    let ended: { assignments: number; signOffsMoved: number } = { assignments: 0, signOffsMoved: 0 };
+    if (person.organizationId) {
+      const [since] = await tx.select({ at: user.organizationSince }).from(user).where(eq(user.id, person.id));
+      await tx.insert(formerMembership).values({ userId: person.id, organizationId: person.organizationId, joinedAt: since?.at ?? null, leftAt: now });
+      const [a] = await tx.delete(assignment).where(and(eq(assignment.organizationId, person.organizationId), eq(assignment.userId, person.id)));
+      const [s] = await tx
+        .update(signOff)
+        .set({ organizationId: dest.id })
+        .where(and(eq(signOff.userId, person.id), eq(signOff.organizationId, person.organizationId), eq(signOff.status, "submitted")));
+      ended = { assignments: a.affectedRows, signOffsMoved: s.affectedRows };
+    }
     // Teams belong to one organization, so the person leaves their team.
-    await tx.update(user).set({ organizationId: dest.id, teamId: null }).where(eq(user.id, person.id));
+    await tx.update(user).set({ organizationId: dest.id, teamId: null, organizationSince: now }).where(eq(user.id, person.id));
     await audit(
       {
         actor,
@@ -141,7 +156,7 @@ export async function moveOrganization(actor: Actor, personId: string, organizat
         targetId: person.id,
         reason: reason ?? null,
         ip: ctx.ip,
-        details: { from: person.organizationId, to: dest.id, teamCleared: person.teamId },
+        details: { from: person.organizationId, to: dest.id, teamCleared: person.teamId, ...ended },
       },
       tx,
     );

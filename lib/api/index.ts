@@ -66,7 +66,7 @@ export function errorResponse(err: unknown): Response {
       { status: err.status, ...(retry !== undefined ? { headers: { "Retry-After": String(retry) } } : {}) },
     );
   }
-  if (err instanceof AccessError) return json({ error: err.message }, err.status);
+  if (err instanceof AccessError) return json({ error: err.message, ...(err.code ? { code: err.code } : {}) }, err.status);
   if (err instanceof ZodError) return json({ error: "Some fields need attention.", fieldErrors: fieldErrorsOf(err) }, 400);
   if (isDatabaseDown(err)) {
     return json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: { "Retry-After": "10" } });

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { betterAuth } from "better-auth";
 import { APIError, createAuthMiddleware } from "better-auth/api";
 import { drizzleAdapter } from "@better-auth/drizzle-adapter";
-import { admin } from "better-auth/plugins";
+import { admin, twoFactor } from "better-auth/plugins";
 import { nextCookies } from "better-auth/next-js";
 import { db } from "@/db/client";
 import * as schema from "@/db/schema";
@@ -17,6 +17,7 @@ import { MIN_PASSWORD_LENGTH } from "./password-policy";
 import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 import { SESSION_CACHE_SECONDS, cachedSessionVersion, forgetCachedSessions } from "./session-cache";
+import { afterSecondStep, beforeSecondStep, SECOND_STEP_PATHS } from "./second-factor";
 
 const signInEmailOf = (body: unknown) => {
   const email = (body as { email?: unknown } | undefined)?.email;
@@ -36,6 +37,7 @@ export const auth = betterAuth({
       account: schema.account,
       verification: schema.verification,
       rateLimit: schema.rateLimit,
+      twoFactor: schema.twoFactor,
     },
   }),
   emailAndPassword: {
@@ -131,6 +133,7 @@ export const auth = betterAuth({
       assertFieldLengths(ctx.body);
       assertPasswordAllowed(ctx.path, ctx.body);
       if (ctx.path === "/change-email") return assertEmailChangeAllowed(ctx as unknown as Parameters<typeof assertEmailChangeAllowed>[0]);
+      if (SECOND_STEP_PATHS.has(ctx.path)) return beforeSecondStep(ctx as unknown as Parameters<typeof beforeSecondStep>[0]);
       if (ctx.path !== "/sign-in/email") return;
       const email = signInEmailOf(ctx.body);
       if (!email) return;
@@ -144,6 +147,7 @@ export const auth = betterAuth({
         if (url) throw ctx.redirect(url);
         return;
       }
+      if (SECOND_STEP_PATHS.has(ctx.path)) return afterSecondStep(ctx as unknown as Parameters<typeof afterSecondStep>[0]);
       if (ctx.path !== "/sign-in/email") return;
       const returned = ctx.context.returned;
       if (!(returned instanceof APIError) || returned.statusCode !== 401) return;
@@ -171,7 +175,19 @@ export const auth = betterAuth({
     // sign-out, revoked sessions, password changes and resets: cached copies stop at once here
     session: { delete: { after: async (s) => forgetCachedSessions(s.userId) } },
   },
-  plugins: [admin({ defaultRole: "learner", adminRoles: ["admin"], bannedUserMessage: "This account is banned from Riser. If you think this is a mistake, ask your training manager." }), nextCookies()],
+  plugins: [
+    // TOTP (RFC 6238: 6 digits, 30 s) with ten single-use backup codes, both stored encrypted; switched on
+    // only once a first code is verified. Wrong codes share the per-account throttle (second-factor.ts),
+    // and the plugin's own lock (same figures) backs it up. Who must use it: lib/access (admins always;
+    // managers where their organization asks).
+    twoFactor({
+      issuer: "Riser",
+      backupCodeOptions: { amount: 10, length: 10 },
+      accountLockout: { maxFailedAttempts: env.SIGN_IN_LOCK_FAILURES, durationSeconds: env.SIGN_IN_LOCK_WINDOW_S },
+    }),
+    admin({ defaultRole: "learner", adminRoles: ["admin"], bannedUserMessage: "This account is banned from Riser. If you think this is a mistake, ask your training manager." }),
+    nextCookies(),
+  ],
 });
 
 export type Auth = typeof auth;

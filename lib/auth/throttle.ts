@@ -25,7 +25,7 @@ function windowOf(now: Date) {
 
 export const lockedMessage = (retryAfterSeconds: number) => {
   const minutes = Math.max(1, Math.ceil(retryAfterSeconds / 60));
-  return `Too many wrong passwords for this account. Sign-in is paused for ${minutes} minute${minutes === 1 ? "" : "s"}; we sent an e-mail to the account's address. If you forgot the password, reset it.`;
+  return `Too many wrong passwords or codes for this account. Sign-in is paused for ${minutes} minute${minutes === 1 ? "" : "s"}; we sent an e-mail to the account's address. If you forgot the password, reset it.`;
 };
 
 /** Is this account paused now? (read only; called before the password is checked) */

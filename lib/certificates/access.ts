@@ -3,7 +3,9 @@ import "server-only";
  * Certificate actions that depend on who is asking: downloading the PDF (holder, a manager of the
  * certificate's organization, admins) and revoking (a manager of that organization or an admin).
  */
-import type { Certificate } from "@/db/schema";
+import { eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { user, type Certificate } from "@/db/schema";
 import { AccessError, canManageOrganization, organizationFilter, type Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { loadCatalog } from "@/lib/content";
@@ -69,9 +71,16 @@ export async function certificatePdf(cert: Certificate, generatedAt: Date = new 
 export async function revokeCertificate(viewer: Viewer, rawId: string, reason: string, ip: string | null): Promise<{ id: number; serial: string; revokedAt: Date }> {
   const id = parseCertificateId(rawId);
   if (id === null) throw new DomainError("not-found", "No certificate with that number.");
-  const r = await revokeWithAudit(viewer, id, reason, ip, (cert) => {
+  const r = await revokeWithAudit(viewer, id, reason, ip, async (cert) => {
     if (!canManageOrganization(viewer, cert.organizationId)) {
       throw new AccessError(403, "Only a manager of the holder's organization or an admin can revoke this certificate.");
+    }
+    // an organization the holder has left (moved by an admin) keeps read-only sight, no actions
+    if (viewer.role !== "admin") {
+      const [holder] = await db.select({ organizationId: user.organizationId }).from(user).where(eq(user.id, cert.userId));
+      if (holder?.organizationId !== viewer.organizationId) {
+        throw new AccessError(403, "The holder has moved to another organization; only an admin can revoke this certificate now.");
+      }
     }
   });
   if (!r.ok) throw r.problem === "not-found" ? new DomainError("not-found", "No certificate with that number.") : new DomainError("conflict", `Certificate ${r.serial} was already revoked.`);

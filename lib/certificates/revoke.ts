@@ -15,12 +15,12 @@ export async function revokeWithAudit(
   id: number,
   reason: string,
   ip: string | null,
-  authorize: (cert: Certificate) => void,
+  authorize: (cert: Certificate) => void | Promise<void>,
 ): Promise<RevokeResult> {
   return db.transaction(async (tx) => {
     const [cert] = await tx.select().from(certificate).where(eq(certificate.id, id)).for("update");
     if (!cert) return { ok: false, problem: "not-found" } as const;
-    authorize(cert);
+    await authorize(cert);
     if (cert.revokedAt) return { ok: false, problem: "already-revoked", serial: cert.serial } as const;
     const revokedAt = new Date();
     await tx

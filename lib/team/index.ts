@@ -16,3 +16,4 @@ export * from "./roster";
 export * from "./schemas";
 export * from "./teams";
 export * from "./summary";
+export * from "./security";

@@ -2,16 +2,16 @@ import "server-only";
 import { asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, certificate, lessonProgress, organization, quizAttempt, team, user } from "@/db/schema";
-import { canManageOrganization, type Viewer } from "@/lib/access";
+import { inWindow, recordWindow, type RecordWindow, type Viewer } from "@/lib/access";
 import { certificateStatus } from "@/lib/certificates";
 import type { Person } from "./board";
 import { isExpiring } from "@/lib/expiring";
 
 /** A person as the board sees them, or null. */
-export async function personById(id: string): Promise<(Person & { orgName: string }) | null> {
+export async function personById(id: string): Promise<(Person & { orgName: string; organizationSince: Date | null }) | null> {
   if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) return null;
   const [p] = await db
-    .select({ id: user.id, name: user.name, email: user.email, role: user.role, teamId: user.teamId, team: team.name, organizationId: user.organizationId, orgName: organization.name })
+    .select({ id: user.id, name: user.name, email: user.email, role: user.role, teamId: user.teamId, team: team.name, organizationId: user.organizationId, orgName: organization.name, organizationSince: user.organizationSince })
     .from(user)
     .leftJoin(team, eq(team.id, user.teamId))
     .leftJoin(organization, eq(organization.id, user.organizationId))
@@ -20,15 +20,22 @@ export async function personById(id: string): Promise<(Person & { orgName: strin
   return { ...p, team: p.team ?? null, organizationId: p.organizationId, orgName: p.orgName ?? "" };
 }
 
-/** unknown → "missing"; another organization's person for a manager → "forbidden". */
+/**
+ * unknown → "missing"; a person of the viewer's organization (or any, for an admin) → "ok"; a person
+ * who was moved away from the viewer's organization → "former" (read only, records up to the move);
+ * anyone else's → "forbidden". The window says which records the viewer sees (lib/access/records.ts).
+ */
 export async function personForViewer(viewer: Viewer, id: string) {
   const p = await personById(id);
   if (!p) return { state: "missing" as const };
-  if (!canManageOrganization(viewer, p.organizationId)) return { state: "forbidden" as const };
-  return { state: "ok" as const, person: p };
+  const window = await recordWindow(viewer, p);
+  if (!window) return { state: "forbidden" as const };
+  return { state: window.current ? ("ok" as const) : ("former" as const), person: p, window };
 }
 
-export async function personHistory(personId: string, now = new Date()) {
+const EVERYTHING: RecordWindow = { current: true, from: null, until: null, allCertificates: true };
+
+export async function personHistory(personId: string, now = new Date(), window: RecordWindow = EVERYTHING) {
   const [attempts, lessons, certs] = await Promise.all([
     db
       .select({
@@ -79,9 +86,10 @@ export async function personHistory(personId: string, now = new Date()) {
       .limit(100),
   ]);
   return {
-    attempts,
-    lessons,
-    certificates: certs.map((c) => {
+    // an attempt counts when it was graded (where the person belonged then), or started if never submitted
+    attempts: attempts.filter((a) => inWindow(window, a.submittedAt ?? a.startedAt)),
+    lessons: lessons.filter((l) => inWindow(window, l.completedAt)),
+    certificates: certs.filter((c) => window.allCertificates || inWindow(window, c.issuedAt)).map((c) => {
       const status = certificateStatus(c, now);
       return { ...c, status: status === "valid" && isExpiring(c.expiresAt, now) ? ("expiring" as const) : status };
     }),

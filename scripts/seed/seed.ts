@@ -3,13 +3,14 @@
 // RISER_LOCAL=1 on a loopback APP_URL (what scripts/ set). The content catalog is synced by
 // scripts/migrate.ts on every instance; a real instance gets its first admin from `npm run admin:create`.
 import { randomUUID } from "node:crypto";
-import { hashPassword } from "better-auth/crypto";
+import { eq } from "drizzle-orm";
+import { hashPassword, symmetricEncrypt } from "better-auth/crypto";
 import { db, pool } from "@/db/client";
-import { account, organization, team, user } from "@/db/schema";
+import { account, organization, team, twoFactor, user } from "@/db/schema";
 import { isLocalInstance } from "@/lib/env";
 import { seedCertificates } from "@/lib/certificates";
 import { seedSignOffs } from "@/lib/signoffs";
-import { DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE } from "@/db/demo";
+import { DEMO_ADMIN_TOTP_SECRET, DEMO_ORGS, DEMO_PASSWORD, DEMO_PEOPLE, demoByRole } from "@/db/demo";
 import { seedTeamDemo } from "./seed-team";
 
 if (!isLocalInstance({ RISER_LOCAL: process.env.RISER_LOCAL === "1" ? "1" : "0", APP_URL: process.env.APP_URL ?? "" })) {
@@ -57,8 +58,27 @@ async function seedDemo() {
   console.log(`[seed] demo: ${DEMO_ORGS.length} organizations, ${DEMO_PEOPLE.length} people`);
 }
 
+/**
+ * Admins must use two-step sign-in (lib/access), so the demo admin is enrolled with the published demo
+ * authenticator key (db/demo.ts; README). The secret is stored the way better-auth's twoFactor plugin
+ * stores it (encrypted with BETTER_AUTH_SECRET). Runs on every seed; enrols only once.
+ */
+async function seedDemoSecondFactor() {
+  const [admin] = await db.select({ id: user.id, on: user.twoFactorEnabled }).from(user).where(eq(user.email, demoByRole("admin").email));
+  if (!admin || admin.on) return;
+  const key = process.env.BETTER_AUTH_SECRET!;
+  const backupCodes = await symmetricEncrypt({ key, data: JSON.stringify([]) });
+  await db.transaction(async (tx) => {
+    await tx.delete(twoFactor).where(eq(twoFactor.userId, admin.id));
+    await tx.insert(twoFactor).values({ id: randomUUID(), userId: admin.id, secret: await symmetricEncrypt({ key, data: DEMO_ADMIN_TOTP_SECRET }), backupCodes, verified: true });
+    await tx.update(user).set({ twoFactorEnabled: true }).where(eq(user.id, admin.id));
+  });
+  console.log("[seed] demo admin: two-step sign-in with the demo authenticator key");
+}
+
 try {
   await seedDemo();
+  await seedDemoSecondFactor();
   await seedCertificates();
   await seedSignOffs();
   await seedTeamDemo();

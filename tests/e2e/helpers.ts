@@ -3,6 +3,7 @@
 import { expect, type Page } from "@playwright/test";
 import { Agent, fetch } from "undici";
 import { DEMO_PASSWORD } from "../../db/demo";
+import { demoAdminCode, isDemoAdmin } from "../helpers/totp";
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
@@ -27,12 +28,24 @@ export async function signInAs(page: Page, email: string, password = DEMO_PASSWO
       dispatcher,
     });
     expect(res.status, `sign-in of ${email}`).toBe(200);
-    const cookies = res.headers.getSetCookie().map((c) => {
+    let answer = res;
+    if (((await res.json()) as { twoFactorRedirect?: boolean }).twoFactorRedirect && isDemoAdmin(email)) {
+      // the demo admin signs in with two steps: the code from the published demo key (tests/helpers/totp.ts)
+      const pending = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+      answer = await fetch(`${APP}/api/auth/two-factor/verify-totp`, {
+        method: "POST",
+        headers: { "content-type": "application/json", origin: APP, cookie: pending },
+        body: JSON.stringify({ code: demoAdminCode() }),
+        dispatcher,
+      });
+      expect(answer.status, `second step of ${email}`).toBe(200);
+    }
+    const cookies = answer.headers.getSetCookie().map((c) => {
       const [pair] = c.split(";");
       const i = pair!.indexOf("=");
       return { name: pair!.slice(0, i), value: pair!.slice(i + 1), url: APP, httpOnly: true, sameSite: "Lax" as const };
     });
-    await page.context().addCookies(cookies);
+    await page.context().addCookies(cookies.filter((c) => c.value !== ""));
   } finally {
     await dispatcher.close();
   }

@@ -1,6 +1,7 @@
 /** HTTP helpers for integration tests against the running app (started by scripts/test.mjs). */
 import { Agent, fetch as undiciFetch } from "undici";
 import { DEMO_PASSWORD } from "@/db/demo";
+import { demoAdminCode, isDemoAdmin } from "./totp";
 
 export const APP = process.env.APP_URL ?? "http://127.0.0.1:3100";
 export const MAIL = process.env.MAIL_CATCHER_URL ?? "http://127.0.0.1:2536";
@@ -55,14 +56,25 @@ export function cookiesOf(res: Response): string {
     .join("; ");
 }
 
-export async function signIn(email: string, password = DEMO_PASSWORD, ip = freshIp()): Promise<Client> {
+/** Signs in with the password, and the code from `code()` when the account asks for one (the demo admin's by default). */
+export async function signIn(email: string, password = DEMO_PASSWORD, ip = freshIp(), code?: () => string): Promise<Client> {
   const res = await fetchFrom(ip, `${APP}/api/auth/sign-in/email`, {
     method: "POST",
     headers: { "content-type": "application/json", origin: APP },
     body: JSON.stringify({ email, password }),
   });
   if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);
-  return clientFor(cookiesOf(res), ip);
+  const body = (await res.json()) as { twoFactorRedirect?: boolean };
+  if (!body.twoFactorRedirect) return clientFor(cookiesOf(res), ip);
+  // two-step sign-in: the demo admin's code from the published demo key (tests/helpers/totp.ts)
+  if (!code && !isDemoAdmin(email)) throw new Error(`sign-in of ${email} asks for a code; pass one`);
+  const second = await fetchFrom(ip, `${APP}/api/auth/two-factor/verify-totp`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: APP, cookie: cookiesOf(res) },
+    body: JSON.stringify({ code: code ? code() : demoAdminCode() }),
+  });
+  if (second.status !== 200) throw new Error(`second step of ${email} failed: ${second.status} ${await second.text()}`);
+  return clientFor(cookiesOf(second), ip);
 }
 
 export async function postJson(client: Client, path: string, body: unknown, method = "POST") {

@@ -9,6 +9,7 @@ import { db, pool } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/demo";
 import { account, user } from "@/db/schema";
 import { anonymous, APP, fetchFrom, freshIp, postJson, signIn, uniqueEmail } from "../helpers/http";
+import { codeForUri } from "../helpers/totp";
 
 afterAll(() => pool.end());
 const root = path.resolve(import.meta.dirname, "../..");
@@ -50,7 +51,22 @@ describe("admin:create", () => {
     // the link works once
     expect((await postJson(anonymous(), "/api/auth/reset-password", { newPassword: "another-try-at-it-10", token })).status).toBe(400);
     const admin = await signIn(email, chosen);
-    expect((await admin.fetch("/api/admin/people")).status).toBe(200);
+    // admins must use two-step sign-in: the console stays closed until the new admin enrols
+    const closed = await admin.fetch("/api/admin/people");
+    expect(closed.status).toBe(403);
+    expect(((await closed.json()) as { code?: string }).code).toBe("SECOND_FACTOR_REQUIRED");
+    const started = await postJson(admin, "/api/auth/two-factor/enable", { password: chosen });
+    expect(started.status).toBe(200);
+    const uri = started.json.totpURI as string;
+    const verified = await fetchFrom(freshIp(), `${APP}/api/auth/two-factor/verify-totp`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: APP, cookie: admin.cookie },
+      body: JSON.stringify({ code: codeForUri(uri) }),
+    });
+    expect(verified.status).toBe(200);
+    // from now on the sign-in asks for the code (computed by otpauth from the enrolment URI)
+    const enrolled = await signIn(email, chosen, freshIp(), () => codeForUri(uri));
+    expect((await enrolled.fetch("/api/admin/people")).status).toBe(200);
 
     const again = tsx("scripts/admin-create.ts", ["--email", email], process.env);
     expect(again.status).toBe(1);

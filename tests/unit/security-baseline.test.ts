@@ -4,7 +4,7 @@
 // (Secure, HttpOnly, SameSite cookies; the "__Secure-" name prefix).
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { NextRequest } from "next/server";
-import { contentSecurityPolicy, securityHeaders } from "@/lib/security-headers.mjs";
+import { contentSecurityPolicy, newNonce, securityHeaders } from "@/lib/security-headers.mjs";
 
 const BASE_ENV = {
   DATABASE_URL: "mysql://riser:x@127.0.0.1:1/riser", // port 1: nothing listens, so the database is "down"
@@ -27,6 +27,18 @@ describe("content security policy", () => {
     expect(prod).toMatch(/default-src 'self'/);
     // development keeps unsafe-eval for React's dev tooling only
     expect(contentSecurityPolicy(false)).toContain("'unsafe-eval'");
+  });
+
+  it("allows no inline script by 'unsafe-inline': pages by a nonce, everything else none", () => {
+    const scriptSrc = (csp: string) => csp.split("; ").find((d) => d.startsWith("script-src"))!;
+    const nonce = newNonce();
+    expect(Buffer.from(nonce, "base64").length).toBe(16); // 128 bits (CSP Level 3 §6.7.2 asks for at least 128)
+    expect(newNonce()).not.toBe(nonce);
+    for (const production of [true, false]) {
+      expect(scriptSrc(contentSecurityPolicy(production, nonce))).toContain(`'nonce-${nonce}' 'strict-dynamic'`);
+      expect(scriptSrc(contentSecurityPolicy(production, nonce))).not.toContain("'unsafe-inline'");
+      expect(scriptSrc(contentSecurityPolicy(production))).not.toContain("'unsafe-inline'");
+    }
   });
 
   it("lists nosniff, a referrer policy and frame denial", () => {

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { EmailForm, NameForm } from "@/components/account/profile-forms";
 import { PasswordForm } from "@/components/account/password-form";
+import { TwoFactorForm } from "@/components/account/two-factor-form";
 import { Section } from "@/components/account/section";
 import { SessionsList } from "@/components/account/sessions-list";
 import { asJson } from "@/components/ui/server-first";
@@ -33,6 +34,13 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
         </Section>
         <Section id="password-h" title="Password" lead="Enter your current password to choose a new one. Forgot it? Sign out and use “Forgot your password?” on the sign-in page.">
           <PasswordForm />
+        </Section>
+        <Section
+          id="two-factor-h"
+          title="Two-step sign-in"
+          lead="After your password, Riser also asks for a 6-digit code from an authenticator app on your phone, so a stolen password alone does not open your account."
+        >
+          <TwoFactorForm enabled={viewer.twoFactorEnabled} required={viewer.role === "admin" || viewer.secondFactorMissing} />
         </Section>
         <Section id="sessions-h" title="Where you are signed in" lead="Each browser or device you signed in with. Sign out the others if you used a shared computer or lost a phone.">
           <SessionsList initial={asJson({ sessions: await listOwnSessions(viewer.id, viewer.sessionId) })} />

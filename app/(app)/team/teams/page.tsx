@@ -5,7 +5,8 @@ import { TeamsManager } from "@/components/team/teams-manager";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { allOrganizations, pageScope } from "@/lib/access";
-import { listTeams } from "@/lib/team";
+import { listTeams, managerTwoFactorRequired } from "@/lib/team";
+import { ManagerTwoFactor } from "@/components/team/manager-two-factor";
 
 export const metadata: Metadata = { title: "Teams" };
 
@@ -21,7 +22,10 @@ export default async function TeamsPage({ searchParams }: { searchParams: Promis
       <TeamNav current="/team/teams" org={adminOrg} />
       {viewer.role === "admin" ? <OrgPicker orgs={await allOrganizations()} current={scope.orgId} allowAll={false} action="/team/teams" /> : null}
       {scope.orgId ? (
-        <TeamsManager teams={teams.map((t) => ({ id: t.id, name: t.name, archived: t.archivedAt !== null, people: t.people }))} org={adminOrg} />
+        <>
+          <TeamsManager teams={teams.map((t) => ({ id: t.id, name: t.name, archived: t.archivedAt !== null, people: t.people }))} org={adminOrg} />
+          <ManagerTwoFactor required={await managerTwoFactorRequired(scope.orgId)} org={adminOrg} />
+        </>
       ) : (
         <p>Choose the organization whose teams you want to manage.</p>
       )}

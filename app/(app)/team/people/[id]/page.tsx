@@ -7,7 +7,7 @@ import { StatusBadge } from "@/components/team/status-badge";
 import { PersonControls } from "@/components/team/person-controls";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
-import { requireViewer } from "@/lib/access";
+import { requireViewer, type RecordWindow } from "@/lib/access";
 import { assignedWork } from "@/lib/team";
 import { boardModules } from "@/lib/team";
 import { personForViewer, personHistory } from "@/lib/team";
@@ -26,9 +26,10 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
   if (found.state === "missing") notFound();
   if (found.state === "forbidden") forbidden();
   const p = found.person;
+  if (found.state === "former") return <FormerMember person={p} window={found.window} />;
   const [{ items, cells }, history, teams] = await Promise.all([
     assignedWork(p),
-    personHistory(p.id),
+    personHistory(p.id, new Date(), found.window),
     teamsInScope({ orgId: p.organizationId, orgName: p.orgName }),
   ]);
   const modules = boardModules();
@@ -90,6 +91,32 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
       <div className="mb-8">
         <PersonSignOffs viewer={viewer} personId={p.id} />
       </div>
+    </>
+  );
+}
+
+/**
+ * A person an admin moved to another organization, seen by a manager of the one they left: read only,
+ * the records of the time they were its member (lib/access/records.ts), and no controls.
+ */
+async function FormerMember({ person, window }: { person: { id: string; name: string }; window: RecordWindow }) {
+  const history = await personHistory(person.id, new Date(), window);
+  return (
+    <>
+      <PageTitle title={person.name} lead={`Left this organization on ${day(window.until)} (moved to another organization). Read only: the records of the time they were your member.`} />
+      <TeamNav current="/team/people" org={null} />
+      <section aria-labelledby="attempts" className="mb-8">
+        <h2 id="attempts" className="mb-3 text-2xl">Quiz attempts</h2>
+        <PersonAttempts attempts={history.attempts} />
+      </section>
+      <section aria-labelledby="lessons" className="mb-8">
+        <h2 id="lessons" className="mb-3 text-2xl">Lessons done</h2>
+        <PersonLessons lessons={history.lessons} />
+      </section>
+      <section aria-labelledby="certs" className="mb-8">
+        <h2 id="certs" className="mb-3 text-2xl">Certificates</h2>
+        <PersonCertificates certificates={history.certificates} />
+      </section>
     </>
   );
 }
