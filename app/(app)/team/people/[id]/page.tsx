@@ -8,12 +8,10 @@ import { PersonControls } from "@/components/team/person-controls";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer, type RecordWindow } from "@/lib/access";
-import { assignedWork } from "@/lib/team";
-import { boardModules } from "@/lib/team";
-import { personForViewer, personHistory } from "@/lib/team";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team";
+import { assignedWork, boardModules, personForViewer, personHistory, ROLE_LABELS, type InviteRole } from "@/lib/team";
 import { isoDay } from "@/lib/dates";
 import { teamsInScope } from "@/lib/access";
+import type { ReactNode } from "react";
 
 export const metadata: Metadata = { title: "Person" };
 
@@ -69,24 +67,12 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
         <PersonModules modules={modules} cells={cells} />
       </section>
 
-      <section aria-labelledby="attempts" className="mb-8">
-        <h2 id="attempts" className="mb-3 text-2xl">Quiz attempts</h2>
-        <PersonAttempts attempts={history.attempts} />
-      </section>
-
-      <section aria-labelledby="lessons" className="mb-8">
-        <h2 id="lessons" className="mb-3 text-2xl">Lessons done</h2>
-        <PersonLessons lessons={history.lessons} />
-      </section>
-
-      <section aria-labelledby="certs" className="mb-8">
-        <h2 id="certs" className="mb-3 text-2xl">Certificates</h2>
+      <RecordSections history={history}>
         <p className="mb-3 flex flex-wrap gap-3" data-testid="person-training-history">
           <a href={`/api/team/people/${p.id}/training-history?format=pdf`} download>Training history (PDF)</a>
           <a href={`/api/team/people/${p.id}/training-history?format=csv`} download>Training history (CSV)</a>
         </p>
-        <PersonCertificates certificates={history.certificates} />
-      </section>
+      </RecordSections>
 
       <div className="mb-8">
         <PersonSignOffs viewer={viewer} personId={p.id} />
@@ -105,16 +91,28 @@ async function FormerMember({ person, window }: { person: { id: string; name: st
     <>
       <PageTitle title={person.name} lead={`Left this organization on ${day(window.until)} (moved to another organization). Read only: the records of the time they were your member.`} />
       <TeamNav current="/team/people" org={null} />
+      <RecordSections history={history} />
+    </>
+  );
+}
+
+/** Attempts, lessons and certificates: the same sections for a member and for a former member. */
+function RecordSections({ history, children }: { history: Awaited<ReturnType<typeof personHistory>>; children?: ReactNode }) {
+  return (
+    <>
       <section aria-labelledby="attempts" className="mb-8">
         <h2 id="attempts" className="mb-3 text-2xl">Quiz attempts</h2>
         <PersonAttempts attempts={history.attempts} />
       </section>
+
       <section aria-labelledby="lessons" className="mb-8">
         <h2 id="lessons" className="mb-3 text-2xl">Lessons done</h2>
         <PersonLessons lessons={history.lessons} />
       </section>
+
       <section aria-labelledby="certs" className="mb-8">
         <h2 id="certs" className="mb-3 text-2xl">Certificates</h2>
+        {children}
         <PersonCertificates certificates={history.certificates} />
       </section>
     </>
