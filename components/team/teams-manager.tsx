@@ -84,6 +84,16 @@ function TeamItem({ t }: { t: TeamRow }) {
             {t.archived ? " · archived" : ""}
           </span>
           <span className="ml-auto flex flex-wrap gap-2">
+            {t.people > 0 ? (
+              <a
+                href={`/api/team/teams/${t.id}/training-history`}
+                download
+                className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-3 font-bold"
+                aria-label={`Download the training histories of ${t.name} (ZIP of each person's PDF and CSV)`}
+              >
+                Training histories (ZIP)
+              </a>
+            ) : null}
             <button type="button" className="min-h-11 rounded border border-ink/40 bg-panel px-3 font-bold" onClick={() => setEditing(true)} aria-label={`Rename ${t.name}`}>
               Rename
             </button>

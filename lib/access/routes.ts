@@ -97,6 +97,7 @@ export const ROUTES: RouteEntry[] = [
   // and admins; the reporting-period POST {} → 400 (fields missing)
   { route: "/api/account/training-history", rule: "signed-in", sample: "/api/account/training-history?format=csv" },
   { route: "/api/team/people/[id]/training-history", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000/training-history", okStatus: 404 },
+  { route: "/api/team/teams/[id]/training-history", rule: "manager", sample: "/api/team/teams/00000000-0000-4000-8000-000000000000/training-history", okStatus: 404 },
   { route: "/api/team/reporting-period", rule: "manager" },
   { route: "/api/team/reporting-period", rule: "manager", method: "POST", okStatus: 400 },
   // practical sign-offs: POST {} as JSON → 400 (a multipart form is required / decision

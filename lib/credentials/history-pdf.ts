@@ -141,6 +141,11 @@ export async function renderHistoryPdf(h: TrainingHistory, o: { fontDir?: string
     await t.draw(page, m.title, { x: M + 130, y, size: titleSize });
     await t.draw(page, m.serial ?? "", { x: W - M, y, size: 9, face: "mono", align: "right", color: C.muted });
     y -= 15;
+    if (m.seatMinutes !== null) {
+      room(13);
+      await t.draw(page, `Seat time ${m.seatMinutes} min read (measured by Riser's server)`, { x: M + 130, y: y + 3, size: 8.5, color: C.muted });
+      y -= 12;
+    }
   }
 
   // ----- footer on every page -----

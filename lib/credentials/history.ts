@@ -4,9 +4,9 @@ import "server-only";
  * verification codes, and continuing-education hours per reporting period (./period) under their
  * organization's setting. Who may read it: the person, managers of the person's organization, admins.
  */
-import { desc, eq } from "drizzle-orm";
+import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { catalogModule, certificate, creditReportingPeriod, moduleCompletion, organization, user } from "@/db/schema";
+import { catalogLesson, catalogModule, certificate, creditReportingPeriod, lessonOpen, lessonProgress, moduleCompletion, organization, user } from "@/db/schema";
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
 import { certificatesOfHolder, formatVerificationCode, verificationUrl, type HolderCertificate } from "@/lib/certificates";
 import { env } from "@/lib/env";
@@ -14,7 +14,7 @@ import { DomainError } from "@/lib/errors";
 import { CALENDAR_YEARS, describeSetting, hoursByPeriod, periodOf, type Counting, type PeriodSetting, type PeriodTotal } from "./period";
 
 export type HistoryCertificate = HolderCertificate & { counting: Counting; period: string; verifyUrl: string; codeShown: string };
-export type HistoryCompletion = { moduleSlug: string; title: string; completedAt: Date; serial: string | null };
+export type HistoryCompletion = { moduleSlug: string; title: string; completedAt: Date; serial: string | null; seatMinutes: number | null };
 export type TrainingHistory = {
   person: { id: string; name: string; organizationName: string | null };
   setting: PeriodSetting;
@@ -24,6 +24,25 @@ export type TrainingHistory = {
   completions: HistoryCompletion[];
   generatedAt: Date;
 };
+
+/**
+ * Seat time per module: the reading time the server measured for each completed lesson (its own
+ * first-open stamp to its own completion stamp, as lib/progress counts it), summed and given in
+ * whole minutes. The time a phone reports for a mark made offline (device_reading_seconds) is never
+ * used here: it is the device's claim, not a measurement.
+ */
+export async function seatMinutesByModule(userId: string): Promise<Map<string, number>> {
+  const rows = await db
+    .select({ module: catalogModule.slug, openedAt: lessonOpen.firstOpenedAt, completedAt: lessonProgress.completedAt })
+    .from(lessonProgress)
+    .innerJoin(lessonOpen, and(eq(lessonOpen.userId, lessonProgress.userId), eq(lessonOpen.lessonId, lessonProgress.lessonId)))
+    .innerJoin(catalogLesson, eq(catalogLesson.id, lessonProgress.lessonId))
+    .innerJoin(catalogModule, eq(catalogModule.id, catalogLesson.moduleId))
+    .where(eq(lessonProgress.userId, userId));
+  const seconds = new Map<string, number>();
+  for (const r of rows) seconds.set(r.module, (seconds.get(r.module) ?? 0) + Math.max(0, (r.completedAt.getTime() - r.openedAt.getTime()) / 1000));
+  return new Map([...seconds].map(([m, s]) => [m, Math.round(s / 60)]));
+}
 
 /** The organization's period setting; calendar years when it has none. */
 export async function periodSettingOf(organizationId: string | null): Promise<PeriodSetting> {
@@ -49,7 +68,7 @@ export async function historyPersonFor(viewer: Viewer, personId: string) {
 }
 
 export async function trainingHistory(person: { id: string; name: string; organizationId: string | null; organizationName: string | null }, now = new Date()): Promise<TrainingHistory> {
-  const [certs, setting, completions] = await Promise.all([
+  const [certs, setting, completions, seat] = await Promise.all([
     certificatesOfHolder(person.id, now),
     periodSettingOf(person.organizationId),
     db
@@ -59,6 +78,7 @@ export async function trainingHistory(person: { id: string; name: string; organi
       .leftJoin(certificate, eq(certificate.completionId, moduleCompletion.id))
       .where(eq(moduleCompletion.userId, person.id))
       .orderBy(desc(moduleCompletion.completedAt)),
+    seatMinutesByModule(person.id),
   ]);
   const { counting, totals } = hoursByPeriod(certs, setting);
   // a completion may have finished a path too: show the module's own certificate
@@ -66,7 +86,7 @@ export async function trainingHistory(person: { id: string; name: string; organi
   for (const c of completions) {
     const known = byCompletion.get(c.id);
     const moduleSerial = certs.find((x) => x.serial === c.serial)?.kind === "module" ? c.serial : null;
-    if (!known) byCompletion.set(c.id, { moduleSlug: c.moduleSlug, title: c.title ?? c.moduleSlug, completedAt: c.completedAt, serial: moduleSerial });
+    if (!known) byCompletion.set(c.id, { moduleSlug: c.moduleSlug, title: c.title ?? c.moduleSlug, completedAt: c.completedAt, serial: moduleSerial, seatMinutes: seat.get(c.moduleSlug) ?? null });
     else if (!known.serial && moduleSerial) known.serial = moduleSerial;
   }
   return {

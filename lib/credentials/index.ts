@@ -17,3 +17,4 @@ export { renderHistoryPdf } from "./history-pdf";
 export { CALENDAR_YEARS, describeSetting, PERIOD_LENGTHS, type PeriodSetting } from "./period";
 export { periodSettingInput, setPeriodSetting } from "./period-setting";
 export { historyDownload } from "./history-download";
+export { teamHistoryZip, TEAM_ZIP_MAX_PEOPLE } from "./history-zip";

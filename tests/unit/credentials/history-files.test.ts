@@ -91,7 +91,10 @@ function sampleHistory(count = codes.length): TrainingHistory {
       verifyUrl: `https://riser.example/verify/${c.verificationCode}`,
       codeShown: c.verificationCode.length === 28 ? c.verificationCode.match(/.{4}/g)!.join("-") : c.verificationCode,
     })),
-    completions: certs.filter((c) => c.kind === "module").map((c) => ({ moduleSlug: c.subjectSlug, title: c.subjectTitle, completedAt: c.issuedAt, serial: c.serial })),
+    // seat time (server-measured minutes) for two modules; the others have none recorded
+    completions: certs
+      .filter((c) => c.kind === "module")
+      .map((c) => ({ moduleSlug: c.subjectSlug, title: c.subjectTitle, completedAt: c.issuedAt, serial: c.serial, seatMinutes: ({ "freeze-protection": 47, testing: 0 } as Record<string, number>)[c.subjectSlug] ?? null })),
     generatedAt: new Date("2026-12-02T08:00:00Z"),
   };
 }
@@ -118,6 +121,10 @@ describe("training history PDF", () => {
     expect(text).toContain("Expired");
     expect(text).toContain("not counted: learning path");
     expect(text).toContain("Module completions");
+    // seat time only where the server measured some: a line per such module, none for the others
+    expect(text).toContain("Seat time 47 min read (measured by Riser's server)");
+    expect(text).toContain("Seat time 0 min read");
+    expect(text.match(/Seat time \d+ min read/g)).toHaveLength(2);
   });
 
   it("has one QR code per certificate, each decoding to that certificate's verification address", async () => {
@@ -151,6 +158,14 @@ describe("training history CSV", () => {
     expect(certs[0]![col("Verification code")]).toBe("7KQ2-M9XD-3HTV-A8RW-EC6N-4JPB-5GFZ");
     // OWASP CSV injection guard (lib/csv): a cell starting with "=" gets a leading quote
     expect(certs[4]![col("Verification code")]).toBe("'=HYPERLINK(1)AAAAAAAAAAAAAA");
-    expect(rows.filter((r) => r[0] === "Completion")).toHaveLength(4);
+    const done = rows.filter((r) => r[0] === "Completion");
+    expect(done).toHaveLength(4);
+    expect(Object.fromEntries(done.map((r) => [r[col("Title")], r[col("Seat time (minutes)")]]))).toEqual({
+      "Freeze protection": "47",
+      "Pipe and joining": "",
+      "Hydraulics and the permit package": "",
+      "Testing and acceptance": "0",
+    });
+    for (const r of rows) expect(r).toHaveLength(HISTORY_CSV_COLUMNS.length);
   });
 });
