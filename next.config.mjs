@@ -13,6 +13,9 @@ const nextConfig = {
     tsconfigPath: process.env.NEXT_TSCONFIG_PATH || "tsconfig.json",
   },
   experimental: { authInterrupts: true },
+  // Every page renders per request (script nonces), and Next then streams <title> into the body for
+  // ordinary browsers. Screen readers announce the title on load, so it is always sent in <head>.
+  htmlLimitedBots: /.*/,
   serverExternalPackages: ["mysql2", "nodemailer", "pdf-lib", "@pdf-lib/fontkit", "qrcode", "prom-client"],
   async headers() {
     // Security headers for every response (pages and API). The Content-Security-Policy comes from

@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useEffect } from "react";
-import { checkConnection, claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker } from "@/lib/offline/browser";
+import { checkConnection, claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker, signedInUserId } from "@/lib/offline/browser";
 import { useOfflineState, useOnline } from "./use-offline";
 
 /**
@@ -12,7 +12,6 @@ import { useOfflineState, useOnline } from "./use-offline";
 export function OfflineSync({ userId }: { userId: string | null }) {
   const online = useOnline();
   const { queue } = useOfflineState();
-
   useEffect(() => {
     if (!offlineSupported()) return;
     void (async () => {
@@ -31,8 +30,16 @@ export function OfflineSync({ userId }: { userId: string | null }) {
       const timer = setInterval(() => void checkConnection(), 20_000);
       return () => clearInterval(timer);
     }
-    void flushQueue().then(() => refreshStale());
-  }, [online]);
+    // Claimed first, for the person the server says is signed in now: marks and kept modules someone
+    // else left on this phone are forgotten, never sent under this person's session.
+    void (async () => {
+      const id = userId ?? (await signedInUserId());
+      if (!id) return;
+      await claimFor(id);
+      await flushQueue();
+      await refreshStale();
+    })();
+  }, [online, userId]);
 
   if (online && queue.length === 0) return null;
   return (

@@ -2,11 +2,11 @@
 export function OrgPicker({ orgs, current, allowAll = true, action }: { orgs: { id: string; name: string }[]; current: string | null; allowAll?: boolean; action: string }) {
   return (
     <form method="get" action={action} className="mb-6 flex flex-wrap items-end gap-3 rounded border border-line bg-panel p-3" aria-label="Choose an organization">
-      <div className="flex flex-col gap-1">
+      <div className="flex min-w-0 max-w-full flex-col gap-1">
         <label htmlFor="org-picker" className="text-sm font-bold">
           Organization (admin view)
         </label>
-        <select id="org-picker" name="org" defaultValue={current ?? ""} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+        <select id="org-picker" name="org" defaultValue={current ?? ""} className="min-h-11 max-w-full rounded border border-ink/40 bg-panel px-2">
           {allowAll ? <option value="">All organizations</option> : <option value="">Choose…</option>}
           {orgs.map((o) => (
             <option key={o.id} value={o.id}>

@@ -26,6 +26,14 @@ export async function registerServiceWorker(): Promise<void> {
   await navigator.serviceWorker.register(SERVICE_WORKER_URL, { scope: "/" }).catch(() => undefined);
 }
 
+/** Who the server says is signed in on this phone now (null offline or signed out). */
+export async function signedInUserId(): Promise<string | null> {
+  const res = await fetch("/api/auth/get-session", { cache: "no-store", credentials: "same-origin" }).catch(() => null);
+  if (!res?.ok) return null;
+  const body = (await res.json().catch(() => null)) as { user?: { id?: string } } | null;
+  return body?.user?.id ?? null;
+}
+
 /** Forgets everything when someone else signs in on this phone (kept pages and queue are personal). */
 export async function claimFor(userId: string): Promise<void> {
   const owner = await get<string>("owner", db());

@@ -14,7 +14,8 @@ import { signInAs } from "./helpers";
 
 type Who = Role | "anonymous";
 
-const PAGES = ROUTES.filter((r) => !r.route.startsWith("/api/"));
+// pages only: not the API, and not files served at a path (the service worker, /.well-known keys)
+const PAGES = ROUTES.filter((r) => !r.route.startsWith("/api/") && !r.route.startsWith("/.well-known/") && !/\.[a-z]+$/.test(r.route));
 /**
  * Signed-in pages look the same to every role except for what the person holds; they are checked
  * as a learner and as a manager (the manager's copies carry the team extras), and as sales and
