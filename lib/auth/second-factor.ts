@@ -12,8 +12,9 @@ import { claimTotpCode, releaseTotpCode, totpCodeHash } from "./totp-replay";
  *    sign-in of that account, from whatever address it comes (NIST SP 800-63B-4 §3.2.2);
  *  - Riser asks for the code at every sign-in: "trust this device" is refused;
  *  - a TOTP code signs in once (RFC 6238 §5.2, lib/auth/totp-replay.ts): a code already accepted is
- *    refused with 409 `TOTP_CODE_ALREADY_USED` and counts as a failed sign-in of the account (a replay
- *    means someone else may hold the password and has seen a code).
+ *    refused with 409 `TOTP_CODE_ALREADY_USED`. A replay is not counted against the per-account
+ *    throttle: that budget limits guessing (a replayed code is no guess and is refused anyway), and a
+ *    double submit or a second tab must not eat the owner's budget.
  */
 export const SECOND_STEP_PATHS = new Set(["/two-factor/verify-totp", "/two-factor/verify-backup-code"]);
 
@@ -63,7 +64,6 @@ export async function beforeSecondStep(ctx: HookCtx): Promise<void> {
   if (ctx.path !== "/two-factor/verify-totp" || !body || typeof body.code !== "string") return; // backup codes: single-use in the plugin
   const codeHash = totpCodeHash(ctx.context.secret, account.userId, body.code);
   if (!(await claimTotpCode(codeHash, account.userId))) {
-    await recordFailedSignIn(account.email, ctx.headers?.get(CLIENT_IP_HEADER) ?? "unknown");
     throw new APIError("CONFLICT", {
       message: "That code was already used to sign in. Wait for your authenticator app to show the next code (at most 30 seconds) and enter that one.",
       code: "TOTP_CODE_ALREADY_USED",
