@@ -8,7 +8,7 @@ import { createHash } from "node:crypto";
 import { and, count, desc, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { auditLog, session, totpCodeUse, user } from "@/db/schema";
+import { auditLog, rateLimitBucket, session, totpCodeUse, user } from "@/db/schema";
 import { APP, cookiesOf, fetchFrom, freshIp, mailsTo } from "../helpers/http";
 import { createOrganization, createPerson } from "../helpers/fixtures";
 import { codeForUri } from "../helpers/totp";
@@ -208,6 +208,9 @@ describe("a TOTP code signs in once (RFC 6238 §5.2: no second acceptance of the
     expect(again.json.code).toBe("TOTP_CODE_ALREADY_USED");
     expect(again.json.message).toMatch(/already used/i);
     expect((await call(again.jar, "/api/auth/get-session")).json).toBeNull();
+    // a replay is not counted against the per-account sign-in budget (it is no guess; lib/auth/second-factor.ts)
+    const failKey = `signin-fail:${createHash("sha256").update(person.email.toLowerCase()).digest("hex")}`;
+    expect(await db.select().from(rateLimitBucket).where(eq(rateLimitBucket.bucketKey, failKey))).toEqual([]);
 
     // two sign-ins racing with the same fresh code: exactly one session comes of them
     const before = await sessionsOf(person.id);
