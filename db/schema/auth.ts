@@ -2,7 +2,7 @@
  * better-auth's tables (core + admin plugin fields + database rate limit), in the shape its CLI
  * generates for MySQL. Riser's own fields on `user`: organizationId, teamId (one organization each).
  */
-import { bigint, boolean, datetime, index, int, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, datetime, index, int, mysqlTable, primaryKey, text, timestamp, varchar } from "drizzle-orm/mysql-core";
 
 export const user = mysqlTable(
   "user",
@@ -103,6 +103,24 @@ export const twoFactor = mysqlTable(
     lockedUntil: timestamp("locked_until", { fsp: 3 }),
   },
   (t) => [index("two_factor_user_idx").on(t.userId)],
+);
+
+/**
+ * Riser: TOTP codes already accepted in a sign-in's second step (lib/auth/totp-replay.ts), so a code
+ * cannot be used a second time while it is still inside its acceptance window (RFC 6238 §5.2). Only
+ * an HMAC of the code (keyed with BETTER_AUTH_SECRET, bound to the person) is kept, never the code;
+ * the primary key makes the claim atomic: of two requests with the same code exactly one inserts.
+ */
+export const totpCodeUse = mysqlTable(
+  "totp_code_use",
+  {
+    userId: varchar("user_id", { length: 36 })
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    codeHash: varchar("code_hash", { length: 64 }).notNull(),
+    expiresAt: datetime("expires_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.userId, t.codeHash] })],
 );
 
 export const rateLimit = mysqlTable("rate_limit", {

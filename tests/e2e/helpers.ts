@@ -3,7 +3,7 @@
 import { expect, type Page } from "@playwright/test";
 import { Agent, fetch } from "undici";
 import { DEMO_PASSWORD } from "../../db/demo";
-import { demoAdminCode, isDemoAdmin } from "../helpers/totp";
+import { demoAdminCode, isDemoAdmin, sendUnusedCode } from "../helpers/totp";
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import mysql from "mysql2/promise";
@@ -32,12 +32,15 @@ export async function signInAs(page: Page, email: string, password = DEMO_PASSWO
     if (((await res.json()) as { twoFactorRedirect?: boolean }).twoFactorRedirect && isDemoAdmin(email)) {
       // the demo admin signs in with two steps: the code from the published demo key (tests/helpers/totp.ts)
       const pending = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-      answer = await fetch(`${APP}/api/auth/two-factor/verify-totp`, {
-        method: "POST",
-        headers: { "content-type": "application/json", origin: APP, cookie: pending },
-        body: JSON.stringify({ code: demoAdminCode() }),
-        dispatcher,
-      });
+      // each code signs in once (RFC 6238 §5.2): take the next unused one
+      answer = await sendUnusedCode(demoAdminCode, (code) =>
+        fetch(`${APP}/api/auth/two-factor/verify-totp`, {
+          method: "POST",
+          headers: { "content-type": "application/json", origin: APP, cookie: pending },
+          body: JSON.stringify({ code }),
+          dispatcher,
+        }),
+      );
       expect(answer.status, `second step of ${email}`).toBe(200);
     }
     const cookies = answer.headers.getSetCookie().map((c) => {

@@ -1,7 +1,7 @@
 /** HTTP helpers for integration tests against the running app (started by scripts/test.mjs). */
 import { Agent, fetch as undiciFetch } from "undici";
 import { DEMO_PASSWORD } from "@/db/demo";
-import { demoAdminCode, isDemoAdmin } from "./totp";
+import { demoAdminCode, isDemoAdmin, sendUnusedCode } from "./totp";
 
 export const APP = process.env.APP_URL ?? "http://127.0.0.1:3100";
 export const MAIL = process.env.MAIL_CATCHER_URL ?? "http://127.0.0.1:2536";
@@ -68,11 +68,16 @@ export async function signIn(email: string, password = DEMO_PASSWORD, ip = fresh
   if (!body.twoFactorRedirect) return clientFor(cookiesOf(res), ip);
   // two-step sign-in: the demo admin's code from the published demo key (tests/helpers/totp.ts)
   if (!code && !isDemoAdmin(email)) throw new Error(`sign-in of ${email} asks for a code; pass one`);
-  const second = await fetchFrom(ip, `${APP}/api/auth/two-factor/verify-totp`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin: APP, cookie: cookiesOf(res) },
-    body: JSON.stringify({ code: code ? code() : demoAdminCode() }),
-  });
+  // each code signs in once: the demo admin, signed in by many tests, takes the next unused one
+  const pending = cookiesOf(res);
+  const verify = (c: string, from: string) =>
+    fetchFrom(from, `${APP}/api/auth/two-factor/verify-totp`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: APP, cookie: pending },
+      body: JSON.stringify({ code: c }),
+    });
+  let tries = 0;
+  const second = code ? await verify(code(), ip) : await sendUnusedCode(demoAdminCode, (c) => verify(c, tries++ ? freshIp() : ip));
   if (second.status !== 200) throw new Error(`second step of ${email} failed: ${second.status} ${await second.text()}`);
   return clientFor(cookiesOf(second), ip);
 }

@@ -2,12 +2,13 @@
 // npm package from the otpauth:// URI the app hands out (tests/helpers/totp.ts), never by the app's
 // own library. Admins without it are refused on admin APIs and sent to enrolment from admin pages;
 // enrolment switches on only after a right code; sign-in then needs the code; wrong codes share the
-// per-account throttle of passwords; a backup code works once; an organization can require it of
-// its managers.
-import { and, desc, eq } from "drizzle-orm";
+// per-account throttle of passwords; a backup code works once; a TOTP code signs in once (RFC 6238
+// §5.2); an organization can require it of its managers.
+import { createHash } from "node:crypto";
+import { and, count, desc, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { auditLog, user } from "@/db/schema";
+import { auditLog, rateLimitBucket, session, totpCodeUse, user } from "@/db/schema";
 import { APP, cookiesOf, fetchFrom, freshIp, mailsTo } from "../helpers/http";
 import { createOrganization, createPerson } from "../helpers/fixtures";
 import { codeForUri } from "../helpers/totp";
@@ -181,6 +182,56 @@ describe("everyone may use two-step sign-in", () => {
 
     const other = await signInWith(person.email, person.password, "/api/auth/two-factor/verify-backup-code", b);
     expect(other.status).toBe(200);
+  });
+});
+
+describe("a TOTP code signs in once (RFC 6238 §5.2: no second acceptance of the same OTP)", () => {
+  const sessionsOf = async (id: string) => (await db.select({ n: count() }).from(session).where(eq(session.userId, id)))[0]?.n ?? 0;
+
+  it("refuses the same code a second time, lets exactly one of two simultaneous sign-ins with a code through, and takes the next step's code", async () => {
+    const org = await createOrganization("Replay crew");
+    const person = await createPerson({ tag: "tfa-replay", organizationId: org.id });
+    // the app accepts the codes of the step before, the current one and the one after (30 s each);
+    // start early enough in a step that the step-before code stays valid for the whole test
+    if (Date.now() % 30_000 > 20_000) await new Promise((r) => setTimeout(r, 30_000 - (Date.now() % 30_000) + 200));
+    const { uri } = await enrol((await passwordStep(person.email, person.password)).jar, person.password);
+    const step = Math.floor(Date.now() / 30_000);
+    const [previous, current, next] = [step - 1, step, step + 1].map((s) => codeForUri(uri, s * 30_000 + 1_000)) as [string, string, string];
+    // three distinct codes (a collision of two 6-digit codes is about one in a million: then this run proves less, not wrongly)
+    expect(new Set([previous, current, next]).size).toBe(3);
+
+    // a code accepted once is refused the second time, with the reason, and gives no session
+    const first = await signInWith(person.email, person.password, "/api/auth/two-factor/verify-totp", previous);
+    expect(first.status, JSON.stringify(first.json)).toBe(200);
+    const again = await signInWith(person.email, person.password, "/api/auth/two-factor/verify-totp", previous);
+    expect(again.status).toBe(409);
+    expect(again.json.code).toBe("TOTP_CODE_ALREADY_USED");
+    expect(again.json.message).toMatch(/already used/i);
+    expect((await call(again.jar, "/api/auth/get-session")).json).toBeNull();
+    // a replay is not counted against the per-account sign-in budget (it is no guess; lib/auth/second-factor.ts)
+    const failKey = `signin-fail:${createHash("sha256").update(person.email.toLowerCase()).digest("hex")}`;
+    expect(await db.select().from(rateLimitBucket).where(eq(rateLimitBucket.bucketKey, failKey))).toEqual([]);
+
+    // two sign-ins racing with the same fresh code: exactly one session comes of them
+    const before = await sessionsOf(person.id);
+    const [a, b] = await Promise.all([passwordStep(person.email, person.password), passwordStep(person.email, person.password)]);
+    const race = await Promise.all([a, b].map((p) => call(p.jar, "/api/auth/two-factor/verify-totp", { code: current })));
+    expect(race.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(await sessionsOf(person.id)).toBe(before + 1);
+
+    // the code the app will show in the next step is a fresh one and works
+    const fresh = await signInWith(person.email, person.password, "/api/auth/two-factor/verify-totp", next);
+    expect(fresh.status, JSON.stringify(fresh.json)).toBe(200);
+    expect(((await call(fresh.jar, "/api/auth/get-session")).json as { user?: { email?: string } }).user?.email).toBe(person.email);
+
+    // what is kept: one keyed hash per accepted code, neither the code nor its plain (reversible) SHA-256
+    const kept = (await db.select({ codeHash: totpCodeUse.codeHash }).from(totpCodeUse).where(eq(totpCodeUse.userId, person.id))).map((r) => r.codeHash);
+    expect(kept).toHaveLength(3);
+    for (const code of [previous, current, next]) {
+      expect(kept).not.toContain(code);
+      expect(kept).not.toContain(createHash("sha256").update(code).digest("hex"));
+    }
+    for (const h of kept) expect(h).toMatch(/^[0-9a-f]{64}$/);
   });
 });
 
