@@ -107,7 +107,7 @@ export function CalculatorShell<TValues extends FieldValues>({
             <p className="text-muted">{info.summary}</p>
           </>
         ) : null}
-        <div className={`${embedded ? "mt-4 " : ""}grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]`}>
+        <div className={`${embedded ? "mt-4 " : ""}grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]`}>
           <form
             noValidate
             className="flex flex-col gap-4"
@@ -120,7 +120,7 @@ export function CalculatorShell<TValues extends FieldValues>({
               Calculate
             </button>
           </form>
-          <div className="flex flex-col gap-4" id={`${id}-result`}>
+          <div className="flex min-w-0 flex-col gap-4" id={`${id}-result`}>
             {report ? (
               <>
                 {report.chart ? <SupplyChart chart={report.chart} verdict={report.verdict?.result} /> : null}

@@ -11,7 +11,7 @@ const statusLabel = { ok: "OK: ", check: "", fails: "Fails: " } as const;
 export function ReportView({ report }: { report: CalculatorReport }) {
   const [headline, ...more] = report.results;
   return (
-    <section aria-label="Result" className="flex flex-col gap-4" data-report={report.id}>
+    <section aria-label="Result" className="flex min-w-0 flex-col gap-4 break-words" data-report={report.id}>
       {headline ? (
         <div className="rounded border border-line bg-panel p-4" aria-live="polite">
           <p className="text-sm text-muted">{headline.label}</p>

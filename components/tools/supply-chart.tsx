@@ -42,7 +42,7 @@ export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: 
       : "") +
     (chart.test ? "" : " The test reading itself lies beyond this range of flows.");
   return (
-    <figure className="rounded border border-line bg-panel p-3" aria-label="Demand versus supply">
+    <figure className="min-w-0 rounded border border-line bg-panel p-3" aria-label="Demand versus supply">
       <div className="h-72 w-full" aria-hidden="true">
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={chart.supply} margin={{ top: 24, right: 24, bottom: 28, left: 16 }} accessibilityLayer={false} tabIndex={-1}>

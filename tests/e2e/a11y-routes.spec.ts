@@ -87,7 +87,7 @@ const heavyDone = new Set<string>();
  * Known and not yet fixed (ACCESSIBILITY.md, "Known gaps"): each entry is the start of one
  * problem message; every other problem on that page still fails the test. Remove an entry with its fix.
  */
-const KNOWN = ["learner /tools/flow-test @320: with text spacing the page scrolls sideways"];
+const KNOWN: string[] = [];
 
 async function auditRole(browser: Browser, who: Who, problems: string[]) {
   const context = await browser.newContext({ viewport: { width: 320, height: 720 }, reducedMotion: "reduce" });
