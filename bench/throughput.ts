@@ -1,5 +1,5 @@
 // Throughput of the pages people read, 50 connections each, in one run beside the baselines:
-// the public home page (a static, prerendered response) and /api/health, measured before and
+// the public home page (rendered per request since scripts carry CSP nonces) and /api/health, measured before and
 // after the signed-in paths so that a busy machine moves all of them alike. Signed-in requests
 // carry what a browser holds after sign-in: the session cookie and its signed cache copy (renewed
 // from the Set-Cookie answers when it expires). Writes bench/results/throughput.json.
