@@ -117,6 +117,9 @@ async function auditRole(browser: Browser, who: Who, problems: string[]) {
       problems.push(...(await targetSizeProblems(page, `${label} @1280`)));
       problems.push(...(await axeProblems(page, `${label} @1280`)));
       await page.setViewportSize({ width: 320, height: 720 });
+      // back from 1280 px: let resize observers (charts) lay out again, as a phone does after rotating;
+      // if the page never fits, the check below reports it
+      await page.waitForFunction(() => document.documentElement.scrollWidth <= document.documentElement.clientWidth + 1, null, { timeout: 3_000 }).catch(() => undefined);
       problems.push(...(await textSpacingProblems(page, `${label} @320`)));
       if (process.env.A11Y_VERBOSE) console.log(label, problems.slice(seen).join("\n"));
       seen = problems.length;

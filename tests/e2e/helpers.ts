@@ -33,14 +33,24 @@ export async function signInAs(page: Page, email: string, password = DEMO_PASSWO
       // the demo admin signs in with two steps: the code from the published demo key (tests/helpers/totp.ts)
       const pending = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
       // each code signs in once (RFC 6238 §5.2): take the next unused one
-      answer = await sendUnusedCode(demoAdminCode, (code) =>
-        fetch(`${APP}/api/auth/two-factor/verify-totp`, {
-          method: "POST",
-          headers: { "content-type": "application/json", origin: APP, cookie: pending },
-          body: JSON.stringify({ code }),
-          dispatcher,
-        }),
-      );
+      // (each try from its own loopback address, as tests/helpers/http.ts does: the second-step
+      // endpoints allow 3 requests per 10 s per client, and a round of tries can come close together)
+      let tries = 0;
+      answer = await sendUnusedCode(demoAdminCode, async (code) => {
+        const from = tries++ ? new Agent({ localAddress: `127.${octet()}.${octet()}.${octet()}` }) : dispatcher;
+        try {
+          const r = await fetch(`${APP}/api/auth/two-factor/verify-totp`, {
+            method: "POST",
+            headers: { "content-type": "application/json", origin: APP, cookie: pending },
+            body: JSON.stringify({ code }),
+            dispatcher: from,
+          });
+          await r.clone().arrayBuffer();
+          return r;
+        } finally {
+          if (from !== dispatcher) await from.close();
+        }
+      });
       expect(answer.status, `second step of ${email}`).toBe(200);
     }
     const cookies = answer.headers.getSetCookie().map((c) => {

@@ -31,8 +31,8 @@ export default async function DevMailPage({ searchParams }: { searchParams: Prom
       </p>
       {problem ? <p role="alert" className="mt-4 text-caution">{problem}</p> : null}
       {!problem && messages.length === 0 ? <p className="mt-4">No messages yet.</p> : null}
-      <div className="mt-4 grid gap-4 md:grid-cols-[2fr_3fr]">
-        <ul className="flex flex-col gap-2" aria-label="Messages">
+      <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-4 md:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <ul className="flex min-w-0 flex-col gap-2 break-words" aria-label="Messages">
           {messages.map((m) => (
             <li key={m.id} className={`rounded border p-2 ${m.id === id ? "border-water bg-water-light" : "border-line bg-panel"}`}>
               <a href={`/dev/mail?id=${m.id}`} className="font-bold">{m.subject || "(no subject)"}</a>
