@@ -52,3 +52,12 @@ export async function recordFailedSignIn(email: string, ip: string, now = new Da
     text: `Hello ${owner.name},\n\nThere were ${r.hits} sign-in attempts with a wrong password for your Riser account (the last from the network address ${ip}). To protect it, sign-in is paused for up to ${minutes} minutes.\n\nIf these were you, wait and try again, or choose a new password: ${env.APP_URL}/forgot-password\n\nIf they were not you, your password is still safe as long as nobody knows it; choosing a new, long one is a good idea.`,
   });
 }
+
+/**
+ * Sign-in attempts per client address, in fixed windows shared by every app server (rate_limit_bucket):
+ * AUTH_RATE_LIMIT_MAX per AUTH_RATE_LIMIT_WINDOW_S. It slows one address trying many accounts; the
+ * per-account pause above stops guessing at one account from many addresses.
+ */
+export async function hitSignInFromClient(ip: string, now = new Date()) {
+  return hitRateLimit(`signin-ip:${ip}`, env.AUTH_RATE_LIMIT_MAX, env.AUTH_RATE_LIMIT_WINDOW_S, now);
+}

@@ -29,8 +29,12 @@ const schema = z.object({
   MAIL_FROM: z.string().default("Riser <no-reply@riser.invalid>"),
   /** HTTP address of the local mail catcher; set only for local use and tests (enables /dev/mail). */
   MAIL_CATCHER_URL: z.string().url().optional(),
-  /** sign-in attempts allowed per window (better-auth rate limit) */
-  AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(5),
+  /**
+   * sign-in attempts allowed per client address per window (lib/auth/throttle.ts); an office or a
+   * job-site trailer signs a whole crew in from one address, so this is not the guessing limit (that is
+   * SIGN_IN_LOCK_FAILURES, per account)
+   */
+  AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(20),
   AUTH_RATE_LIMIT_WINDOW_S: z.coerce.number().int().min(1).default(60),
   /** failed sign-ins per account (from any address) that pause its sign-in until the window ends */
   SIGN_IN_LOCK_FAILURES: z.coerce.number().int().min(3).max(100).default(10),

@@ -100,7 +100,7 @@ export function config(name = profileFromArgs()) {
       STRIPE_API_PROTOCOL: "http",
       // each profile builds into its own folder so that parallel runs do not share a build
       NEXT_DIST_DIR: name === "dev" || name === "test" ? ".next" : `.next-${name}`,
-      ...(name.startsWith("test") ? { AUTH_RATE_LIMIT_MAX: "5", AUTH_RATE_LIMIT_WINDOW_S: "60" } : {}),
+      ...(name.startsWith("test") ? { AUTH_RATE_LIMIT_MAX: "20", AUTH_RATE_LIMIT_WINDOW_S: "60" } : {}),
     },
   };
 }
