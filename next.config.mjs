@@ -1,4 +1,5 @@
 import createMDX from "@next/mdx";
+import createNextIntlPlugin from "next-intl/plugin";
 import { otherSecurityHeaders } from "./lib/security-headers.mjs";
 
 /** @type {import('next').NextConfig} */
@@ -30,4 +31,7 @@ const withMDX = createMDX({
   },
 });
 
-export default withMDX(nextConfig);
+// next-intl: the per-request language and message catalogs (i18n/request.ts)
+const withNextIntl = createNextIntlPlugin("./i18n/request.ts");
+
+export default withNextIntl(withMDX(nextConfig));

@@ -1,6 +1,7 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
+import { isLocale, LOCALE_HEADER } from "@/lib/i18n/config";
 import { REQUEST_ID_HEADER, requestIdFor } from "@/lib/request-id";
 import { applySecurityHeaders, contentSecurityPolicy, newNonce } from "@/lib/security-headers.mjs";
 
@@ -77,6 +78,8 @@ export async function proxy(req: NextRequest) {
   // handlers read the id from the request: always this one, never what the client sent
   const headers = new Headers(req.headers);
   headers.set(REQUEST_ID_HEADER, requestId);
+  // the signed-in person's language travels on this header (lib/i18n/locale.ts): only the proxy sets it
+  headers.delete(LOCALE_HEADER);
   if (SELF_REPORTING.test(pathname)) return nextWithCsp(req, headers);
   if (!(await databaseUp())) {
     // The proxy's own answers carry the same security headers as every other response.
@@ -105,6 +108,8 @@ export async function proxy(req: NextRequest) {
   // better-auth reads the client address from this header (lib/auth): set here from the real peer
   // and the trusted proxies only, overwriting whatever the client sent under that name.
   headers.set(CLIENT_IP_HEADER, clientIpOf(req.headers));
+  const language = (checked.session?.user as { language?: unknown } | undefined)?.language;
+  if (isLocale(language)) headers.set(LOCALE_HEADER, language);
   if (checked.setCookies.length) headers.set("cookie", withCookies(req.headers.get("cookie") ?? "", checked.setCookies));
   const res = nextWithCsp(req, headers);
   for (const c of checked.setCookies) res.headers.append("set-cookie", c);

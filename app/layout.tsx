@@ -1,5 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
+import { NextIntlClientProvider } from "next-intl";
+import { getLocale, getTranslations } from "next-intl/server";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { RouteFocus } from "@/components/ui/route-focus";
@@ -7,10 +9,10 @@ import { bodyFont, monoFont } from "./fonts";
 import "./globals.css";
 import { palette } from "@/lib/theme";
 
-export const metadata: Metadata = {
-  title: { default: "Riser — training for residential sprinkler work", template: "%s · Riser" },
-  description: "Lessons, quizzes, certificates, code-reference cards and field calculators for the residential fire-sprinkler trade.",
-};
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("shell");
+  return { title: { default: t("siteTitle"), template: "%s · Riser" }, description: t("siteDescription") };
+}
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: palette.ink };
 
@@ -18,11 +20,13 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // Every page renders per request: its scripts carry the nonce of that request's CSP (proxy.ts).
   // Prerendered HTML would hold no nonce, and the policy allows no other inline script.
   await connection();
+  const [locale, t] = await Promise.all([getLocale(), getTranslations("shell")]);
   return (
-    <html lang="en" className={`${bodyFont.variable} ${monoFont.variable}`}>
+    <html lang={locale} className={`${bodyFont.variable} ${monoFont.variable}`}>
       <body>
+        <NextIntlClientProvider>
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-panel focus:px-3 focus:py-2">
-          Skip to main content
+          {t("skipToMain")}
         </a>
         <SiteHeader />
         <main id="main" className="mx-auto w-full max-w-6xl px-4 py-6 sm:px-6">
@@ -30,6 +34,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
         </main>
         <SiteFooter />
         <RouteFocus />
+        </NextIntlClientProvider>
       </body>
     </html>
   );

@@ -9,11 +9,13 @@
  */
 import Link from "next/link";
 import { useEffect } from "react";
+import { useTranslations } from "next-intl";
 
-export function LoadingState({ what = "page" }: { what?: string }) {
+export function LoadingState({ what }: { what?: string }) {
+  const t = useTranslations("shell");
   return (
     <div role="status" aria-live="polite" className="flex flex-col gap-3" data-testid="route-loading">
-      <p className="text-muted">Loading the {what}…</p>
+      <p className="text-muted">{what ? t("loadingWhat", { what }) : t("loading")}</p>
       <div aria-hidden="true" className="flex animate-pulse flex-col gap-3">
         <div className="h-8 w-2/3 rounded bg-line/60" />
         <div className="h-4 w-full rounded bg-line/40" />
@@ -29,17 +31,18 @@ export function LoadingState({ what = "page" }: { what?: string }) {
  * not shown (a production server error carries only a digest); the digest helps match server logs.
  */
 export function ErrorState({ error, reset, area, home }: { error: Error & { digest?: string }; reset: () => void; area: string; home: { href: string; label: string } }) {
+  const t = useTranslations("shell");
   useEffect(() => {
     console.error(`[${area}]`, error);
   }, [area, error]);
   return (
     <div className="max-w-prose" role="alert">
-      <h1 className="text-3xl">Something went wrong</h1>
-      <p className="mt-3">This part of {area} could not load. Nothing you saved is lost. Try again in a moment.</p>
-      {error.digest ? <p className="mt-2 text-sm text-muted">Reference for support: <span className="font-mono">{error.digest}</span></p> : null}
+      <h1 className="text-3xl">{t("errorTitle")}</h1>
+      <p className="mt-3">{t("errorBody", { area })}</p>
+      {error.digest ? <p className="mt-2 text-sm text-muted">{t("errorReference")} <span className="font-mono">{error.digest}</span></p> : null}
       <div className="mt-4 flex flex-wrap gap-3">
         <button type="button" onClick={reset} className="min-h-11 rounded border border-ink/40 bg-panel px-4 py-2 font-bold">
-          Try again
+          {t("tryAgain")}
         </button>
         <Link href={home.href} className="inline-flex min-h-11 items-center">
           {home.label}

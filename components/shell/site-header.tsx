@@ -1,5 +1,9 @@
 import Link from "next/link";
+import { LanguageSwitch } from "./language-switch";
 import { SiteNav } from "./site-nav";
+
+/** The product's name: the same in every language. */
+const BRAND = "Riser";
 
 export function SiteHeader() {
   return (
@@ -7,9 +11,10 @@ export function SiteHeader() {
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
         <Link href="/" className="flex items-center gap-2 text-xl font-bold text-paper no-underline">
           <RiserMark />
-          <span>Riser</span>
+          <span>{BRAND}</span>
         </Link>
         <SiteNav />
+        <LanguageSwitch />
       </div>
     </header>
   );

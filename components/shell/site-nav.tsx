@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
+import { useTranslations } from "next-intl";
 import { OfflineSync } from "@/components/offline/offline-sync";
 import { postJson } from "@/lib/fetcher";
 import { isRole } from "@/lib/access/browser";
@@ -16,6 +17,7 @@ type NavSession = { user: { id: string; name: string; role?: string } } | null;
  * loading the auth client library into every page's first-load JavaScript.
  */
 export function SiteNav() {
+  const t = useTranslations("shell");
   const pathname = usePathname();
   const router = useRouter();
   const [open, setOpen] = useState(false);
@@ -44,7 +46,7 @@ export function SiteNav() {
     if (offlineSupported()) {
       if (navigator.onLine) await flushQueue().catch(() => undefined);
       const left = await listQueue().catch(() => []);
-      if (left.length && !window.confirm(`${left.length} lesson mark${left.length === 1 ? " has" : "s have"} not reached Riser yet and will be deleted from this phone. Sign out anyway?`)) return;
+      if (left.length && !window.confirm(t("unsentMarks", { count: left.length }))) return;
       await forgetEverything();
     }
     await postJson("/api/auth/sign-out", {});
@@ -54,10 +56,10 @@ export function SiteNav() {
   }
 
   return (
-    <nav aria-label="Main" className="flex flex-1 flex-wrap items-center justify-end gap-2">
+    <nav aria-label={t("mainNav")} className="flex flex-1 flex-wrap items-center justify-end gap-2">
       <OfflineSync userId={data?.user.id ?? null} />
       {isPending ? (
-        <span className="text-sm text-paper/70">Loading…</span>
+        <span className="text-sm text-paper/70">{t("loading")}</span>
       ) : data ? (
         <>
           <button
@@ -67,7 +69,7 @@ export function SiteNav() {
             aria-controls="main-nav-list"
             onClick={() => setOpen((o) => !o)}
           >
-            Menu
+            {t("menu")}
           </button>
           <ul id="main-nav-list" className={`${open ? "flex" : "hidden"} w-full flex-col gap-1 sm:flex sm:w-auto sm:flex-row sm:flex-wrap sm:gap-4`} data-testid="main-nav">
             {items.map((i) => (
@@ -78,14 +80,14 @@ export function SiteNav() {
                   className="block py-1 text-paper no-underline hover:underline aria-[current=page]:underline aria-[current=page]:decoration-2"
                   onClick={() => setOpen(false)}
                 >
-                  {i.label}
+                  {t(`nav.${i.key}`)}
                 </Link>
               </li>
             ))}
             <li className="flex items-center gap-3 sm:ml-2 sm:border-l sm:border-paper/30 sm:pl-4">
               <Link href="/account" className="py-1 text-sm text-paper/90">{data.user.name}</Link>
               <button type="button" onClick={signOut} className="rounded border border-paper/40 px-2 py-0.5 text-sm hover:bg-paper hover:text-ink">
-                Sign out
+                {t("signOut")}
               </button>
             </li>
           </ul>
@@ -93,7 +95,7 @@ export function SiteNav() {
       ) : (
         <ul className="flex gap-4">
           {signedOutLinks(pathname).map((l) => (
-            <li key={l.href}><Link href={l.href} className="text-paper">{l.label}</Link></li>
+            <li key={l.href}><Link href={l.href} className="text-paper">{t(l.key)}</Link></li>
           ))}
         </ul>
       )}

@@ -26,6 +26,8 @@ export const user = mysqlTable(
     teamId: varchar("team_id", { length: 36 }),
     /** when the person joined their current organization by a move (null: from the start) */
     organizationSince: datetime("organization_since", { fsp: 3 }),
+    /** the person's language for pages, e-mails and certificates (lib/i18n/config.ts LOCALES) */
+    language: varchar("language", { length: 5 }).default("en").notNull(),
   },
   // user_org_name_idx: the team board pages an organization's people in name order (lib/team/board.ts)
   (t) => [index("user_org_idx").on(t.organizationId, t.teamId), index("user_org_name_idx").on(t.organizationId, t.name)],

@@ -9,6 +9,8 @@ export const organization = mysqlTable("organization", {
   trialEndsAt: datetime("trial_ends_at"),
   /** the organization's managers must use two-step sign-in (TOTP) before team pages and APIs work */
   requireManagerTwoFactor: boolean("require_manager_two_factor").default(false).notNull(),
+  /** the language new invitations start with (a manager may change it per invitation) */
+  defaultLanguage: varchar("default_language", { length: 5 }).default("en").notNull(),
   createdAt: timestamp("created_at", { fsp: 3 }).defaultNow().notNull(),
 });
 

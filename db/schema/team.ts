@@ -31,6 +31,8 @@ export const invitation = mysqlTable(
     /** when the mail last went out (a resend keeps the row and issues a new token) */
     lastSentAt: datetime("last_sent_at", { fsp: 3 }),
     sendCount: int("send_count").notNull().default(1),
+    /** the invitation's language (mail and the new account's starting language) */
+    language: varchar("language", { length: 5 }).default("en").notNull(),
     /** work to assign on acceptance: [{ kind: "module" | "path", slug, dueAt: "YYYY-MM-DD" }] */
     assignOnAccept: json("assign_on_accept").$type<{ kind: "module" | "path"; slug: string; dueAt: string }[]>(),
   },

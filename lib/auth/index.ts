@@ -96,6 +96,8 @@ export const auth = betterAuth({
     additionalFields: {
       organizationId: { type: "string", required: false, input: false },
       teamId: { type: "string", required: false, input: false },
+      // set through /api/account/language (validated there), never from a sign-up body
+      language: { type: "string", required: false, input: false, defaultValue: "en" },
     },
   },
   session: {

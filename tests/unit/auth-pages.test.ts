@@ -5,8 +5,8 @@ import { signedOutLinks } from "@/components/shell/nav-items";
 
 describe("signed-out header", () => {
   it("offers no “Create an account” on an invitation page (the invitation creates the account)", () => {
-    expect(signedOutLinks("/invite/abc123").map((l) => l.label)).toEqual(["Sign in"]);
-    expect(signedOutLinks("/").map((l) => l.label)).toEqual(["Sign in", "Create an account"]);
+    expect(signedOutLinks("/invite/abc123").map((l) => l.key)).toEqual(["signIn"]);
+    expect(signedOutLinks("/").map((l) => l.key)).toEqual(["signIn", "createAccount"]);
   });
 });
 
