@@ -103,11 +103,8 @@ export const auth = betterAuth({
   session: {
     expiresIn: 60 * 60 * 24 * 7,
     updateAge: 60 * 60 * 24,
-    // A signed copy of the session in a cookie, trusted for at most 60 s (lib/auth/session-cache.ts),
-    // is switched OFF: in the browser, "sign out everywhere else" left the other browser signed in well
-    // past the bound (tests/e2e/admin-account.spec.ts). Every session check reads the database until
-    // that is understood (README "Performance").
-    cookieCache: { enabled: false, strategy: "compact", maxAge: SESSION_CACHE_SECONDS, version: (_session, u) => cachedSessionVersion(u?.id) },
+    // a signed copy of the session in a cookie, trusted for at most 60 s (lib/auth/session-cache.ts)
+    cookieCache: { enabled: true, strategy: "compact", maxAge: SESSION_CACHE_SECONDS, version: (_session, u) => cachedSessionVersion(u?.id) },
   },
   rateLimit: {
     enabled: true,

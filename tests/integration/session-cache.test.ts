@@ -1,5 +1,3 @@
-// SKIPPED while the session cookie cache is switched off (lib/auth/index.ts): with no cached copy every
-// check reads the database, so the bound this file proves is zero; re-enable it with the cache.
 // The session cookie cache (lib/auth/session-cache.ts): a signed copy of the session saves the
 // database round trip per request, and a change to the person still takes effect within the stated
 // bound. The test profile trusts a copy for SESSION_CACHE_MAX_AGE_S seconds (3, set by
@@ -56,7 +54,7 @@ async function expectStillCached(asked: number, check: () => Promise<void>) {
   if (Date.now() - asked < MAX_AGE_MS - 1000) await check();
 }
 
-describe.skip("session cookie cache", () => {
+describe("session cookie cache", () => {
   it("is trusted for at most 60 s in any deployment", () => {
     expect(MAX_AGE_MS).toBeGreaterThan(0);
     expect(MAX_AGE_MS).toBeLessThanOrEqual(60_000);
