@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db/client";
 import { user } from "@/db/schema";
+import { forgetCachedSessions } from "@/lib/auth/session-cache";
 import { env } from "@/lib/env";
 import { LANG_COOKIE, LOCALES, type Locale } from "./config";
 
@@ -17,4 +18,6 @@ export function languageCookie(locale: Locale): string {
 /** Stores a signed-in person's language (pages, e-mails, certificates follow it). */
 export async function saveLanguage(userId: string, locale: Locale): Promise<void> {
   await db.update(user).set({ language: locale }).where(eq(user.id, userId));
+  // the signed session copy carries the language: refuse older copies here, so the next page follows
+  forgetCachedSessions(userId);
 }
