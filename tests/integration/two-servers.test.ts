@@ -59,7 +59,7 @@ async function expectGapless(before: number) {
 
 const moduleCertsOf = (userIds: string[]) => db.select().from(certificate).where(and(inArray(certificate.userId, userIds), eq(certificate.kind, "module")));
 
-async function session(base: string, client: Client) {
+async function session(base: string, client: Pick<Client, "cookie" | "ip">) {
   const res = await via(base, client).fetch("/api/auth/get-session");
   expect(res.status).toBe(200);
   return (await res.json()) as { user?: { email: string } } | null;
@@ -67,7 +67,7 @@ async function session(base: string, client: Client) {
 
 describe("sessions", () => {
   it("made on one server work on the other, and a sign-out on either ends them on both", async () => {
-    const p = await createPerson({ tag: "two-srv-session" });
+    const p = await createPerson({ tag: "two-srv-session", organizationId: org.id });
     const ip = freshIp();
     const res = await passwordSignIn(B, p.email, p.password, ip);
     expect(res.status).toBe(200);
@@ -248,7 +248,7 @@ describe("scheduled jobs started on both servers at once", () => {
     const at = new Date(Date.now() - 3_600_000);
     for (const p of people) await completion(p.id, "pipe-and-joining", await gradedAttempt({ id: p.id, organizationId: org.id }, "pipe-and-joining", true, at), at);
     const before = await counter();
-    const [{ lastRun }] = await db.select({ lastRun: sql<number>`COALESCE(MAX(${jobRun.id}), 0)` }).from(jobRun);
+    const lastRun = (await db.select({ id: sql<number>`COALESCE(MAX(${jobRun.id}), 0)` }).from(jobRun))[0]!.id;
 
     const jobs = ["certificate-backfill", "mail-outbox"];
     const runOn = async (base: string) => {
