@@ -3,6 +3,8 @@
 // and sends each piece of one person's work to both. What must hold, and the outside reference for it:
 //  - a session made on one server is a session on the other, and a sign-out on one ends it on both
 //    (nothing about a session may live in one process);
+//  - a lesson's first-open stamp (the seat-time rule's start) written by one server is the one the
+//    other counts from (each server only remembers which stamps it wrote, as a hint);
 //  - the per-address sign-in limit and the per-account pause are one count across servers
 //    (NIST SP 800-63B §5.2.2: limit failed attempts on the account, wherever they come from), and a
 //    TOTP code accepted by one server is refused by the other (RFC 6238 §5.2);
@@ -17,11 +19,11 @@ import { and, eq, gt, inArray, sql } from "drizzle-orm";
 import { createLocalJWKSet, jwtVerify, type JWK } from "jose";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { certificate, certificateSerialCounter, jobRun, moduleCompletion, quizAttempt } from "@/db/schema";
+import { certificate, certificateSerialCounter, jobRun, lessonOpen, moduleCompletion, quizAttempt } from "@/db/schema";
 import { DEMO_PASSWORD, demoByRole } from "@/db/demo";
 import { issueCertificateForCompletion } from "@/lib/certificates";
 import { APP, cookiesOf, freshIp, mailsTo, postJson, uniqueEmail, waitForMail, type Client } from "../helpers/http";
-import { clientOf, completion, createPeople, createPerson, createTestOrganization, gradedAttempt, lessonsDone } from "../helpers/fixtures";
+import { backdateOpens, clientOf, completion, createPeople, createPerson, createTestOrganization, gradedAttempt, lessonsDone } from "../helpers/fixtures";
 import { answersFor, catalog } from "../helpers/quiz";
 import { demoAdminCode } from "../helpers/totp";
 import { passwordSignIn, startSecondServer, via, type SecondServer } from "../helpers/second-server";
@@ -83,6 +85,28 @@ describe("sessions", () => {
     expect(out.status).toBe(200);
     expect(await session(B, me)).toBeNull();
     expect((await via(B, me).fetch("/api/quiz/attempts")).status).toBe(401);
+  });
+});
+
+describe("reading time", () => {
+  it("a lesson first opened on one server keeps that stamp on the other and counts there", async () => {
+    const [p] = await createPeople(1, { organizationId: org.id, teamId: org.teamId, tag: "two-srv-read" });
+    const c = await clientOf(p!.id);
+    const mod = catalog.modules.find((m) => m.slug === "pipe-and-joining")!;
+    const lesson = mod.lessons[0]!.slug;
+    const stamp = async () => (await db.select({ at: lessonOpen.firstOpenedAt }).from(lessonOpen).where(eq(lessonOpen.userId, p!.id)))[0]?.at;
+    // too soon on either server: the seat-time rule refuses the mark
+    expect((await via(A, c).fetch(`/modules/${mod.slug}/${lesson}`)).status).toBe(200);
+    const first = await stamp();
+    expect(first).toBeInstanceOf(Date);
+    const soon = await postJson(via(B, c), "/api/progress", { module: mod.slug, lesson });
+    expect(soon.status).toBe(409);
+    expect(soon.text).toContain("Keep reading"); // B found A's stamp (no stamp answers "Open the lesson")
+    await new Promise((r) => setTimeout(r, 1100));
+    expect((await via(B, c).fetch(`/modules/${mod.slug}/${lesson}`)).status).toBe(200);
+    expect((await stamp())!.getTime()).toBe(first!.getTime()); // the first open stays the first
+    await backdateOpens(p!.id, mod.slug);
+    expect((await postJson(via(B, c), "/api/progress", { module: mod.slug, lesson })).status).toBe(200);
   });
 });
 
