@@ -4,7 +4,8 @@
 // outage and a bench can count it per second. A request the app never answers is kept as status 0.
 import type { Client } from "./http";
 
-export type Hit = { at: number; path: string; status: number; body?: string; error?: string };
+/** `sentAt` when the request left, `at` when its answer (or failure) came back. */
+export type Hit = { sentAt: number; at: number; path: string; status: number; body?: string; error?: string };
 
 export type Load = {
   hits: Hit[];
@@ -16,12 +17,13 @@ export function startLoad(clients: Client[], paths: string[], opts: { timeoutMs?
   const hits: Hit[] = [];
   let running = true;
   const one = async (client: Client, path: string) => {
+    const sentAt = Date.now();
     try {
       const res = await client.fetch(path, { signal: AbortSignal.timeout(opts.timeoutMs ?? 30_000) });
       const text = await res.text();
-      hits.push({ at: Date.now(), path, status: res.status, ...(res.status >= 400 ? { body: text.slice(0, 400) } : {}) });
+      hits.push({ sentAt, at: Date.now(), path, status: res.status, ...(res.status >= 400 ? { body: text.slice(0, 400) } : {}) });
     } catch (err) {
-      hits.push({ at: Date.now(), path, status: 0, error: err instanceof Error ? `${err.name}: ${err.message}` : String(err) });
+      hits.push({ sentAt, at: Date.now(), path, status: 0, error: err instanceof Error ? `${err.name}: ${err.message}` : String(err) });
       await new Promise((r) => setTimeout(r, 50)); // a refused connection returns at once: do not spin
     }
   };
