@@ -2,12 +2,16 @@ import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
 import { isLocale, LOCALE_HEADER } from "@/lib/i18n/config";
+import { isDatabaseDown } from "@/lib/db-errors";
+import { OUTAGE_RETRY_AFTER_S, outageMessage, outagePage } from "@/lib/outage.mjs";
 import { REQUEST_ID_HEADER, requestIdFor } from "@/lib/request-id";
 import { applySecurityHeaders, contentSecurityPolicy, newNonce } from "@/lib/security-headers.mjs";
 
 /**
  * Quick checks before a route runs: (1) if the database is unreachable, answer 503 at once with a
- * clear page or JSON (a TCP probe, remembered for one second); (2) statically generated lesson
+ * clear page or JSON (a TCP probe, remembered for one second; also when the session read below
+ * fails because the database just dropped — lib/outage.mjs has the answer, and scripts/serve.mjs
+ * turns the 5xx of a request already past this point into the same 503); (2) statically generated lesson
  * pages get their session checked here, since the page itself holds no per-person data; (3) the
  * client address is worked out once (lib/client-ip) and handed to better-auth; (4) every request gets
  * a request id (lib/request-id), on the request for the handlers' logs and on the response; (5) a
@@ -48,10 +52,6 @@ async function databaseUp(): Promise<boolean> {
   return inFlight;
 }
 
-const outagePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Riser is briefly unavailable</title></head>
-<body style="font-family:system-ui,sans-serif;background:#F7F4EE;color:#14202B;max-width:40rem;margin:3rem auto;padding:0 1rem">
-<h1>Riser is briefly unavailable</h1><p>Our database is not answering right now. Nothing you saved is lost. This page will work again as soon as it is back &mdash; try again in a minute.</p></body></html>`;
-
 /** Health, readiness and metrics answer for themselves, database or not (app/api/health, app/api/metrics). */
 const SELF_REPORTING = /^\/api\/(health(\/(live|ready))?|metrics)$/;
 
@@ -81,20 +81,14 @@ export async function proxy(req: NextRequest) {
   // the signed-in person's language travels on this header (lib/i18n/locale.ts): only the proxy sets it
   headers.delete(LOCALE_HEADER);
   if (SELF_REPORTING.test(pathname)) return nextWithCsp(req, headers);
-  if (!(await databaseUp())) {
-    // The proxy's own answers carry the same security headers as every other response.
-    const answer = applySecurityHeaders(new Headers({ "Retry-After": "10", "Cache-Control": "no-store", [REQUEST_ID_HEADER]: requestId }), production);
-    if (pathname.startsWith("/api/")) {
-      return NextResponse.json({ error: "Riser's database is not reachable right now. Try again in a minute." }, { status: 503, headers: answer });
-    }
-    answer.set("content-type", "text/html; charset=utf-8");
-    return new NextResponse(outagePage, { status: 503, headers: answer });
-  }
+  if (!(await databaseUp())) return outageAnswer(pathname, requestId);
   // A signed-in request: the session is checked from its signed cookie copy (lib/auth/session-cache.ts,
   // no database round trip); an expired copy is read again from the database and renewed here, for
   // the route below (request cookie) and for the browser (Set-Cookie).
   const signedIn = !pathname.startsWith("/api/auth/") && SESSION_COOKIE.test(req.headers.get("cookie") ?? "");
-  const checked = signedIn ? await checkSession(req.headers) : { session: null, setCookies: [] };
+  const checked = signedIn ? await checkSession(req.headers) : { session: null, setCookies: [], databaseDown: false };
+  // the database dropped after the probe: 503 now, not a sign-in redirect or a failing page below
+  if (checked.databaseDown) return outageAnswer(pathname, requestId);
   if (/^\/modules\/[^/]+\/[^/]+$/.test(pathname) && !pathname.endsWith("/quiz")) {
     if (!checked.session || (checked.session.user as { banned?: boolean }).banned) {
       const url = req.nextUrl.clone();
@@ -120,8 +114,20 @@ const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_token=/;
 
 async function checkSession(requestHeaders: Headers) {
   const { auth } = await import("@/lib/auth");
-  const r = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true }).catch(() => null);
-  return { session: r?.response ?? null, setCookies: r?.headers.getSetCookie() ?? [] };
+  try {
+    const r = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true });
+    return { session: r?.response ?? null, setCookies: r?.headers.getSetCookie() ?? [], databaseDown: false };
+  } catch (err) {
+    return { session: null, setCookies: [], databaseDown: isDatabaseDown(err) };
+  }
+}
+
+/** The 503 answer while the database is unreachable; it carries the same security headers as every other response. */
+function outageAnswer(pathname: string, requestId: string): NextResponse {
+  const answer = applySecurityHeaders(new Headers({ "Retry-After": String(OUTAGE_RETRY_AFTER_S), "Cache-Control": "no-store", [REQUEST_ID_HEADER]: requestId }), production);
+  if (pathname.startsWith("/api/")) return NextResponse.json({ error: outageMessage("database") }, { status: 503, headers: answer });
+  answer.set("content-type", "text/html; charset=utf-8");
+  return new NextResponse(outagePage("database"), { status: 503, headers: answer });
 }
 
 /** The request's Cookie header with the cookies just set (or expired) applied. */

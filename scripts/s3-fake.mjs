@@ -1,8 +1,9 @@
 #!/usr/bin/env node
 // Local fake of an S3-compatible object store (development and tests only): s3rver on 127.0.0.1 at
 // the profile's s3Port, data under .data/<profile>/s3, the profile's bucket created at start.
-//   node scripts/s3-fake.mjs start|stop|serve [--profile=dev|test|test-a …]
-// Test profiles start from an empty store, as their database is reset before each run.
+//   node scripts/s3-fake.mjs start|stop|serve [--profile=dev|test|test-a …] [--keep-data]
+// Test profiles start from an empty store, as their database is reset before each run;
+// --keep-data restarts with what was stored (fault tests: an outage loses nothing).
 import { mkdirSync, rmSync } from "node:fs";
 import path from "node:path";
 import S3rver from "s3rver";
@@ -35,10 +36,14 @@ async function serve() {
   process.on("SIGINT", shut);
 }
 
-/** Up when the bucket answers a listing (s3rver accepts any signature for its default key pair). */
+/**
+ * Up when the bucket answers a listing (s3rver accepts any signature for its default key pair).
+ * A version-1 listing: s3rver answers a truncated version-2 one (two or more keys, max-keys=1)
+ * with a 500, so a store restarted with its data would never look up.
+ */
 async function healthy() {
   try {
-    const r = await fetch(`http://127.0.0.1:${cfg.s3Port}/${bucket}?list-type=2&max-keys=1`);
+    const r = await fetch(`http://127.0.0.1:${cfg.s3Port}/${bucket}?max-keys=1`);
     return r.status === 200 || r.status === 403;
   } catch {
     return false;
@@ -54,7 +59,7 @@ const { start, stop } = daemon({
   profile: cfg.name,
   healthy,
   // test profiles start with an empty store, like their freshly reset database
-  beforeStart: () => cfg.name.startsWith("test") && rmSync(dir, { recursive: true, force: true }),
+  beforeStart: () => cfg.name.startsWith("test") && !process.argv.includes("--keep-data") && rmSync(dir, { recursive: true, force: true }),
   ready: `fake S3 at http://127.0.0.1:${cfg.s3Port}, bucket "${bucket}", data in ${path.relative(process.cwd(), dir) || dir}`,
 });
 

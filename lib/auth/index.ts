@@ -11,6 +11,9 @@ import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
 import { nameProblem, normalizeName } from "@/lib/names";
 import { CLIENT_IP_HEADER } from "@/lib/client-ip";
+import { isDatabaseDown } from "@/lib/db-errors";
+import { log } from "@/lib/log";
+import { noteOutage } from "@/lib/outage.mjs";
 import { signupContext } from "./signup-context";
 import { assertEmailChangeAllowed, assertFieldLengths, assertPasswordAllowed } from "./guards";
 import { MIN_PASSWORD_LENGTH } from "./password-policy";
@@ -123,6 +126,15 @@ export const auth = betterAuth({
       // account settings: guessing the current password or flooding someone's inbox
       "/change-password": { window: 60, max: 10 },
       "/change-email": { window: 60, max: 5 },
+    },
+  },
+  // better-auth answers its own failures with a 500: one caused by a database outage is noted on the
+  // request so that scripts/serve.mjs answers 503 instead (lib/outage.mjs); other failures are logged.
+  onAPIError: {
+    onError(e) {
+      if (isDatabaseDown(e)) return noteOutage("database");
+      const status = (e as { statusCode?: unknown } | null)?.statusCode;
+      if (typeof status !== "number" || status >= 500) log().error({ err: e }, "better-auth failed");
     },
   },
   advanced: {

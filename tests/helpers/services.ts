@@ -11,5 +11,7 @@ const profile = process.env.RISER_PROFILE ?? "test";
 export type LocalService = "db" | "mail-catcher" | "payments-fake" | "s3-fake";
 
 export async function service(name: LocalService, cmd: "start" | "stop"): Promise<void> {
-  await run(process.execPath, [`scripts/${name}.mjs`, cmd, `--profile=${profile}`], { timeout: 120_000 });
+  // a restarted object store keeps what it stored, as a real one does after an outage
+  const keep = name === "s3-fake" && cmd === "start" ? ["--keep-data"] : [];
+  await run(process.execPath, [`scripts/${name}.mjs`, cmd, `--profile=${profile}`, ...keep], { timeout: 120_000 });
 }
