@@ -115,3 +115,12 @@ export function glossaryTerm(id: string, locale: ContentLocale, catalog: Catalog
 export function glossaryTerms(locale: ContentLocale, catalog: Catalog = loadCatalog()): LocalizedTerm[] {
   return catalog.glossary.map((t) => glossaryTerm(t.id, locale, catalog)!);
 }
+
+/**
+ * The title of a certificate's subject (a module or a learning path) in `locale`, for the certificate
+ * PDF and the verification page, so both name the same module in the holder's or viewer's language.
+ */
+export function subjectTitle(kind: "module" | "path" | string, slug: string, locale: ContentLocale, catalog: Catalog = loadCatalog()): string {
+  if (kind === "module") return moduleTitle(slug, locale, catalog);
+  return pathText(slug, locale, catalog)?.title ?? slug;
+}
