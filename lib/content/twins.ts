@@ -24,20 +24,20 @@ const UNIT: Record<string, string> = {
 };
 
 /** Words after which a number's "in" is the preposition, not inches ("70.6 in SI units", "12 in Juniper Flats"). */
-const IN_AS_WORD = /^\s+(?:the|a|an|it|its|both|each|every|all|this|that|these|those|which|one|two|three|four|SI|US|(?!Type\b)[A-Z][a-z]+)\b/;
+const IN_AS_WORD = /^\s+(?:the|it|its|both|each|every|all|this|that|these|those|which|one|two|three|four|SI|US|(?!Type\b|Tipo\b)[A-Z][a-z]+)\b/;
 
 /**
  * Every number of a text, with its unit where one follows ("2,500 gal", "1/2 in", "13"). A word glued
  * to a hyphen is not a unit ("13 C-factor"); "1-inch" keeps no unit, as the translators' checker reads it.
  */
-export function numbersOf(text: string, lang: "en" | "es" = "en"): string[] {
+export function numbersOf(text: string): string[] {
   const out: string[] = [];
   const re = /(\d+(?:,\d{3})*(?:\.\d+)?(?:\/\d+)?)(?:\s*(°\s?[FC]|%|[A-Za-zíáéóú²./]+)(?![-A-Za-zíáéóú²]))?/g;
   for (const m of text.matchAll(re)) {
     const raw = (m[2] ?? "").toLowerCase().replace(/\s/g, "");
     const u = raw === "in." ? raw : raw.replace(/[.,;:]$/, "");
     let unit = UNIT[u] ?? UNIT[u.replace(/\.$/, "")] ?? "";
-    if (lang === "en" && unit === "in" && u === "in" && IN_AS_WORD.test(text.slice(m.index! + m[0].length))) unit = "";
+    if (unit === "in" && u === "in" && IN_AS_WORD.test(text.slice(m.index! + m[0].length))) unit = "";
     out.push(unit ? `${m[1]} ${unit}` : m[1]!);
   }
   return out;
@@ -62,8 +62,8 @@ function diffInto(a: string[], b: string[], label: string, problems: string[]) {
 /** Numbers (alone) and numbers with units (where English has a unit) compared as multisets. */
 export function compareNumbers(en: string, es: string, label: string): string[] {
   const problems: string[] = [];
-  const a = numbersOf(en, "en");
-  const b = numbersOf(es, "es");
+  const a = numbersOf(en);
+  const b = numbersOf(es);
   diffInto(a.map((x) => x.split(" ")[0]!), b.map((x) => x.split(" ")[0]!), `${label} numbers`, problems);
   diffInto(a.filter((x) => x.includes(" ")), b.filter((x) => x.includes(" ")), `${label} numbers with units`, problems);
   return problems;
