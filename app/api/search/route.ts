@@ -1,8 +1,8 @@
 import { getLocale } from "next-intl/server";
 import { json, route } from "@/lib/api";
 import { localeOf } from "@/lib/i18n/config";
-import { MAX_QUERY_LENGTH, MAX_RESULTS } from "@/lib/search/browser";
-import { searchIn, searchScope } from "@/lib/search";
+import { MAX_QUERY_LENGTH, MAX_RESULTS, searchScope } from "@/lib/search/browser";
+import { searchIn } from "@/lib/search";
 
 /**
  * GET /api/search?q=…&limit=…&lang=… → at most 20 hits, title matches first, and a "did you mean" for
