@@ -121,6 +121,10 @@ export function loadSpanish(root: string, catalog: Pick<Catalog, "modules" | "ca
           const enOpts = "options" in q ? q.options.map((o) => o.id) : null;
           if (enOpts && !sameList(enOpts, (sq.options ?? []).map((o) => o.id))) problems.push(`${file}: question "${q.id}" field "options": option ids/order differ from the English (${enOpts.join(", ")})`);
           if (!enOpts && sq.options) problems.push(`${file}: question "${q.id}" field "options": must not be in the Spanish file (the English question has no options)`);
+          if (q.type === "parametric") {
+            const names = (t: string) => [...t.matchAll(/\{(\w+)\}/g)].map((x) => x[1]).sort().join(", ");
+            if (names(q.prompt) !== names(sq.prompt)) problems.push(`${file}: question "${q.id}" field "prompt": placeholders {…} must be those of the English (${names(q.prompt)})`);
+          }
           if (sq.changed && !q.changed) problems.push(`${file}: question "${q.id}" field "changed": must not be in the Spanish file (the English has no "changed")`);
           es.questions[q.id] = sq;
         });
