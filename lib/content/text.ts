@@ -23,6 +23,21 @@ export function questionText<Q extends Question>(q: Q, locale: ContentLocale, ca
   return out;
 }
 
+/**
+ * A question an attempt drew (its stored English version) as a viewer in `locale` reads it: the
+ * Spanish text by question id, but only while the drawn version is the current one (same type,
+ * revision and option ids); an older snapshot keeps its own English words rather than a translation
+ * of newer text. Grading never reads this: it stays on the stored English structure.
+ */
+export function displayQuestion<Q extends Question>(snapshot: Q, locale: ContentLocale, catalog: Catalog = loadCatalog()): Q {
+  if (locale === "en") return snapshot;
+  const current = catalog.modules.flatMap((m) => m.questions).find((q) => q.id === snapshot.id);
+  if (!current || current.type !== snapshot.type || (current.revision ?? 1) !== (snapshot.revision ?? 1)) return snapshot;
+  const ids = (q: Question) => ("options" in q ? q.options.map((o) => o.id).sort().join(",") : "");
+  if (ids(current) !== ids(snapshot)) return snapshot;
+  return questionText(snapshot, locale, catalog);
+}
+
 function localizeLesson(l: Lesson, catalog: Catalog): Lesson {
   const es = catalog.es.lessons[`${l.module}/${l.slug}`];
   if (!es) return l;

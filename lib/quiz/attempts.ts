@@ -11,9 +11,8 @@ import { questionVersion, quizAttempt, quizAttemptItem, user } from "@/db/schema
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { checkAndRecordCompletion } from "@/lib/completion";
-import { findModule, localizedModule } from "@/lib/content";
+import { displayQuestion, findModule, localizedModule } from "@/lib/content";
 import type { ContentLocale, Question } from "@/lib/content";
-import { displayQuestion } from "./text";
 import { adoptedCode } from "@/lib/editions";
 import { answerProblem, correctAnswerText, drawAttempt, editionBank, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
 import { utcStamp } from "@/lib/dates";

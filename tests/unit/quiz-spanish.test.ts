@@ -3,9 +3,8 @@
 // A learner's answers are option ids, true/false or numbers, as the quiz API takes them.
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { loadCatalogFrom, type Question } from "@/lib/content";
+import { displayQuestion, loadCatalogFrom, type Question } from "@/lib/content";
 import { drawAttempt, gradeItem, parametricAnswer, publicItem, score, type Answer, type DrawnItem } from "@/lib/quiz/engine";
-import { displayQuestion } from "@/lib/quiz/text";
 
 const catalog = loadCatalogFrom(path.resolve("content"));
 
