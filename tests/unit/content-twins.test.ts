@@ -7,6 +7,10 @@ import { existsSync, readdirSync, readFileSync, rmSync, statSync, unlinkSync, wr
 import path from "node:path";
 import matter from "gray-matter";
 import YAML from "yaml";
+import { compile } from "@mdx-js/mdx";
+import remarkFrontmatter from "remark-frontmatter";
+import remarkGfm from "remark-gfm";
+import remarkMdxFrontmatter from "remark-mdx-frontmatter";
 import { afterAll, describe, expect, it } from "vitest";
 import { ContentError, enHash, loadCatalogFrom, readStamp, twinPairs, twinProblems, writeStamp } from "@/lib/content";
 import { compareBodies, compareMdx, compareYaml, numbersOf } from "@/lib/content/twins";
@@ -46,6 +50,18 @@ describe("the real content tree: every English file has a Spanish twin that matc
     }
     expect(found).toEqual([]);
   });
+
+  it("compiles every Spanish lesson and card with the app's MDX plugins (next.config.mjs), as the build will", async () => {
+    const failed: string[] = [];
+    for (const f of spanish.filter((x) => x.endsWith(".mdx"))) {
+      try {
+        await compile(readFileSync(path.join(root, "es", f), "utf8"), { remarkPlugins: [remarkFrontmatter, [remarkMdxFrontmatter, { name: "frontmatter" }], remarkGfm] });
+      } catch (err) {
+        failed.push(`es/${f}: ${(err as Error).message.split("\n")[0]}`);
+      }
+    }
+    expect(failed).toEqual([]);
+  }, 60_000);
 
   it("keeps the numbers and units of every question, skill, glossary definition, path and module summary", () => {
     const found: string[] = [];
