@@ -45,7 +45,7 @@ export default async function LearnPage() {
     ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
     : null;
   const locale = localeOf(await getLocale());
-  const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person, new Date(), locale) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id), refreshersOf(viewer, locale)]);
+  const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person, new Date(), locale) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id, new Date(), locale), refreshersOf(viewer, locale)]);
   const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0, locale);
   // A manager whose organization is not set up yet lands on the first-day checklist.
   const counts = viewer.role === "manager" && viewer.organizationId ? await firstDayCounts(viewer.organizationId) : null;
