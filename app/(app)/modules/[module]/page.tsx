@@ -27,7 +27,7 @@ export default async function ModulePage({ params }: Params) {
   const mod = localizedModule(slug, locale);
   if (!mod) notFound();
   const done = new Set((await progressByModule(viewer.id)).get(slug)?.completed ?? []);
-  const [status, attempts, missing] = await Promise.all([moduleStatus(viewer.id, slug), listAttempts(viewer, viewer.id, slug), missingForCompletion(viewer.id, slug)]);
+  const [status, attempts, missing] = await Promise.all([moduleStatus(viewer.id, slug), listAttempts(viewer, viewer.id, slug), missingForCompletion(viewer.id, slug, locale)]);
   const paths = localizedCatalog(locale).paths.filter((p) => p.modules.includes(slug));
   const actions = moduleActions({
     slug,

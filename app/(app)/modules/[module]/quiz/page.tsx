@@ -21,9 +21,10 @@ export async function generateMetadata({ params }: Params): Promise<Metadata> {
 export default async function QuizPage({ params }: Params) {
   const { module: slug } = await params;
   const viewer = await requireViewer("signed-in", `/modules/${slug}/quiz`);
-  const mod = localizedModule(slug, localeOf(await getLocale()));
+  const locale = localeOf(await getLocale());
+  const mod = localizedModule(slug, locale);
   if (!mod) notFound();
-  const [attempts, status, missing] = await Promise.all([listAttempts(viewer, viewer.id, slug), moduleStatus(viewer.id, slug), missingForCompletion(viewer.id, slug)]);
+  const [attempts, status, missing] = await Promise.all([listAttempts(viewer, viewer.id, slug), moduleStatus(viewer.id, slug), missingForCompletion(viewer.id, slug, locale)]);
   const r = mod.meta.quiz;
   return (
     <div className="flex flex-col gap-6">
