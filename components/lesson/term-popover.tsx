@@ -1,8 +1,11 @@
 "use client";
 import { useEffect, useId, useRef, useState } from "react";
 
-/** A glossary term: a button that shows its definition; Escape or a second press closes it. */
-export function TermPopover({ term, definition, children }: { term: string; definition: string; children: React.ReactNode }) {
+/**
+ * A glossary term: a button that shows its definition; Escape or a second press closes it.
+ * `english` (Spanish lessons): a line naming the English term, e.g. "En inglés: Sprinkler riser".
+ */
+export function TermPopover({ term, definition, english, children }: { term: string; definition: string; english?: string; children: React.ReactNode }) {
   const [open, setOpen] = useState(false);
   const id = useId();
   const ref = useRef<HTMLSpanElement>(null);
@@ -36,6 +39,7 @@ export function TermPopover({ term, definition, children }: { term: string; defi
         className="absolute left-0 top-full z-20 mt-1 block w-72 max-w-[80vw] rounded border border-ink/30 bg-panel p-3 text-sm shadow-lg"
       >
         <strong className="block">{term}</strong>
+        {english ? <span className="block text-muted" data-testid="term-english">{english}</span> : null}
         {definition}
       </span>
     </span>

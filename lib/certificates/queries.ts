@@ -2,6 +2,7 @@ import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { certificate, type Certificate } from "@/db/schema";
+import { loadCatalog, subjectTitle, type ContentLocale } from "@/lib/content";
 import { parseVerifyInput } from "./verify-code";
 import { certificateStatus, isExpiringSoon, type CertificateKind, type CertificateStatus } from "./status";
 
@@ -23,8 +24,13 @@ export type HolderCertificate = {
   renewedBySerial: string | null;
 };
 
-/** A person's certificates, newest first, with status computed at `now`. Renewals are always the same person's. */
-export async function certificatesOfHolder(userId: string, now: Date = new Date()): Promise<HolderCertificate[]> {
+/**
+ * A person's certificates, newest first, with status computed at `now`. Renewals are always the same
+ * person's. `locale`: the language the subject is named in (the stored title when the slug is gone).
+ */
+export async function certificatesOfHolder(userId: string, now: Date = new Date(), locale: ContentLocale = "en"): Promise<HolderCertificate[]> {
+  const catalog = loadCatalog();
+  const known = (kind: string, slug: string) => (kind === "module" ? catalog.modules : catalog.paths).some((x) => x.slug === slug);
   const rows = await db.select().from(certificate).where(eq(certificate.userId, userId)).orderBy(desc(certificate.issuedAt), desc(certificate.id));
   const serialById = new Map(rows.map((c) => [c.id, c.serial]));
   const renewedBy = new Map<number, string>();
@@ -34,7 +40,7 @@ export async function certificatesOfHolder(userId: string, now: Date = new Date(
     serial: c.serial,
     kind: c.kind,
     subjectSlug: c.subjectSlug,
-    subjectTitle: c.subjectTitle,
+    subjectTitle: locale !== "en" && known(c.kind, c.subjectSlug) ? subjectTitle(c.kind, c.subjectSlug, locale, catalog) : c.subjectTitle,
     ceHours: Number(c.ceHours),
     issuedAt: c.issuedAt,
     expiresAt: c.expiresAt,

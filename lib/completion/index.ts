@@ -3,7 +3,7 @@ import { and, desc, eq, isNull, max, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, lessonProgress, moduleCompletion, quizAttempt } from "@/db/schema";
 import { issueCertificateForCompletion } from "@/lib/certificates";
-import { findModule } from "@/lib/content";
+import { localizedModule, type ContentLocale } from "@/lib/content";
 import { missingSignOffs } from "@/lib/completion/signoff-requirement";
 
 export type ModuleStatus = { completedAt: Date | null; bestScore: number | null; lastPassed: boolean | null };
@@ -40,8 +40,9 @@ export function addCompletionRequirement(fn: Requirement) {
 addCompletionRequirement(missingSignOffs); // required practical sign-offs (module.yaml requiredSkills)
 
 /** What the person still needs before the module completes (empty = complete on the next pass). */
-export async function missingForCompletion(userId: string, moduleSlug: string): Promise<string[]> {
-  const mod = findModule(moduleSlug);
+/** `locale`: the language of the lesson titles named (a page matches them against its own lesson list). */
+export async function missingForCompletion(userId: string, moduleSlug: string, locale: ContentLocale = "en"): Promise<string[]> {
+  const mod = localizedModule(moduleSlug, locale);
   if (!mod) return ["unknown module"];
   const done = await db
     .select({ slug: catalogLesson.slug })

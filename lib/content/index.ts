@@ -3,3 +3,6 @@ import "server-only";
 export * from "./load";
 export * from "./schema";
 export * from "./editions";
+export * from "./text";
+export { twinProblems, twinPairs, type SpanishText, type TwinPair } from "./checks";
+export { enHash, readStamp, writeStamp } from "./stamp";

@@ -22,6 +22,7 @@ import {
   type Question,
 } from "./schema";
 import { editionsOf, editionTags } from "./editions";
+import { loadSpanish, type SpanishText } from "./load-es";
 
 /** Edition tags that do not parse, and a "what changed" line without a raised revision. */
 function revisionAndEditionProblems(file: string, body: string, meta: { revision?: number; changed?: string }, problems: string[]) {
@@ -47,7 +48,14 @@ export type Module = {
   skills: { id: string; title: string; observe: string[]; evidence: string }[];
 };
 export type Card = { slug: string; meta: CardMeta; body: string; file: string };
-export type GlossaryTerm = { id: string; term: string; definition: string; see: string[] };
+export type GlossaryTerm = {
+  id: string;
+  term: string;
+  definition: string;
+  see: string[];
+  /** in a localized catalog (./text.ts): the English term, heard on site and on drawings */
+  english?: string;
+};
 export type LearningPath = {
   slug: string;
   title: string;
@@ -61,6 +69,8 @@ export type Catalog = {
   cards: Card[];
   glossary: GlossaryTerm[];
   paths: LearningPath[];
+  /** the Spanish text of the same ids (content/es/), merged over the English by ./text.ts */
+  es: SpanishText;
 };
 
 export const contentRoot = () => process.env.RISER_CONTENT_DIR ?? path.join(process.cwd(), "content");
@@ -197,8 +207,10 @@ export function loadCatalogFrom(root: string): Catalog {
     termIds.add(t.id);
   }
 
+  const english = { modules, cards, glossary: g?.terms ?? [], paths: p?.paths ?? [] };
+  const es = loadSpanish(root, english, problems);
   if (problems.length) throw new ContentError(problems);
-  return { modules, cards, glossary: g?.terms ?? [], paths: p?.paths ?? [] };
+  return { ...english, es };
 }
 
 let cached: Catalog | null = null;

@@ -11,8 +11,8 @@ import { questionVersion, quizAttempt, quizAttemptItem, user } from "@/db/schema
 import { AccessError, canManageOrganization, type Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { checkAndRecordCompletion } from "@/lib/completion";
-import { findModule } from "@/lib/content";
-import type { Question } from "@/lib/content";
+import { displayQuestion, findModule, localizedModule } from "@/lib/content";
+import type { ContentLocale, Question } from "@/lib/content";
 import { adoptedCode } from "@/lib/editions";
 import { answerProblem, correctAnswerText, drawAttempt, editionBank, fillPrompt, gradeItem, publicItem, score, type Answer } from "./engine";
 import { utcStamp } from "@/lib/dates";
@@ -41,8 +41,12 @@ async function loadItems(attemptId: string, tx: Tx | typeof db = db): Promise<It
 
 const pastDeadline = (a: AttemptRow, now = Date.now()) => a.deadlineAt !== null && now > a.deadlineAt.getTime();
 
+/** The items with their question text in the viewer's language (grading never reads these). */
+const shown = (items: ItemRow[], locale: ContentLocale): ItemRow[] => (locale === "en" ? items : items.map((i) => ({ ...i, body: displayQuestion(i.body, locale) })));
+
 /** The attempt as the learner sees it while it is open: questions and saved answers, nothing more. */
-function openView(a: AttemptRow, items: ItemRow[]) {
+function openView(a: AttemptRow, graded: ItemRow[], locale: ContentLocale = "en") {
+  const items = shown(graded, locale);
   return {
     id: a.id,
     module: a.moduleSlug,
@@ -71,8 +75,9 @@ function answerText(item: ItemRow): string {
  * passed, or the person has no attempts left in the module's period), so that a few failed
  * attempts do not hand out the question bank's key.
  */
-function resultView(a: AttemptRow, items: ItemRow[], reveal: boolean) {
-  const mod = findModule(a.moduleSlug);
+function resultView(a: AttemptRow, graded: ItemRow[], reveal: boolean, locale: ContentLocale = "en") {
+  const mod = localizedModule(a.moduleSlug, locale);
+  const items = shown(graded, locale);
   return {
     id: a.id,
     module: a.moduleSlug,
@@ -138,7 +143,8 @@ async function gradeLocked(tx: Tx, a: AttemptRow, late: boolean, loaded?: ItemRo
 }
 
 /** Starts an attempt (or resumes the open one) under the module's rules. */
-export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<AttemptView> {
+/** `locale` (here and in viewAttempt/submitAttempt): the language the questions are shown in; grading is the same. */
+export async function startAttempt(viewer: Viewer, moduleSlug: string, locale: ContentLocale = "en"): Promise<AttemptView> {
   const mod = rulesOf(moduleSlug);
   const rules = mod.meta.quiz;
   const now = Date.now();
@@ -200,19 +206,19 @@ export async function startAttempt(viewer: Viewer, moduleSlug: string): Promise<
     return attemptId;
   });
   if (expiredToComplete) await completeAfterGrading(viewer.id, moduleSlug);
-  return viewAttempt(viewer, id);
+  return viewAttempt(viewer, id, locale);
 }
 
 /** An attempt as its viewer may see it: open → questions only; graded → results. */
-export async function viewAttempt(viewer: Viewer, id: string): Promise<AttemptView> {
+export async function viewAttempt(viewer: Viewer, id: string, locale: ContentLocale = "en"): Promise<AttemptView> {
   const a = await getAttemptRow(id);
   if (a.userId !== viewer.id && !canManageOrganization(viewer, a.organizationId)) {
     throw new AccessError(403, "This attempt belongs to someone else.");
   }
   const items = await loadItems(id);
-  if (a.status === "graded") return resultView(a, items, a.passed === true || (await attemptsLeft(a.userId, a.moduleSlug)) === 0);
-  if (a.userId !== viewer.id) return { ...openView(a, items), questions: [], answers: {} };
-  return openView(a, items);
+  if (a.status === "graded") return resultView(a, items, a.passed === true || (await attemptsLeft(a.userId, a.moduleSlug)) === 0, locale);
+  if (a.userId !== viewer.id) return { ...openView(a, []), questions: [], answers: {} };
+  return openView(a, items, locale);
 }
 
 /** Attempts the person may still start in the module's current period (its attempt limit). */
@@ -276,7 +282,7 @@ async function afterGrading(userId: string, id: string) {
  * Grades the attempt on the server, once: the attempt row is locked, so concurrent or repeated
  * submits wait for the first and then return the same stored result.
  */
-export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = []): Promise<AttemptView & { completionPending?: string }> {
+export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: AnswerInput[] = [], locale: ContentLocale = "en"): Promise<AttemptView & { completionPending?: string }> {
   let refusedLate = false;
   const graded = await db.transaction(async (tx) => {
     const a = await getAttemptRow(id, tx, true);
@@ -302,8 +308,8 @@ export async function submitAttempt(viewer: Viewer, id: string, finalAnswers: An
   // A repeat reads the stored rows; the first grading answers from the rows it has just written
   // (the same values, so every response is identical) instead of reading them again.
   const view = graded
-    ? resultView(graded.row, graded.items, graded.row.passed === true || (await attemptsLeft(graded.row.userId, graded.row.moduleSlug)) === 0)
-    : await viewAttempt(viewer, id);
+    ? resultView(graded.row, graded.items, graded.row.passed === true || (await attemptsLeft(graded.row.userId, graded.row.moduleSlug)) === 0, locale)
+    : await viewAttempt(viewer, id, locale);
   return completion === "pending" ? { ...view, completionPending: COMPLETION_PENDING } : view;
 }
 

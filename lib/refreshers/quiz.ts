@@ -4,7 +4,7 @@ import { z } from "zod";
 import { db } from "@/db/client";
 import { questionVersion, refresherCompletion } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
-import { findModule, questionApplies, type Question } from "@/lib/content";
+import { displayQuestion, localizedModule, questionApplies, type ContentLocale, type Question } from "@/lib/content";
 import { adoptedCode } from "@/lib/editions";
 import { DomainError } from "@/lib/errors";
 import { answerProblem, drawAttempt, gradeItem, publicItem, score, type Answer, type DrawnItem } from "@/lib/quiz/browser";
@@ -44,8 +44,8 @@ async function draw(viewer: Viewer, moduleSlug: string, changes: ChangeFact[]): 
   return drawAttempt(bank, bank.length, seed);
 }
 
-function viewOf(moduleSlug: string, changes: ChangeFact[], drawn: DrawnItem[]): RefresherView {
-  const mod = findModule(moduleSlug);
+function viewOf(moduleSlug: string, changes: ChangeFact[], drawn: DrawnItem[], locale: ContentLocale): RefresherView {
+  const mod = localizedModule(moduleSlug, locale);
   const lessons = changes
     .filter((c) => c.kind === "lesson")
     .map((c) => ({
@@ -60,18 +60,19 @@ function viewOf(moduleSlug: string, changes: ChangeFact[], drawn: DrawnItem[]): 
     title: mod?.meta.title ?? moduleSlug,
     lessons,
     questionChanges: changes.filter((c) => c.kind === "question").map((c) => c.whatChanged),
-    questions: drawn.map((d, i) => publicItem(i + 1, d)),
+    questions: drawn.map((d, i) => publicItem(i + 1, { ...d, question: displayQuestion(d.question, locale) })),
     passMark: mod?.meta.passMark ?? 80,
   };
 }
 
 /** Every refresher the viewer owes, module by module (empty when none). */
-export async function refreshersOf(viewer: Viewer): Promise<RefresherView[]> {
+/** `locale`: the language of titles and question text (grading is the same in both). */
+export async function refreshersOf(viewer: Viewer, locale: ContentLocale = "en"): Promise<RefresherView[]> {
   const due = await dueFor([viewer.id]);
   const out: RefresherView[] = [];
   for (const [key, changes] of due) {
     const moduleSlug = key.slice(key.indexOf("|") + 1);
-    out.push(viewOf(moduleSlug, changes, await draw(viewer, moduleSlug, changes)));
+    out.push(viewOf(moduleSlug, changes, await draw(viewer, moduleSlug, changes), locale));
   }
   return out.sort((a, b) => a.module.localeCompare(b.module));
 }
@@ -92,7 +93,7 @@ export const refresherSubmitSchema = z.object({
 
 /** Grades a refresher on the server; a pass records it (and clears the due changes). */
 export async function submitRefresher(viewer: Viewer, input: z.infer<typeof refresherSubmitSchema>) {
-  const mod = findModule(input.module);
+  const mod = localizedModule(input.module, "en");
   if (!mod) throw new DomainError("not-found", `No module "${input.module}".`);
   const changes = (await dueFor([viewer.id], input.module)).get(`${viewer.id}|${input.module}`) ?? [];
   if (changes.length === 0) throw new DomainError("conflict", "No refresher is due for this module.");

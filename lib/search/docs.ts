@@ -1,9 +1,12 @@
 /** Turns content into plain-text search documents (built once, at build time). */
 import type { Catalog } from "@/lib/content";
+import type { SearchLang } from "./text";
 
 export type SearchDoc = {
   id: string;
   kind: "lesson" | "card" | "term";
+  /** the document's language; each language has its own index (absent = English) */
+  lang?: SearchLang;
   title: string;
   href: string;
   context: string;
@@ -32,7 +35,17 @@ export function mdxToText(body: string): string {
     .trim();
 }
 
-export function buildSearchDocs(catalog: Catalog): SearchDoc[] {
+/** The context words of cards and glossary entries, per language. */
+const CONTEXT: Record<SearchLang, { card: string; term: string }> = {
+  en: { card: "Code-reference card", term: "Glossary" },
+  es: { card: "Ficha de referencia del código", term: "Glosario" },
+};
+
+/**
+ * Search documents of a catalog already in `lang` (lib/content localizeCatalog). A Spanish glossary
+ * entry also holds its English term (the word heard on site), so either word finds it.
+ */
+export function buildSearchDocs(catalog: Catalog, lang: SearchLang = "en"): SearchDoc[] {
   const docs: SearchDoc[] = [];
   for (const m of catalog.modules) {
     for (const l of m.lessons) {
@@ -48,10 +61,10 @@ export function buildSearchDocs(catalog: Catalog): SearchDoc[] {
     }
   }
   for (const c of catalog.cards) {
-    docs.push({ id: `card:${c.slug}`, kind: "card", title: c.meta.title, href: `/reference/${c.slug}`, context: "Code-reference card", headings: headingsOf(c.body), text: `${c.meta.summary} ${mdxToText(c.body)}` });
+    docs.push({ id: `card:${c.slug}`, kind: "card", title: c.meta.title, href: `/reference/${c.slug}`, context: CONTEXT[lang].card, headings: headingsOf(c.body), text: `${c.meta.summary} ${mdxToText(c.body)}` });
   }
   for (const t of catalog.glossary) {
-    docs.push({ id: `term:${t.id}`, kind: "term", title: t.term, href: `/glossary#${t.id}`, context: "Glossary", text: t.definition });
+    docs.push({ id: `term:${t.id}`, kind: "term", title: t.term, href: `/glossary#${t.id}`, context: CONTEXT[lang].term, text: t.english && t.english !== t.term ? `${t.definition} (${t.english})` : t.definition });
   }
-  return docs;
+  return lang === "en" ? docs : docs.map((d) => ({ ...d, id: `${lang}:${d.id}`, lang }));
 }

@@ -15,15 +15,15 @@
 import type { SearchDoc } from "./docs";
 import { FIELDS, FieldIndexes, type Field } from "./fields";
 import { snippet, type Segment } from "./snippet";
-import { editDistance, normalize, stem, STOP, synonymsOf, typoBudget } from "./text";
+import { editDistance, normalize, stem, stopWords, synonymsOf, typoBudget, type SearchLang } from "./text";
 
-export { stem, tokens } from "./text";
+export { stem, tokens, type SearchLang } from "./text";
 export { snippet, type Segment } from "./snippet";
 
 export const MAX_RESULTS = 20;
 export const MAX_QUERY_LENGTH = 200;
 
-export type SearchHit = { id: string; kind: SearchDoc["kind"]; title: string; href: string; context: string; snippet: Segment[]; titleMatch: boolean };
+export type SearchHit = { id: string; kind: SearchDoc["kind"]; lang: SearchLang; title: string; href: string; context: string; snippet: Segment[]; titleMatch: boolean };
 export type SearchResult = { hits: SearchHit[]; didYouMean: string | null };
 
 /** Field weights (Riser's tuning against tests/unit/search-relevance.test.ts). */
@@ -40,9 +40,15 @@ export class SearchIndex {
   /** known words (no digits) by length, for typo look-ups */
   private byLength = new Map<number, string[]>();
 
-  constructor(docs: SearchDoc[]) {
+  private lang: SearchLang;
+  private stop: Set<string>;
+
+  /** An index over documents of one language (`lang` picks the stemmer, stop words and synonyms). */
+  constructor(docs: SearchDoc[], lang: SearchLang = "en") {
+    this.lang = lang;
+    this.stop = stopWords(lang);
     this.docs = docs;
-    this.fields = new FieldIndexes(docs);
+    this.fields = new FieldIndexes(docs, lang);
     this.surface = this.buildSurface();
     for (const t of [...this.fields.vocabulary].sort()) {
       if (/\d/.test(t)) continue;
@@ -81,8 +87,8 @@ export class SearchIndex {
   private slots(query: string): Slot[] {
     const words = normalize(query)
       .split(/[^a-z0-9_]+/)
-      .filter((w) => w && !STOP.has(w));
-    const stems = words.map(stem);
+      .filter((w) => w && !this.stop.has(w));
+    const stems = words.map((w) => stem(w, this.lang));
     const known = stems.filter((s) => this.fields.vocabulary.has(s));
     return words.slice(0, 12).map((word, k) => {
       const s = stems[k]!;
@@ -96,7 +102,7 @@ export class SearchIndex {
           corrected = fix;
         }
       }
-      for (const syn of synonymsOf(s)) if (this.fields.vocabulary.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
+      for (const syn of synonymsOf(s, this.lang)) if (this.fields.vocabulary.has(syn) && !variants.has(syn)) variants.set(syn, 0.6);
       // The last word may be unfinished (search as you type): complete it.
       if (k === words.length - 1 && s.length >= 3 && !/\d/.test(s)) {
         for (const t of this.fields.complete(s, 12)) if (!variants.has(t)) variants.set(t, 0.5);
@@ -152,7 +158,7 @@ export class SearchIndex {
     const terms = [...new Set(slots.flatMap((s) => [...s.variants.keys()]))];
     const hits = ranked.slice(0, n).map(({ i, titleSlots }) => {
       const d = this.docs[i]!;
-      return { id: d.id, kind: d.kind, title: d.title, href: d.href, context: d.context, titleMatch: titleSlots > 0, snippet: snippet(d.text, terms) };
+      return { id: d.id, kind: d.kind, lang: d.lang ?? "en", title: d.title, href: d.href, context: d.context, titleMatch: titleSlots > 0, snippet: snippet(d.text, terms, 160, this.lang) };
     });
     const didYouMean = slots.some((s) => s.corrected) ? slots.map((s) => (s.corrected ? this.display(s.corrected) : s.word)).join(" ") : null;
     return { hits, didYouMean };
@@ -172,8 +178,8 @@ export class SearchIndex {
     const out = new Map<string, string>();
     for (const d of this.docs) {
       for (const w of normalize(`${d.title} ${d.headings ?? ""} ${d.text}`).split(/[^a-z0-9_]+/)) {
-        if (!w || STOP.has(w)) continue;
-        const s = stem(w);
+        if (!w || this.stop.has(w)) continue;
+        const s = stem(w, this.lang);
         const old = out.get(s);
         if (!old || w.length < old.length) out.set(s, w);
       }

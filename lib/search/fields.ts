@@ -17,7 +17,7 @@
  */
 import { Index } from "flexsearch";
 import type { SearchDoc } from "./docs";
-import { tokens } from "./text";
+import { tokens, type SearchLang } from "./text";
 
 export const FIELDS = ["title", "headings", "context", "text"] as const;
 export type Field = (typeof FIELDS)[number];
@@ -45,9 +45,9 @@ export class FieldIndexes {
   readonly vocabulary = new Set<string>();
   private memo = new Map<string, TermHits>();
 
-  constructor(docs: SearchDoc[]) {
+  constructor(docs: SearchDoc[], lang: SearchLang = "en") {
     this.limit = Math.max(1, docs.length);
-    const terms = docs.map((d) => FIELDS.map((f) => tokens(d[f] ?? "")));
+    const terms = docs.map((d) => FIELDS.map((f) => tokens(d[f] ?? "", lang)));
     FIELDS.forEach((f, k) => {
       const avg = Math.max(1, terms.reduce((sum, t) => sum + t[k]!.length, 0) / this.limit);
       const score = (content: string[], term: string) => {

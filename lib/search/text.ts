@@ -1,14 +1,26 @@
 /**
  * Text rules shared by indexing and queries (plain code, runs in Node and in a browser):
  * tokens with sizes and units kept as one term ("1 inch", "1 in", 1" → "1in"; "1-1/4 in" →
- * "1_1_4in"), a light English stemmer, the trade's synonyms, and edit distance for typos.
+ * "1_1_4in"), a light English stemmer and the Snowball Spanish stemmer, the trade's synonyms, and
+ * edit distance for typos. Accents are folded before stemming on both sides (content and query), so
+ * "valvula" finds "válvula" and "rociadores" finds "rociador".
  */
+import { stemmer as spanishStemmer } from "@orama/stemmers/spanish";
+
+/** The language of a search document and of the index that holds it. */
+export type SearchLang = "en" | "es";
+
 export const STOP = new Set(["a", "an", "and", "are", "as", "at", "be", "by", "can", "for", "from", "i", "in", "is", "it", "my", "of", "on", "or", "the", "to", "with", "what", "how", "do", "does", "should", "which", "when", "where", "much", "many", "far", "need", "we", "you"]);
+/** Spanish words too common to search by (accents folded). */
+export const STOP_ES = new Set(["a", "al", "como", "con", "cual", "cuando", "de", "del", "donde", "el", "en", "es", "esta", "este", "hay", "la", "las", "le", "lo", "los", "mas", "o", "para", "pero", "por", "que", "se", "si", "sin", "son", "su", "sus", "tu", "un", "una", "uno", "y", "ya"]);
+export const stopWords = (lang: SearchLang = "en") => (lang === "es" ? STOP_ES : STOP);
+
 const SUFFIXES = ["ations", "ation", "ings", "ing", "ions", "ion", "ers", "er", "ied", "ies", "ed", "es", "ate", "s", "e"];
 
-/** Reduces an English word to a rough stem; the same rule runs on content and queries. */
-export function stem(word: string): string {
+/** Reduces a word (lower case, accents folded) to its stem; the same rule runs on content and queries. */
+export function stem(word: string, lang: SearchLang = "en"): string {
   if (/\d/.test(word)) return word;
+  if (lang === "es") return word.length > 3 ? fold(spanishStemmer(word)) : word;
   let w = word;
   for (const s of SUFFIXES) {
     if (w.length - s.length >= 4 && w.endsWith(s)) {
@@ -27,6 +39,8 @@ const UNITS: [RegExp, string][] = [
 ];
 const SIZE_UNIT = /(\d+(?:[\s-]\d+\/\d+|\/\d+|\.\d+)?)\s*("|″|''|′|'|inches|inch|in|feet|foot|ft|psi|gpm)(?![a-z])/g;
 
+const fold = (t: string) => t.normalize("NFKD").replace(/[\u0300-\u036f]/g, "");
+
 /** Lower case, accents off, sizes with their unit joined into one term, "side wall" → "sidewall". */
 export function normalize(text: string): string {
   return text
@@ -42,11 +56,12 @@ export function normalize(text: string): string {
 }
 
 /** Words of a text as index terms (stop words dropped, stems). */
-export function tokens(text: string): string[] {
+export function tokens(text: string, lang: SearchLang = "en"): string[] {
+  const stop = stopWords(lang);
   return normalize(text)
     .split(/[^a-z0-9_]+/)
-    .filter((t) => t && !STOP.has(t))
-    .map(stem);
+    .filter((t) => t && !stop.has(t))
+    .map((t) => stem(t, lang));
 }
 
 /** Groups of words a person on site uses for the same thing (stems). */
@@ -81,8 +96,21 @@ const GROUPS: string[][] = [
 const SYNONYMS = new Map<string, string[]>();
 for (const g of GROUPS) for (const w of g) SYNONYMS.set(w, [...new Set([...(SYNONYMS.get(w) ?? []), ...g.filter((x) => x !== w)])]);
 
-export function synonymsOf(term: string): string[] {
-  return SYNONYMS.get(term) ?? [];
+/** The same for Spanish (stems of accent-folded words), including the English words crews use on site. */
+const GROUPS_ES: string[][] = [
+  ["colgador", "soport", "abrazader"],
+  ["rociador", "sprinkler"],
+  ["anticongel", "glicol", "glicerin"],
+  ["contraflu", "antirretorn", "backflow"],
+  ["pegament", "cement", "solvent"],
+  ["obstruccion", "obstacul"],
+  ["permis", "submittal"],
+];
+const SYNONYMS_ES = new Map<string, string[]>();
+for (const g of GROUPS_ES) for (const w of g) SYNONYMS_ES.set(w, [...new Set([...(SYNONYMS_ES.get(w) ?? []), ...g.filter((x) => x !== w)])]);
+
+export function synonymsOf(term: string, lang: SearchLang = "en"): string[] {
+  return (lang === "es" ? SYNONYMS_ES : SYNONYMS).get(term) ?? [];
 }
 
 /** Optimal string alignment distance (Damerau–Levenshtein with adjacent swaps), stopping past `max`. */

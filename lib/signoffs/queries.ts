@@ -9,7 +9,7 @@ import { alias } from "drizzle-orm/mysql-core";
 import { db } from "@/db/client";
 import { organization, signOff, signOffEvidence, team, user, type SignOffStatus } from "@/db/schema";
 import { AccessError, canManageOrganization, organizationFilter, type Viewer } from "@/lib/access";
-import { findModule } from "@/lib/content";
+import { localizedModule, type ContentLocale } from "@/lib/content";
 
 export type EvidenceItem = { id: string; name: string; contentType: string; size: number; thumbnail: boolean };
 
@@ -81,7 +81,8 @@ export type QueueFilter = "submitted" | "approved" | "returned";
  * The review queue: waiting sign-offs oldest first (the longest wait on top); decided ones newest
  * first. Managers see their own organization only; admins every organization (or one, by id).
  */
-export async function reviewQueue(viewer: Viewer, filter: QueueFilter = "submitted", orgId?: string | null, limit = 100): Promise<QueueItem[]> {
+/** `locale`: the language of module and skill titles, observations and evidence. */
+export async function reviewQueue(viewer: Viewer, filter: QueueFilter = "submitted", orgId?: string | null, limit = 100, locale: ContentLocale = "en"): Promise<QueueItem[]> {
   const conds: SQL[] = [eq(signOff.status, filter)];
   const scope = organizationFilter(viewer, orgId);
   if (scope === undefined) throw new AccessError(403, "Only managers and admins review sign-offs.");
@@ -106,7 +107,7 @@ export async function reviewQueue(viewer: Viewer, filter: QueueFilter = "submitt
     .limit(limit);
   const ev = await evidenceOf(rows.map((r) => r.id));
   return rows.map((r) => {
-    const mod = findModule(r.moduleSlug);
+    const mod = localizedModule(r.moduleSlug, locale);
     const skill = mod?.skills.find((s) => s.id === r.skillId) ?? null;
     return {
       id: r.id,
@@ -169,13 +170,13 @@ export async function signOffCountsFor(userIds: string[]): Promise<Map<string, S
 export type PersonSignOff = SignOffItem & { moduleTitle: string; skillTitle: string };
 
 /** For the person page: that person's sign-offs, if the viewer is them, a manager of their organization or an admin. */
-export async function signOffsOfPerson(viewer: Viewer, personId: string): Promise<PersonSignOff[]> {
+export async function signOffsOfPerson(viewer: Viewer, personId: string, locale: ContentLocale = "en"): Promise<PersonSignOff[]> {
   if (personId !== viewer.id) {
     const [person] = await db.select({ organizationId: user.organizationId }).from(user).where(eq(user.id, personId));
     if (!person || !canManageOrganization(viewer, person.organizationId)) throw new AccessError(403, "You cannot see this person's sign-offs.");
   }
   return (await signOffsOf(personId)).map((s) => {
-    const mod = findModule(s.moduleSlug);
+    const mod = localizedModule(s.moduleSlug, locale);
     return { ...s, moduleTitle: mod?.meta.title ?? s.moduleSlug, skillTitle: mod?.skills.find((k) => k.id === s.skillId)?.title ?? s.skillId };
   });
 }

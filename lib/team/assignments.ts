@@ -5,7 +5,7 @@ import { assignment, team, user } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
-import { loadCatalog } from "@/lib/content";
+import { loadCatalog, type ContentLocale } from "@/lib/content";
 import { after } from "next/server";
 import { mailAssigned } from "./assigned-mail";
 import { itemModules, itemTitle, rowsFor, type BoardCell, type Person } from "./board";
@@ -95,7 +95,7 @@ export type AssignmentListRow = {
 };
 
 /** Assignments in scope, soonest due first. */
-export async function listAssignments(scope: OrgScope, now = new Date()): Promise<AssignmentListRow[]> {
+export async function listAssignments(scope: OrgScope, now = new Date(), locale: ContentLocale = "en"): Promise<AssignmentListRow[]> {
   const rows = await db
     .select({ a: assignment, personName: user.name, teamName: team.name })
     .from(assignment)
@@ -108,7 +108,7 @@ export async function listAssignments(scope: OrgScope, now = new Date()): Promis
     id: r.a.id,
     kind: r.a.kind,
     slug: r.a.targetSlug,
-    title: itemTitle(r.a.kind, r.a.targetSlug),
+    title: itemTitle(r.a.kind, r.a.targetSlug, locale),
     dueAt: r.a.dueAt.toISOString(),
     target: r.a.userId ? (r.personName ?? "(removed person)") : (r.teamName ?? "(removed team)"),
     targetType: r.a.userId ? "person" : "team",
@@ -135,7 +135,8 @@ export type AssignedItem = {
  * One person's effective assignments (direct, and through their current team), each with its
  * status from the board's cells, ordered by due date. One item per assignment row.
  */
-export async function assignedWork(person: Person, now = new Date()): Promise<{ items: AssignedItem[]; cells: Record<string, BoardCell> }> {
+/** `locale`: the language of the items' titles. */
+export async function assignedWork(person: Person, now = new Date(), locale: ContentLocale = "en"): Promise<{ items: AssignedItem[]; cells: Record<string, BoardCell> }> {
   const rows = await db
     .select()
     .from(assignment)
@@ -163,7 +164,7 @@ export async function assignedWork(person: Person, now = new Date()): Promise<{ 
       id: a.id,
       kind: a.kind as "module" | "path",
       slug: a.targetSlug,
-      title: itemTitle(a.kind, a.targetSlug),
+      title: itemTitle(a.kind, a.targetSlug, locale),
       dueAt: a.dueAt.toISOString(),
       via: a.userId ? "you" : "team",
       status,

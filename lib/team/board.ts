@@ -4,7 +4,7 @@ import "server-only";
 // their internals to each other. The summary over a whole scope is in ./summary.ts.
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
-import { loadCatalog } from "@/lib/content";
+import { loadCatalog, localizedCatalog, subjectTitle, type ContentLocale } from "@/lib/content";
 import type { BoardQuery, BoardStatus } from "./schemas";
 import type { OrgScope } from "@/lib/access";
 import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status";
@@ -77,8 +77,8 @@ export type AssignmentFact = { kind: string; target_slug: string; user_id: strin
 type ModuleInfo = { slug: string; title: string; lessons: number; validityMonths: number };
 
 /** Modules on the board, in teaching order (optionally one). */
-export function boardModules(only?: string): ModuleInfo[] {
-  return loadCatalog()
+export function boardModules(only?: string, locale: ContentLocale = "en"): ModuleInfo[] {
+  return localizedCatalog(locale)
     .modules.filter((m) => !only || m.slug === only)
     .map((m) => ({ slug: m.slug, title: m.meta.title, lessons: m.lessons.length, validityMonths: m.meta.validityMonths }));
 }
@@ -89,10 +89,9 @@ export function itemModules(kind: string, slug: string): string[] {
   return loadCatalog().paths.find((p) => p.slug === slug)?.modules ?? [];
 }
 
-export function itemTitle(kind: string, slug: string): string {
-  const c = loadCatalog();
-  if (kind === "module") return c.modules.find((m) => m.slug === slug)?.meta.title ?? slug;
-  return c.paths.find((p) => p.slug === slug)?.title ?? slug;
+/** A module's or path's title in the reader's language. */
+export function itemTitle(kind: string, slug: string, locale: ContentLocale = "en"): string {
+  return subjectTitle(kind, slug, locale);
 }
 
 /**
@@ -387,7 +386,7 @@ async function rowsOfSlice(slice: Standing[], complete: boolean, modules: Module
 }
 
 /** GET /api/team/board: one page. */
-export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()): Promise<BoardPage> {
+export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date(), locale: ContentLocale = "en"): Promise<BoardPage> {
   const offset = (q.page - 1) * q.pageSize;
   let total: number;
   let pageRows: BoardRow[];
@@ -406,7 +405,7 @@ export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()
     pageSize: q.pageSize,
     total,
     pages: Math.max(1, Math.ceil(total / q.pageSize)),
-    modules: boardModules(q.module).map(({ slug, title }) => ({ slug, title })),
+    modules: boardModules(q.module, locale).map(({ slug, title }) => ({ slug, title })),
     rows: pageRows,
   };
 }

@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { RevokeForm } from "@/components/certificates/revoke-form";
 import { StatusBadge } from "@/components/certificates/status-badge";
@@ -19,7 +21,7 @@ export default async function CertificatesPage() {
   const viewer = await requireViewer("signed-in", "/certificates");
   const now = new Date();
   const [mine, revocable, period] = await Promise.all([
-    certificatesOfHolder(viewer.id, now),
+    certificatesOfHolder(viewer.id, now, localeOf(await getLocale())),
     revocableCertificates(viewer, now),
     periodSettingOf(viewer.organizationId ?? null),
   ]);

@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
+import { localeOf } from "@/lib/i18n/config";
+import { getLocale } from "next-intl/server";
 import Link from "next/link";
 import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
-import { findModule } from "@/lib/content";
+import { localizedModule, type ContentLocale } from "@/lib/content";
 import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team";
 import type { BoardCell } from "@/lib/team";
@@ -20,9 +22,9 @@ export const metadata: Metadata = { title: "My training" };
 const day = (iso: string) => weekdayShortDate(iso);
 
 /** Where "continue" leads: the lesson after the last one done, else that module's quiz, else the next assigned module. */
-function continueTarget(last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number): { href: string; label: string } | null {
+function continueTarget(last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number, locale: ContentLocale): { href: string; label: string } | null {
   if (last) {
-    const mod = findModule(last.module);
+    const mod = localizedModule(last.module, locale);
     if (mod) {
       const i = mod.lessons.findIndex((l) => l.slug === last.lesson);
       const next = mod.lessons[i + 1];
@@ -33,7 +35,7 @@ function continueTarget(last: { module: string; lesson: string } | null, items: 
     }
   }
   const open = items.find((it) => it.nextModule && it.status !== "passed" && it.status !== "expiring");
-  const mod = open?.nextModule ? findModule(open.nextModule) : undefined;
+  const mod = open?.nextModule ? localizedModule(open.nextModule, locale) : undefined;
   return mod ? { href: `/modules/${mod.slug}`, label: mod.meta.title } : null;
 }
 
@@ -42,8 +44,9 @@ export default async function LearnPage() {
   const person = viewer.organizationId
     ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
     : null;
-  const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id), refreshersOf(viewer)]);
-  const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0);
+  const locale = localeOf(await getLocale());
+  const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person, new Date(), locale) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id, new Date(), locale), refreshersOf(viewer, locale)]);
+  const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0, locale);
   // A manager whose organization is not set up yet lands on the first-day checklist.
   const counts = viewer.role === "manager" && viewer.organizationId ? await firstDayCounts(viewer.organizationId) : null;
   const firstDay = counts && showFirstDay(viewer.role, counts) ? firstDaySteps(counts) : null;

@@ -1,9 +1,11 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { completionsOf } from "@/lib/completion";
-import { loadCatalog } from "@/lib/content";
+import { localizedCatalog } from "@/lib/content";
 import { progressByModule } from "@/lib/progress";
 
 export const metadata: Metadata = { title: "Modules" };
@@ -13,7 +15,7 @@ const AUDIENCES = { installer: "Installers", designer: "Designers", sales: "Sale
 export default async function ModulesPage({ searchParams }: { searchParams: Promise<{ path?: string; audience?: string }> }) {
   const viewer = await requireViewer("signed-in", "/modules");
   const { path, audience } = await searchParams;
-  const catalog = loadCatalog();
+  const catalog = localizedCatalog(localeOf(await getLocale()));
   const chosenPath = catalog.paths.find((p) => p.slug === path);
   const modules = catalog.modules.filter(
     (m) => (!chosenPath || chosenPath.modules.includes(m.slug)) && (!audience || (m.meta.audience as string[]).includes(audience)),

@@ -1,9 +1,11 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { cardTopic } from "@/lib/content";
-import { loadCatalog } from "@/lib/content";
+import { localizedCatalog } from "@/lib/content";
 
 export const metadata: Metadata = { title: "Code-reference cards" };
 
@@ -16,7 +18,7 @@ const AUDIENCES = { installer: "Installers", designer: "Designers", sales: "Sale
 export default async function ReferencePage({ searchParams }: { searchParams: Promise<{ topic?: string; audience?: string }> }) {
   await requireViewer("signed-in", "/reference");
   const { topic, audience } = await searchParams;
-  const cards = loadCatalog().cards.filter((c) => (!topic || c.meta.topic === topic) && (!audience || (c.meta.audience as string[]).includes(audience)));
+  const cards = localizedCatalog(localeOf(await getLocale())).cards.filter((c) => (!topic || c.meta.topic === topic) && (!audience || (c.meta.audience as string[]).includes(audience)));
   return (
     <>
       <PageTitle title="Code-reference cards" lead="One topic per card, in plain words: what the requirement is for, what to check in the field, and the usual mistakes. Cards point to the standard's topics; your adopted edition governs." />

@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import { TeamBoard, type BoardFilters } from "@/components/team/board";
 import { OrgPicker } from "@/components/team/org-picker";
 import { TeamSummary } from "@/components/team/summary";
@@ -25,7 +27,7 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   const [teams, orgs, firstPage, teamsTotals, weeks] = await Promise.all([
     teamsInScope(scope),
     viewer.role === "admin" ? allOrganizations() : Promise.resolve([]),
-    boardPage(scope, q).then(async (page) => ({ ...page, rows: await withCellExtras(page.rows) })),
+    boardPage(scope, q, new Date(), localeOf(await getLocale())).then(async (page) => ({ ...page, rows: await withCellExtras(page.rows) })),
     teamTotals(scope),
     completionsPerWeek(scope),
   ]);

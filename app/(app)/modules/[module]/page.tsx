@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { KeepModule } from "@/components/offline/keep-module";
 import { buttonLinkClass } from "@/components/ui/button";
 import { requireViewer } from "@/lib/access";
-import { findModule, loadCatalog } from "@/lib/content";
+import { localizedCatalog, localizedModule } from "@/lib/content";
 import { progressByModule } from "@/lib/progress";
 import { isoDay } from "@/lib/dates";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
@@ -15,17 +17,18 @@ import { plural } from "@/lib/plural";
 type Params = { params: Promise<{ module: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
-  return { title: findModule((await params).module)?.meta.title ?? "Module" };
+  return { title: localizedModule((await params).module, localeOf(await getLocale()))?.meta.title ?? "Module" };
 }
 
 export default async function ModulePage({ params }: Params) {
   const { module: slug } = await params;
   const viewer = await requireViewer("signed-in", `/modules/${slug}`);
-  const mod = findModule(slug);
+  const locale = localeOf(await getLocale());
+  const mod = localizedModule(slug, locale);
   if (!mod) notFound();
   const done = new Set((await progressByModule(viewer.id)).get(slug)?.completed ?? []);
-  const [status, attempts, missing] = await Promise.all([moduleStatus(viewer.id, slug), listAttempts(viewer, viewer.id, slug), missingForCompletion(viewer.id, slug)]);
-  const paths = loadCatalog().paths.filter((p) => p.modules.includes(slug));
+  const [status, attempts, missing] = await Promise.all([moduleStatus(viewer.id, slug), listAttempts(viewer, viewer.id, slug), missingForCompletion(viewer.id, slug, locale)]);
+  const paths = localizedCatalog(locale).paths.filter((p) => p.modules.includes(slug));
   const actions = moduleActions({
     slug,
     lessons: mod.lessons.map((l) => ({ slug: l.slug, title: l.meta.title })),

@@ -1,25 +1,30 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { cards as registry } from "@/content/.generated/registry";
+import { getLocale, getTranslations } from "next-intl/server";
+import { cards as enCards, esCards } from "@/content/.generated/registry";
 import { lessonComponents } from "@/components/lesson/mdx";
+import { termFor } from "@/components/lesson/term";
 import { LocalRules, editionComponents } from "@/components/lesson/edition";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { requireViewer } from "@/lib/access";
-import { findModule, loadCatalog } from "@/lib/content";
+import { cardText, lessonTitle } from "@/lib/content";
+import { localeOf } from "@/lib/i18n/config";
 
 type Params = { params: Promise<{ card: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
   const { card } = await params;
-  return { title: loadCatalog().cards.find((c) => c.slug === card)?.meta.title ?? "Code card" };
+  return { title: cardText(card, localeOf(await getLocale()))?.meta.title ?? "Code card" };
 }
 
 export default async function CardPage({ params }: Params) {
   const { card: slug } = await params;
   const viewer = await requireViewer("signed-in", `/reference/${slug}`);
-  const card = loadCatalog().cards.find((c) => c.slug === slug);
-  const load = registry[slug];
+  const locale = localeOf(await getLocale());
+  const tc = await getTranslations("content");
+  const card = cardText(slug, locale);
+  const load = (locale === "es" ? esCards : enCards)[slug];
   if (!card || !load) notFound();
   const { default: Body } = await load();
   const [code, rules] = await Promise.all([adoptedCode(viewer.organizationId), localRulesFor(viewer.organizationId, [card.meta.topic])]);
@@ -32,14 +37,13 @@ export default async function CardPage({ params }: Params) {
       </header>
       <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>Edition note:</strong> {card.meta.edition}{code ? ` Your organization works to NFPA 13D ${code.edition}: passages for it show first.` : null}</p>
       <LocalRules rules={rules} />
-      <div className="prose-riser"><Body components={{ ...lessonComponents, ...editionComponents(code?.edition ?? null) }} /></div>
+      <div className="prose-riser"><Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null) }} /></div>
       <section aria-labelledby="related" className="max-w-prose">
         <h2 id="related" className="text-xl">Related lessons</h2>
         <ul className="mt-2 list-disc pl-6">
           {card.meta.relatedLessons.map((rl) => {
             const [m, l] = rl.split("/") as [string, string];
-            const lesson = findModule(m)?.lessons.find((x) => x.slug === l);
-            return <li key={rl}><Link href={`/modules/${m}/${l}`}>{lesson?.meta.title ?? rl}</Link></li>;
+            return <li key={rl}><Link href={`/modules/${m}/${l}`}>{lessonTitle(m, l, locale)}</Link></li>;
           })}
         </ul>
       </section>

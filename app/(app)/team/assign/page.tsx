@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import { AssignForm } from "@/components/team/assign-form";
 import { OrgPicker } from "@/components/team/org-picker";
 import { RemoveAssignment } from "@/components/team/remove-assignment";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { loadCatalog } from "@/lib/content";
+import { localizedCatalog } from "@/lib/content";
 import { listAssignments } from "@/lib/team";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 import { Table } from "@/components/ui/table";
@@ -20,10 +22,10 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
   const { org } = await searchParams;
   const scope = await pageScope(viewer, org);
   const adminOrg = viewer.role === "admin" ? scope.orgId : null;
-  const catalog = loadCatalog();
+  const catalog = localizedCatalog(localeOf(await getLocale()));
   const [teams, assignments, orgs, invites] = await Promise.all([
     scope.orgId ? teamsInScope(scope) : Promise.resolve([]),
-    listAssignments(scope),
+    listAssignments(scope, new Date(), localeOf(await getLocale())),
     viewer.role === "admin" ? allOrganizations() : Promise.resolve([]),
     scope.orgId ? listInvitations(scope.orgId) : Promise.resolve([]),
   ]);

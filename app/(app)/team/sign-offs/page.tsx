@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
 import { ReviewForm } from "@/components/signoffs/review-form";
@@ -30,7 +32,7 @@ export default async function TeamSignOffsPage({ searchParams }: { searchParams:
   const admin = viewer.role === "admin";
   // admins may narrow the queue to one organization (?org=, as on the other team pages)
   const org = admin && typeof sp.org === "string" && /^[\w-]{1,36}$/.test(sp.org) ? sp.org : null;
-  const [items, waiting] = await Promise.all([reviewQueue(viewer, filter, org), waitingCount(viewer, org)]);
+  const [items, waiting] = await Promise.all([reviewQueue(viewer, filter, org, 100, localeOf(await getLocale())), waitingCount(viewer, org)]);
   const hrefFor = (key: QueueFilter) => {
     const q = new URLSearchParams({ ...(key === "submitted" ? {} : { status: key }), ...(org ? { org } : {}) }).toString();
     return `/team/sign-offs${q ? `?${q}` : ""}`;

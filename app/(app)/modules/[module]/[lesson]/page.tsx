@@ -1,14 +1,17 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { lessons as registry } from "@/content/.generated/registry";
+import { getLocale, getTranslations } from "next-intl/server";
+import { esLessons, lessons as enLessons } from "@/content/.generated/registry";
 import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
+import { termFor } from "@/components/lesson/term";
 import { LocalRules, editionComponents } from "@/components/lesson/edition";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { lessonChangesDue } from "@/lib/refreshers";
 import { requireViewer } from "@/lib/access";
-import { findModule, lessonTopics } from "@/lib/content";
+import { lessonTopics, localizedModule } from "@/lib/content";
+import { localeOf } from "@/lib/i18n/config";
 import { recordLessonOpen } from "@/lib/progress";
 
 // Rendered per request (never a shared-cache copy): the session is checked here (proxy.ts checks it
@@ -19,16 +22,18 @@ type Params = { params: Promise<{ module: string; lesson: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
   const { module, lesson } = await params;
-  const l = findModule(module)?.lessons.find((x) => x.slug === lesson);
+  const l = localizedModule(module, localeOf(await getLocale()))?.lessons.find((x) => x.slug === lesson);
   return { title: l?.meta.title ?? "Lesson" };
 }
 
 export default async function LessonPage({ params }: Params) {
   const { module: moduleSlug, lesson: lessonSlug } = await params;
   const viewer = await requireViewer("signed-in", `/modules/${moduleSlug}/${lessonSlug}`);
-  const mod = findModule(moduleSlug);
+  const locale = localeOf(await getLocale());
+  const tc = await getTranslations("content");
+  const mod = localizedModule(moduleSlug, locale);
   const index = mod?.lessons.findIndex((l) => l.slug === lessonSlug) ?? -1;
-  const load = registry[`${moduleSlug}/${lessonSlug}`];
+  const load = (locale === "es" ? esLessons : enLessons)[`${moduleSlug}/${lessonSlug}`];
   if (!mod || index < 0 || !load) notFound();
   await recordLessonOpen(viewer.id, mod.slug, lessonSlug);
   const lesson = mod.lessons[index]!;
@@ -72,7 +77,7 @@ export default async function LessonPage({ params }: Params) {
       ))}
       <LocalRules rules={rules} />
       <div className="prose-riser">
-        <Body components={{ ...lessonComponents, ...editionComponents(code?.edition ?? null) }} />
+        <Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null) }} />
       </div>
       <section aria-labelledby="sources" className="max-w-prose text-sm">
         <h2 id="sources" className="text-lg">Sources for the numbers in this lesson</h2>

@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { QuizRunner } from "@/components/quiz/quiz-runner";
 import { requireViewer } from "@/lib/access";
 import { missingForCompletion, moduleStatus } from "@/lib/completion";
-import { findModule } from "@/lib/content";
+import { localizedModule } from "@/lib/content";
 import { missingLinks, quizStartLabel } from "@/lib/learner-actions";
 import { listAttempts } from "@/lib/quiz";
 import { isoDay, isoMinute } from "@/lib/dates";
@@ -13,15 +15,16 @@ import { Table } from "@/components/ui/table";
 type Params = { params: Promise<{ module: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
-  return { title: `Quiz: ${findModule((await params).module)?.meta.title ?? "module"}` };
+  return { title: `Quiz: ${localizedModule((await params).module, localeOf(await getLocale()))?.meta.title ?? "module"}` };
 }
 
 export default async function QuizPage({ params }: Params) {
   const { module: slug } = await params;
   const viewer = await requireViewer("signed-in", `/modules/${slug}/quiz`);
-  const mod = findModule(slug);
+  const locale = localeOf(await getLocale());
+  const mod = localizedModule(slug, locale);
   if (!mod) notFound();
-  const [attempts, status, missing] = await Promise.all([listAttempts(viewer, viewer.id, slug), moduleStatus(viewer.id, slug), missingForCompletion(viewer.id, slug)]);
+  const [attempts, status, missing] = await Promise.all([listAttempts(viewer, viewer.id, slug), moduleStatus(viewer.id, slug), missingForCompletion(viewer.id, slug, locale)]);
   const r = mod.meta.quiz;
   return (
     <div className="flex flex-col gap-6">

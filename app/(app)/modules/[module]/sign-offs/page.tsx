@@ -1,18 +1,20 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
 import { SignOffBadge } from "@/components/signoffs/status-badge";
 import { UploadForm } from "@/components/signoffs/upload-form";
 import { requireViewer } from "@/lib/access";
-import { findModule } from "@/lib/content";
+import { localizedModule } from "@/lib/content";
 import { signOffsOf, type SignOffItem } from "@/lib/signoffs";
 import { isoDay } from "@/lib/dates";
 
 type Params = { params: Promise<{ module: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
-  return { title: `Sign-offs: ${findModule((await params).module)?.meta.title ?? "module"}` };
+  return { title: `Sign-offs: ${localizedModule((await params).module, localeOf(await getLocale()))?.meta.title ?? "module"}` };
 }
 
 const day = (d: Date) => isoDay(d);
@@ -32,7 +34,7 @@ function Decision({ s }: { s: SignOffItem }) {
 export default async function ModuleSignOffsPage({ params }: Params) {
   const { module: slug } = await params;
   const viewer = await requireViewer("signed-in", `/modules/${slug}/sign-offs`);
-  const mod = findModule(slug);
+  const mod = localizedModule(slug, localeOf(await getLocale()));
   if (!mod) notFound();
   const mine = await signOffsOf(viewer.id, slug);
   const required = new Set(mod.meta.requiredSkills);

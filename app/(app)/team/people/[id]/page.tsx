@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { getLocale } from "next-intl/server";
+import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
 import { forbidden, notFound } from "next/navigation";
 import { PersonSignOffs } from "@/components/signoffs/person-sign-offs";
@@ -26,7 +28,7 @@ export default async function PersonPage({ params }: { params: Promise<{ id: str
   const p = found.person;
   if (found.state === "former") return <FormerMember person={p} window={found.window} />;
   const [{ items, cells }, history, teams] = await Promise.all([
-    assignedWork(p),
+    assignedWork(p, new Date(), localeOf(await getLocale())),
     personHistory(p.id, new Date(), found.window),
     teamsInScope({ orgId: p.organizationId, orgName: p.orgName }),
   ]);

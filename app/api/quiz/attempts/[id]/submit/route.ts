@@ -1,4 +1,6 @@
+import { getLocale } from "next-intl/server";
 import { json, readJson, route } from "@/lib/api";
+import { localeOf } from "@/lib/i18n/config";
 import { submitAttempt } from "@/lib/quiz";
 import { answersBody } from "@/lib/quiz";
 
@@ -6,5 +8,5 @@ import { answersBody } from "@/lib/quiz";
 export const POST = route<{ id: string }>("signed-in", async ({ req, viewer, params }) => {
   const hasBody = req.headers.get("content-length") !== "0" && req.headers.get("content-type")?.includes("json");
   const { answers } = hasBody ? await readJson(req, answersBody.partial()) : { answers: [] };
-  return json(await submitAttempt(viewer, params.id, answers ?? []));
+  return json(await submitAttempt(viewer, params.id, answers ?? [], localeOf(await getLocale())));
 });
