@@ -10,8 +10,6 @@ const NOT_YET_TRANSLATED = [
   "app/(app)/admin/**",
   "app/(app)/certificates/**",
   "app/(app)/glossary/**",
-  "app/(app)/learn/**",
-  "app/(app)/modules/**",
   "app/(app)/reference/**",
   "app/(app)/search/**",
   "app/(app)/team/**",
@@ -19,10 +17,6 @@ const NOT_YET_TRANSLATED = [
   "app/(auth)/**",
   "app/(marketing)/**",
   "app/dev/**",
-  "app/error.tsx",
-  "app/forbidden.tsx",
-  "app/global-error.tsx",
-  "app/not-found.tsx",
   "app/verify/**",
   "app/offline/**",
   "components/account/**",
@@ -39,7 +33,6 @@ const NOT_YET_TRANSLATED = [
   "components/signoffs/**",
   "components/team/**",
   "components/tools/**",
-  "components/ui/**",
   "components/refreshers/**",
 ];
 

@@ -1,8 +1,10 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useEffect, useId, useRef, useState } from "react";
 
 /** A glossary term: a button that shows its definition; Escape or a second press closes it. */
 export function TermPopover({ term, definition, children }: { term: string; definition: string; children: React.ReactNode }) {
+  const t = useTranslations("lesson");
   const [open, setOpen] = useState(false);
   const id = useId();
   const ref = useRef<HTMLSpanElement>(null);
@@ -27,7 +29,7 @@ export function TermPopover({ term, definition, children }: { term: string; defi
         onClick={() => setOpen((o) => !o)}
       >
         {children}
-        <span className="sr-only"> (glossary term)</span>
+        <span className="sr-only">{` ${t("glossaryTerm")}`}</span>
       </button>
       <span
         id={id}
