@@ -4,6 +4,8 @@ import { db } from "@/db/client";
 import { certificate, type Certificate } from "@/db/schema";
 import { parseVerifyInput } from "./verify-code";
 import { certificateStatus, isExpiringSoon, type CertificateKind, type CertificateStatus } from "./status";
+import { subjectTitleIn } from "./subject-title";
+import type { Locale } from "@/lib/i18n/config";
 
 /** What the holder's own list shows (no verification secrets of others, no audit detail). */
 export type HolderCertificate = {
@@ -62,7 +64,8 @@ export type PublicVerification = {
   status: CertificateStatus;
 };
 
-export async function verificationByCode(input: string, now: Date = new Date()): Promise<PublicVerification | null> {
+/** `locale`: the viewer's language, in which the module or path is named (the same slug in every language). */
+export async function verificationByCode(input: string, now: Date = new Date(), locale: Locale = "en"): Promise<PublicVerification | null> {
   // A code (new grouped form, old base64url form, or a pasted link) or the certificate's serial.
   const lookup = parseVerifyInput(input);
   if (!lookup) return null;
@@ -71,6 +74,7 @@ export async function verificationByCode(input: string, now: Date = new Date()):
       serial: certificate.serial,
       holderName: certificate.holderName,
       title: certificate.subjectTitle,
+      slug: certificate.subjectSlug,
       kind: certificate.kind,
       ceHours: certificate.ceHours,
       issuedAt: certificate.issuedAt,
@@ -85,7 +89,7 @@ export async function verificationByCode(input: string, now: Date = new Date()):
   return {
     serial: c.serial,
     holderName: c.holderName,
-    title: c.title,
+    title: subjectTitleIn(c.kind, c.slug, c.title, locale),
     kind: c.kind,
     ceHours: Number(c.ceHours),
     issuedAt: c.issuedAt.toISOString(),
