@@ -1,7 +1,8 @@
+import type { createFormatter } from "next-intl";
 import { CALENDAR_YEARS, type PeriodSetting } from "@/lib/credentials/browser";
 
 type T = (key: "calendarYears" | "licencePeriods", values?: Record<string, string | number | Date>) => string;
-type Format = { dateTime: (d: Date, o: Intl.DateTimeFormatOptions) => string };
+type Format = Pick<ReturnType<typeof createFormatter>, "dateTime">;
 
 /**
  * How an organization's reporting period reads, in the reader's language ("certificates" catalog):

@@ -14,7 +14,8 @@ export function localizeError(text: string, locale: Locale): string {
   return t(found.key as never, found.values as never);
 }
 
-type Body = { error?: unknown; fieldErrors?: Record<string, unknown> };
+// Riser's own answers carry `error`; better-auth's carry `message` (with a `code`)
+type Body = { error?: unknown; message?: unknown; fieldErrors?: Record<string, unknown> };
 
 /**
  * A route handler whose 4xx answers (`{ error, fieldErrors }`) speak the request's language: the
@@ -31,6 +32,7 @@ export function inRequestLanguage<A extends unknown[]>(handler: (req: Request, .
     if (!body || typeof body !== "object") return res;
     const out: Body = { ...body };
     if (typeof body.error === "string") out.error = localizeError(body.error, locale);
+    if (typeof body.message === "string") out.message = localizeError(body.message, locale);
     if (body.fieldErrors && typeof body.fieldErrors === "object") {
       out.fieldErrors = Object.fromEntries(
         Object.entries(body.fieldErrors).map(([k, v]) => [k, Array.isArray(v) ? v.map((m) => (typeof m === "string" ? localizeError(m, locale) : m)) : v]),
