@@ -21,7 +21,7 @@ describe("schema and API messages in the reader's language", () => {
       ...messagesOf(signUpSchema.safeParse({ name: "1234", email: "a@b.example", password: "p".repeat(200), organizationName: "x".repeat(201) })),
       ...messagesOf(resetSchema.safeParse({ password: "a-long-enough-password-1", confirm: "something else entirely" })),
       ...messagesOf(emailChangeSchema.safeParse({ email: "nope", password: "" })),
-      ...messagesOf(passwordChangeSchema.safeParse({ currentPassword: "", newPassword: "x", confirm: "y" })),
+      ...messagesOf(passwordChangeSchema.safeParse({ currentPassword: "", newPassword: "x", confirm: "y", signOutOthers: true })),
     ];
     expect(produced.length).toBeGreaterThan(8);
     const missing = produced.filter((m) => errorKeyOf(m) === null);
