@@ -9,7 +9,7 @@ import "server-only";
  * This module needs no database or environment: callers pass the data and the verification URL.
  * The fixed text comes from the message catalogs ("certificatePdf") in the holder's language.
  */
-import { createTranslator } from "next-intl";
+import { createTranslator } from "use-intl/core";
 import { degrees, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
 import { C, createPdf, defaultFontDir } from "@/lib/pdf";

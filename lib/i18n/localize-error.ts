@@ -1,5 +1,5 @@
 import "server-only";
-import { createTranslator } from "next-intl";
+import { createTranslator } from "use-intl/core";
 import { INTL_TAG, type Locale } from "./config";
 import { errorKeyOf } from "./error-text";
 import { requestLocale } from "./locale";

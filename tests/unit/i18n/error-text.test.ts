@@ -5,7 +5,7 @@
  * catalog, and a message with a value in it (the quiz's attempt limit) keeps that value.
  */
 import { describe, expect, it } from "vitest";
-import { createTranslator } from "next-intl";
+import { createTranslator } from "use-intl/core";
 import { signInSchema, signUpSchema, resetSchema } from "@/lib/auth/browser";
 import { emailChangeSchema, passwordChangeSchema } from "@/lib/account/browser";
 import { errorKeyOf } from "@/lib/i18n/error-text";
