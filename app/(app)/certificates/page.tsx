@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { getFormatter, getTranslations } from "next-intl/server";
+import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { RevokeForm } from "@/components/certificates/revoke-form";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
@@ -8,7 +8,8 @@ import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
-import { formatHours } from "@/lib/certificates";
+import { formatHours, subjectTitleIn } from "@/lib/certificates";
+import { localeOf } from "@/lib/i18n/config";
 import { ReportingPeriodForm } from "@/components/credentials/reporting-period-form";
 import { buttonLinkClass } from "@/components/ui/button";
 import { periodSettingOf } from "@/lib/credentials";
@@ -23,11 +24,14 @@ export default async function CertificatesPage() {
   const now = new Date();
   const [t, format] = await Promise.all([getTranslations("certificates"), getFormatter()]);
   const longDate = (d: Date) => format.dateTime(d, { year: "numeric", month: "long", day: "numeric" });
-  const [mine, revocable, period] = await Promise.all([
+  const locale = localeOf(await getLocale());
+  const [held, revocable, period] = await Promise.all([
     certificatesOfHolder(viewer.id, now),
     revocableCertificates(viewer, now),
     periodSettingOf(viewer.organizationId ?? null),
   ]);
+  // each module or path named in the reader's language (the same slug in every language)
+  const mine = held.map((c) => ({ ...c, subjectTitle: subjectTitleIn(c.kind, c.subjectSlug, c.subjectTitle, locale) }));
   const current = mine.filter((c) => c.status === "valid");
   const past = mine.filter((c) => c.status !== "valid");
   // one certificate per module counts (a renewal and the one it renews may both be valid for a while)

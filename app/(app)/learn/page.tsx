@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { getFormatter, getTranslations } from "next-intl/server";
+import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { certificatesOfHolder } from "@/lib/certificates";
+import { certificatesOfHolder, subjectTitleIn } from "@/lib/certificates";
+import { localeOf } from "@/lib/i18n/config";
 import { findModule } from "@/lib/content";
 import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team";
 import type { BoardCell } from "@/lib/team";
-import { isoDay } from "@/lib/dates";
 import { FirstDayChecklist } from "@/components/team/first-day";
 import { firstDayCounts } from "@/lib/team";
 import { firstDaySteps, showFirstDay } from "@/lib/team";
@@ -42,7 +42,7 @@ function continueTarget(t: T, last: { module: string; lesson: string } | null, i
 
 export default async function LearnPage() {
   const viewer = await requireViewer("signed-in", "/learn");
-  const [t, format] = await Promise.all([getTranslations("learn"), getFormatter()]);
+  const [t, format, tag] = await Promise.all([getTranslations("learn"), getFormatter(), getLocale()]);
   const day = (iso: string) => format.dateTime(new Date(iso), { weekday: "short", month: "short", day: "numeric", year: "numeric" });
   const person = viewer.organizationId
     ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
@@ -115,7 +115,7 @@ export default async function LearnPage() {
           <ul className="mb-2 flex flex-col gap-1">
             {shownCerts.map((c) => (
               <li key={c.id}>
-                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? t("expired") : c.expiringSoon ? t("expiresSoon") : t("validUntil")} <span className="font-mono">{isoDay(c.expiresAt)}</span></span>
+                {subjectTitleIn(c.kind, c.subjectSlug, c.subjectTitle, localeOf(tag))} <span className="text-sm text-muted">· {c.status === "expired" ? t("expired") : c.expiringSoon ? t("expiresSoon") : t("validUntil")} <span className="font-mono">{format.dateTime(new Date(c.expiresAt), "short")}</span></span>
               </li>
             ))}
           </ul>
