@@ -1,57 +1,47 @@
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { buttonLinkClass } from "@/components/ui/button";
 
-const parts = [
-  { title: "Short lessons", text: "Pipe and joining, sprinklers and coverage, freeze protection, hydraulics, testing, and how rough-in and trim fit between the other trades — 5 to 12 minutes each, with worked examples." },
-  { title: "Quizzes graded on the server", text: "Question banks per module with numeric problems drawn fresh for every attempt. Pass the quiz and finish the lessons to complete a module." },
-  { title: "Certificates anyone can check", text: "A PDF with continuing-education hours and a code that a builder, an inspector or a licensing body can verify online." },
-  { title: "Code-reference cards", text: "One topic per card in plain words: what the requirement is for, what to check in the field, the mistakes crews make." },
-  { title: "Field calculators", text: "K-factor flow and pressure, friction loss, elevation, flow-test supply against demand, stored water, room coverage — every step shown." },
-  { title: "A board for training managers", text: "Assign modules with due dates, see who is behind, sign off practical skills with photo evidence, export proof of completion." },
-];
+const parts = ["lessons", "quizzes", "certificates", "cards", "calculators", "board"] as const;
 
 export default function HomePage() {
+  const t = useTranslations("marketing");
   return (
     <div className="flex flex-col gap-10">
       <section className="grid gap-6 md:grid-cols-[3fr_2fr] md:items-center">
         <div>
-          <p className="font-mono text-sm uppercase tracking-wide text-copper">Residential fire-sprinkler training</p>
-          <h1 className="mt-2 text-4xl sm:text-5xl">Train the crew that protects the home.</h1>
-          <p className="mt-4 max-w-prose text-lg">
-            Riser teaches new installers, designers and builders&apos; sales staff the work of sprinkler systems in
-            one- and two-family homes — and gives training managers the proof that each person is trained.
-          </p>
+          <p className="font-mono text-sm uppercase tracking-wide text-copper">{t("kicker")}</p>
+          <h1 className="mt-2 text-4xl sm:text-5xl">{t("headline")}</h1>
+          <p className="mt-4 max-w-prose text-lg">{t("lead")}</p>
           <div className="mt-6 flex flex-wrap gap-3">
-            <Link href="/sign-in" className={buttonLinkClass}>Sign in</Link>
-            <Link href="/sign-up" className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">Set up your company</Link>
+            <Link href="/sign-in" className={buttonLinkClass}>{t("signIn")}</Link>
+            <Link href="/sign-up" className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 py-2 font-bold text-ink no-underline">{t("setUp")}</Link>
           </div>
         </div>
         <HeroDiagram />
       </section>
       <section aria-labelledby="what-heading">
-        <h2 id="what-heading" className="text-2xl">What Riser gives you</h2>
+        <h2 id="what-heading" className="text-2xl">{t("what")}</h2>
         <ul className="mt-4 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
           {parts.map((p) => (
-            <li key={p.title} className="rounded border border-line bg-panel p-4">
-              <h3 className="text-lg">{p.title}</h3>
-              <p className="mt-2 text-muted">{p.text}</p>
+            <li key={p} className="rounded border border-line bg-panel p-4">
+              <h3 className="text-lg">{t(`parts.${p}.title`)}</h3>
+              <p className="mt-2 text-muted">{t(`parts.${p}.text`)}</p>
             </li>
           ))}
         </ul>
       </section>
-      <section className="rounded border-l-4 border-caution bg-caution-light p-4" aria-label="Safety note">
-        <p>
-          <strong>Riser is a training and checking aid.</strong> The sprinkler&apos;s listing, the code your jurisdiction
-          adopted with its local amendments, and the authority having jurisdiction decide every installation.
-        </p>
+      <section className="rounded border-l-4 border-caution bg-caution-light p-4" aria-label={t("safetyNote")}>
+        <p>{t.rich("safety", { strong: (c) => <strong>{c}</strong> })}</p>
       </section>
     </div>
   );
 }
 
 function HeroDiagram() {
+  const t = useTranslations("marketing");
   return (
-    <svg viewBox="0 0 320 220" role="img" aria-label="A house cross-section with a water service, a riser and two sprinklers spraying in one room" className="w-full max-w-md">
+    <svg viewBox="0 0 320 220" role="img" aria-label={t("diagram")} className="w-full max-w-md">
       <rect className="fill-panel" x="0" y="0" width="320" height="220" />
       <path className="stroke-ink" d="M40 90 L160 30 L280 90" fill="none" strokeWidth="4" />
       <rect className="stroke-ink" x="50" y="90" width="220" height="110" fill="none" strokeWidth="4" />
@@ -68,8 +58,8 @@ function HeroDiagram() {
       ))}
       <path className="stroke-water" d="M132 170 Q140 190 120 200 M148 170 Q140 190 160 200 M212 170 Q220 190 200 200 M228 170 Q220 190 240 200" fill="none" strokeWidth="2" strokeDasharray="4 3" />
       <circle className="stroke-ink" cx="100" cy="190" r="6" fill="none" strokeWidth="2" />
-      <text className="fill-ink" x="8" y="206" fontSize="11">water service</text>
-      <text className="fill-ink" x="96" y="125" fontSize="11">riser</text>
+      <text className="fill-ink" x="8" y="206" fontSize="11">{t("waterService")}</text>
+      <text className="fill-ink" x="96" y="125" fontSize="11">{t("riser")}</text>
     </svg>
   );
 }

@@ -1,7 +1,10 @@
 import type { Metadata } from "next";
+import { getTranslations } from "next-intl/server";
 import { OfflineOverview } from "@/components/offline/offline-overview";
 
-export const metadata: Metadata = { title: "Kept on this phone" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("offline"))("title") };
+}
 
 /**
  * /offline: what this phone keeps and what waits to be sent. The page itself holds nothing personal

@@ -1,5 +1,6 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { useSWRConfig } from "swr";
@@ -13,6 +14,7 @@ import { authClient } from "@/components/auth/auth-client";
 type Values = z.infer<typeof passwordChangeSchema>;
 
 export function PasswordForm() {
+  const t = useTranslations("account");
   const { mutate } = useSWRConfig();
   const [error, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -25,12 +27,12 @@ export function PasswordForm() {
     setNotice(null);
     const { error } = await authClient.changePassword({ currentPassword: v.currentPassword, newPassword: v.newPassword, revokeOtherSessions: v.signOutOthers });
     if (error) {
-      if (error.code === "INVALID_PASSWORD") return setError("currentPassword", { message: "That is not your current password" });
-      if (error.status === 429) return setFormError("Too many attempts. Wait a minute and try again.");
-      return setFormError(error.message ?? "Could not change the password. Try again.");
+      if (error.code === "INVALID_PASSWORD") return setError("currentPassword", { message: t("notCurrentPassword") });
+      if (error.status === 429) return setFormError(t("tooManyAttempts"));
+      return setFormError(error.message ?? t("passwordFailed"));
     }
     reset({ currentPassword: "", newPassword: "", confirm: "", signOutOthers: v.signOutOthers });
-    setNotice(v.signOutOthers ? "Your password is changed, and your other devices are signed out." : "Your password is changed.");
+    setNotice(v.signOutOthers ? t("passwordChangedOthers") : t("passwordChanged"));
     void mutate("/api/account/sessions");
   }
   return (
@@ -38,15 +40,15 @@ export function PasswordForm() {
       <ErrorSummary control={control} />
       <FormError message={error} />
       <FormNotice message={notice} />
-      <Field label="Current password" type="password" autoComplete="current-password" {...register("currentPassword")} error={formState.errors.currentPassword?.message} />
-      <Field label="New password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("newPassword")} error={formState.errors.newPassword?.message} />
-      <Field label="New password again" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
+      <Field label={t("currentPassword")} type="password" autoComplete="current-password" {...register("currentPassword")} error={formState.errors.currentPassword?.message} />
+      <Field label={t("newPassword")} type="password" autoComplete="new-password" hint={t("passwordHint")} {...register("newPassword")} error={formState.errors.newPassword?.message} />
+      <Field label={t("newPasswordAgain")} type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" className="size-5" {...register("signOutOthers")} />
-        Also sign out my other devices
+        {t("signOutOthers")}
       </label>
       <Button type="submit" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Changing…" : "Change the password"}
+        {formState.isSubmitting ? t("changing") : t("changePassword")}
       </Button>
     </form>
   );

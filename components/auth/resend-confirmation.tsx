@@ -1,9 +1,11 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { authClient } from "@/components/auth/auth-client";
 
 /** "Send the link again" for an address that still needs confirming (better-auth's own endpoint, rate-limited there). */
 export function ResendConfirmation({ email }: { email: string }) {
+  const t = useTranslations("auth");
   const [state, setState] = useState<"idle" | "busy" | "sent" | "failed">("idle");
   return (
     <p className="flex flex-wrap items-center gap-3">
@@ -17,10 +19,10 @@ export function ResendConfirmation({ email }: { email: string }) {
           setState(error ? "failed" : "sent");
         }}
       >
-        {state === "busy" ? "Sending…" : "Send the link again"}
+        {state === "busy" ? t("sending") : t("sendAgain")}
       </button>
       <span role="status" className="text-sm">
-        {state === "sent" ? `A new link is on its way to ${email}.` : state === "failed" ? "That did not work; wait a minute and try again." : ""}
+        {state === "sent" ? t("newLinkSent", { email }) : state === "failed" ? t("resendFailed") : ""}
       </span>
     </p>
   );

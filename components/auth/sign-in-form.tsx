@@ -1,6 +1,7 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -17,6 +18,7 @@ import { safeNext } from "@/lib/safe-next";
 type Values = z.infer<typeof signInSchema>;
 
 export function SignInForm() {
+  const t = useTranslations("auth");
   const router = useRouter();
   const params = useSearchParams();
   const [error, setError] = useState<string | null>(null);
@@ -34,15 +36,15 @@ export function SignInForm() {
     setError(null);
     const { data, error } = await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
-      if (error.code === "BANNED_USER") setError("This account is banned from Riser. If you think this is a mistake, ask your training manager.");
+      if (error.code === "BANNED_USER") setError(t("banned"));
       else if (error.status === 403) {
-        setError("Confirm your e-mail address first: open the link we sent you.");
+        setError(t("confirmFirst"));
         setUnconfirmed(values.email);
       }
       // a paused account (too many wrong passwords) explains itself; otherwise this address is rate limited
-      else if (error.status === 429) setError(error.code === "ACCOUNT_SIGN_IN_PAUSED" && error.message ? error.message : "Too many sign-in attempts. Wait a minute and try again.");
-      else if (error.status === 401) setError("That e-mail and password do not match an account.");
-      else setError(error.message ?? "Sign-in failed. Try again.");
+      else if (error.status === 429) setError(error.code === "ACCOUNT_SIGN_IN_PAUSED" && error.message ? error.message : t("tooManySignIns"));
+      else if (error.status === 401) setError(t("noMatch"));
+      else setError(error.message ?? t("signInFailed"));
       return;
     }
     // the password was right and the account uses two-step sign-in: ask for the code
@@ -65,20 +67,20 @@ export function SignInForm() {
   return (
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <ErrorSummary control={control} />
-      {verifiedNotice(params.get("verified"), params.get("error"), error) ? <FormNotice message="Your e-mail is confirmed. Sign in to continue." /> : null}
+      {verifiedNotice(params.get("verified"), params.get("error"), error) ? <FormNotice message={t("emailConfirmed")} /> : null}
       {params.get("verified") && params.get("error") ? (
-        <FormError message={params.get("error") === "TOKEN_EXPIRED" ? "That confirmation link has expired. Sign in below; if your address still needs confirming, you can send yourself a new link." : "That confirmation link is not valid. Sign in below; if your address still needs confirming, you can send yourself a new link."} />
+        <FormError message={params.get("error") === "TOKEN_EXPIRED" ? t("linkExpired") : t("linkInvalid")} />
       ) : null}
-      {params.get("reset") ? <FormNotice message="Your password is changed. Sign in with the new one." /> : null}
+      {params.get("reset") ? <FormNotice message={t("passwordChanged")} /> : null}
       <FormError message={error} />
       {unconfirmed && error ? <ResendConfirmation email={unconfirmed} /> : null}
-      <Field label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <Field label="Password" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
+      <Field label={t("email")} type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
+      <Field label={t("password")} type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>
-        {formState.isSubmitting ? "Signing in…" : "Sign in"}
+        {formState.isSubmitting ? t("signingIn") : t("signIn")}
       </Button>
       <p className="text-sm">
-        <Link href="/forgot-password">Forgot your password?</Link> · <Link href="/sign-up">Create an account for your company</Link>
+        <Link href="/forgot-password">{t("forgotLink")}</Link> · <Link href="/sign-up">{t("signUpTitle")}</Link>
       </p>
     </form>
   );

@@ -1,5 +1,6 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
@@ -10,6 +11,7 @@ import { postJson } from "@/lib/fetcher";
 import { ResendConfirmation } from "./resend-confirmation";
 
 export function SignUpForm() {
+  const t = useTranslations("auth");
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<{ message: string; email: string } | null>(null);
   const { register, handleSubmit, formState, setError: setFieldError, control } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
@@ -30,8 +32,8 @@ export function SignUpForm() {
   if (done) {
     return (
       <div className="flex max-w-md flex-col gap-3" data-testid="sign-up-done">
-        <FormNotice message={`Check your e-mail: we sent a link to ${done.email} to confirm the address. Open it within 24 hours, then sign in.`} />
-        <p className="text-sm text-muted">Nothing arrived after a few minutes? Look in the spam folder, or send the link again. A wrong address? Reload this page and sign up with the right one.</p>
+        <FormNotice message={t("checkEmail", { email: done.email })} />
+        <p className="text-sm text-muted">{t("nothingArrived")}</p>
         <ResendConfirmation email={done.email} />
       </div>
     );
@@ -40,15 +42,15 @@ export function SignUpForm() {
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <Field label="Your name" autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
-      <Field label="Work e-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <Field label="Password" type="password" autoComplete="new-password" hint="At least 15 characters; a few unrelated words work well." {...register("password")} error={formState.errors.password?.message} />
-      <Field label="Company" autoComplete="organization" hint="Your sprinkler contractor or home-building company." {...register("organizationName")} error={formState.errors.organizationName?.message} />
+      <Field label={t("yourName")} autoComplete="name" {...register("name")} error={formState.errors.name?.message} />
+      <Field label={t("workEmail")} type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
+      <Field label={t("password")} type="password" autoComplete="new-password" hint={t("passwordHint")} {...register("password")} error={formState.errors.password?.message} />
+      <Field label={t("company")} autoComplete="organization" hint={t("companyHint")} {...register("organizationName")} error={formState.errors.organizationName?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>
-        {formState.isSubmitting ? "Creating…" : "Create the account"}
+        {formState.isSubmitting ? t("creating") : t("createAccount")}
       </Button>
       <p className="text-sm text-muted">
-        You become your company&apos;s training manager, with 3 trial seats for 30 days.
+        {t("trial")}
       </p>
     </form>
   );

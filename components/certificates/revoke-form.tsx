@@ -1,16 +1,20 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useTranslations } from "next-intl";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { ErrorSummary } from "@/components/ui/error-summary";
 import { FormError } from "@/components/ui/field";
+import { useErrorText } from "@/components/ui/use-error-text";
 import { postJson } from "@/lib/fetcher";
 import { revokeInput, type RevokeInput } from "@/lib/certificates/browser";
 
 /** Revoke one certificate with a reason (managers of its organization, admins). */
 export function RevokeForm({ id, serial, holderName }: { id: number; serial: string; holderName: string }) {
+  const t = useTranslations("certificates");
+  const errorText = useErrorText();
   const router = useRouter();
   const fieldId = useId();
   const [open, setOpen] = useState(false);
@@ -31,8 +35,8 @@ export function RevokeForm({ id, serial, holderName }: { id: number; serial: str
 
   if (!open) {
     return (
-      <Button type="button" variant="secondary" onClick={() => setOpen(true)} aria-label={`Revoke ${serial} of ${holderName}`}>
-        Revoke…
+      <Button type="button" variant="secondary" onClick={() => setOpen(true)} aria-label={t("revokeLabel", { serial, name: holderName })}>
+        {t("revokeOpen")}
       </Button>
     );
   }
@@ -41,7 +45,7 @@ export function RevokeForm({ id, serial, holderName }: { id: number; serial: str
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-2 rounded border border-caution bg-caution-light p-3">
       <ErrorSummary control={control} />
       <label htmlFor={fieldId} className="font-bold">
-        Why revoke {serial} ({holderName})?
+        {t("whyRevoke", { serial, name: holderName })}
       </label>
       <textarea
         id={fieldId}
@@ -53,16 +57,16 @@ export function RevokeForm({ id, serial, holderName }: { id: number; serial: str
       />
       {error ? (
         <p id={`${fieldId}-error`} role="alert" className="text-sm font-bold text-caution">
-          {error}
+          {errorText(error)}
         </p>
       ) : null}
       <FormError message={problem} />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" variant="danger" disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Revoking…" : "Revoke certificate"}
+          {formState.isSubmitting ? t("revoking") : t("revoke")}
         </Button>
         <Button type="button" variant="secondary" onClick={() => setOpen(false)}>
-          Cancel
+          {t("cancel")}
         </Button>
       </div>
     </form>

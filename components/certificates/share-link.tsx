@@ -1,8 +1,10 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useId, useState } from "react";
 
 /** The public verification link of one certificate, with a copy button. */
 export function ShareLink({ url, serial }: { url: string; serial: string }) {
+  const t = useTranslations("certificates");
   const id = useId();
   const [copied, setCopied] = useState<"yes" | "no" | null>(null);
 
@@ -18,7 +20,7 @@ export function ShareLink({ url, serial }: { url: string; serial: string }) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-bold">
-        Share link for {serial}
+        {t("shareFor", { serial })}
       </label>
       <div className="flex flex-wrap gap-2">
         <input
@@ -30,11 +32,11 @@ export function ShareLink({ url, serial }: { url: string; serial: string }) {
           data-testid="share-link"
         />
         <button type="button" onClick={copy} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold hover:bg-paper">
-          Copy
+          {t("copy")}
         </button>
       </div>
       <p className="min-h-5 text-sm text-muted" aria-live="polite">
-        {copied === "yes" ? "Copied. Anyone with this link can check the certificate." : copied === "no" ? "Copying is blocked here: select the link and copy it yourself." : ""}
+        {copied === "yes" ? t("copied") : copied === "no" ? t("copyBlocked") : ""}
       </p>
     </div>
   );

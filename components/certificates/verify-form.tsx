@@ -1,18 +1,20 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useTranslations } from "next-intl";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field } from "@/components/ui/field";
 import { verifyCodeInput, type VerifyCodeInput } from "@/lib/certificates/browser";
-import { parseVerifyInput, verifyPathSegment, VERIFY_INPUT_HINT } from "@/lib/certificates/browser";
+import { parseVerifyInput, verifyPathSegment } from "@/lib/certificates/browser";
 
 /**
  * Type or paste a certificate's code (or its whole link). Works without JavaScript too: the form
  * falls back to GET /verify?code=…, which the page redirects.
  */
 export function VerifyForm({ initial, serverError }: { initial?: string; serverError?: string }) {
+  const t = useTranslations("verify");
   const router = useRouter();
   const { register, handleSubmit, formState, control } = useForm<VerifyCodeInput>({
     resolver: zodResolver(verifyCodeInput),
@@ -30,8 +32,8 @@ export function VerifyForm({ initial, serverError }: { initial?: string; serverE
     >
       <ErrorSummary control={control} />
       <Field
-        label="Verification code"
-        hint={VERIFY_INPUT_HINT}
+        label={t("codeLabel")}
+        hint={t("codeHint")}
         autoComplete="off"
         spellCheck={false}
         className="font-mono"
@@ -40,7 +42,7 @@ export function VerifyForm({ initial, serverError }: { initial?: string; serverE
       />
       <div>
         <Button type="submit" disabled={formState.isSubmitting}>
-          Check certificate
+          {t("check")}
         </Button>
       </div>
     </form>

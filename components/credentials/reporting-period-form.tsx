@@ -1,4 +1,5 @@
 "use client";
+import { useFormatter, useTranslations } from "next-intl";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -8,11 +9,13 @@ import { SelectField } from "@/components/ui/select-field";
 import { PERIOD_LENGTHS, type PeriodSetting } from "@/lib/credentials/browser";
 import { postJson } from "@/lib/fetcher";
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 type Values = { startYear: string; startMonth: string; lengthMonths: string };
 
 /** How the organization totals CE hours in training histories: calendar years or its licence period. */
 export function ReportingPeriodForm({ current, text }: { current: PeriodSetting; text: string }) {
+  const t = useTranslations("certificates");
+  const format = useFormatter();
+  const months = Array.from({ length: 12 }, (_, i) => format.dateTime(new Date(Date.UTC(2000, i, 1)), { month: "long", timeZone: "UTC" }));
   const router = useRouter();
   const [problem, setProblem] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -39,14 +42,14 @@ export function ReportingPeriodForm({ current, text }: { current: PeriodSetting;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-2xl flex-col gap-3 rounded border border-line bg-panel p-4" data-testid="reporting-period-form">
       <p>
-        Training histories total CE hours by <strong>{text}</strong>. If your licences renew on another cycle, set it here.
+        {t.rich("periodIntro", { text, strong: (c) => <strong>{c}</strong> })}
       </p>
       <div className="grid gap-3 sm:grid-cols-3">
-        <SelectField label="Period starts in" options={MONTHS.map((m, i) => ({ value: String(i + 1), label: m }))} error={formState.errors.startMonth?.message} {...register("startMonth")} />
-        <Field label="of the year" inputMode="numeric" error={formState.errors.startYear?.message} {...register("startYear")} />
+        <SelectField label={t("periodStarts")} options={months.map((m, i) => ({ value: String(i + 1), label: m }))} error={formState.errors.startMonth?.message} {...register("startMonth")} />
+        <Field label={t("periodYear")} inputMode="numeric" error={formState.errors.startYear?.message} {...register("startYear")} />
         <SelectField
-          label="Each period lasts"
-          options={PERIOD_LENGTHS.map((n) => ({ value: String(n), label: n % 12 === 0 ? `${n / 12} year${n === 12 ? "" : "s"}` : `${n} months` }))}
+          label={t("periodLength")}
+          options={PERIOD_LENGTHS.map((n) => ({ value: String(n), label: n % 12 === 0 ? t("years", { count: n / 12 }) : t("months", { count: n }) }))}
           error={formState.errors.lengthMonths?.message}
           {...register("lengthMonths")}
         />
@@ -55,7 +58,7 @@ export function ReportingPeriodForm({ current, text }: { current: PeriodSetting;
       <FormNotice message={notice} />
       <div>
         <Button type="submit" disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : "Save reporting period"}
+          {formState.isSubmitting ? t("saving") : t("savePeriod")}
         </Button>
       </div>
     </form>

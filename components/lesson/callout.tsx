@@ -1,7 +1,9 @@
+import { useTranslations } from "next-intl";
+
 const kinds = {
-  caution: { label: "Caution", box: "border-caution bg-caution-light", title: "text-caution", icon: "!" },
-  tip: { label: "Field tip", box: "border-water bg-water-light", title: "text-water", icon: "i" },
-  code: { label: "Code note", box: "border-copper bg-copper-light", title: "text-copper", icon: "§" },
+  caution: { box: "border-caution bg-caution-light", title: "text-caution", icon: "!" },
+  tip: { box: "border-water bg-water-light", title: "text-water", icon: "i" },
+  code: { box: "border-copper bg-copper-light", title: "text-copper", icon: "§" },
 } as const;
 
 /**
@@ -16,14 +18,17 @@ export function calloutHeading(label: string, title?: string): string {
 }
 
 export function Callout({ type = "tip", title, children }: { type?: keyof typeof kinds; title?: string; children: React.ReactNode }) {
-  const k = kinds[type] ?? kinds.tip;
+  const t = useTranslations("lesson");
+  const kind = type in kinds ? type : "tip";
+  const k = kinds[kind];
+  const label = t(`callout.${kind}`);
   return (
-    <aside className={`my-5 rounded border-l-4 p-4 ${k.box}`} aria-label={calloutHeading(k.label, title)} data-callout={type}>
+    <aside className={`my-5 rounded border-l-4 p-4 ${k.box}`} aria-label={calloutHeading(label, title)} data-callout={type}>
       <p className={`flex items-center gap-2 font-bold ${k.title}`}>
         <span aria-hidden="true" className="inline-flex h-6 w-6 items-center justify-center rounded-full border-2 border-current font-mono text-sm">
           {k.icon}
         </span>
-        <span>{calloutHeading(k.label, title)}</span>
+        <span>{calloutHeading(label, title)}</span>
       </p>
       <div className="mt-2 [&>p:first-child]:mt-0">{children}</div>
     </aside>

@@ -1,7 +1,9 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useEffect, useRef, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
+import { useErrorText } from "@/components/ui/use-error-text";
 import { useOfflineState, useOnline } from "@/components/offline/use-offline";
 import { getJson, postJson } from "@/lib/fetcher";
 import { flushQueue, offlineSupported, queueMark } from "@/lib/offline/browser";
@@ -35,6 +37,8 @@ function useVisibleSeconds(): () => number {
  * is sent when the connection returns.
  */
 export function MarkComplete({ module, lesson, total, minutes }: { module: string; lesson: string; total: number; minutes: number }) {
+  const t = useTranslations("lesson");
+  const errorText = useErrorText();
   const key = `/api/progress?module=${module}`;
   const { data, error, isLoading, mutate } = useSWR<Progress>(key, getJson);
   const online = useOnline();
@@ -76,32 +80,32 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
   const showButton = !done && !queued && (data || noNetwork);
   return (
     <div className="rounded border border-line bg-panel p-4" data-testid="lesson-progress">
-      {isLoading ? <p className="text-muted">Loading your progress…</p> : null}
-      {error && !noNetwork ? <p role="alert" className="text-caution">Your progress could not load: {error.message}</p> : null}
+      {isLoading ? <p className="text-muted">{t("loadingProgress")}</p> : null}
+      {error && !noNetwork ? <p role="alert" className="text-caution">{t("progressFailed", { message: errorText(error.message) })}</p> : null}
       <div className="flex flex-wrap items-center gap-4">
         {done ? (
           <p className="font-bold text-pass" role="status">
-            ✓ Lesson complete
-            {seconds !== null ? <span className="font-normal text-muted"> · reading time {Math.round(seconds / 60)} min</span> : null}
-            {deviceSeconds !== null ? <span className="font-normal text-muted" data-testid="device-time"> · {Math.round(deviceSeconds / 60)} min read offline (reported by the phone)</span> : null}
+            {t("lessonComplete")}
+            {seconds !== null ? <span className="font-normal text-muted">{` · ${t("readingTime", { minutes: Math.round(seconds / 60) })}`}</span> : null}
+            {deviceSeconds !== null ? <span className="font-normal text-muted" data-testid="device-time">{` · ${t("readOffline", { minutes: Math.round(deviceSeconds / 60) })}`}</span> : null}
           </p>
         ) : null}
         {queued ? (
           <p className="font-bold" role="status" data-testid="mark-waiting">
-            ⧗ Marked on this phone — waiting to be sent{online ? "" : " when you are back online"}
-            {queued.note ? <span className="block font-normal text-muted">{queued.note}</span> : null}
+            {online ? t("markedWaiting") : t("markedWaitingOffline")}
+            {queued.note ? <span className="block font-normal text-muted">{errorText(queued.note)}</span> : null}
           </p>
         ) : null}
-        {showButton ? <Button onClick={mark} disabled={saving}>{saving ? "Saving…" : "Mark this lesson complete"}</Button> : null}
+        {showButton ? <Button onClick={mark} disabled={saving}>{saving ? t("saving") : t("markComplete")}</Button> : null}
         {data ? (
           <p className="text-sm text-muted" aria-live="polite" data-testid="module-progress">
-            {count} of {total} lessons in this module done · counts after {Math.ceil(minutes / 2)} min of reading
+            {t("moduleProgress", { count, total, minutes: Math.ceil(minutes / 2) })}
           </p>
         ) : noNetwork || !online ? (
-          <p className="text-sm text-muted">No connection: a mark made now is kept on this phone and sent when you are back online.</p>
+          <p className="text-sm text-muted">{t("noConnection")}</p>
         ) : null}
       </div>
-      {problem ? <p role="alert" className="mt-2 text-caution">{problem}</p> : null}
+      {problem ? <p role="alert" className="mt-2 text-caution">{errorText(problem)}</p> : null}
     </div>
   );
 }

@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useEffect, useId, useRef, useState } from "react";
 
 /**
@@ -6,6 +7,7 @@ import { useEffect, useId, useRef, useState } from "react";
  * `english` (Spanish lessons): a line naming the English term, e.g. "En inglés: Sprinkler riser".
  */
 export function TermPopover({ term, definition, english, children }: { term: string; definition: string; english?: string; children: React.ReactNode }) {
+  const t = useTranslations("lesson");
   const [open, setOpen] = useState(false);
   const id = useId();
   const ref = useRef<HTMLSpanElement>(null);
@@ -30,7 +32,7 @@ export function TermPopover({ term, definition, english, children }: { term: str
         onClick={() => setOpen((o) => !o)}
       >
         {children}
-        <span className="sr-only"> (glossary term)</span>
+        <span className="sr-only">{` ${t("glossaryTerm")}`}</span>
       </button>
       <span
         id={id}

@@ -1,5 +1,6 @@
 "use client";
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { useEffect } from "react";
 import { checkConnection, claimFor, flushQueue, offlineSupported, refreshStale, registerServiceWorker, signedInUserId } from "@/lib/offline/browser";
 import { useOfflineState, useOnline } from "./use-offline";
@@ -10,6 +11,7 @@ import { useOfflineState, useOnline } from "./use-offline";
  * kept modules whose content changed. Shows a plain notice while offline.
  */
 export function OfflineSync({ userId }: { userId: string | null }) {
+  const t = useTranslations("offline");
   const online = useOnline();
   const { queue } = useOfflineState();
   useEffect(() => {
@@ -46,13 +48,12 @@ export function OfflineSync({ userId }: { userId: string | null }) {
     <div role="status" className="w-full rounded bg-paper px-3 py-2 text-sm text-ink" data-testid="connection-notice">
       {online ? null : (
         <p>
-          <strong>No connection.</strong> Modules kept on this phone, their code cards and the calculators still work. Quizzes,
-          certificates, the team board and sign-offs need a connection.
+          {t.rich("noConnection", { strong: (c) => <strong>{c}</strong> })}
         </p>
       )}
       {queue.length ? (
         <p data-testid="queue-notice">
-          {queue.length === 1 ? "1 lesson mark is" : `${queue.length} lesson marks are`} waiting to be sent{online ? "" : " when you are back online"}. <Link href="/offline">See what is waiting</Link>
+          {t(online ? "queueWaiting" : "queueWaitingOffline", { count: queue.length })} <Link href="/offline">{t("seeWaiting")}</Link>
         </p>
       ) : null}
     </div>

@@ -1,9 +1,11 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import type { AnswerValue, PublicQuestion } from "./types";
 
 /** One question with native, keyboard-operable inputs. */
 export function QuestionField({ q, value, onChange }: { q: PublicQuestion; value: AnswerValue; onChange: (v: AnswerValue) => void }) {
+  const t = useTranslations("quiz");
   const name = `q-${q.position}`;
   const [raw, setRaw] = useState(typeof value === "number" ? String(value) : "");
   const [numError, setNumError] = useState<string | null>(null);
@@ -46,7 +48,7 @@ export function QuestionField({ q, value, onChange }: { q: PublicQuestion; value
           {[true, false].map((b) => (
             <label key={String(b)} className="flex min-h-11 cursor-pointer items-center gap-3 rounded border border-line bg-paper px-4 py-2 has-[:checked]:border-water has-[:checked]:bg-water-light">
               <input type="radio" name={name} checked={value === b} onChange={() => onChange(b)} className="h-5 w-5 accent-water" />
-              <span>{b ? "True" : "False"}</span>
+              <span>{b ? t("true") : t("false")}</span>
             </label>
           ))}
         </div>
@@ -73,7 +75,7 @@ export function QuestionField({ q, value, onChange }: { q: PublicQuestion; value
               return onChange(null);
             }
             const n = Number(text.replace(",", "."));
-            if (!Number.isFinite(n)) return setNumError("Enter a number, e.g. 12.5");
+            if (!Number.isFinite(n)) return setNumError(t("enterNumber"));
             setNumError(null);
             onChange(n);
           }}

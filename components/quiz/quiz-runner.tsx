@@ -1,9 +1,11 @@
 "use client";
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { LiveMessage } from "@/components/ui/live-message";
+import { useErrorText } from "@/components/ui/use-error-text";
 import { postJson } from "@/lib/fetcher";
 import { QuestionField } from "./question-field";
 import { QuizResults } from "./quiz-results";
@@ -36,7 +38,9 @@ function useCountdown(deadline: string | null, onExpire: () => void) {
 
 const isAnswered = (v: AnswerValue | undefined) => v !== undefined && v !== null && !(Array.isArray(v) && v.length === 0);
 
-export function QuizRunner({ module, canStart, blockedReason, startLabel = "Start the quiz" }: { module: string; canStart: boolean; blockedReason: string | null; startLabel?: string }) {
+export function QuizRunner({ module, canStart, blockedReason, startLabel }: { module: string; canStart: boolean; blockedReason: string | null; startLabel?: string }) {
+  const t = useTranslations("quiz");
+  const errorText = useErrorText();
   const router = useRouter();
   const [attempt, setAttempt] = useState<AttemptView | null>(null);
   const [answers, setAnswers] = useState<Record<string, AnswerValue>>({});
@@ -124,10 +128,10 @@ export function QuizRunner({ module, canStart, blockedReason, startLabel = "Star
   if (!open) {
     return (
       <div className="flex flex-col gap-3">
-        {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
+        {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{errorText(problem)}</p> : null}
         {blockedReason ? <p className="rounded border border-line bg-panel p-3">{blockedReason}</p> : null}
         <div>
-          <Button onClick={start} disabled={busy || !canStart}>{busy ? "Preparing…" : startLabel}</Button>
+          <Button onClick={start} disabled={busy || !canStart}>{busy ? t("preparing") : (startLabel ?? t("start"))}</Button>
         </div>
       </div>
     );
@@ -136,51 +140,52 @@ export function QuizRunner({ module, canStart, blockedReason, startLabel = "Star
   const total = open.questions.length;
   const answered = open.questions.filter((q) => isAnswered(answers[q.position])).length;
   const mins = left !== null ? Math.floor(left / 60000) : null;
-  const saveText = saveState === "saving" ? "Saving…" : saveState === "saved" ? "Answers saved" : saveState === "offline" ? "Offline — answers kept here, saved when back online" : "";
+  const saveText = saveState === "saving" ? t("saving") : saveState === "saved" ? t("saved") : saveState === "offline" ? t("offline") : "";
   const secs = left !== null ? Math.floor((left % 60000) / 1000) : null;
 
   return (
     <div className="flex flex-col gap-4">
       <div data-sticky-bar="top" className="sticky top-0 z-10 flex flex-wrap items-center gap-4 rounded border border-line bg-panel p-3">
-        <p data-testid="quiz-progress">Answered {answered} of {total}</p>
-        <div className="h-2 min-w-24 flex-1 rounded bg-line" role="progressbar" aria-label="Questions answered" aria-valuemin={0} aria-valuemax={total} aria-valuenow={answered}>
+        <p data-testid="quiz-progress">{t("answeredOf", { answered, total })}</p>
+        <div className="h-2 min-w-24 flex-1 rounded bg-line" role="progressbar" aria-label={t("questionsAnswered")} aria-valuemin={0} aria-valuemax={total} aria-valuenow={answered}>
           <div className="h-2 rounded bg-water" style={{ width: `${(answered / total) * 100}%` }} />
         </div>
         {left !== null ? (
-          <p className={`font-mono ${left < 120000 ? "font-bold text-caution" : ""}`} role="timer" aria-label="Time left">
-            {String(mins).padStart(2, "0")}:{String(secs).padStart(2, "0")} left
+          <p className={`font-mono ${left < 120000 ? "font-bold text-caution" : ""}`} role="timer" aria-label={t("timeLeftLabel")}>
+            {t("timeLeft", { time: `${String(mins).padStart(2, "0")}:${String(secs).padStart(2, "0")}` })}
           </p>
         ) : null}
         <p className="text-sm text-muted">{saveText}</p>
         <LiveMessage message={saveState === "saving" ? "" : saveText} delay={1000} testId="quiz-save-announcement" />
       </div>
-      {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{problem}</p> : null}
+      {problem ? <p role="alert" className="rounded border border-caution bg-caution-light p-3 text-caution">{errorText(problem)}</p> : null}
       <ol className="flex flex-col gap-4">
         {open.questions.map((q, i) => (
-          <li key={q.position} className={`${i === current ? "block" : "hidden"} rounded border border-line bg-panel p-4 md:block`} aria-label={`Question ${i + 1} of ${total}`}>
-            <p className="mb-2 font-mono text-sm text-muted">Question {i + 1} of {total}</p>
+          <li key={q.position} className={`${i === current ? "block" : "hidden"} rounded border border-line bg-panel p-4 md:block`} aria-label={t("questionOf", { n: i + 1, total })}>
+            <p className="mb-2 font-mono text-sm text-muted">{t("questionOf", { n: i + 1, total })}</p>
             <QuestionField q={q} value={answers[q.position] ?? null} onChange={(v) => answer(q.position, v)} />
           </li>
         ))}
       </ol>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div className="flex gap-2 md:hidden">
-          <Button variant="secondary" onClick={() => setCurrent((c) => Math.max(0, c - 1))} disabled={current === 0}>Previous</Button>
-          <Button variant="secondary" onClick={() => setCurrent((c) => Math.min(total - 1, c + 1))} disabled={current === total - 1}>Next</Button>
+          <Button variant="secondary" onClick={() => setCurrent((c) => Math.max(0, c - 1))} disabled={current === 0}>{t("previous")}</Button>
+          <Button variant="secondary" onClick={() => setCurrent((c) => Math.min(total - 1, c + 1))} disabled={current === total - 1}>{t("next")}</Button>
         </div>
-        <Button onClick={() => dialog.current?.showModal()} disabled={busy}>Submit answers</Button>
+        <Button onClick={() => dialog.current?.showModal()} disabled={busy}>{t("submitAnswers")}</Button>
       </div>
       <dialog ref={dialog} aria-labelledby="confirm-title" className="max-w-md rounded border border-ink/30 p-5 backdrop:bg-ink/50">
-        <h2 id="confirm-title" className="text-xl">Submit your answers?</h2>
+        <h2 id="confirm-title" className="text-xl">{t("confirmTitle")}</h2>
         <p className="mt-2">
-          You answered {answered} of {total} questions.{answered < total ? ` ${total - answered} unanswered will count as wrong.` : ""} You cannot change answers after submitting.
+          {t("confirmAnswered", { answered, total })}
+          {answered < total ? ` ${t("confirmUnanswered", { count: total - answered })}` : ""} {t("confirmFinal")}
         </p>
         <div className="mt-4 flex gap-3">
-          <Button onClick={submit}>Submit now</Button>
-          <Button variant="secondary" onClick={() => dialog.current?.close()}>Keep working</Button>
+          <Button onClick={submit}>{t("submitNow")}</Button>
+          <Button variant="secondary" onClick={() => dialog.current?.close()}>{t("keepWorking")}</Button>
         </div>
       </dialog>
-      <p className="text-sm text-muted"><Link href={`/modules/${module}`}>Back to the module</Link> — your answers are saved as you go.</p>
+      <p className="text-sm text-muted">{t.rich("backToModule", { link: (c) => <Link href={`/modules/${module}`}>{c}</Link> })}</p>
     </div>
   );
 }

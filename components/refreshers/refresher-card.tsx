@@ -1,6 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { QuestionField } from "@/components/quiz/question-field";
 import type { AnswerValue, PublicQuestion } from "@/components/quiz/types";
@@ -19,6 +20,7 @@ type Refresher = {
 
 /** One module's refresher on the home page: what changed (highlighted), the lessons to re-read, a short quiz. */
 export function RefresherCard({ r }: { r: Refresher }) {
+  const t = useTranslations("learn");
   const router = useRouter();
   const [answers, setAnswers] = useState<Record<number, AnswerValue>>({});
   const [problem, setProblem] = useState<string | null>(null);
@@ -65,7 +67,7 @@ export function RefresherCard({ r }: { r: Refresher }) {
         <FormError message={problem} />
         <FormNotice message={done} />
         <Button type="submit" disabled={busy}>
-          {busy ? "Checking…" : r.questions.length ? `Submit the refresher (pass mark ${r.passMark}%)` : "I have re-read the changes"}
+          {busy ? t("checking") : r.questions.length ? t("submitRefresher", { passMark: r.passMark }) : t("reread")}
         </Button>
       </form>
     </li>

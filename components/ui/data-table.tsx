@@ -1,5 +1,6 @@
 "use client";
 import { useState, type ReactNode } from "react";
+import { useTranslations } from "next-intl";
 import useSWR from "swr";
 import { getJson } from "@/lib/fetcher";
 import type { Paged } from "@/lib/admin/browser";
@@ -47,6 +48,7 @@ function queryString(filters: Record<string, string | undefined>, page: number, 
 
 /** A server-paginated, sortable table fetched with SWR, with loading, empty and error states (markup: ./table). */
 export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, initialSort, caption, noun, emptyText, pageSize = 25, onData }: Props<R, X>) {
+  const t = useTranslations("ui");
   const [page, setPage] = useState(1);
   const [sort, setSort] = useState<Sort>(initialSort);
   const filterKey = JSON.stringify(filters);
@@ -73,14 +75,14 @@ export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, 
       {error ? (
         <div role="alert" className="flex flex-wrap items-center gap-3 rounded border border-caution bg-caution-light px-3 py-2 text-caution">
           <span>
-            Could not load the {noun}: {(error as Error).message}
+            {t("loadFailed", { noun })} {(error as Error).message}
           </span>
           <button type="button" onClick={() => mutate()} className="min-h-11 rounded border border-caution bg-panel px-3 font-bold">
-            Try again
+            {t("tryAgain")}
           </button>
         </div>
       ) : null}
-      {!data && isLoading ? <p className="text-muted">Loading the {noun}…</p> : null}
+      {!data && isLoading ? <p className="text-muted">{t("loading", { noun })}</p> : null}
       {data && data.total === 0 ? <p className="rounded border border-line bg-panel px-3 py-4">{emptyText}</p> : null}
       {data && data.total > 0 ? (
         <>
@@ -102,7 +104,7 @@ export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, 
                     <span aria-hidden="true" className="font-mono text-xs">
                       {active ? (sort.dir === "asc" ? "▲" : "▼") : "↕"}
                     </span>
-                    <span className="sr-only">{active ? `, sorted ${sort.dir === "asc" ? "ascending" : "descending"}; sort the other way` : ", sort by this column"}</span>
+                    <span className="sr-only">{active ? t(sort.dir === "asc" ? "sortedAscending" : "sortedDescending") : t("sortBy")}</span>
                   </button>
                 ) : (
                   c.label
@@ -110,19 +112,19 @@ export function DataTable<R, X = unknown>({ endpoint, filters, columns, rowKey, 
               };
             })}
           />
-          <nav aria-label={`Pages of ${noun}`} className="flex flex-wrap items-center justify-between gap-3 text-sm">
+          <nav aria-label={t("pagesOf", { noun })} className="flex flex-wrap items-center justify-between gap-3 text-sm">
             <p>
               <span className="font-mono">
                 {first}–{last}
               </span>{" "}
-              of <span className="font-mono">{data.total}</span> {noun} · page <span className="font-mono">{data.page}</span> of <span className="font-mono">{pages}</span>
+              {t.rich("pageSummary", { noun, total: data.total, page: data.page, pages, mono: (c) => <span className="font-mono">{c}</span> })}
             </p>
             <div className="flex gap-2">
               <button type="button" disabled={page <= 1} onClick={() => setPage((p) => p - 1)} className="min-h-11 rounded border border-ink/40 bg-panel px-3 disabled:opacity-50">
-                Previous page
+                {t("previousPage")}
               </button>
               <button type="button" disabled={page >= pages} onClick={() => setPage((p) => p + 1)} className="min-h-11 rounded border border-ink/40 bg-panel px-3 disabled:opacity-50">
-                Next page
+                {t("nextPage")}
               </button>
             </div>
           </nav>

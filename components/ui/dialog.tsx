@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useEffect, useId, useRef, type KeyboardEvent } from "react";
 
 const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
@@ -9,6 +10,7 @@ const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]):not([t
  * dialog opened (WAI-ARIA Authoring Practices, "Dialog (Modal)" pattern).
  */
 export function Dialog({ open, title, onClose, children }: { open: boolean; title: string; onClose: () => void; children: React.ReactNode }) {
+  const t = useTranslations("ui");
   const ref = useRef<HTMLDialogElement>(null);
   const opener = useRef<HTMLElement | null>(null);
   const titleId = useId();
@@ -61,7 +63,7 @@ export function Dialog({ open, title, onClose, children }: { open: boolean; titl
               {title}
             </h2>
             <button type="button" onClick={onClose} className="min-h-11 rounded border border-ink/40 bg-panel px-3 text-sm">
-              Close
+              {t("close")}
             </button>
           </div>
           <div className="overflow-y-auto px-4 py-4">{children}</div>

@@ -1,9 +1,8 @@
 "use client";
 import { useEffect, useId, useRef, useState, type MouseEvent } from "react";
+import { useTranslations } from "next-intl";
 import { useFormState, type Control, type FieldValues } from "react-hook-form";
-
-/** The summary's heading: its one visible string (kept here for translation). */
-const TITLE = "There is a problem";
+import { useErrorText } from "./use-error-text";
 
 export type SummaryItem = { field: string; message: string };
 
@@ -32,6 +31,8 @@ type Line = SummaryItem & { href: string | null; label: string };
  * react-hook-form (a file input).
  */
 export function ErrorSummary<T extends FieldValues>({ control, extra = [] }: { control: Control<T>; extra?: (SummaryItem | null)[] }) {
+  const t = useTranslations("ui");
+  const errorText = useErrorText();
   const { errors, submitCount, isSubmitting } = useFormState({ control });
   const box = useRef<HTMLDivElement>(null);
   const handled = useRef(0);
@@ -41,9 +42,9 @@ export function ErrorSummary<T extends FieldValues>({ control, extra = [] }: { c
   const items: SummaryItem[] = [
     ...Object.entries(errors).flatMap(([field, e]) => {
       const message = (e as { message?: unknown } | undefined)?.message;
-      return typeof message === "string" && message ? [{ field, message }] : [];
+      return typeof message === "string" && message ? [{ field, message: errorText(message) }] : [];
     }),
-    ...extra.filter((x): x is SummaryItem => Boolean(x?.message)),
+    ...extra.filter((x): x is SummaryItem => Boolean(x?.message)).map((x) => ({ ...x, message: errorText(x.message) })),
   ];
   const key = JSON.stringify(items);
 
@@ -82,7 +83,7 @@ export function ErrorSummary<T extends FieldValues>({ control, extra = [] }: { c
       {lines.length ? (
         <>
           <h2 id={titleId} className="text-lg text-caution">
-            {TITLE}
+            {t("problemTitle")}
           </h2>
           <ul className="mt-1 list-disc pl-5">
             {lines.map((l) => (

@@ -1,10 +1,12 @@
 import { forwardRef, useId, type InputHTMLAttributes } from "react";
+import { useErrorText } from "./use-error-text";
 
 type FieldProps = InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: string };
 
 /** A labelled input with its own error, tied together for screen readers. */
 export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ label, error, hint, id, className = "", ...props }, ref) {
   const auto = useId();
+  const shown = useErrorText()(error);
   const inputId = id ?? auto;
   const errorId = `${inputId}-error`;
   const hintId = `${inputId}-hint`;
@@ -28,7 +30,7 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
       />
       {error ? (
         <p id={errorId} className="text-sm font-bold text-caution" role="alert">
-          {error}
+          {shown}
         </p>
       ) : null}
     </div>
@@ -36,19 +38,21 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
 });
 
 export function FormError({ message }: { message?: string | null }) {
-  if (!message) return null;
+  const shown = useErrorText()(message);
+  if (!shown) return null;
   return (
     <p role="alert" className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">
-      {message}
+      {shown}
     </p>
   );
 }
 
 export function FormNotice({ message }: { message?: string | null }) {
-  if (!message) return null;
+  const shown = useErrorText()(message);
+  if (!shown) return null;
   return (
     <p role="status" className="rounded border border-pass bg-pass-light px-3 py-2 text-pass">
-      {message}
+      {shown}
     </p>
   );
 }

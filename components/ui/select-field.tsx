@@ -1,10 +1,12 @@
 import { forwardRef, useId, type SelectHTMLAttributes } from "react";
+import { useErrorText } from "./use-error-text";
 
 type Option = { value: string; label: string };
 type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & { label: string; options: Option[]; error?: string; hint?: string };
 
 /** A labelled select with its own error, tied together for screen readers (same look as Field). */
 export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField({ label, options, error, hint, id, className = "", ...props }, ref) {
+  const shown = useErrorText()(error);
   const auto = useId();
   const selectId = id ?? auto;
   const described = [error ? `${selectId}-error` : null, hint ? `${selectId}-hint` : null].filter(Boolean).join(" ") || undefined;
@@ -34,7 +36,7 @@ export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function S
       </select>
       {error ? (
         <p id={`${selectId}-error`} className="text-sm font-bold text-caution" role="alert">
-          {error}
+          {shown}
         </p>
       ) : null}
     </div>

@@ -1,9 +1,11 @@
 import { forwardRef, useId, type TextareaHTMLAttributes } from "react";
+import { useErrorText } from "./use-error-text";
 
 type AreaProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; error?: string; hint?: string };
 
 /** A labelled textarea with its hint and error tied to it for screen readers (the textarea twin of Field). */
 export const TextAreaField = forwardRef<HTMLTextAreaElement, AreaProps>(function TextAreaField({ label, error, hint, id, className = "", ...props }, ref) {
+  const shown = useErrorText()(error);
   const auto = useId();
   const areaId = id ?? auto;
   const described = [error ? `${areaId}-error` : null, hint ? `${areaId}-hint` : null].filter(Boolean).join(" ") || undefined;
@@ -28,7 +30,7 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, AreaProps>(function
       />
       {error ? (
         <p id={`${areaId}-error`} className="text-sm font-bold text-caution" role="alert">
-          {error}
+          {shown}
         </p>
       ) : null}
     </div>

@@ -10,10 +10,12 @@ import { AccessError, canManageOrganization, organizationFilter, type Viewer } f
 import { DomainError } from "@/lib/errors";
 import { loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
+import { isLocale, type Locale } from "@/lib/i18n/config";
 import { renderCertificatePdf } from "./pdf";
 import { certificateById, certificatesOfOrganization, serialOf } from "./queries";
 import { revokeWithAudit } from "./revoke";
 import { certificateFileName, verificationUrl } from "./status";
+import { subjectTitleIn } from "./subject-title";
 
 /** Route ids are positive integers; anything else is simply not found. */
 export function parseCertificateId(raw: string): number | null {
@@ -35,12 +37,15 @@ export async function certificateForViewer(viewer: Viewer, rawId: string): Promi
 
 /** The PDF of a certificate as it stands now (a revoked one carries a revoked stamp). */
 export async function certificatePdf(cert: Certificate, generatedAt: Date = new Date()): Promise<{ bytes: Uint8Array; fileName: string }> {
+  // issued in the holder's language, whoever downloads it (a manager, an admin)
+  const [holder] = await db.select({ language: user.language }).from(user).where(eq(user.id, cert.userId));
+  const locale: Locale = isLocale(holder?.language) ? holder.language : "en";
   const parts =
     cert.kind === "path"
       ? (() => {
           const catalog = loadCatalog();
           const p = catalog.paths.find((x) => x.slug === cert.subjectSlug);
-          return p?.modules.map((slug) => catalog.modules.find((m) => m.slug === slug)?.meta.title ?? slug);
+          return p?.modules.map((slug) => subjectTitleIn("module", slug, catalog.modules.find((m) => m.slug === slug)?.meta.title ?? slug, locale));
         })()
       : undefined;
   const bytes = await renderCertificatePdf(
@@ -49,7 +54,7 @@ export async function certificatePdf(cert: Certificate, generatedAt: Date = new 
       holderName: cert.holderName,
       organizationName: cert.organizationName,
       kind: cert.kind,
-      subjectTitle: cert.subjectTitle,
+      subjectTitle: subjectTitleIn(cert.kind, cert.subjectSlug, cert.subjectTitle, locale),
       ceHours: Number(cert.ceHours),
       issuedAt: cert.issuedAt,
       expiresAt: cert.expiresAt,
@@ -59,7 +64,7 @@ export async function certificatePdf(cert: Certificate, generatedAt: Date = new 
       parts,
       edition: cert.edition,
     },
-    { verifyUrl: verificationUrl(env.APP_URL, cert.verificationCode), generatedAt },
+    { verifyUrl: verificationUrl(env.APP_URL, cert.verificationCode), generatedAt, locale },
   );
   return { bytes, fileName: certificateFileName(cert.serial) };
 }

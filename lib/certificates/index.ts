@@ -26,3 +26,4 @@ export * from "./status";
 export * from "./verify";
 export * from "./verify-code";
 export * from "./credential-entry";
+export { subjectTitleIn } from "./subject-title";

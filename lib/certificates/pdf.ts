@@ -7,12 +7,16 @@ import "server-only";
  * embedded only when a text needs it. Every font is subset, which keeps a page near 40 kB.
  *
  * This module needs no database or environment: callers pass the data and the verification URL.
+ * The fixed text comes from the message catalogs ("certificatePdf") in the holder's language.
  */
+import { createTranslator } from "use-intl/core";
 import { degrees, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
 import { C, createPdf, defaultFontDir } from "@/lib/pdf";
 import { palette } from "@/lib/theme";
-import { formatCertificateDate, formatHours, type CertificateKind } from "./status";
+import { INTL_TAG, type Locale } from "@/lib/i18n/config";
+import { loadMessages } from "@/lib/i18n/messages";
+import { formatHours, type CertificateKind } from "./status";
 import { formatVerificationCode } from "./verify-code";
 
 export type CertificatePdfData = {
@@ -40,6 +44,8 @@ export type CertificatePdfOptions = {
   generatedAt?: Date;
   /** folder holding the font packages (default: ./node_modules under the working directory) */
   fontDir?: string;
+  /** the holder's language: the fixed text and the dates (default English); titles come in `data` already */
+  locale?: Locale;
 };
 
 const PAGE = { width: 792, height: 612 }; // US Letter landscape, points
@@ -60,15 +66,22 @@ function drawMark(page: PDFPage, x: number, y: number, scale: number) {
 export async function renderCertificatePdf(data: CertificatePdfData, options: CertificatePdfOptions): Promise<Uint8Array> {
   const generatedAt = options.generatedAt ?? new Date();
   const { doc, t } = await createPdf(options.fontDir ?? defaultFontDir());
-  const kindWord = data.kind === "path" ? "learning path" : "module";
+  const locale = options.locale ?? "en";
+  const m = createTranslator({ locale: INTL_TAG[locale], messages: loadMessages(locale), namespace: "certificatePdf" }) as unknown as (
+    key: string,
+    values?: Record<string, string | number>,
+  ) => string;
+  const dateFormat = new Intl.DateTimeFormat(INTL_TAG[locale], { year: "numeric", month: "long", day: "numeric", timeZone: "UTC" });
+  const formatCertificateDate = (d: Date) => dateFormat.format(d);
+  const kindWord = data.kind === "path" ? m("kindPath") : m("kindModule");
 
-  doc.setTitle(`Riser certificate ${data.serial}`, { showInWindowTitleBar: true });
+  doc.setTitle(m("docTitle", { serial: data.serial }), { showInWindowTitleBar: true });
   doc.setAuthor("Riser");
-  doc.setSubject(`${data.subjectTitle} (${kindWord}) completed by ${data.holderName}`);
-  doc.setKeywords([data.serial, "certificate", "continuing education", "residential fire sprinklers"]);
+  doc.setSubject(m("docSubject", { title: data.subjectTitle, kind: kindWord, name: data.holderName }));
+  doc.setKeywords([data.serial, m("keywordCertificate"), m("keywordCe"), m("keywordSprinklers")]);
   doc.setCreator("Riser");
   doc.setProducer("Riser (pdf-lib)");
-  doc.setLanguage("en-US");
+  doc.setLanguage(INTL_TAG[locale]);
   doc.setCreationDate(generatedAt);
   doc.setModificationDate(generatedAt);
 
@@ -80,8 +93,8 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   page.drawRectangle({ x: BAND, y: 0, width: 5, height: PAGE.height, color: C["copper-bright"] });
   drawMark(page, 34, PAGE.height - 40, 2.2);
   await t.draw(page, "Riser", { x: 34, y: PAGE.height - 128, size: 30, face: "bold", color: C.paper });
-  await t.draw(page, "Training for residential", { x: 34, y: PAGE.height - 150, size: 10.5, color: C.line });
-  await t.draw(page, "fire-sprinkler work", { x: 34, y: PAGE.height - 164, size: 10.5, color: C.line });
+  await t.draw(page, m("tagline1"), { x: 34, y: PAGE.height - 150, size: 10.5, color: C.line });
+  await t.draw(page, m("tagline2"), { x: 34, y: PAGE.height - 164, size: 10.5, color: C.line });
 
   const qrSize = 128;
   const qrX = (BAND - qrSize) / 2;
@@ -98,23 +111,23 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   const qr = await doc.embedPng(png);
   page.drawRectangle({ x: qrX - 4, y: qrY - 4, width: qrSize + 8, height: qrSize + 8, color: C.panel });
   page.drawImage(qr, { x: qrX, y: qrY, width: qrSize, height: qrSize });
-  await t.draw(page, "Scan to check this", { x: BAND / 2, y: qrY - 24, size: 10.5, face: "bold", color: C.paper, align: "center" });
-  await t.draw(page, "certificate", { x: BAND / 2, y: qrY - 38, size: 10.5, face: "bold", color: C.paper, align: "center" });
+  await t.draw(page, m("scan1"), { x: BAND / 2, y: qrY - 24, size: 10.5, face: "bold", color: C.paper, align: "center" });
+  await t.draw(page, m("scan2"), { x: BAND / 2, y: qrY - 38, size: 10.5, face: "bold", color: C.paper, align: "center" });
 
   // ----- the text column -----
   const width = RIGHT - LEFT;
   let y = PAGE.height - 78;
-  const heading = data.kind === "path" ? "LEARNING PATH CERTIFICATE" : "CERTIFICATE OF COMPLETION";
+  const heading = data.kind === "path" ? m("headingPath") : m("headingModule");
   await t.draw(page, heading, { x: LEFT, y, size: 12, face: "bold", color: C.copper, spacing: 2.2 });
   const serialSize = await t.fit(data.serial, "mono", 12, 170, 8);
   const serialEnd = await t.draw(page, data.serial, { x: RIGHT, y, size: serialSize, face: "mono", color: C.ink, align: "right" });
   const serialW = await t.width(data.serial, "mono", serialSize);
-  await t.draw(page, "Serial", { x: serialEnd - serialW - 8, y, size: 9, color: C.muted, align: "right" });
+  await t.draw(page, m("serial"), { x: serialEnd - serialW - 8, y, size: 9, color: C.muted, align: "right" });
   y -= 14;
   page.drawLine({ start: { x: LEFT, y }, end: { x: LEFT + 64, y }, thickness: 3, color: C["copper-bright"] });
 
   y -= 44;
-  await t.draw(page, "This certifies that", { x: LEFT, y, size: 13, color: C.muted });
+  await t.draw(page, m("certifies"), { x: LEFT, y, size: 13, color: C.muted });
   y -= 42;
   // a name shrinks to 22 pt, then takes two lines (each shrunk further only if one word is too long)
   const nameSize = await t.fit(data.holderName, "bold", 36, width, 22);
@@ -126,11 +139,12 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   }
   if (data.organizationName) {
     y -= 22;
-    const orgSize = await t.fit(`of ${data.organizationName}`, "regular", 13, width, 9);
-    await t.draw(page, `of ${data.organizationName}`, { x: LEFT, y, size: orgSize, color: C.muted });
+    const ofOrg = m("ofOrganization", { organization: data.organizationName });
+    const orgSize = await t.fit(ofOrg, "regular", 13, width, 9);
+    await t.draw(page, ofOrg, { x: LEFT, y, size: orgSize, color: C.muted });
   }
   y -= 34;
-  const lead = data.kind === "path" ? "completed every module of the Riser learning path" : "completed the Riser training module, its lessons and its graded quiz:";
+  const lead = data.kind === "path" ? m("leadPath") : m("leadModule");
   await t.draw(page, lead, { x: LEFT, y, size: 13, color: C.muted });
   y -= 30;
   for (const line of await t.wrap(data.subjectTitle, "bold", 24, width, { maxLines: 2 })) {
@@ -138,7 +152,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
     y -= 29;
   }
   if (data.parts?.length) {
-    const partLines = await t.wrap(`Modules: ${data.parts.join(" · ")}`, "regular", 9.5, width, { maxLines: 3 });
+    const partLines = await t.wrap(m("modules", { list: data.parts.join(" · ") }), "regular", 9.5, width, { maxLines: 3 });
     for (const line of partLines) {
       await t.draw(page, line, { x: LEFT, y: y + 6, size: 9.5, color: C.muted });
       y -= 12.5;
@@ -146,7 +160,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
     y -= 4;
   }
   if (data.edition) {
-    await t.draw(page, `Taught to NFPA 13D, ${data.edition} edition (the organization's adopted edition)`, { x: LEFT, y: y + 6, size: 9.5, color: C.muted });
+    await t.draw(page, m("edition", { edition: String(data.edition) }), { x: LEFT, y: y + 6, size: 9.5, color: C.muted });
     y -= 16;
   }
 
@@ -155,9 +169,9 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
   const panelY = Math.min(y - panelH + 4, 226);
   page.drawRectangle({ x: LEFT, y: panelY, width, height: panelH, color: C.panel, borderColor: C.line, borderWidth: 1 });
   const cells: { label: string; value: string; w: number }[] = [
-    { label: "Continuing-education hours", value: formatHours(data.ceHours), w: 0.34 },
-    { label: "Issued", value: formatCertificateDate(data.issuedAt), w: 0.33 },
-    { label: "Valid until", value: formatCertificateDate(data.expiresAt), w: 0.33 },
+    { label: m("hours"), value: formatHours(data.ceHours), w: 0.34 },
+    { label: m("issued"), value: formatCertificateDate(data.issuedAt), w: 0.33 },
+    { label: m("validUntil"), value: formatCertificateDate(data.expiresAt), w: 0.33 },
   ];
   let cx = LEFT;
   for (const [i, cell] of cells.entries()) {
@@ -171,20 +185,16 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
 
   // verification
   let vy = panelY - 34;
-  await t.draw(page, "Check that this certificate is genuine and still valid at", { x: LEFT, y: vy, size: 11, color: C.ink });
+  await t.draw(page, m("checkAt"), { x: LEFT, y: vy, size: 11, color: C.ink });
   vy -= 18;
   const urlSize = await t.fit(options.verifyUrl, "mono", 11, width, 6);
   await t.draw(page, options.verifyUrl, { x: LEFT, y: vy, size: urlSize, face: "mono", color: C.water });
   vy -= 16;
-  const extra = data.renewsSerial ? `  ·  Renews certificate ${data.renewsSerial}` : "";
-  await t.draw(page, `Verification code ${formatVerificationCode(data.verificationCode)}${extra}`, { x: LEFT, y: vy, size: 9, face: "mono", color: C.muted });
+  const extra = data.renewsSerial ? `  ·  ${m("renews", { serial: data.renewsSerial })}` : "";
+  await t.draw(page, `${m("verificationCode", { code: formatVerificationCode(data.verificationCode) })}${extra}`, { x: LEFT, y: vy, size: 9, face: "mono", color: C.muted });
 
   // fine print (honest about what the hours mean and who decides)
-  const fine = [
-    "Hours are Riser's estimate of the study time for this material. Whether they count toward a licence or",
-    "registration is for the licensing body or authority having jurisdiction to decide. The verification page is",
-    "the current record: a certificate can expire or be revoked after it was printed.",
-  ];
+  const fine = [m("fine1"), m("fine2"), m("fine3")];
   let fy = 70;
   for (const line of fine) {
     await t.draw(page, line, { x: LEFT, y: fy, size: 8.5, color: C.muted });
@@ -193,7 +203,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
 
   if (data.revokedAt) {
     // a stamp across the text column; the page still shows what was revoked
-    const stamp = "REVOKED";
+    const stamp = m("stamp");
     const size = 88;
     const w = await t.width(stamp, "bold", size);
     const cx = LEFT + width / 2;
@@ -209,7 +219,7 @@ export async function renderCertificatePdf(data: CertificatePdfData, options: Ce
       opacity: 0.28,
       rotate: a,
     });
-    const note = `Revoked on ${formatCertificateDate(data.revokedAt)}. This certificate is not valid.`;
+    const note = m("revokedNote", { date: formatCertificateDate(data.revokedAt) });
     page.drawRectangle({ x: LEFT, y: PAGE.height - 46, width, height: 26, color: C["caution-light"] });
     await t.draw(page, note, { x: LEFT + 10, y: PAGE.height - 37, size: 11, face: "bold", color: C.caution });
   }

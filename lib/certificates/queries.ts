@@ -5,6 +5,8 @@ import { certificate, type Certificate } from "@/db/schema";
 import { loadCatalog, subjectTitle, type ContentLocale } from "@/lib/content";
 import { parseVerifyInput } from "./verify-code";
 import { certificateStatus, isExpiringSoon, type CertificateKind, type CertificateStatus } from "./status";
+import { subjectTitleIn } from "./subject-title";
+import type { Locale } from "@/lib/i18n/config";
 
 /** What the holder's own list shows (no verification secrets of others, no audit detail). */
 export type HolderCertificate = {
@@ -68,7 +70,8 @@ export type PublicVerification = {
   status: CertificateStatus;
 };
 
-export async function verificationByCode(input: string, now: Date = new Date()): Promise<PublicVerification | null> {
+/** `locale`: the viewer's language, in which the module or path is named (the same slug in every language). */
+export async function verificationByCode(input: string, now: Date = new Date(), locale: Locale = "en"): Promise<PublicVerification | null> {
   // A code (new grouped form, old base64url form, or a pasted link) or the certificate's serial.
   const lookup = parseVerifyInput(input);
   if (!lookup) return null;
@@ -77,6 +80,7 @@ export async function verificationByCode(input: string, now: Date = new Date()):
       serial: certificate.serial,
       holderName: certificate.holderName,
       title: certificate.subjectTitle,
+      slug: certificate.subjectSlug,
       kind: certificate.kind,
       ceHours: certificate.ceHours,
       issuedAt: certificate.issuedAt,
@@ -91,7 +95,7 @@ export async function verificationByCode(input: string, now: Date = new Date()):
   return {
     serial: c.serial,
     holderName: c.holderName,
-    title: c.title,
+    title: subjectTitleIn(c.kind, c.slug, c.title, locale),
     kind: c.kind,
     ceHours: Number(c.ceHours),
     issuedAt: c.issuedAt.toISOString(),

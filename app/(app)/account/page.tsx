@@ -1,4 +1,7 @@
 import type { Metadata } from "next";
+import { getLocale, getTranslations } from "next-intl/server";
+import { LanguageForm } from "@/components/account/language-form";
+import { localeOf } from "@/lib/i18n/config";
 import { EmailForm, NameForm } from "@/components/account/profile-forms";
 import { PasswordForm } from "@/components/account/password-form";
 import { TwoFactorForm } from "@/components/account/two-factor-form";
@@ -10,55 +13,61 @@ import { FormError, FormNotice } from "@/components/ui/field";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 
-export const metadata: Metadata = { title: "Account" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("account"))("title") };
+}
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireViewer("signed-in", "/account");
   const params = await searchParams;
+  const [t, locale] = await Promise.all([getTranslations("account"), getLocale()]);
   const emailChanged = params.email === "changed" && !params.error;
   const linkError = typeof params.error === "string" ? params.error : null;
   return (
     <>
-      <PageTitle title="Account" lead="Your name and e-mail, your password, where you are signed in, and a copy of your training records." />
+      <PageTitle title={t("title")} lead={t("lead")} />
       <div className="flex flex-col gap-8">
-        {emailChanged ? <FormNotice message={`Your e-mail address is now ${viewer.email}.`} /> : null}
-        {linkError ? <FormError message="That confirmation link has expired or was already used. Ask for a new one below." /> : null}
-        <Section id="details-h" title="Your details">
+        {emailChanged ? <FormNotice message={t("emailNow", { email: viewer.email })} /> : null}
+        {linkError ? <FormError message={t("linkUsed")} /> : null}
+        <Section id="details-h" title={t("details")}>
           <div className="grid gap-8 lg:grid-cols-2">
             <NameForm name={viewer.name} />
             <div className="flex flex-col gap-3">
-              <h3 className="text-lg">E-mail address</h3>
+              <h3 className="text-lg">{t("emailAddress")}</h3>
               <EmailForm email={viewer.email} />
             </div>
           </div>
         </Section>
-        <Section id="password-h" title="Password" lead="Enter your current password to choose a new one. Forgot it? Sign out and use “Forgot your password?” on the sign-in page.">
+        <Section id="language-h" title={t("language")} lead={t("languageLead")}>
+          <LanguageForm current={localeOf(locale)} />
+        </Section>
+        <Section id="password-h" title={t("password")} lead={t("passwordLead")}>
           <PasswordForm />
         </Section>
         <Section
           id="two-factor-h"
-          title="Two-step sign-in"
-          lead="After your password, Riser also asks for a 6-digit code from an authenticator app on your phone, so a stolen password alone does not open your account."
+          title={t("twoStep")}
+          lead={t("twoStepLead")}
         >
           <TwoFactorForm enabled={viewer.twoFactorEnabled} required={viewer.role === "admin" || viewer.secondFactorMissing} />
         </Section>
-        <Section id="sessions-h" title="Where you are signed in" lead="Each browser or device you signed in with. Sign out the others if you used a shared computer or lost a phone.">
+        <Section id="sessions-h" title={t("sessions")} lead={t("sessionsLead")}>
           <SessionsList initial={asJson({ sessions: await listOwnSessions(viewer.id, viewer.sessionId) })} />
         </Section>
         <Section
           id="records-h"
-          title="Download my records"
-          lead="A copy of your own training records on Riser: lessons done, quiz attempts and scores, module completions, certificates and practical sign-offs."
+          title={t("records")}
+          lead={t("recordsLead")}
         >
           <ul className="flex flex-wrap gap-3">
             <li>
               <a href="/api/account/records?format=csv" download className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 font-bold text-ink no-underline hover:bg-paper">
-                Download as CSV (spreadsheet)
+                {t("recordsCsv")}
               </a>
             </li>
             <li>
               <a href="/api/account/records?format=json" download className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 font-bold text-ink no-underline hover:bg-paper">
-                Download as JSON
+                {t("recordsJson")}
               </a>
             </li>
           </ul>

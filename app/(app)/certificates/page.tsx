@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
-import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
+import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { RevokeForm } from "@/components/certificates/revoke-form";
 import { StatusBadge } from "@/components/certificates/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
@@ -9,22 +8,30 @@ import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
-import { formatCertificateDate, formatHours } from "@/lib/certificates";
-import { plural, pluralNoun } from "@/lib/plural";
+import { formatHours, subjectTitleIn } from "@/lib/certificates";
+import { localeOf } from "@/lib/i18n/config";
 import { ReportingPeriodForm } from "@/components/credentials/reporting-period-form";
 import { buttonLinkClass } from "@/components/ui/button";
-import { describeSetting, periodSettingOf } from "@/lib/credentials";
+import { periodSettingOf } from "@/lib/credentials";
+import { describePeriod } from "@/components/credentials/describe-period";
 
-export const metadata: Metadata = { title: "Certificates" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("certificates"))("title") };
+}
 
 export default async function CertificatesPage() {
   const viewer = await requireViewer("signed-in", "/certificates");
   const now = new Date();
-  const [mine, revocable, period] = await Promise.all([
-    certificatesOfHolder(viewer.id, now, localeOf(await getLocale())),
+  const [t, format] = await Promise.all([getTranslations("certificates"), getFormatter()]);
+  const longDate = (d: Date) => format.dateTime(d, { year: "numeric", month: "long", day: "numeric" });
+  const locale = localeOf(await getLocale());
+  const [held, revocable, period] = await Promise.all([
+    certificatesOfHolder(viewer.id, now, locale),
     revocableCertificates(viewer, now),
     periodSettingOf(viewer.organizationId ?? null),
   ]);
+  // each module or path is named in the reader's language (certificatesOfHolder, by slug)
+  const mine = held;
   const current = mine.filter((c) => c.status === "valid");
   const past = mine.filter((c) => c.status !== "valid");
   // one certificate per module counts (a renewal and the one it renews may both be valid for a while)
@@ -34,26 +41,24 @@ export default async function CertificatesPage() {
   return (
     <>
       <PageTitle
-        title="Certificates"
-        lead="Every module you complete earns a certificate with its continuing-education hours; finishing all modules of a learning path earns one for the path. Share the link so that anyone can check it."
+        title={t("title")}
+        lead={t("lead")}
       />
       {mine.length === 0 ? (
         <div className="max-w-prose rounded border border-line bg-panel p-4" data-testid="certificates-empty">
-          <p className="font-bold">No certificates yet.</p>
-          <p className="mt-2">
-            Finish a module&apos;s lessons and pass its quiz to earn the first one. <Link href="/modules">Browse the modules</Link>
-          </p>
+          <p className="font-bold">{t("none")}</p>
+          <p className="mt-2">{t.rich("noneHow", { link: (c) => <Link href="/modules">{c}</Link> })}</p>
         </div>
       ) : (
         <>
           <section aria-labelledby="current-heading">
             <h2 id="current-heading" className="text-2xl">
-              Valid now
+              {t("validNow")}
             </h2>
             <p className="mt-1 text-muted" data-testid="certificates-summary">
-              {plural(current.length, "valid certificate")} · {formatHours(hours)} {pluralNoun(hours, "CE hour")} from modules
+              {t("summary", { count: current.length, hours: Number(formatHours(hours)) })}
             </p>
-            {current.length === 0 ? <p className="mt-3">None of your certificates is valid today.</p> : null}
+            {current.length === 0 ? <p className="mt-3">{t("noneValid")}</p> : null}
             <ul className="mt-4 grid gap-4 lg:grid-cols-2">
               {current.map((c) => (
                 <CertificateCard key={c.id} c={c} now={now} />
@@ -63,7 +68,7 @@ export default async function CertificatesPage() {
           {past.length ? (
             <section aria-labelledby="past-heading" className="mt-10">
               <h2 id="past-heading" className="text-2xl">
-                Expired and revoked
+                {t("expiredRevoked")}
               </h2>
               <ul className="mt-4 grid gap-4 lg:grid-cols-2">
                 {past.map((c) => (
@@ -76,42 +81,39 @@ export default async function CertificatesPage() {
       )}
       <section aria-labelledby="history-heading" className="mt-10">
         <h2 id="history-heading" className="text-2xl">
-          Training history
+          {t("history")}
         </h2>
         <p className="mt-1 max-w-prose text-muted">
-          One document with every certificate and module completion, its status and verification code, and your CE hours totalled by{" "}
-          {describeSetting(period)}.
+          {t("historyLead", { period: describePeriod(period, t, format) })}
         </p>
         <p className="mt-3 flex flex-wrap gap-3">
           <a href="/api/account/training-history?format=pdf" className={buttonLinkClass} download>
-            Training history (PDF)
+            {t("historyPdf")}
           </a>
           <a href="/api/account/training-history?format=csv" className={buttonLinkClass} download>
-            Training history (CSV)
+            {t("historyCsv")}
           </a>
         </p>
       </section>
       <p className="mt-8 max-w-prose text-sm text-muted">
-        Hours are Riser&apos;s estimate of the study time for each module. Whether they count toward a licence or registration is for
-        your licensing body or the authority having jurisdiction to decide.
+        {t("hoursNote")}
       </p>
 
       {viewer.role === "manager" || viewer.role === "admin" ? (
         <section aria-labelledby="revoke-heading" className="mt-10">
           <h2 id="revoke-heading" className="text-2xl">
-            {viewer.role === "admin" ? "Certificates in all organizations" : "Certificates in your organization"}
+            {viewer.role === "admin" ? t("allOrgs") : t("yourOrg")}
           </h2>
           <p className="mt-1 max-w-prose text-muted">
-            Revoke a certificate that was earned improperly or issued in error. The reason is required and is kept in the audit log; the
-            public check then shows the certificate as revoked.
+            {t("revokeLead")}
           </p>
           {viewer.role === "manager" && viewer.organizationId ? (
             <div className="mt-4">
-              <h3 className="mb-2 text-xl">Reporting period for CE hours</h3>
-              <ReportingPeriodForm current={period} text={describeSetting(period)} />
+              <h3 className="mb-2 text-xl">{t("reportingPeriod")}</h3>
+              <ReportingPeriodForm current={period} text={describePeriod(period, t, format)} />
             </div>
           ) : null}
-          {revocable.length === 0 ? <p className="mt-3">No certificates to show.</p> : null}
+          {revocable.length === 0 ? <p className="mt-3">{t("noneToShow")}</p> : null}
           <ul className="mt-4 flex flex-col gap-3">
             {revocable.map((c) => (
               <li key={c.id} className="flex flex-wrap items-start justify-between gap-3 rounded border border-line bg-panel p-3" data-testid={`org-certificate-${c.serial}`}>
@@ -120,8 +122,8 @@ export default async function CertificatesPage() {
                     {c.holderName} · {c.subjectTitle}
                   </p>
                   <p className="text-sm text-muted">
-                    <span className="font-mono">{c.serial}</span> · {viewer.role === "admin" && c.organizationName ? `${c.organizationName} · ` : ""}{c.status === "expired" ? "expired" : "valid until"}{" "}
-                    {formatCertificateDate(c.expiresAt)}
+                    <span className="font-mono">{c.serial}</span> · {viewer.role === "admin" && c.organizationName ? `${c.organizationName} · ` : ""}{c.status === "expired" ? t("expiredLower") : t("validUntilLower")}{" "}
+                    {longDate(c.expiresAt)}
                   </p>
                 </div>
                 <div className="flex flex-wrap items-start gap-2">

@@ -1,28 +1,29 @@
 import type { Metadata } from "next";
-import { localeOf } from "@/lib/i18n/config";
-import { getLocale } from "next-intl/server";
 import Link from "next/link";
+import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
+import { localeOf } from "@/lib/i18n/config";
 import { localizedModule, type ContentLocale } from "@/lib/content";
 import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team";
 import type { BoardCell } from "@/lib/team";
-import { isoDay, weekdayShortDate } from "@/lib/dates";
 import { FirstDayChecklist } from "@/components/team/first-day";
 import { firstDayCounts } from "@/lib/team";
 import { firstDaySteps, showFirstDay } from "@/lib/team";
 import { RefresherCard } from "@/components/refreshers/refresher-card";
 import { refreshersOf } from "@/lib/refreshers";
 
-export const metadata: Metadata = { title: "My training" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("learn"))("metaTitle") };
+}
 
-const day = (iso: string) => weekdayShortDate(iso);
+type T = Awaited<ReturnType<typeof getTranslations<"learn">>>;
 
 /** Where "continue" leads: the lesson after the last one done, else that module's quiz, else the next assigned module. */
-function continueTarget(last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number, locale: ContentLocale): { href: string; label: string } | null {
+function continueTarget(t: T, last: { module: string; lesson: string } | null, items: AssignedItem[], lessonsDone: (m: string) => number, locale: ContentLocale): { href: string; label: string } | null {
   if (last) {
     const mod = localizedModule(last.module, locale);
     if (mod) {
@@ -30,7 +31,7 @@ function continueTarget(last: { module: string; lesson: string } | null, items: 
       const next = mod.lessons[i + 1];
       if (next) return { href: `/modules/${mod.slug}/${next.slug}`, label: `${mod.meta.title}: ${next.meta.title}` };
       if (lessonsDone(mod.slug) >= mod.lessons.length && !items.some((it) => it.kind === "module" && it.slug === mod.slug && (it.status === "passed" || it.status === "expiring"))) {
-        return { href: `/modules/${mod.slug}/quiz`, label: `${mod.meta.title}: the quiz` };
+        return { href: `/modules/${mod.slug}/quiz`, label: t("theQuiz", { module: mod.meta.title }) };
       }
     }
   }
@@ -41,12 +42,14 @@ function continueTarget(last: { module: string; lesson: string } | null, items: 
 
 export default async function LearnPage() {
   const viewer = await requireViewer("signed-in", "/learn");
+  const [t, format, tag] = await Promise.all([getTranslations("learn"), getFormatter(), getLocale()]);
+  const day = (iso: string) => format.dateTime(new Date(iso), { weekday: "short", month: "short", day: "numeric", year: "numeric" });
   const person = viewer.organizationId
     ? { id: viewer.id, name: viewer.name, email: viewer.email, role: viewer.role, teamId: viewer.teamId, team: null, organizationId: viewer.organizationId }
     : null;
-  const locale = localeOf(await getLocale());
+  const locale = localeOf(tag);
   const [work, last, certs, refreshers] = await Promise.all([person ? assignedWork(person, new Date(), locale) : Promise.resolve({ items: [] as AssignedItem[], cells: {} as Record<string, BoardCell> }), lastCompletedLesson(viewer.id), certificatesOfHolder(viewer.id, new Date(), locale), refreshersOf(viewer, locale)]);
-  const next = continueTarget(last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0, locale);
+  const next = continueTarget(t, last, work.items, (m) => work.cells[m]?.lessonsDone ?? 0, locale);
   // A manager whose organization is not set up yet lands on the first-day checklist.
   const counts = viewer.role === "manager" && viewer.organizationId ? await firstDayCounts(viewer.organizationId) : null;
   const firstDay = counts && showFirstDay(viewer.role, counts) ? firstDaySteps(counts) : null;
@@ -55,15 +58,15 @@ export default async function LearnPage() {
   return (
     <>
       <PageTitle
-        title={`Hello, ${viewer.name}`}
-        lead={firstDay ? "Set up your crew first; your own training is below." : "Your assigned work, where you left off, and your certificates."}
+        title={t("hello", { name: viewer.name })}
+        lead={firstDay ? t("leadFirstDay") : t("lead")}
       />
       {firstDay ? <FirstDayChecklist steps={firstDay} /> : null}
 
       {refreshers.length ? (
         <section aria-labelledby="refreshers" className="mb-8">
-          <h2 id="refreshers" className="mb-1 text-2xl">Refresher due</h2>
-          <p className="mb-3 text-muted">Lessons you completed have changed. Your certificates stay valid.</p>
+          <h2 id="refreshers" className="mb-1 text-2xl">{t("refresherDue")}</h2>
+          <p className="mb-3 text-muted">{t("refresherLead")}</p>
           <ul className="flex flex-col gap-3">
             {refreshers.map((r) => (
               <RefresherCard key={r.module} r={r} />
@@ -74,7 +77,7 @@ export default async function LearnPage() {
 
       {next ? (
         <section aria-labelledby="resume" className="mb-8 rounded border border-water/40 bg-water-light p-4">
-          <h2 id="resume" className="text-xl">{last ? "Continue where you left off" : "Start here"}</h2>
+          <h2 id="resume" className="text-xl">{last ? t("continue") : t("startHere")}</h2>
           <p className="mt-2">
             <Link href={next.href} className="font-bold">
               {next.label} →
@@ -84,13 +87,11 @@ export default async function LearnPage() {
       ) : null}
 
       <section aria-labelledby="assigned" className="mb-8">
-        <h2 id="assigned" className="mb-3 text-2xl">Assigned to you</h2>
+        <h2 id="assigned" className="mb-3 text-2xl">{t("assigned")}</h2>
         {work.items.length === 0 ? (
-          <p>
-            Nothing is assigned to you right now. <Link href="/modules">Browse the modules</Link> to learn at your own pace.
-          </p>
+          <p>{t.rich("nothingAssigned", { link: (c) => <Link href="/modules">{c}</Link> })}</p>
         ) : (
-          <ol className="flex flex-col gap-2" aria-label="Assigned work, soonest due first">
+          <ol className="flex flex-col gap-2" aria-label={t("assignedLabel")}>
             {work.items.map((i) => (
               <li key={i.id} className="flex flex-wrap items-center gap-x-4 gap-y-1 rounded border border-line bg-panel px-3 py-3">
                 <StatusBadge status={i.status} />
@@ -98,8 +99,8 @@ export default async function LearnPage() {
                   {i.title}
                 </Link>
                 <span className="text-sm text-muted">
-                  {i.kind === "path" ? `Learning path · ${i.modulesDone} of ${i.modules} modules passed` : "Module"} · due <span className="font-mono">{day(i.dueAt)}</span>
-                  {i.via === "team" ? " · for your team" : ""}
+                  {i.kind === "path" ? t("pathProgress", { done: i.modulesDone, total: i.modules }) : t("module")} · {t("due")} <span className="font-mono">{day(i.dueAt)}</span>
+                  {i.via === "team" ? ` · ${t("forTeam")}` : ""}
                 </span>
               </li>
             ))}
@@ -108,20 +109,20 @@ export default async function LearnPage() {
       </section>
 
       <section aria-labelledby="certs" className="mb-8">
-        <h2 id="certs" className="mb-3 text-2xl">Your certificates</h2>
+        <h2 id="certs" className="mb-3 text-2xl">{t("yourCertificates")}</h2>
         {shownCerts.length === 0 ? (
-          <p>None yet: finish a module&apos;s lessons and pass its quiz to earn one.</p>
+          <p>{t("noCertificates")}</p>
         ) : (
           <ul className="mb-2 flex flex-col gap-1">
             {shownCerts.map((c) => (
               <li key={c.id}>
-                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? "expired" : c.expiringSoon ? "expires soon," : "valid until"} <span className="font-mono">{isoDay(c.expiresAt)}</span></span>
+                {c.subjectTitle} <span className="text-sm text-muted">· {c.status === "expired" ? t("expired") : c.expiringSoon ? t("expiresSoon") : t("validUntil")} <span className="font-mono">{format.dateTime(new Date(c.expiresAt), "short")}</span></span>
               </li>
             ))}
           </ul>
         )}
         <p>
-          <Link href="/certificates">All your certificates</Link> · <Link href="/modules">Browse the modules</Link>
+          <Link href="/certificates">{t("allCertificates")}</Link> · <Link href="/modules">{t("browseModules")}</Link>
         </p>
       </section>
     </>

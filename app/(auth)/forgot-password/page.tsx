@@ -1,13 +1,17 @@
 import type { Metadata } from "next";
+import { getTranslations } from "next-intl/server";
 import { ForgotPasswordForm } from "@/components/auth/password-forms";
 import { PageTitle } from "@/components/ui/page-title";
 
-export const metadata: Metadata = { title: "Forgot password" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("auth"))("forgotMeta") };
+}
 
-export default function ForgotPasswordPage() {
+export default async function ForgotPasswordPage() {
+  const t = await getTranslations("auth");
   return (
     <>
-      <PageTitle title="Reset your password" lead="We will mail you a link to choose a new one." />
+      <PageTitle title={t("forgotTitle")} lead={t("forgotLead")} />
       <ForgotPasswordForm />
     </>
   );

@@ -1,14 +1,18 @@
 import type { Metadata } from "next";
+import { getTranslations } from "next-intl/server";
 import { Suspense } from "react";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { PageTitle } from "@/components/ui/page-title";
 
-export const metadata: Metadata = { title: "Sign in" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("auth"))("signIn") };
+}
 
-export default function SignInPage() {
+export default async function SignInPage() {
+  const t = await getTranslations("auth");
   return (
     <>
-      <PageTitle title="Sign in" lead="Pick up your training where you left it." />
+      <PageTitle title={t("signIn")} lead={t("signInLead")} />
       <Suspense>
         <SignInForm />
       </Suspense>

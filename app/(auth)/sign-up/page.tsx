@@ -1,13 +1,17 @@
 import type { Metadata } from "next";
+import { getTranslations } from "next-intl/server";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { PageTitle } from "@/components/ui/page-title";
 
-export const metadata: Metadata = { title: "Create an account" };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("auth"))("signUpMeta") };
+}
 
-export default function SignUpPage() {
+export default async function SignUpPage() {
+  const t = await getTranslations("auth");
   return (
     <>
-      <PageTitle title="Create an account for your company" lead="Set up Riser for your crews or your sales office. Invited by your company? Use the link in your invitation instead." />
+      <PageTitle title={t("signUpTitle")} lead={t("signUpLead")} />
       <SignUpForm />
     </>
   );

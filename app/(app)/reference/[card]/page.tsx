@@ -6,6 +6,7 @@ import { cards as enCards, esCards } from "@/content/.generated/registry";
 import { lessonComponents } from "@/components/lesson/mdx";
 import { termFor } from "@/components/lesson/term";
 import { LocalRules, editionComponents } from "@/components/lesson/edition";
+import { editionText } from "@/components/lesson/lesson-text";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { requireViewer } from "@/lib/access";
 import { cardText, lessonTitle } from "@/lib/content";
@@ -15,7 +16,7 @@ type Params = { params: Promise<{ card: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
   const { card } = await params;
-  return { title: cardText(card, localeOf(await getLocale()))?.meta.title ?? "Code card" };
+  return { title: cardText(card, localeOf(await getLocale()))?.meta.title ?? (await getTranslations("reference"))("card") };
 }
 
 export default async function CardPage({ params }: Params) {
@@ -28,18 +29,19 @@ export default async function CardPage({ params }: Params) {
   if (!card || !load) notFound();
   const { default: Body } = await load();
   const [code, rules] = await Promise.all([adoptedCode(viewer.organizationId), localRulesFor(viewer.organizationId, [card.meta.topic])]);
+  const [t, tm, editions] = await Promise.all([getTranslations("reference"), getTranslations("modules"), editionText()]);
   return (
     <article className="flex flex-col gap-5">
-      <nav aria-label="Breadcrumb" className="text-sm"><Link href="/reference">Code-reference cards</Link></nav>
+      <nav aria-label={tm("breadcrumb")} className="text-sm"><Link href="/reference">{t("title")}</Link></nav>
       <header>
         <h1 className="text-3xl">{card.meta.title}</h1>
         <p className="mt-2 max-w-prose text-lg text-muted">{card.meta.summary}</p>
       </header>
-      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>Edition note:</strong> {card.meta.edition}{code ? ` Your organization works to NFPA 13D ${code.edition}: passages for it show first.` : null}</p>
+      <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note"><strong>{tm("editionNote")}</strong> {card.meta.edition}{code ? ` ${t("orgEdition", { edition: code.edition })}` : null}</p>
       <LocalRules rules={rules} />
-      <div className="prose-riser"><Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null) }} /></div>
+      <div className="prose-riser"><Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null, editions) }} /></div>
       <section aria-labelledby="related" className="max-w-prose">
-        <h2 id="related" className="text-xl">Related lessons</h2>
+        <h2 id="related" className="text-xl">{t("related")}</h2>
         <ul className="mt-2 list-disc pl-6">
           {card.meta.relatedLessons.map((rl) => {
             const [m, l] = rl.split("/") as [string, string];
@@ -48,9 +50,9 @@ export default async function CardPage({ params }: Params) {
         </ul>
       </section>
       <section aria-labelledby="sources" className="max-w-prose text-sm">
-        <h2 id="sources" className="text-lg">Sources</h2>
+        <h2 id="sources" className="text-lg">{t("sources")}</h2>
         <ul className="mt-2 list-disc pl-6">{card.meta.sources.map((s) => <li key={s}>{s}</li>)}</ul>
-        <p className="mt-2 text-muted">Updated {card.meta.updated}.</p>
+        <p className="mt-2 text-muted">{t("updated", { date: card.meta.updated })}</p>
       </section>
     </article>
   );

@@ -1,35 +1,42 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { getFormatter, getTranslations } from "next-intl/server";
 import { AcceptInviteForm } from "@/components/team/accept-invite-form";
 import { PageTitle } from "@/components/ui/page-title";
-import { lookupInvite, refusalText } from "@/lib/team";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team";
+import { INVITE_DAYS, lookupInvite } from "@/lib/team";
 
-export const metadata: Metadata = { title: "Your invitation", robots: { index: false } };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations("auth"))("inviteMeta"), robots: { index: false } };
+}
+
+const ROLES = ["learner", "sales", "manager"] as const;
 
 export default async function AcceptInvitePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const found = await lookupInvite(token);
+  const [found, t, format] = await Promise.all([lookupInvite(token), getTranslations("auth"), getFormatter()]);
   if (found.state !== "ok") {
-    const r = refusalText(found);
+    const state = found.state === "used" || found.state === "revoked" || found.state === "expired" ? found.state : "invalid";
+    const expiresAt = "expiresAt" in found && found.expiresAt instanceof Date ? found.expiresAt : null;
+    const values = { date: expiresAt ? format.dateTime(expiresAt, { year: "numeric", month: "long", day: "numeric" }) : "", days: INVITE_DAYS };
     return (
       <div className="max-w-prose" data-invite-state={found.state}>
-        <PageTitle title={r.title} />
+        <PageTitle title={t(`invite.${state}.title`)} />
         <p role="alert" className="mb-4 rounded border border-caution bg-caution-light px-3 py-2 text-caution">
-          {r.message}
+          {t(`invite.${state}.message`, values)}
         </p>
         <p>
-          <Link href="/sign-in">Sign in</Link> · <Link href="/">Riser home</Link>
+          <Link href="/sign-in">{t("signIn")}</Link> · <Link href="/">{t("home")}</Link>
         </p>
       </div>
     );
   }
   const inv = found.invite;
+  const role = (ROLES as readonly string[]).includes(inv.role) ? t(`role.${inv.role as (typeof ROLES)[number]}`) : inv.role;
   return (
     <>
       <PageTitle
-        title={`Join ${found.orgName} on Riser`}
-        lead={`You are invited as ${ROLE_LABELS[inv.role as InviteRole]?.toLowerCase() ?? inv.role}${found.teamName ? ` in ${found.teamName}` : ""}. Choose your password to start training.`}
+        title={t("joinTitle", { org: found.orgName })}
+        lead={found.teamName ? t("invitedAsIn", { role, team: found.teamName }) : t("invitedAs", { role })}
       />
       <AcceptInviteForm token={token} email={inv.email} name={inv.name ?? ""} />
     </>

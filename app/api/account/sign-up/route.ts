@@ -1,4 +1,5 @@
 import { ApiError, clientIp, json, readJson, route } from "@/lib/api";
+import { inRequestLanguage } from "@/lib/i18n/localize-error";
 import { createOrganizationWithManager } from "@/lib/accounts";
 import { signUpSchema } from "@/lib/auth";
 import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth";
@@ -8,7 +9,7 @@ import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCo
  * mail. Rate limited per client and per address; an unverified account on the address is replaced;
  * the answer's cookie marks this browser as the one that chose the password (lib/auth/signup.ts).
  */
-export const POST = route("public", async ({ req }) => {
+export const POST = inRequestLanguage(route("public", async ({ req }) => {
   const input = await readJson(req, signUpSchema);
   const limit = await hitSignupLimits(clientIp(req), input.email);
   if (!limit.allowed) return json({ error: limit.message }, { status: 429, headers: { "Retry-After": String(limit.retryAfterSeconds) } });
@@ -17,4 +18,4 @@ export const POST = route("public", async ({ req }) => {
   if (!result.ok) throw new ApiError(400, result.message, result.fieldErrors);
   const nonce = await rememberSignupBrowser(result.userId);
   return json({ ok: true, message: "Check your e-mail: we sent a link to confirm the address." }, { status: 201, headers: { "Set-Cookie": signupCookie(nonce) } });
-});
+}));

@@ -1,6 +1,7 @@
 import { toNextJsHandler } from "better-auth/next-js";
 import { auth } from "@/lib/auth";
 import { errorResponse, json } from "@/lib/api";
+import { inRequestLanguage } from "@/lib/i18n/localize-error";
 
 const handlers = toNextJsHandler(auth);
 
@@ -23,7 +24,8 @@ export async function GET(req: Request) {
     return errorResponse(err);
   }
 }
-export async function POST(req: Request) {
+// sign-in, sign-up and password-reset refusals of Riser's own (a paused sign-in) in the request's language
+export const POST = inRequestLanguage(async function post(req: Request) {
   const blocked = adminPath(req);
   if (blocked) return blocked;
   try {
@@ -31,7 +33,7 @@ export async function POST(req: Request) {
   } catch (err) {
     return errorResponse(err);
   }
-}
+});
 
 /**
  * After sign-out the browser drops what this origin stored (lesson pages kept for offline use,

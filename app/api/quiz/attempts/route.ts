@@ -1,15 +1,16 @@
 import { getLocale } from "next-intl/server";
 import { z } from "zod";
 import { ApiError, json, readJson, route } from "@/lib/api";
+import { inRequestLanguage } from "@/lib/i18n/localize-error";
 import { slug } from "@/lib/content";
 import { localeOf } from "@/lib/i18n/config";
 import { listAttempts, listOrganizationAttempts, startAttempt } from "@/lib/quiz";
 
 /** POST /api/quiz/attempts { module } → starts (or resumes) an attempt; questions only, no answers. */
-export const POST = route("signed-in", async ({ req, viewer }) => {
+export const POST = inRequestLanguage(route("signed-in", async ({ req, viewer }) => {
   const { module } = await readJson(req, z.object({ module: slug }));
   return json(await startAttempt(viewer, module, localeOf(await getLocale())), 201);
-});
+}));
 
 /** GET /api/quiz/attempts?module=&userId= (own or a managed person's) or ?organizationId= (managers). */
 export const GET = route("signed-in", async ({ req, viewer }) => {

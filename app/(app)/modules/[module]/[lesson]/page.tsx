@@ -7,6 +7,7 @@ import { MarkComplete } from "@/components/lesson/mark-complete";
 import { lessonComponents } from "@/components/lesson/mdx";
 import { termFor } from "@/components/lesson/term";
 import { LocalRules, editionComponents } from "@/components/lesson/edition";
+import { editionText } from "@/components/lesson/lesson-text";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { lessonChangesDue } from "@/lib/refreshers";
 import { requireViewer } from "@/lib/access";
@@ -23,7 +24,7 @@ type Params = { params: Promise<{ module: string; lesson: string }> };
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
   const { module, lesson } = await params;
   const l = localizedModule(module, localeOf(await getLocale()))?.lessons.find((x) => x.slug === lesson);
-  return { title: l?.meta.title ?? "Lesson" };
+  return { title: l?.meta.title ?? (await getTranslations("modules"))("lesson") };
 }
 
 export default async function LessonPage({ params }: Params) {
@@ -45,21 +46,22 @@ export default async function LessonPage({ params }: Params) {
     localRulesFor(viewer.organizationId, lessonTopics(mod.slug, lesson.slug)),
     lessonChangesDue(viewer, mod.slug, lesson.slug),
   ]);
+  const [t, editions] = await Promise.all([getTranslations("modules"), editionText()]);
 
   return (
     <article className="flex flex-col gap-6">
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href="/modules">Modules</Link> / <Link href={`/modules/${mod.slug}`}>{mod.meta.title}</Link>
+      <nav aria-label={t("breadcrumb")} className="text-sm">
+        <Link href="/modules">{t("metaTitle")}</Link> / <Link href={`/modules/${mod.slug}`}>{mod.meta.title}</Link>
       </nav>
       <header>
         <p className="font-mono text-sm text-muted">
-          Lesson {index + 1} of {mod.lessons.length} · {lesson.meta.minutes} min
+          {t("lessonOf", { n: index + 1, total: mod.lessons.length, minutes: lesson.meta.minutes })}
         </p>
         <h1 className="mt-1 text-3xl sm:text-4xl">{lesson.meta.title}</h1>
         <p className="mt-2 max-w-prose text-lg text-muted">{lesson.meta.summary}</p>
       </header>
       <section aria-labelledby="objectives" className="max-w-prose rounded border border-line bg-panel p-4">
-        <h2 id="objectives" className="text-lg">After this lesson you can</h2>
+        <h2 id="objectives" className="text-lg">{t("objectives")}</h2>
         <ul className="mt-2 list-disc pl-6">
           {lesson.meta.objectives.map((o) => (
             <li key={o}>{o}</li>
@@ -67,34 +69,34 @@ export default async function LessonPage({ params }: Params) {
         </ul>
       </section>
       <p className="max-w-prose border-l-4 border-copper pl-3 text-sm" data-testid="edition-note">
-        <strong>Edition note:</strong> {lesson.meta.edition}
-        {code ? ` Your organization works to NFPA 13D ${code.edition} (${code.name}, ${code.state}${code.ircP2904 ? "; IRC P2904 in force" : ""}): passages for it show first.` : null}
+        <strong>{t("editionNote")}</strong> {lesson.meta.edition}
+        {code ? ` ${t(code.ircP2904 ? "orgEditionIrc" : "orgEdition", { edition: code.edition, name: code.name, state: code.state })}` : null}
       </p>
       {changes.map((c) => (
         <p key={c.id} className="max-w-prose rounded border-l-4 border-copper bg-copper-light p-3" data-testid="lesson-change">
-          <strong>Changed since you completed it:</strong> <mark className="bg-transparent font-bold">{c.whatChanged}</mark>
+          <strong>{t("changedSince")}</strong> <mark className="bg-transparent font-bold">{c.whatChanged}</mark>
         </p>
       ))}
       <LocalRules rules={rules} />
       <div className="prose-riser">
-        <Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null) }} />
+        <Body components={{ ...lessonComponents, Term: termFor(locale, (term) => tc("englishTerm", { term })), ...editionComponents(code?.edition ?? null, editions) }} />
       </div>
       <section aria-labelledby="sources" className="max-w-prose text-sm">
-        <h2 id="sources" className="text-lg">Sources for the numbers in this lesson</h2>
+        <h2 id="sources" className="text-lg">{t("lessonSources")}</h2>
         <ul className="mt-2 list-disc pl-6">
           {lesson.meta.sources.map((s) => (
             <li key={s}>{s}</li>
           ))}
         </ul>
-        <p className="mt-2 text-muted">Updated {lesson.meta.updated}.</p>
+        <p className="mt-2 text-muted">{t("updated", { date: lesson.meta.updated })}</p>
       </section>
       <MarkComplete module={mod.slug} lesson={lesson.slug} total={mod.lessons.length} minutes={lesson.meta.minutes} />
-      <nav aria-label="Lessons" className="flex flex-wrap justify-between gap-4">
+      <nav aria-label={t("lessons")} className="flex flex-wrap justify-between gap-4">
         {prev ? <Link href={`/modules/${mod.slug}/${prev.slug}`}>← {prev.meta.title}</Link> : <span />}
         {next ? (
           <Link href={`/modules/${mod.slug}/${next.slug}`}>{next.meta.title} →</Link>
         ) : (
-          <Link href={`/modules/${mod.slug}/quiz`}>Take the module quiz →</Link>
+          <Link href={`/modules/${mod.slug}/quiz`}>{t("takeQuiz")}</Link>
         )}
       </nav>
     </article>

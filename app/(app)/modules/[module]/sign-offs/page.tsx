@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import { getLocale } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/config";
 import Link from "next/link";
+import { useFormatter, useTranslations } from "next-intl";
+import { getTranslations } from "next-intl/server";
 import { notFound } from "next/navigation";
 import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
 import { SignOffBadge } from "@/components/signoffs/status-badge";
@@ -9,22 +11,23 @@ import { UploadForm } from "@/components/signoffs/upload-form";
 import { requireViewer } from "@/lib/access";
 import { localizedModule } from "@/lib/content";
 import { signOffsOf, type SignOffItem } from "@/lib/signoffs";
-import { isoDay } from "@/lib/dates";
 
 type Params = { params: Promise<{ module: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
-  return { title: `Sign-offs: ${localizedModule((await params).module, localeOf(await getLocale()))?.meta.title ?? "module"}` };
+  const t = await getTranslations("modules");
+  return { title: t("signOffsTitle", { module: localizedModule((await params).module, localeOf(await getLocale()))?.meta.title ?? t("moduleLower") }) };
 }
 
-const day = (d: Date) => isoDay(d);
-
 function Decision({ s }: { s: SignOffItem }) {
-  if (s.status === "submitted") return <p>Sent on {day(s.submittedAt)}; waiting for a manager of your organization to review it.</p>;
+  const t = useTranslations("modules");
+  const format = useFormatter();
+  const day = (d: Date) => format.dateTime(d, "short");
+  if (s.status === "submitted") return <p>{t("sentOn", { date: day(s.submittedAt) })}</p>;
   return (
     <div className={`rounded border p-3 ${s.status === "approved" ? "border-pass bg-pass-light" : "border-caution bg-caution-light"}`}>
       <p className="font-bold">
-        {s.status === "approved" ? "Signed off" : "Returned"} by {s.reviewerName ?? "a reviewer"} on {s.reviewedAt ? day(s.reviewedAt) : "—"}
+        {t(s.status === "approved" ? "signedOffBy" : "returnedBy", { name: s.reviewerName ?? t("aReviewer"), date: s.reviewedAt ? day(s.reviewedAt) : "—" })}
       </p>
       {s.reviewComment ? <p className="mt-1 whitespace-pre-line">“{s.reviewComment}”</p> : null}
     </div>
@@ -38,24 +41,23 @@ export default async function ModuleSignOffsPage({ params }: Params) {
   if (!mod) notFound();
   const mine = await signOffsOf(viewer.id, slug);
   const required = new Set(mod.meta.requiredSkills);
+  const t = await getTranslations("modules");
 
   return (
     <div className="flex flex-col gap-6">
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href="/modules">Modules</Link> / <Link href={`/modules/${slug}`}>{mod.meta.title}</Link>
+      <nav aria-label={t("breadcrumb")} className="text-sm">
+        <Link href="/modules">{t("metaTitle")}</Link> / <Link href={`/modules/${slug}`}>{mod.meta.title}</Link>
       </nav>
       <header>
-        <h1 className="text-3xl">Practical sign-offs</h1>
+        <h1 className="text-3xl">{t("actions.signOffs")}</h1>
         <p className="mt-2 max-w-prose text-muted">
-          {mod.meta.title}: skills you show on the job. Do the work with your crew lead or manager watching, then send the evidence here; a manager of your organization reviews it and you get an e-mail either way.
-          {required.size ? " Skills marked “required” must be signed off before this module completes." : " None of these is required to complete the module, but each one signed off is on your record."}
+          {t("signOffsLead", { module: mod.meta.title })}
+          {` ${required.size ? t("signOffsRequired") : t("signOffsOptional")}`}
         </p>
       </header>
-      <aside aria-label="Safety" className="max-w-prose rounded border-l-4 border-caution bg-caution-light p-3">
-        <p className="font-bold text-caution">Caution: the photo never comes first</p>
-        <p className="mt-1">
-          Take pictures only once the work is safe to stop: not from a ladder while you are working, not beside a system under test pressure, and with solvent-cement fumes ventilated and ignition sources away. The listing, the adopted code and the authority having jurisdiction decide how the work is done; this page only records that you did it.
-        </p>
+      <aside aria-label={t("safety")} className="max-w-prose rounded border-l-4 border-caution bg-caution-light p-3">
+        <p className="font-bold text-caution">{t("photoCaution")}</p>
+        <p className="mt-1">{t("photoCautionBody")}</p>
       </aside>
       {mod.skills.map((skill) => {
         const history = mine.filter((s) => s.skillId === skill.id);
@@ -68,13 +70,13 @@ export default async function ModuleSignOffsPage({ params }: Params) {
                 {skill.title}
               </h2>
               <div className="flex flex-wrap gap-2">
-                {required.has(skill.id) ? <span className="rounded border border-copper bg-copper-light px-2 py-0.5 text-sm font-bold text-copper">Required</span> : null}
+                {required.has(skill.id) ? <span className="rounded border border-copper bg-copper-light px-2 py-0.5 text-sm font-bold text-copper">{t("required")}</span> : null}
                 <SignOffBadge status={latest?.status ?? "none"} />
               </div>
             </div>
             <div className="mt-3 grid gap-4 md:grid-cols-2">
               <div>
-                <h3 className="font-bold">What the observer must see</h3>
+                <h3 className="font-bold">{t("observe")}</h3>
                 <ul className="mt-1 list-disc pl-6">
                   {skill.observe.map((o) => (
                     <li key={o}>{o}</li>
@@ -82,26 +84,26 @@ export default async function ModuleSignOffsPage({ params }: Params) {
                 </ul>
               </div>
               <div>
-                <h3 className="font-bold">Evidence to send</h3>
+                <h3 className="font-bold">{t("evidence")}</h3>
                 <p className="mt-1">{skill.evidence}</p>
               </div>
             </div>
             {latest ? (
               <div className="mt-4 flex flex-col gap-2" data-testid="latest-sign-off">
                 <Decision s={latest} />
-                {latest.note ? <p className="text-sm"><span className="font-bold">Your note:</span> {latest.note}</p> : null}
+                {latest.note ? <p className="text-sm"><span className="font-bold">{t("yourNote")}</span> {latest.note}</p> : null}
                 <EvidenceThumbs signOffId={latest.id} items={latest.evidence} />
               </div>
             ) : null}
             {canSend ? (
               <div className="mt-4 border-t border-line pt-4">
-                <h3 className="mb-2 font-bold">{latest ? "Send new evidence" : "Send evidence"}</h3>
+                <h3 className="mb-2 font-bold">{latest ? t("sendNewEvidence") : t("sendEvidence")}</h3>
                 <UploadForm module={slug} skill={skill.id} skillTitle={skill.title} />
               </div>
             ) : null}
             {history.length > 1 ? (
               <details className="mt-4">
-                <summary className="cursor-pointer font-bold">Earlier submissions ({history.length - 1})</summary>
+                <summary className="cursor-pointer font-bold">{t("earlier", { count: history.length - 1 })}</summary>
                 <ol className="mt-2 flex flex-col gap-3">
                   {history.slice(1).map((s) => (
                     <li key={s.id} className="flex flex-col gap-2 border-t border-line pt-2">
