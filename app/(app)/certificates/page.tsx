@@ -8,7 +8,7 @@ import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
-import { formatHours, subjectTitleIn } from "@/lib/certificates";
+import { formatHours } from "@/lib/certificates";
 import { localeOf } from "@/lib/i18n/config";
 import { ReportingPeriodForm } from "@/components/credentials/reporting-period-form";
 import { buttonLinkClass } from "@/components/ui/button";
