@@ -1,7 +1,7 @@
 import { connect } from "node:net";
 import { NextResponse, type NextRequest } from "next/server";
 import { CLIENT_IP_HEADER, clientIpOf } from "@/lib/client-ip";
-import { isLocale, LOCALE_HEADER } from "@/lib/i18n/config";
+import { isLocale, LOCALE_HEADER } from "@/lib/i18n/browser";
 import { isDatabaseDown } from "@/lib/db-errors";
 import { OUTAGE_RETRY_AFTER_S, outageMessage, outagePage } from "@/lib/outage.mjs";
 import { REQUEST_ID_HEADER, requestIdFor } from "@/lib/request-id";

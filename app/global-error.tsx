@@ -6,8 +6,8 @@
  */
 import { useSyncExternalStore } from "react";
 import { palette } from "@/lib/theme/browser";
-import { INTL_TAG, type Locale } from "@/lib/i18n/config";
-import { negotiateLocale } from "@/lib/i18n/negotiate";
+import { INTL_TAG, type Locale } from "@/lib/i18n/browser";
+import { negotiateLocale } from "@/lib/i18n/browser";
 import en from "@/messages/en/system.json";
 import es from "@/messages/es/system.json";
 

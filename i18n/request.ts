@@ -1,7 +1,7 @@
 import { getRequestConfig } from "next-intl/server";
-import { INTL_TAG } from "@/lib/i18n/config";
-import { requestLocale } from "@/lib/i18n/locale";
-import { loadMessages } from "@/lib/i18n/messages";
+import { INTL_TAG } from "@/lib/i18n/browser";
+import { requestLocale } from "@/lib/i18n";
+import { loadMessages } from "@/lib/i18n";
 
 // next-intl's per-request configuration (no locale in the URL: the language comes from the account,
 // the switch's cookie or the browser; lib/i18n/locale.ts).

@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
-import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/config";
+import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
 import { postJson } from "@/lib/fetcher";
 
 /**

@@ -1,7 +1,7 @@
 import "server-only";
 import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { EDITIONS } from "@/lib/content/browser";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { ENGLISH_EDITION_TEXT, type EditionText } from "./edition";
 
 /** The edition labels of lesson and card pages in the request's language (English keeps lib/content's wording). */

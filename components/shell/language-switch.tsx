@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useLocale, useTranslations } from "next-intl";
 import { useState, useTransition } from "react";
-import { LANGUAGE_NAMES, LOCALES, localeOf, type Locale } from "@/lib/i18n/config";
+import { LANGUAGE_NAMES, LOCALES, localeOf, type Locale } from "@/lib/i18n/browser";
 import { postJson } from "@/lib/fetcher";
 
 /**

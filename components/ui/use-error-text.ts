@@ -1,5 +1,5 @@
 import { useTranslations } from "next-intl";
-import { errorKeyOf } from "@/lib/i18n/error-text";
+import { errorKeyOf } from "@/lib/i18n/browser";
 
 /**
  * Shows an English message from a shared schema or the API in the reader's language (the "errors"

@@ -10,7 +10,7 @@ import { AccessError, canManageOrganization, organizationFilter, type Viewer } f
 import { DomainError } from "@/lib/errors";
 import { loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
-import { isLocale, type Locale } from "@/lib/i18n/config";
+import { isLocale, type Locale } from "@/lib/i18n/browser";
 import { renderCertificatePdf } from "./pdf";
 import { certificateById, certificatesOfOrganization, serialOf } from "./queries";
 import { revokeWithAudit } from "./revoke";

@@ -14,8 +14,8 @@ import { degrees, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
 import { C, createPdf, defaultFontDir } from "@/lib/pdf";
 import { palette } from "@/lib/theme";
-import { INTL_TAG, type Locale } from "@/lib/i18n/config";
-import { loadMessages } from "@/lib/i18n/messages";
+import { INTL_TAG, type Locale } from "@/lib/i18n/browser";
+import { loadMessages } from "@/lib/i18n";
 import { formatHours, type CertificateKind } from "./status";
 import { formatVerificationCode } from "./verify-code";
 

@@ -6,7 +6,7 @@ import { loadCatalog, subjectTitle, type ContentLocale } from "@/lib/content";
 import { parseVerifyInput } from "./verify-code";
 import { certificateStatus, isExpiringSoon, type CertificateKind, type CertificateStatus } from "./status";
 import { subjectTitleIn } from "./subject-title";
-import type { Locale } from "@/lib/i18n/config";
+import type { Locale } from "@/lib/i18n/browser";
 
 /** What the holder's own list shows (no verification secrets of others, no audit detail). */
 export type HolderCertificate = {

@@ -1,6 +1,6 @@
 import "server-only";
 import { localizedCatalog, subjectTitle } from "@/lib/content";
-import type { Locale } from "@/lib/i18n/config";
+import type { Locale } from "@/lib/i18n/browser";
 import type { CertificateKind } from "./status";
 
 /**

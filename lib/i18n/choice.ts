@@ -1,9 +1,5 @@
 import "server-only";
-import { eq } from "drizzle-orm";
 import { z } from "zod";
-import { db } from "@/db/client";
-import { user } from "@/db/schema";
-import { forgetCachedSessions } from "@/lib/auth/session-cache";
 import { env } from "@/lib/env";
 import { LANG_COOKIE, LOCALES, type Locale } from "./config";
 
@@ -13,11 +9,4 @@ export const languageChoice = z.object({ language: z.enum(LOCALES, { message: "C
 export function languageCookie(locale: Locale): string {
   const secure = env.INSECURE_COOKIES === "1" ? "" : "; Secure";
   return `${LANG_COOKIE}=${locale}; Path=/; Max-Age=${60 * 60 * 24 * 365}; HttpOnly; SameSite=Lax${secure}`;
-}
-
-/** Stores a signed-in person's language (pages, e-mails, certificates follow it). */
-export async function saveLanguage(userId: string, locale: Locale): Promise<void> {
-  await db.update(user).set({ language: locale }).where(eq(user.id, userId));
-  // the signed session copy carries the language: refuse older copies here, so the next page follows
-  forgetCachedSessions(userId);
 }

@@ -8,8 +8,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { parse, TYPE, type MessageFormatElement } from "@formatjs/icu-messageformat-parser";
 import { describe, expect, it } from "vitest";
-import { LOCALES } from "@/lib/i18n/config";
-import { negotiateLocale } from "@/lib/i18n/negotiate";
+import { LOCALES } from "@/lib/i18n/browser";
+import { negotiateLocale } from "@/lib/i18n/browser";
 
 const dir = path.resolve(import.meta.dirname, "../../messages");
 type Tree = { [k: string]: string | Tree };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { getLocale, getTranslations } from "next-intl/server";
 import { LanguageForm } from "@/components/account/language-form";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { EmailForm, NameForm } from "@/components/account/profile-forms";
 import { PasswordForm } from "@/components/account/password-form";
 import { TwoFactorForm } from "@/components/account/two-factor-form";

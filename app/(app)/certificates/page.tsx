@@ -9,7 +9,7 @@ import { certificatesOfHolder } from "@/lib/certificates";
 import { revocableCertificates } from "@/lib/certificates";
 import { CertificateCard } from "@/components/certificates/certificate-card";
 import { formatHours } from "@/lib/certificates";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { ReportingPeriodForm } from "@/components/credentials/reporting-period-form";
 import { buttonLinkClass } from "@/components/ui/button";
 import { periodSettingOf } from "@/lib/credentials";

@@ -3,7 +3,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { getLocale, getTranslations } from "next-intl/server";
 import { glossaryTerms } from "@/lib/content";
-import { INTL_TAG, localeOf } from "@/lib/i18n/config";
+import { INTL_TAG, localeOf } from "@/lib/i18n/browser";
 
 export async function generateMetadata(): Promise<Metadata> {
   return { title: (await getTranslations("reference"))("glossary") };

@@ -5,7 +5,7 @@ import { StatusBadge } from "@/components/team/status-badge";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { certificatesOfHolder } from "@/lib/certificates";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { localizedModule, type ContentLocale } from "@/lib/content";
 import { lastCompletedLesson } from "@/lib/progress";
 import { assignedWork, type AssignedItem } from "@/lib/team";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { getLocale } from "next-intl/server";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import Link from "next/link";
 import { getTranslations } from "next-intl/server";
 import { PageTitle } from "@/components/ui/page-title";

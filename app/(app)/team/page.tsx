@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { getLocale } from "next-intl/server";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { TeamBoard, type BoardFilters } from "@/components/team/board";
 import { OrgPicker } from "@/components/team/org-picker";
 import { TeamSummary } from "@/components/team/summary";

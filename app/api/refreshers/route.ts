@@ -1,6 +1,6 @@
 import { getLocale } from "next-intl/server";
 import { json, readJson, route } from "@/lib/api";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { refresherSubmitSchema, refreshersOf, submitRefresher } from "@/lib/refreshers";
 
 /** GET /api/refreshers → the refreshers the signed-in person owes (changed lessons, questions without their keys). */

@@ -1,6 +1,6 @@
 import { getLocale } from "next-intl/server";
 import { json, route } from "@/lib/api";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { MAX_QUERY_LENGTH, MAX_RESULTS, searchScope } from "@/lib/search/browser";
 import { searchIn } from "@/lib/search";
 

@@ -7,7 +7,7 @@ import { StatusBadge } from "@/components/certificates/status-badge";
 import { verificationByCode } from "@/lib/certificates";
 import { formatHours } from "@/lib/certificates";
 import { hitVerifyLimit, ipFromHeaders, parseVerifyInput } from "@/lib/certificates";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { credentialUrl } from "@/lib/credentials/browser";
 import { env } from "@/lib/env";
 

@@ -8,7 +8,7 @@ import { describe, expect, it } from "vitest";
 import { createTranslator } from "use-intl/core";
 import { signInSchema, signUpSchema, resetSchema } from "@/lib/auth/browser";
 import { emailChangeSchema, passwordChangeSchema } from "@/lib/account/browser";
-import { errorKeyOf } from "@/lib/i18n/error-text";
+import { errorKeyOf } from "@/lib/i18n/browser";
 import es from "@/messages/es/errors.json";
 
 const messagesOf = (r: { success: boolean; error?: { issues: { message: string }[] } }) => (r.success ? [] : r.error!.issues.map((i) => i.message));

@@ -10,7 +10,7 @@ import { editionText } from "@/components/lesson/lesson-text";
 import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { requireViewer } from "@/lib/access";
 import { cardText, lessonTitle } from "@/lib/content";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 
 type Params = { params: Promise<{ card: string }> };
 

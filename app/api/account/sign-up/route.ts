@@ -1,5 +1,5 @@
 import { ApiError, clientIp, json, readJson, route } from "@/lib/api";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { inRequestLanguage } from "@/lib/i18n";
 import { createOrganizationWithManager } from "@/lib/accounts";
 import { signUpSchema } from "@/lib/auth";
 import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth";

@@ -1,7 +1,7 @@
 import { toNextJsHandler } from "better-auth/next-js";
 import { auth } from "@/lib/auth";
 import { errorResponse, json } from "@/lib/api";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { inRequestLanguage } from "@/lib/i18n";
 
 const handlers = toNextJsHandler(auth);
 

@@ -1,9 +1,9 @@
 import { getLocale } from "next-intl/server";
 import { z } from "zod";
 import { ApiError, json, readJson, route } from "@/lib/api";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { inRequestLanguage } from "@/lib/i18n";
 import { slug } from "@/lib/content";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { listAttempts, listOrganizationAttempts, startAttempt } from "@/lib/quiz";
 
 /** POST /api/quiz/attempts { module } → starts (or resumes) an attempt; questions only, no answers. */

@@ -1,6 +1,6 @@
 import { ApiError, fieldErrorsOf, json, route } from "@/lib/api";
 import { getLocale } from "next-intl/server";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { boardPage } from "@/lib/team";
 import { withCellExtras } from "@/lib/team";
 import { parseBoardQuery } from "@/lib/team";

@@ -1,8 +1,8 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
 import { verificationByCode } from "@/lib/certificates";
 import { hitVerifyLimit, tooManyLookupsMessage } from "@/lib/certificates";
-import { requestLocale } from "@/lib/i18n/locale";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { requestLocale } from "@/lib/i18n";
+import { inRequestLanguage } from "@/lib/i18n";
 
 /**
  * GET /api/verify/:code (public) → { serial, holderName, title, kind, ceHours, issuedAt, expiresAt,

@@ -12,7 +12,7 @@ import { adoptedCode, localRulesFor } from "@/lib/editions";
 import { lessonChangesDue } from "@/lib/refreshers";
 import { requireViewer } from "@/lib/access";
 import { lessonTopics, localizedModule } from "@/lib/content";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { recordLessonOpen } from "@/lib/progress";
 
 // Rendered per request (never a shared-cache copy): the session is checked here (proxy.ts checks it

@@ -1,6 +1,6 @@
 import { getLocale } from "next-intl/server";
 import { json, route } from "@/lib/api";
-import { localeOf } from "@/lib/i18n/config";
+import { localeOf } from "@/lib/i18n/browser";
 import { viewAttempt } from "@/lib/quiz";
 
 /** GET an attempt: while open, its questions and saved answers; once graded, the results. */

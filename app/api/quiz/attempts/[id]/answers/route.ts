@@ -1,5 +1,5 @@
 import { json, readJson, route } from "@/lib/api";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { inRequestLanguage } from "@/lib/i18n";
 import { saveAnswers } from "@/lib/quiz";
 import { answersBody } from "@/lib/quiz";
 

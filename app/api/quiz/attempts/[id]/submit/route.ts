@@ -1,7 +1,7 @@
 import { getLocale } from "next-intl/server";
 import { json, readJson, route } from "@/lib/api";
-import { localeOf } from "@/lib/i18n/config";
-import { inRequestLanguage } from "@/lib/i18n/localize-error";
+import { localeOf } from "@/lib/i18n/browser";
+import { inRequestLanguage } from "@/lib/i18n";
 import { submitAttempt } from "@/lib/quiz";
 import { answersBody } from "@/lib/quiz";
 

@@ -1,0 +1,13 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { user } from "@/db/schema";
+import { forgetCachedSessions } from "@/lib/auth";
+import type { Locale } from "@/lib/i18n/browser";
+
+/** Stores a signed-in person's language (pages, e-mails, certificates follow it). */
+export async function saveLanguage(userId: string, locale: Locale): Promise<void> {
+  await db.update(user).set({ language: locale }).where(eq(user.id, userId));
+  // the signed session copy carries the language: refuse older copies here, so the next page follows
+  forgetCachedSessions(userId);
+}
