@@ -23,12 +23,17 @@ export function outageMessage(/** @type {OutageService} */ service) {
   return service === "object store" ? "The file store is not reachable right now. Try again in a minute." : "Riser's database is not reachable right now. Try again in a minute.";
 }
 
-/** A page of its own (the app's layout may be what cannot load), plain styles, no script. */
+/**
+ * A page of its own (the app's layout — and its message catalogs — may be what cannot load), plain
+ * styles, no script, in English and Spanish on one page (each part marked with its language).
+ */
 export function outagePage(/** @type {OutageService} */ service) {
   const what = service === "object store" ? "Our file store is" : "Our database is";
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Riser is briefly unavailable</title></head>
+  const que = service === "object store" ? "El almacén de archivos no responde" : "La base de datos no responde";
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Riser is briefly unavailable · Riser no está disponible por un momento</title></head>
 <body style="font-family:system-ui,sans-serif;background:#F7F4EE;color:#14202B;max-width:40rem;margin:3rem auto;padding:0 1rem">
-<h1>Riser is briefly unavailable</h1><p>${what} not answering right now. Nothing you saved is lost. This page will work again as soon as it is back &mdash; try again in a minute.</p></body></html>`;
+<h1>Riser is briefly unavailable</h1><p>${what} not answering right now. Nothing you saved is lost. This page will work again as soon as it is back &mdash; try again in a minute.</p>
+<div lang="es"><h2>Riser no está disponible por un momento</h2><p>${que} en este momento. No se perdió nada de lo que guardaste. Esta página volverá a funcionar en cuanto regrese &mdash; inténtalo de nuevo en un minuto.</p></div></body></html>`;
 }
 
 /** Seconds a client should wait before trying again (Retry-After). */
