@@ -40,6 +40,8 @@ export type BoardRow = {
   teamId: string | null;
   team: string | null;
   organizationId: string;
+  /** the person's language, "en" or "es" */
+  language?: string;
   passed: number;
   overdue: number;
   nextDue: string | null;
