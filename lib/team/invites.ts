@@ -12,6 +12,7 @@ import { sendMail } from "@/lib/mail";
 import { INVITE_DAYS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
 import { mailAssigned } from "./assigned-mail";
 import { after } from "next/server";
+import { getTranslations } from "next-intl/server";
 import { loadCatalog } from "@/lib/content";
 import { assertSeatAvailable } from "@/lib/billing";
 import { addDays, longDate } from "@/lib/dates";
@@ -112,7 +113,8 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
   checkAssignItems(input.assign);
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
-    throw new DomainError("conflict", `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
+    const t = await getTranslations("teamApi");
+    throw new DomainError("conflict", t("alreadyMember", { name: existing.name, email: input.email, org: org.orgName }));
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
