@@ -1,5 +1,6 @@
 import "server-only";
-import { createTranslator } from "next-intl";
+// use-intl is next-intl's own core (no React): jobs and scripts load this module outside the app
+import { createTranslator } from "use-intl/core";
 import { INTL_TAG, isLocale, type Locale } from "@/lib/i18n/config";
 import { loadMessages } from "@/lib/i18n/messages";
 
