@@ -186,7 +186,6 @@ function SupplyFields() {
 }
 
 export function SystemDemandCalculator({ preset, embedded }: CalculatorProps) {
-  const t = useTranslations("tools");
   const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset)), [preset]);
   const state = useCalculator("system-demand", defaults);
   return (

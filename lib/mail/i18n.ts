@@ -17,9 +17,14 @@ type Values = Record<string, string | number | Date>;
 export type MailT = (key: string, values?: Values) => string;
 
 export function mailTranslator(language: string | null | undefined): MailT {
+  return catalogTranslator(language, "mail");
+}
+
+/** A translator for one catalog namespace outside a request (mail, PDFs built for a stated language). */
+export function catalogTranslator(language: string | null | undefined, namespace: string): MailT {
   const locale = mailLocale(language);
   // the catalogs are read at run time, so keys are plain strings here (the catalog test checks them)
-  const t = createTranslator({ locale: INTL_TAG[locale], messages: loadMessages(locale), namespace: "mail" as never, timeZone: "UTC" });
+  const t = createTranslator({ locale: INTL_TAG[locale], messages: loadMessages(locale), namespace: namespace as never, timeZone: "UTC" });
   return t as unknown as MailT;
 }
 
