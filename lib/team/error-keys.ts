@@ -28,4 +28,6 @@ export const FIELD_ERROR_KEYS: Record<string, string> = {
   "At most 128 characters": "max128",
   "Some fields need attention.": "someFields",
   "Set up two-step sign-in for your own account first": "ownTwoFactorFirst",
+  "Say what is missing or needs redoing (at least 5 characters): the learner reads this.": "returnComment",
+  "Choose approve or return.": "approveOrReturn",
 };
