@@ -3,7 +3,6 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CalculatorPage, isCalculatorId } from "@/components/tools/calculator-page";
 import { requireViewer } from "@/lib/access";
-import { CALCULATOR_INFO } from "@/lib/hydraulics";
 
 type Params = { params: Promise<{ calculator: string }> };
 
