@@ -31,13 +31,10 @@ const NOT_YET_TRANSLATED = [
   "components/search/**",
   "components/ui/**",
   "components/refreshers/**",
-  // not converted yet in the manager/admin area: the admin console, the local mail viewer, three billing parts
+  // not converted yet in the manager/admin area: the admin console, the local mail viewer
   "app/(app)/admin/**",
   "app/dev/**",
   "components/admin/**",
-  "components/billing/buy-seats-form.tsx",
-  "components/billing/checkout-status.tsx",
-  "components/billing/receipts-table.tsx",
 ];
 
 const config = [
