@@ -31,11 +31,9 @@ const NOT_YET_TRANSLATED = [
   "components/search/**",
   "components/ui/**",
   "components/refreshers/**",
-  // not converted yet in the manager/admin area: the admin consoles (people, organizations, audit, mail log, content), the local mail viewer
-  "app/dev/**",
+  // not converted yet in the manager/admin area: the admin consoles (people, organizations, audit, content)
   "components/admin/audit-log.tsx",
   "components/admin/content-status.tsx",
-  "components/admin/mail-log.tsx",
   "components/admin/organizations-console.tsx",
   "components/admin/people-console.tsx",
   "components/admin/person-actions.tsx",
