@@ -31,12 +31,6 @@ const NOT_YET_TRANSLATED = [
   "components/search/**",
   "components/ui/**",
   "components/refreshers/**",
-  // not converted yet in the manager/admin area: the admin consoles (people, organizations, audit, content)
-  "components/admin/audit-log.tsx",
-  "components/admin/content-status.tsx",
-  "components/admin/organizations-console.tsx",
-  "components/admin/people-console.tsx",
-  "components/admin/person-actions.tsx",
 ];
 
 const config = [

@@ -10,7 +10,7 @@ import { log } from "@/lib/log";
 import { sendMail } from "@/lib/mail";
 import { greeting, mailDate, mailTranslator } from "@/lib/mail/i18n";
 import { metrics } from "@/lib/metrics";
-import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
+import { addMonthsUtc, certificateStatus, formatSerial, verificationUrl } from "./status";
 import { addCredentialEntry } from "./credential-entry";
 
 export type IssuedCertificate = Pick<Certificate, "id" | "serial" | "kind" | "subjectSlug" | "subjectTitle" | "verificationCode" | "expiresAt">;
