@@ -13,7 +13,7 @@ import { getJson } from "@/lib/fetcher";
 import type { BoardPage } from "@/lib/team";
 import type { RichRow } from "@/lib/team";
 import { BOARD_STATUSES, type BoardSort, type BoardStatus } from "@/lib/team/browser";
-import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/config";
+import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/browser";
 import { isoDay } from "@/lib/dates";
 import { BoardCellView } from "./board-cell";
 

@@ -6,7 +6,7 @@ import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import type { RosterPreview } from "@/lib/team";
-import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/config";
+import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
 import { INVITE_ROLES, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/browser";
 
 type ImportResult = { imported: number; skipped: number; message: string };

@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/config";
+import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
 import { INVITE_DAYS, INVITE_ROLES, inviteSchema, type InviteInput } from "@/lib/team/browser";
 import { useFieldError, useTranslatedResolver } from "./use-field-error";
 

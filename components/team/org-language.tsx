@@ -4,7 +4,7 @@ import { useTranslations } from "next-intl";
 import { useId, useState } from "react";
 import { FormError, FormNotice } from "@/components/ui/field";
 import { postJson } from "@/lib/fetcher";
-import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/config";
+import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
 import { useFieldError } from "./use-field-error";
 
 /** The organization's default language for new invitations (saved on the server, audited). */

@@ -1,7 +1,7 @@
 "use client";
 import { useTranslations } from "next-intl";
 import type { FieldValues, Resolver } from "react-hook-form";
-import { FIELD_ERROR_KEYS } from "@/lib/team/error-keys";
+import { FIELD_ERROR_KEYS } from "@/lib/team/browser";
 
 /** A zod or server field message in the reader's language (unknown messages pass through as sent). */
 export function useFieldError() {

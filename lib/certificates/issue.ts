@@ -8,7 +8,7 @@ import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { log } from "@/lib/log";
 import { sendMail } from "@/lib/mail";
-import { greeting, mailDate, mailTranslator } from "@/lib/mail/i18n";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { metrics } from "@/lib/metrics";
 import { addMonthsUtc, certificateStatus, formatSerial, verificationUrl } from "./status";
 import { addCredentialEntry } from "./credential-entry";

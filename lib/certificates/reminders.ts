@@ -5,7 +5,7 @@ import { db } from "@/db/client";
 import { certificate, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { greeting, mailDate, mailTranslator } from "@/lib/mail/i18n";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { expiringHorizon } from "@/lib/expiring";
 import { daysUntil } from "./status";
 

@@ -1,8 +1,8 @@
 import "server-only";
 // use-intl is next-intl's own core (no React): jobs and scripts load this module outside the app
 import { createTranslator } from "use-intl/core";
-import { INTL_TAG, isLocale, type Locale } from "@/lib/i18n/config";
-import { loadMessages } from "@/lib/i18n/messages";
+import { INTL_TAG, isLocale, type Locale } from "@/lib/i18n";
+import { loadMessages } from "@/lib/i18n";
 
 /**
  * Mail is written in the recipient's language (user.language, or invitation.language for an

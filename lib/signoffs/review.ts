@@ -14,7 +14,7 @@ import { checkAndRecordCompletion } from "@/lib/completion";
 import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { greeting, mailTranslator } from "@/lib/mail/i18n";
+import { greeting, mailTranslator } from "@/lib/mail";
 
 export type ReviewResult = { id: string; status: "approved" | "returned"; reviewedAt: string; moduleCompleted: boolean };
 

@@ -17,7 +17,7 @@ import { hitRateLimit } from "@/lib/rate-limit";
 import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { mailTranslator } from "@/lib/mail/i18n";
+import { mailTranslator } from "@/lib/mail";
 import { deleteObjectsQuietly, isStorageDown, putObject } from "@/lib/storage";
 import { EvidenceError, prepareEvidence, type PreparedEvidence } from "./evidence";
 import { evidenceKeys } from "./keys";

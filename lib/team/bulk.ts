@@ -11,7 +11,7 @@ import { sendMail } from "@/lib/mail";
 import { insertInvitation, inviteMail, pendingEmails } from "./invites";
 import { checkRoster, decodeRoster, parseRoster, type CheckedRow, type RawRosterRow } from "./roster";
 import { ROSTER_MAX_BYTES } from "./schemas";
-import type { Locale } from "@/lib/i18n/config";
+import type { Locale } from "@/lib/i18n/browser";
 import { assertSeatAvailable, seatUsage } from "@/lib/billing";
 
 export type RosterPreview = {

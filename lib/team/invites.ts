@@ -16,8 +16,8 @@ import { getTranslations } from "next-intl/server";
 import { loadCatalog } from "@/lib/content";
 import { assertSeatAvailable } from "@/lib/billing";
 import { addDays, longDate } from "@/lib/dates";
-import { greeting, mailDate, mailTranslator } from "@/lib/mail/i18n";
-import { isLocale, type Locale } from "@/lib/i18n/config";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
+import { isLocale, type Locale } from "@/lib/i18n/browser";
 
 
 /** 256 random bits, URL-safe. Only its SHA-256 is stored: a database leak reveals no usable link. */

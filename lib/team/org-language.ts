@@ -5,7 +5,7 @@ import { organization } from "@/db/schema";
 import type { Viewer } from "@/lib/access";
 import { audit } from "@/lib/audit";
 import { DomainError } from "@/lib/errors";
-import { isLocale, type Locale } from "@/lib/i18n/config";
+import { isLocale, type Locale } from "@/lib/i18n/browser";
 
 /** The language an organization's new invitations start with (a manager may change it per invitation). */
 export async function orgDefaultLanguage(orgId: string): Promise<Locale> {

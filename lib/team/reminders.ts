@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { assignment, moduleCompletion, organization, reminderLog, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { greeting, mailDate, mailTranslator } from "@/lib/mail/i18n";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { itemModules, itemTitle, passedModules, type Person } from "./board";
 import { teamTotals } from "./summary";
 import { isoWeek } from "./period";

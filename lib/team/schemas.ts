@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { email, password, personName } from "@/lib/auth/browser";
 import { slug } from "@/lib/content/browser";
-import { LOCALES } from "@/lib/i18n/config";
+import { LOCALES } from "@/lib/i18n/browser";
 
 export const INVITE_ROLES = ["learner", "sales", "manager"] as const;
 export type InviteRole = (typeof INVITE_ROLES)[number];

@@ -17,7 +17,7 @@ import {
   type CalculatorReport,
 } from "@/lib/hydraulics";
 import { utcStamp } from "@/lib/dates";
-import { catalogTranslator, type MailT } from "@/lib/mail/i18n";
+import { catalogTranslator, type MailT } from "@/lib/mail";
 
 const PAGE = { width: 612, height: 792, margin: 40 }; // US Letter, points
 

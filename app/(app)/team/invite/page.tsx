@@ -9,7 +9,7 @@ import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { INVITE_ROLES, listInvitations, orgDefaultLanguage, type InviteRole } from "@/lib/team";
-import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/config";
+import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/browser";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 import { BILLING_PATH, seatUsage } from "@/lib/billing";
 

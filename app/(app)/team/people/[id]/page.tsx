@@ -10,7 +10,7 @@ import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer, type RecordWindow } from "@/lib/access";
 import { assignedWork, boardModules, INVITE_ROLES, personForViewer, personHistory, type InviteRole } from "@/lib/team";
-import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/config";
+import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/browser";
 import { isoDay } from "@/lib/dates";
 import { teamsInScope } from "@/lib/access";
 import type { ReactNode } from "react";

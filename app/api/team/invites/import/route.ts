@@ -1,6 +1,6 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
 import { importRoster, orgDefaultLanguage, readUpload } from "@/lib/team";
-import { isLocale } from "@/lib/i18n/config";
+import { isLocale } from "@/lib/i18n/browser";
 import { getTranslations } from "next-intl/server";
 import { resolveWriteOrg } from "@/lib/access";
 

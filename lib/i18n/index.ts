@@ -1,0 +1,7 @@
+import "server-only";
+// The language core's server face: the browser-safe parts, the catalogs and the request's language.
+export * from "./config";
+export * from "./negotiate";
+export * from "./messages";
+export * from "./locale";
+export * from "./choice";
