@@ -4,4 +4,5 @@ export * from "./config";
 export * from "./negotiate";
 export * from "./messages";
 export * from "./locale";
-export * from "./choice";
+// ./choice (database and cookies) is imported by its one route directly
+export * from "./translator";

@@ -17,7 +17,7 @@ import {
   type CalculatorReport,
 } from "@/lib/hydraulics";
 import { utcStamp } from "@/lib/dates";
-import { catalogTranslator, type MailT } from "@/lib/mail";
+import { catalogTranslator, type CatalogT } from "@/lib/i18n";
 
 const PAGE = { width: 612, height: 792, margin: 40 }; // US Letter, points
 
@@ -65,7 +65,7 @@ async function row(l: Layout, label: string, value: string, work?: string) {
   if (work) await text(l, work, { face: "mono", size: l.size * 0.85, color: C.muted, x: PAGE.margin + 10 });
 }
 
-async function drawReport(l: Layout, report: CalculatorReport, date: Date, tr: MailT) {
+async function drawReport(l: Layout, report: CalculatorReport, date: Date, tr: CatalogT) {
   const stamp = utcStamp(date);
   await text(l, tr("pdf.kicker"), { face: "bold", size: l.size * 0.9, color: C.muted });
   await text(l, tr(`info.${report.id}.title`), { face: "bold", size: l.size * 1.8, gap: 2 });
