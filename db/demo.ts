@@ -11,7 +11,8 @@ export const DEMO_ORGS = [
   { key: "larkhaven", name: "Larkhaven Homes", kind: "builder", seats: 10, teams: ["Juniper Flats sales office"] },
 ] as const;
 
-export type DemoPerson = { name: string; email: string; role: "learner" | "sales" | "manager" | "admin"; org: "quillmoor" | "larkhaven" | null; team: string | null };
+/** `language`: the person's language for pages and mail (absent = English) */
+export type DemoPerson = { name: string; email: string; role: "learner" | "sales" | "manager" | "admin"; org: "quillmoor" | "larkhaven" | null; team: string | null; language?: "en" | "es" };
 
 export const DEMO_PEOPLE: DemoPerson[] = [
   { name: "Maren Ostrowe", email: "maren@quillmoor.example", role: "manager", org: "quillmoor", team: null },
@@ -19,7 +20,7 @@ export const DEMO_PEOPLE: DemoPerson[] = [
   { name: "Ines Carrow", email: "ines@quillmoor.example", role: "learner", org: "quillmoor", team: "North crew" },
   { name: "Tobin Reyl", email: "tobin@quillmoor.example", role: "learner", org: "quillmoor", team: "North crew" },
   { name: "Kasimir Dunleavy", email: "kasimir@quillmoor.example", role: "learner", org: "quillmoor", team: "South crew" },
-  { name: "Odette Brannock", email: "odette@quillmoor.example", role: "learner", org: "quillmoor", team: "South crew" },
+  { name: "Odette Brannock", email: "odette@quillmoor.example", role: "learner", org: "quillmoor", team: "South crew", language: "es" },
   { name: "Wendell Ashcombe", email: "wendell@quillmoor.example", role: "learner", org: "quillmoor", team: "South crew" },
   { name: "Rafaela Quint", email: "rafaela@quillmoor.example", role: "learner", org: "quillmoor", team: "South crew" },
   { name: "Callum Threlby", email: "callum@quillmoor.example", role: "learner", org: "quillmoor", team: "Design office" },

@@ -1,21 +1,23 @@
 "use client";
+import { useTranslations } from "next-intl";
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 
 export const ADMIN_SECTIONS = [
-  { href: "/admin", label: "Overview" },
-  { href: "/admin/organizations", label: "Organizations" },
-  { href: "/admin/people", label: "People" },
-  { href: "/admin/content", label: "Content" },
-  { href: "/admin/mail", label: "Mail log" },
-  { href: "/admin/audit", label: "Audit log" },
-  { href: "/admin/jobs", label: "Jobs" },
+  { href: "/admin", label: "overview" },
+  { href: "/admin/organizations", label: "organizations" },
+  { href: "/admin/people", label: "people" },
+  { href: "/admin/content", label: "content" },
+  { href: "/admin/mail", label: "mail" },
+  { href: "/admin/audit", label: "audit" },
+  { href: "/admin/jobs", label: "jobs" },
 ] as const;
 
 export function AdminNav() {
+  const t = useTranslations("admin");
   const pathname = usePathname();
   return (
-    <nav aria-label="Admin sections" className="mb-6 border-b border-line">
+    <nav aria-label={t("nav.label")} className="mb-6 border-b border-line">
       <ul className="-mb-px flex flex-wrap gap-x-1">
         {ADMIN_SECTIONS.map((s) => {
           const current = s.href === "/admin" ? pathname === "/admin" : pathname === s.href || pathname.startsWith(`${s.href}/`);
@@ -26,7 +28,7 @@ export function AdminNav() {
                 aria-current={current ? "page" : undefined}
                 className="inline-flex min-h-11 items-center border-b-4 border-transparent px-3 text-ink no-underline hover:border-line aria-[current=page]:border-copper aria-[current=page]:font-bold"
               >
-                {s.label}
+                {t(`nav.${s.label}`)}
               </Link>
             </li>
           );

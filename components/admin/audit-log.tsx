@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import type { AuditRow } from "@/lib/admin";
 import { DataTable, When, type Column } from "@/components/ui/data-table";
@@ -23,6 +24,7 @@ function Details({ value }: { value: unknown }) {
 }
 
 export function AuditLog({ organizations }: { organizations: Org[] }) {
+  const t = useTranslations("adminConsole");
   const [action, setAction] = useState("");
   const [actor, setActor] = useState("");
   const [organizationId, setOrganizationId] = useState("");
@@ -32,15 +34,15 @@ export function AuditLog({ organizations }: { organizations: Org[] }) {
   const actorSearch = useDebounced(actor.trim());
   const filters = { action: action || undefined, actor: actorSearch || undefined, organizationId: organizationId || undefined, from: from || undefined, to: to || undefined };
   const exportQs = new URLSearchParams(Object.entries(filters).filter((e): e is [string, string] => Boolean(e[1]))).toString();
-  const rangeError = from && to && from > to ? "The start date is after the end date." : null;
+  const rangeError = from && to && from > to ? t("rangeError") : null;
 
   const columns: Column<AuditRow>[] = [
-    { key: "at", label: "Time", sort: "at", render: (r) => <When iso={r.at} /> },
-    { key: "action", label: "Action", sort: "action", render: (r) => <span className="font-mono">{r.action}</span> },
-    { key: "actor", label: "Who", sort: "actor", render: (r) => <span className="whitespace-nowrap">{r.actorEmail ?? <span className="text-muted">Riser itself</span>}</span> },
+    { key: "at", label: t("time"), sort: "at", render: (r) => <When iso={r.at} /> },
+    { key: "action", label: t("action"), sort: "action", render: (r) => <span className="font-mono">{r.action}</span> },
+    { key: "actor", label: t("who"), sort: "actor", render: (r) => <span className="whitespace-nowrap">{r.actorEmail ?? <span className="text-muted">{t("riserItself")}</span>}</span> },
     {
       key: "target",
-      label: "What",
+      label: t("what"),
       sort: "target",
       render: (r) => (
         <>
@@ -52,42 +54,42 @@ export function AuditLog({ organizations }: { organizations: Org[] }) {
     },
     {
       key: "reason",
-      label: "Reason and details",
+      label: t("reasonAndDetails"),
       render: (r) => (
         <>
-          {r.reason ? <span>“{r.reason}”</span> : <span className="text-muted">no reason given</span>}
+          {r.reason ? <span>“{r.reason}”</span> : <span className="text-muted">{t("noReasonGiven")}</span>}
           <Details value={r.details} />
         </>
       ),
     },
-    { key: "ip", label: "Address", render: (r) => <span className="font-mono text-xs">{r.ip ?? "—"}</span> },
+    { key: "ip", label: t("address"), render: (r) => <span className="font-mono text-xs">{r.ip ?? "—"}</span> },
   ];
 
   return (
     <div className="flex flex-col gap-4">
-      <form role="search" aria-label="Filter the audit log" onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
-        <SelectField label="Action" value={action} onChange={(e) => setAction(e.target.value)} options={[{ value: "", label: "Every action" }, ...actions.map((a) => ({ value: a, label: a }))]} />
+      <form role="search" aria-label={t("filterTheAuditLog")} onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
+        <SelectField label={t("action")} value={action} onChange={(e) => setAction(e.target.value)} options={[{ value: "", label: t("everyAction") }, ...actions.map((a) => ({ value: a, label: a }))]} />
         <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="audit-actor" className="font-bold">
-            Who (e-mail)
+            {t("auditWho")}
           </label>
           <input id="audit-actor" type="search" value={actor} onChange={(e) => setActor(e.target.value)} maxLength={200} autoComplete="off" className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
         </div>
         <SelectField
-          label="Organization"
+          label={t("organization")}
           value={organizationId}
           onChange={(e) => setOrganizationId(e.target.value)}
-          options={[{ value: "", label: "Every organization" }, { value: "none", label: "None (instance-wide)" }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
+          options={[{ value: "", label: t("everyOrganization") }, { value: "none", label: t("noneInstanceWide") }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
         />
         <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="audit-from" className="font-bold">
-            From (UTC day)
+            {t("auditFrom")}
           </label>
           <input id="audit-from" type="date" value={from} onChange={(e) => setFrom(e.target.value)} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
         </div>
         <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="audit-to" className="font-bold">
-            To (UTC day, included)
+            {t("auditTo")}
           </label>
           <input
             id="audit-to"
@@ -107,9 +109,9 @@ export function AuditLog({ organizations }: { organizations: Org[] }) {
       </form>
       <p>
         <a href={`/api/admin/audit/export${exportQs ? `?${exportQs}` : ""}`} download className="inline-flex min-h-11 items-center rounded border border-ink/40 bg-panel px-4 font-bold text-ink no-underline hover:bg-paper">
-          Download these rows as CSV
+          {t("downloadTheseRowsAsCsv")}
         </a>
-        <span className="ml-2 text-sm text-muted">The download itself is recorded in the audit log.</span>
+        <span className="ml-2 text-sm text-muted">{t("theDownloadItselfIsRecordedIn")}</span>
       </p>
       <DataTable<AuditRow, { actions: string[] }>
         endpoint="/api/admin/audit"
@@ -117,9 +119,9 @@ export function AuditLog({ organizations }: { organizations: Org[] }) {
         columns={columns}
         rowKey={(r) => String(r.id)}
         initialSort={{ key: "at", dir: "desc" }}
-        caption="Audit log"
-        noun="audit entries"
-        emptyText="No audit entries match these filters."
+        caption={t("auditLog")}
+        noun={t("auditEntries")}
+        emptyText={t("noAuditEntriesMatchTheseFilters")}
         onData={(d) => setActions((prev) => (prev.join() === d.actions.join() ? prev : d.actions))}
       />
     </div>

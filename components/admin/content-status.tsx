@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import useSWR from "swr";
 import type { ContentStatus as Status } from "@/lib/admin";
 import { getJson } from "@/lib/fetcher";
@@ -8,44 +9,45 @@ import { SyncButton } from "./sync-button";
 import { Table } from "@/components/ui/table";
 
 const KINDS = [
-  { key: "modules", label: "Modules" },
-  { key: "lessons", label: "Lessons" },
-  { key: "cards", label: "Code cards" },
-  { key: "paths", label: "Learning paths" },
-  { key: "questions", label: "Quiz questions" },
+  { key: "modules", label: "modules" },
+  { key: "lessons", label: "lessons" },
+  { key: "cards", label: "codeCards" },
+  { key: "paths", label: "learningPaths" },
+  { key: "questions", label: "quizQuestions" },
 ] as const;
 
 const KEY = "/api/admin/content";
 
 /** `initial`: the status the server page already loaded (not fetched again on mount; the sync button refreshes it). */
 export function ContentStatus({ initial }: { initial?: Status }) {
+  const t = useTranslations("adminConsole");
   const { data, error, isLoading, mutate } = useSWR<Status>(KEY, getJson, serverFirst(KEY, initial && { key: KEY, data: initial }));
   if (error) {
     return (
       <div role="alert" className="flex flex-wrap items-center gap-3 rounded border border-caution bg-caution-light px-3 py-2 text-caution">
-        <span>Could not load the content status: {(error as Error).message}</span>
+        <span>{t("statusLoadFailed", { message: (error as Error).message })}</span>
         <button type="button" onClick={() => mutate()} className="min-h-11 rounded border border-caution bg-panel px-3 font-bold">
-          Try again
+          {t("tryAgain")}
         </button>
       </div>
     );
   }
-  if (isLoading || !data) return <p className="text-muted">Loading the content status…</p>;
+  if (isLoading || !data) return <p className="text-muted">{t("loadingTheContentStatus")}</p>;
   const repo = data.repository;
   const last = data.lastSync;
   return (
     <div className="flex flex-col gap-8">
       <section aria-labelledby="sync-h" className="flex flex-col gap-3">
         <h2 id="sync-h" className="text-2xl">
-          Last sync
+          {t("lastSync")}
         </h2>
         {last ? (
           <p>
             <When iso={last.at} /> —{" "}
-            {last.ok ? <span className="font-bold text-pass">finished without problems</span> : <span className="font-bold text-caution">failed: the content had problems, nothing changed</span>}
+            {last.ok ? <span className="font-bold text-pass">{t("finishedWithoutProblems")}</span> : <span className="font-bold text-caution">{t("failedTheContentHadProblemsNothing")}</span>}
           </p>
         ) : (
-          <p>The catalog has never been synced on this instance.</p>
+          <p>{t("theCatalogHasNeverBeenSynced")}</p>
         )}
         {last && !last.ok && last.problems.length ? (
           <ul className="list-disc pl-6 font-mono text-sm text-caution">
@@ -59,11 +61,11 @@ export function ContentStatus({ initial }: { initial?: Status }) {
 
       <section aria-labelledby="counts-h" className="flex flex-col gap-3">
         <h2 id="counts-h" className="text-2xl">
-          What is synced
+          {t("whatIsSynced")}
         </h2>
         {!repo.ok ? (
           <div role="alert" className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">
-            <p className="font-bold">The content in the repository does not pass validation ({repo.problems.length} problem{repo.problems.length === 1 ? "" : "s"}):</p>
+            <p className="font-bold">{t("repoInvalid", { count: repo.problems.length })}</p>
             <ul className="mt-2 list-disc pl-6 font-mono text-sm">
               {repo.problems.map((p) => (
                 <li key={p}>{p}</li>
@@ -72,17 +74,17 @@ export function ContentStatus({ initial }: { initial?: Status }) {
           </div>
         ) : null}
         <Table
-          label="Synced content counts"
-          caption="Content counts: in the database and in the repository"
+          label={t("syncedContentCounts")}
+          caption={t("contentCountsInTheDatabaseAnd")}
           rows={KINDS.map((k) => ({ ...k, db: data.database[k.key], inRepo: repo.ok ? repo.counts[k.key] : null }))}
           rowKey={(r) => r.key}
           columns={[
-            { key: "kind", header: "Kind", rowHeader: true, className: "text-left", cell: (r) => r.label },
-            { key: "live", header: "In use", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.live },
-            { key: "retired", header: "Retired", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.retired },
+            { key: "kind", header: t("kind"), rowHeader: true, className: "text-left", cell: (r) => t(r.label) },
+            { key: "live", header: t("inUse"), headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.live },
+            { key: "retired", header: t("retired"), headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => r.db.retired },
             {
               key: "repo",
-              header: "In the repository",
+              header: t("inTheRepository"),
               headerClassName: "px-3 py-2 text-right align-bottom",
               className: "text-right font-mono",
               cell: (r) => {
@@ -97,15 +99,15 @@ export function ContentStatus({ initial }: { initial?: Status }) {
             },
           ]}
         />
-        <p className="text-sm text-muted">Retired quiz questions count old versions kept so that earlier attempts still show what was asked.</p>
+        <p className="text-sm text-muted">{t("retiredQuizQuestionsCountOldVersions")}</p>
       </section>
 
       <section aria-labelledby="retired-h" className="flex flex-col gap-3">
         <h2 id="retired-h" className="text-2xl">
-          Retired items
+          {t("retiredItems")}
         </h2>
         {data.retired.length === 0 ? (
-          <p>Nothing is retired: every synced item is still in the content.</p>
+          <p>{t("nothingIsRetiredEverySyncedItem")}</p>
         ) : (
           <ul className="flex flex-col gap-1">
             {data.retired.map((r) => (
@@ -123,12 +125,12 @@ export function ContentStatus({ initial }: { initial?: Status }) {
       {data.recentSyncs.length > 1 ? (
         <section aria-labelledby="history-h" className="flex flex-col gap-3">
           <h2 id="history-h" className="text-2xl">
-            Recent syncs
+            {t("recentSyncs")}
           </h2>
           <ol className="flex flex-col gap-1">
             {data.recentSyncs.map((s) => (
               <li key={s.id}>
-                <When iso={s.at} /> — {s.ok ? "ok" : <span className="text-caution">failed ({s.problems.length} problems)</span>}
+                <When iso={s.at} /> — {s.ok ? t("syncOk") : <span className="text-caution">{t("syncFailed", { count: s.problems.length })}</span>}
                 {s.ok && Object.keys(s.counts).length ? <span className="ml-2 font-mono text-xs text-muted">{Object.entries(s.counts).map(([k, v]) => `${k} ${v}`).join(" · ")}</span> : null}
               </li>
             ))}

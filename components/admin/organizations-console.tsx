@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -17,9 +18,9 @@ import { SelectField } from "@/components/ui/select-field";
 import { useDebounced } from "@/components/ui/use-debounced";
 import { applyServerErrors } from "./server-errors";
 
-const KIND_LABEL: Record<string, string> = { contractor: "Sprinkler contractor", builder: "Home builder" };
 
 function CreateForm({ onDone }: { onDone: (m: string) => void }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, reset, formState, control } = useForm<z.input<typeof createOrganizationSchema>, unknown, z.output<typeof createOrganizationSchema>>({
     resolver: zodResolver(createOrganizationSchema),
@@ -30,7 +31,7 @@ function CreateForm({ onDone }: { onDone: (m: string) => void }) {
     const r = await postJson("/api/admin/organizations", v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["name", "kind", "seats"], r));
     reset();
-    onDone(`${v.name} is created with ${v.seats} seat${v.seats === 1 ? "" : "s"}.`);
+    onDone(t("done.created", { name: v.name, seats: v.seats }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="grid grid-cols-1 gap-3 rounded border border-line bg-panel p-4 sm:grid-cols-[2fr_1fr_1fr_auto] sm:items-start">
@@ -38,25 +39,26 @@ function CreateForm({ onDone }: { onDone: (m: string) => void }) {
       <div className="sm:col-span-4">
         <FormError message={error} />
       </div>
-      <Field label="Organization name" {...register("name")} error={formState.errors.name?.message} />
+      <Field label={t("organizationName")} {...register("name")} error={formState.errors.name?.message} />
       <SelectField
-        label="Kind"
+        label={t("kind")}
         options={[
-          { value: "contractor", label: KIND_LABEL.contractor! },
-          { value: "builder", label: KIND_LABEL.builder! },
+          { value: "contractor", label: t("kindName.contractor") },
+          { value: "builder", label: t("kindName.builder") },
         ]}
         {...register("kind")}
         error={formState.errors.kind?.message}
       />
-      <Field label="Seats" inputMode="numeric" {...register("seats")} error={formState.errors.seats?.message} />
+      <Field label={t("seats")} inputMode="numeric" {...register("seats")} error={formState.errors.seats?.message} />
       <Button type="submit" disabled={formState.isSubmitting} className="sm:mt-8">
-        {formState.isSubmitting ? "Creating…" : "Create"}
+        {formState.isSubmitting ? t("btn.creating") : t("btn.create")}
       </Button>
     </form>
   );
 }
 
 function RenameForm({ org, onDone }: { org: OrganizationRow; onDone: (m: string) => void }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof renameOrganizationSchema>, unknown, z.output<typeof renameOrganizationSchema>>({
     resolver: zodResolver(renameOrganizationSchema),
@@ -66,21 +68,22 @@ function RenameForm({ org, onDone }: { org: OrganizationRow; onDone: (m: string)
     setFormError(null);
     const r = await postJson(`/api/admin/organizations/${org.id}`, v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["name"], r));
-    onDone(`${org.name} is now called ${v.name}.`);
+    onDone(t("done.renamed", { old: org.name, name: v.name }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <Field label="New name" {...register("name")} error={formState.errors.name?.message} />
+      <Field label={t("newName")} {...register("name")} error={formState.errors.name?.message} />
       <Button type="submit" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Renaming…" : "Rename"}
+        {formState.isSubmitting ? t("btn.renaming") : t("rename")}
       </Button>
     </form>
   );
 }
 
 export function OrganizationsConsole() {
+  const t = useTranslations("adminConsole");
   const router = useRouter();
   const { mutate } = useSWRConfig();
   const [q, setQ] = useState("");
@@ -96,25 +99,25 @@ export function OrganizationsConsole() {
   }
 
   const columns: Column<OrganizationRow>[] = [
-    { key: "name", label: "Name", sort: "name", render: (o) => <span className="font-bold">{o.name}</span> },
-    { key: "kind", label: "Kind", sort: "kind", render: (o) => KIND_LABEL[o.kind] ?? o.kind },
-    { key: "seats", label: "Seats", sort: "seats", render: (o) => <span className="font-mono">{o.seats}</span>, className: "text-right" },
+    { key: "name", label: t("name"), sort: "name", render: (o) => <span className="font-bold">{o.name}</span> },
+    { key: "kind", label: t("kind"), sort: "kind", render: (o) => (o.kind === "contractor" || o.kind === "builder" ? t(`kindName.${o.kind}`) : o.kind) },
+    { key: "seats", label: t("seats"), sort: "seats", render: (o) => <span className="font-mono">{o.seats}</span>, className: "text-right" },
     {
       key: "members",
-      label: "People",
+      label: t("people2"),
       sort: "members",
       render: (o) => <span className={`font-mono ${o.members > o.seats ? "font-bold text-caution" : ""}`}>{o.members}{o.members > o.seats ? " (over)" : ""}</span>,
       className: "text-right",
     },
-    { key: "teams", label: "Teams", render: (o) => <span className="font-mono">{o.teams}</span>, className: "text-right" },
-    { key: "trial", label: "Trial ends", render: (o) => <When iso={o.trialEndsAt} /> },
-    { key: "createdAt", label: "Created", sort: "createdAt", render: (o) => <When iso={o.createdAt} /> },
+    { key: "teams", label: t("teams"), render: (o) => <span className="font-mono">{o.teams}</span>, className: "text-right" },
+    { key: "trial", label: t("trialEnds"), render: (o) => <When iso={o.trialEndsAt} /> },
+    { key: "createdAt", label: t("created"), sort: "createdAt", render: (o) => <When iso={o.createdAt} /> },
     {
       key: "rename",
-      label: "Actions",
+      label: t("actions"),
       render: (o) => (
         <button type="button" onClick={() => setRenaming(o)} className="min-h-11 rounded border border-ink/40 bg-panel px-3 font-bold">
-          Rename<span className="sr-only"> {o.name}</span>
+          {t("rename")}<span className="sr-only">{` ${o.name}`}</span>
         </button>
       ),
     },
@@ -127,17 +130,17 @@ export function OrganizationsConsole() {
       </div>
       <section aria-labelledby="create-org" className="flex flex-col gap-3">
         <h2 id="create-org" className="text-2xl">
-          Create an organization
+          {t("createAnOrganization")}
         </h2>
         <CreateForm onDone={done} />
       </section>
       <section aria-labelledby="all-orgs" className="flex flex-col gap-3">
         <h2 id="all-orgs" className="text-2xl">
-          All organizations
+          {t("allOrganizations")}
         </h2>
-        <form role="search" aria-label="Filter organizations" onSubmit={(e) => e.preventDefault()} className="flex max-w-md flex-col gap-1">
+        <form role="search" aria-label={t("filterOrganizations")} onSubmit={(e) => e.preventDefault()} className="flex max-w-md flex-col gap-1">
           <label htmlFor="org-q" className="font-bold">
-            Search by name
+            {t("searchByName")}
           </label>
           <input id="org-q" type="search" value={q} onChange={(e) => setQ(e.target.value)} maxLength={200} autoComplete="off" className="min-h-11 rounded border border-ink/40 bg-panel px-3 py-2" />
         </form>
@@ -147,12 +150,12 @@ export function OrganizationsConsole() {
           columns={columns}
           rowKey={(o) => o.id}
           initialSort={{ key: "name", dir: "asc" }}
-          caption="Organizations with seats, people and teams"
-          noun="organizations"
-          emptyText={search ? "No organization has that in its name." : "No organizations yet. Create the first one above."}
+          caption={t("organizationsWithSeatsPeopleAndTeams")}
+          noun={t("organizations")}
+          emptyText={search ? t("orgs.noMatch") : t("orgs.none")}
         />
       </section>
-      <Dialog open={renaming !== null} title={renaming ? `Rename ${renaming.name}` : "Rename"} onClose={() => setRenaming(null)}>
+      <Dialog open={renaming !== null} title={renaming ? t("renameName", { name: renaming.name }) : t("rename")} onClose={() => setRenaming(null)}>
         {renaming ? <RenameForm key={renaming.id} org={renaming} onDone={done} /> : null}
       </Dialog>
     </div>

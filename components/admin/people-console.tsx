@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { useSWRConfig } from "swr";
 import { FormNotice } from "@/components/ui/field";
@@ -7,18 +8,21 @@ import type { PersonRow } from "@/lib/admin";
 import { DataTable, tableKey, When, type Column } from "@/components/ui/data-table";
 import { Dialog } from "@/components/ui/dialog";
 import { SelectField } from "@/components/ui/select-field";
-import { PersonActions, ROLE_LABEL } from "./person-actions";
+import { PersonActions, roleLabel } from "./person-actions";
 import { useDebounced } from "@/components/ui/use-debounced";
 
 type Org = { id: string; name: string };
 
 function Status({ p }: { p: PersonRow }) {
-  if (p.banned) return <span className="rounded bg-caution-light px-2 py-0.5 font-bold text-caution">Banned{p.banExpires ? ` to ${p.banExpires.slice(0, 10)}` : ""}</span>;
-  if (!p.emailVerified) return <span className="text-muted">E-mail not confirmed</span>;
-  return <span className="text-pass">Active</span>;
+  const t = useTranslations("adminConsole");
+  if (p.banned) return <span className="rounded bg-caution-light px-2 py-0.5 font-bold text-caution">{p.banExpires ? t("bannedTo", { date: p.banExpires.slice(0, 10) }) : t("banned")}</span>;
+  if (!p.emailVerified) return <span className="text-muted">{t("eMailNotConfirmed")}</span>;
+  return <span className="text-pass">{t("active")}</span>;
 }
 
 export function PeopleConsole({ organizations, viewerId }: { organizations: Org[]; viewerId: string }) {
+  const t = useTranslations("adminConsole");
+  const tt = useTranslations("team");
   const { mutate } = useSWRConfig();
   const [q, setQ] = useState("");
   const [role, setRole] = useState("");
@@ -31,7 +35,7 @@ export function PeopleConsole({ organizations, viewerId }: { organizations: Org[
   const columns: Column<PersonRow>[] = [
     {
       key: "name",
-      label: "Name",
+      label: t("name"),
       sort: "name",
       render: (p) => (
         <>
@@ -41,17 +45,17 @@ export function PeopleConsole({ organizations, viewerId }: { organizations: Org[
         </>
       ),
     },
-    { key: "role", label: "Role", sort: "role", render: (p) => ROLE_LABEL[p.role] ?? p.role },
-    { key: "organization", label: "Organization", sort: "organization", render: (p) => (p.organization ? <>{p.organization}{p.team ? <span className="block text-muted">{p.team}</span> : null}</> : <span className="text-muted">none</span>) },
-    { key: "status", label: "Status", render: (p) => <Status p={p} /> },
-    { key: "sessions", label: "Sessions", render: (p) => <span className="font-mono">{p.sessions}</span> },
-    { key: "createdAt", label: "Joined", sort: "createdAt", render: (p) => <When iso={p.createdAt} /> },
+    { key: "role", label: t("role"), sort: "role", render: (p) => roleLabel(tt, p.role) },
+    { key: "organization", label: t("organization"), sort: "organization", render: (p) => (p.organization ? <>{p.organization}{p.team ? <span className="block text-muted">{p.team}</span> : null}</> : <span className="text-muted">{t("none")}</span>) },
+    { key: "status", label: t("status"), render: (p) => <Status p={p} /> },
+    { key: "sessions", label: t("sessions"), render: (p) => <span className="font-mono">{p.sessions}</span> },
+    { key: "createdAt", label: t("joined"), sort: "createdAt", render: (p) => <When iso={p.createdAt} /> },
     {
       key: "manage",
-      label: "Actions",
+      label: t("actions"),
       render: (p) => (
         <button type="button" onClick={() => setSelected(p)} className="min-h-11 rounded border border-ink/40 bg-panel px-3 font-bold">
-          Manage<span className="sr-only"> {p.name}</span>
+          {t("manage")}<span className="sr-only">{` ${p.name}`}</span>
         </button>
       ),
     },
@@ -68,28 +72,28 @@ export function PeopleConsole({ organizations, viewerId }: { organizations: Org[
       <div aria-live="polite">
         <FormNotice message={notice} />
       </div>
-      <form role="search" aria-label="Filter people" onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
+      <form role="search" aria-label={t("filterPeople")} onSubmit={(e) => e.preventDefault()} className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <div className="flex min-w-0 flex-col gap-1">
           <label htmlFor="people-q" className="font-bold">
-            Search name or e-mail
+            {t("searchNameOrEMail")}
           </label>
           <input id="people-q" type="search" value={q} onChange={(e) => setQ(e.target.value)} maxLength={200} autoComplete="off" className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-3 py-2" />
         </div>
-        <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value)} options={[{ value: "", label: "Every role" }, ...ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r]! }))]} />
+        <SelectField label={t("role")} value={role} onChange={(e) => setRole(e.target.value)} options={[{ value: "", label: t("everyRole") }, ...ROLES.map((r) => ({ value: r, label: roleLabel(tt, r) }))]} />
         <SelectField
-          label="Organization"
+          label={t("organization")}
           value={organizationId}
           onChange={(e) => setOrganizationId(e.target.value)}
-          options={[{ value: "", label: "Every organization" }, { value: "none", label: "No organization" }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
+          options={[{ value: "", label: t("everyOrganization") }, { value: "none", label: t("noOrganization") }, ...organizations.map((o) => ({ value: o.id, label: o.name }))]}
         />
         <SelectField
-          label="Status"
+          label={t("status")}
           value={status}
           onChange={(e) => setStatus(e.target.value)}
           options={[
-            { value: "", label: "Everyone" },
-            { value: "active", label: "Not banned" },
-            { value: "banned", label: "Banned" },
+            { value: "", label: t("everyone") },
+            { value: "active", label: t("notBanned") },
+            { value: "banned", label: t("banned") },
           ]}
         />
       </form>
@@ -99,11 +103,11 @@ export function PeopleConsole({ organizations, viewerId }: { organizations: Org[
         columns={columns}
         rowKey={(p) => p.id}
         initialSort={{ key: "name", dir: "asc" }}
-        caption="People across organizations"
-        noun="people"
-        emptyText="Nobody matches these filters. Clear a filter or search for part of a name."
+        caption={t("peopleAcrossOrganizations")}
+        noun={t("people")}
+        emptyText={t("nobodyMatchesTheseFiltersClearA")}
       />
-      <Dialog open={selected !== null} title={selected ? `Manage ${selected.name}` : "Manage"} onClose={() => setSelected(null)}>
+      <Dialog open={selected !== null} title={selected ? t("manageName", { name: selected.name }) : t("manage")} onClose={() => setSelected(null)}>
         {selected ? <PersonActions key={selected.id} person={selected} organizations={organizations} viewerId={viewerId} onDone={done} /> : null}
       </Dialog>
     </div>

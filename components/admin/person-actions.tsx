@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -13,7 +14,8 @@ import { postJson } from "@/lib/fetcher";
 import { SelectField, TextAreaField } from "@/components/ui/select-field";
 import { applyServerErrors } from "./server-errors";
 
-export const ROLE_LABEL: Record<string, string> = { learner: "Learner", sales: "Sales", manager: "Manager", admin: "Admin" };
+/** the role names, from the team catalog (role.learner …) */
+export const roleLabel = (t: (key: string) => string, role: string) => (["learner", "sales", "manager", "admin"].includes(role) ? t(`role.${role}`) : role);
 
 type Done = (message: string) => void;
 type Org = { id: string; name: string };
@@ -28,6 +30,8 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 function RoleForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
+  const t = useTranslations("adminConsole");
+  const tt = useTranslations("team");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof changeRoleSchema>, unknown, z.output<typeof changeRoleSchema>>({
     resolver: zodResolver(changeRoleSchema),
@@ -37,22 +41,23 @@ function RoleForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
     setFormError(null);
     const r = await postJson(`/api/admin/people/${person.id}/role`, v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["role", "reason"], r));
-    onDone(`${person.name} is now ${ROLE_LABEL[v.role] ?? v.role}.`);
+    onDone(t("done.role", { name: person.name, role: roleLabel(tt, v.role) }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <SelectField label="New role" options={ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r]! }))} {...register("role")} error={formState.errors.role?.message} />
-      <TextAreaField label="Reason for the role change" hint="Required. Saved in the audit log." {...register("reason")} error={formState.errors.reason?.message} />
+      <SelectField label={t("newRole")} options={ROLES.map((r) => ({ value: r, label: roleLabel(tt, r) }))} {...register("role")} error={formState.errors.role?.message} />
+      <TextAreaField label={t("reasonForTheRoleChange")} hint={t("requiredSavedInTheAuditLog")} {...register("reason")} error={formState.errors.reason?.message} />
       <Button type="submit" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Changing…" : "Change role"}
+        {formState.isSubmitting ? t("btn.changing") : t("btn.changeRole")}
       </Button>
     </form>
   );
 }
 
 function MoveForm({ person, organizations, onDone }: { person: PersonRow; organizations: Org[]; onDone: Done }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const choices = organizations.filter((o) => o.id !== person.organizationId);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof moveOrganizationSchema>, unknown, z.output<typeof moveOrganizationSchema>>({
@@ -63,29 +68,30 @@ function MoveForm({ person, organizations, onDone }: { person: PersonRow; organi
     setFormError(null);
     const r = await postJson(`/api/admin/people/${person.id}/organization`, v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["organizationId", "reason"], r));
-    onDone(`${person.name} moved to ${organizations.find((o) => o.id === v.organizationId)?.name ?? "the new organization"}.`);
+    onDone(t("done.moved", { name: person.name, org: organizations.find((o) => o.id === v.organizationId)?.name ?? t("done.newOrg") }));
   }
-  if (!choices.length) return <p className="text-muted">There is no other organization to move to.</p>;
+  if (!choices.length) return <p className="text-muted">{t("thereIsNoOtherOrganizationTo")}</p>;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
       <SelectField
-        label="Move to organization"
-        hint="They leave their current team."
-        options={[{ value: "", label: "Choose…" }, ...choices.map((o) => ({ value: o.id, label: o.name }))]}
+        label={t("moveToOrganization")}
+        hint={t("theyLeaveTheirCurrentTeam")}
+        options={[{ value: "", label: t("choose") }, ...choices.map((o) => ({ value: o.id, label: o.name }))]}
         {...register("organizationId")}
         error={formState.errors.organizationId?.message}
       />
-      <TextAreaField label="Reason for the move (optional)" {...register("reason")} error={formState.errors.reason?.message} />
+      <TextAreaField label={t("reasonForTheMoveOptional")} {...register("reason")} error={formState.errors.reason?.message} />
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Moving…" : "Move"}
+        {formState.isSubmitting ? t("btn.moving") : t("btn.move")}
       </Button>
     </form>
   );
 }
 
 function BanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof banSchema>, unknown, z.output<typeof banSchema>>({
     resolver: zodResolver(banSchema),
@@ -95,22 +101,23 @@ function BanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
     setFormError(null);
     const r = await postJson(`/api/admin/people/${person.id}/ban`, { reason: v.reason, days: v.days ?? "" });
     if (!r.ok) return setFormError(applyServerErrors(setError, ["reason", "days"], r));
-    onDone(`${person.name} is banned and signed out everywhere.`);
+    onDone(t("done.banned", { name: person.name }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <TextAreaField label="Reason for the ban" hint="Required. Saved in the audit log." {...register("reason")} error={formState.errors.reason?.message} />
-      <Field label="Ban for how many days" hint="Leave empty to ban until an admin lifts it." inputMode="numeric" {...register("days")} error={formState.errors.days?.message} />
+      <TextAreaField label={t("reasonForTheBan")} hint={t("requiredSavedInTheAuditLog")} {...register("reason")} error={formState.errors.reason?.message} />
+      <Field label={t("banForHowManyDays")} hint={t("leaveEmptyToBanUntilAn")} inputMode="numeric" {...register("days")} error={formState.errors.days?.message} />
       <Button type="submit" variant="danger" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Banning…" : "Ban and sign out"}
+        {formState.isSubmitting ? t("btn.banning") : t("btn.ban")}
       </Button>
     </form>
   );
 }
 
 function UnbanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof unbanSchema>, unknown, z.output<typeof unbanSchema>>({
     resolver: zodResolver(unbanSchema),
@@ -120,25 +127,26 @@ function UnbanForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
     setFormError(null);
     const r = await postJson(`/api/admin/people/${person.id}/unban`, v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["reason"], r));
-    onDone(`${person.name} can sign in again.`);
+    onDone(t("done.unbanned", { name: person.name }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
       <p>
-        Banned{person.banExpires ? ` until ${person.banExpires.slice(0, 10)}` : " until lifted"}
+        {person.banExpires ? t("bannedUntil", { date: person.banExpires.slice(0, 10) }) : t("bannedUntilLifted")}
         {person.banReason ? `: “${person.banReason}”` : "."}
       </p>
-      <TextAreaField label="Reason for lifting the ban (optional)" {...register("reason")} error={formState.errors.reason?.message} />
+      <TextAreaField label={t("reasonForLiftingTheBanOptional")} {...register("reason")} error={formState.errors.reason?.message} />
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Lifting…" : "Lift the ban"}
+        {formState.isSubmitting ? t("btn.lifting") : t("btn.lift")}
       </Button>
     </form>
   );
 }
 
 function SignOutForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
+  const t = useTranslations("adminConsole");
   const [error, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState, control } = useForm<z.input<typeof signOutSchema>, unknown, z.output<typeof signOutSchema>>({
     resolver: zodResolver(signOutSchema),
@@ -148,16 +156,16 @@ function SignOutForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
     setFormError(null);
     const r = await postJson<{ sessionsEnded: number }>(`/api/admin/people/${person.id}/sign-out`, v);
     if (!r.ok) return setFormError(applyServerErrors(setError, ["reason"], r));
-    onDone(`${person.name} is signed out everywhere (${r.data.sessionsEnded} session${r.data.sessionsEnded === 1 ? "" : "s"} ended).`);
+    onDone(t("done.signedOut", { name: person.name, count: r.data.sessionsEnded }));
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <p className="text-sm text-muted">Ends every session of this person now; they can sign in again.</p>
-      <TextAreaField label="Reason for the sign-out (optional)" {...register("reason")} error={formState.errors.reason?.message} />
+      <p className="text-sm text-muted">{t("endsEverySessionOfThisPerson")}</p>
+      <TextAreaField label={t("reasonForTheSignOutOptional")} {...register("reason")} error={formState.errors.reason?.message} />
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="self-start">
-        {formState.isSubmitting ? "Signing out…" : "Sign out everywhere"}
+        {formState.isSubmitting ? t("btn.signingOut") : t("btn.signOut")}
       </Button>
     </form>
   );
@@ -165,28 +173,30 @@ function SignOutForm({ person, onDone }: { person: PersonRow; onDone: Done }) {
 
 /** Everything an admin can do to one person, each audited by the server. */
 export function PersonActions({ person, organizations, viewerId, onDone }: { person: PersonRow; organizations: Org[]; viewerId: string; onDone: Done }) {
+  const t = useTranslations("adminConsole");
+  const tt = useTranslations("team");
   const self = person.id === viewerId;
   return (
     <div className="flex flex-col gap-5">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
-        <dt className="font-bold">E-mail</dt>
+        <dt className="font-bold">{t("eMail")}</dt>
         <dd className="wrap-anywhere">{person.email}</dd>
-        <dt className="font-bold">Role</dt>
-        <dd>{ROLE_LABEL[person.role] ?? person.role}</dd>
-        <dt className="font-bold">Organization</dt>
+        <dt className="font-bold">{t("role")}</dt>
+        <dd>{roleLabel(tt, person.role)}</dd>
+        <dt className="font-bold">{t("organization")}</dt>
         <dd>{person.organization ?? "none"}{person.team ? ` · ${person.team}` : ""}</dd>
       </dl>
-      {self ? <p className="rounded border border-line bg-panel px-3 py-2">This is you. Another admin changes your own role or bans you.</p> : null}
+      {self ? <p className="rounded border border-line bg-panel px-3 py-2">{t("thisIsYouAnotherAdminChanges")}</p> : null}
       {!self ? (
-        <Section title="Role">
+        <Section title={t("role")}>
           <RoleForm person={person} onDone={onDone} />
         </Section>
       ) : null}
-      <Section title="Organization">
+      <Section title={t("organization")}>
         <MoveForm person={person} organizations={organizations} onDone={onDone} />
       </Section>
-      {!self ? <Section title={person.banned ? "Ban" : "Ban from Riser"}>{person.banned ? <UnbanForm person={person} onDone={onDone} /> : <BanForm person={person} onDone={onDone} />}</Section> : null}
-      <Section title="Force sign-out">
+      {!self ? <Section title={person.banned ? t("section.ban") : t("section.banFromRiser")}>{person.banned ? <UnbanForm person={person} onDone={onDone} /> : <BanForm person={person} onDone={onDone} />}</Section> : null}
+      <Section title={t("forceSignOut")}>
         <SignOutForm person={person} onDone={onDone} />
       </Section>
     </div>

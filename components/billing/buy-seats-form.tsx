@@ -1,4 +1,6 @@
 "use client";
+import { useTranslations } from "next-intl";
+import { useFieldError, useTranslatedResolver } from "@/components/team/use-field-error";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
@@ -24,11 +26,13 @@ function newKey(): string {
  * an error (or twice) resumes the same checkout instead of starting a second payment.
  */
 export function BuySeatsForm({ plans, currency, org, enabled }: { plans: PriceTier[]; currency: string; org?: string; enabled: boolean }) {
+  const t = useTranslations("billing");
+  const tr = useFieldError();
   const [attempt, setAttempt] = useState<{ seats: number; key: string } | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const [leaving, setLeaving] = useState(false);
   const { register, handleSubmit, control, formState, setError } = useForm<z.input<typeof seatsOnly>, unknown, z.output<typeof seatsOnly>>({
-    resolver: zodResolver(seatsOnly),
+    resolver: useTranslatedResolver(zodResolver(seatsOnly)),
     defaultValues: { seats: 5 },
   });
   const seats = Number(useWatch({ control, name: "seats" }));
@@ -47,8 +51,8 @@ export function BuySeatsForm({ plans, currency, org, enabled }: { plans: PriceTi
     setAttempt(current);
     const res = await postJson<{ url: string; checkoutId: string }>("/api/billing/checkout", { seats: n, idempotencyKey: current.key, ...(org ? { org } : {}) });
     if (!res.ok) {
-      if (res.fieldErrors?.seats?.[0]) setError("seats", { message: res.fieldErrors.seats[0] });
-      else setProblem(res.status === 0 ? "No connection to Riser. Nothing was charged and no seats were added; check the network and press the button again." : res.error);
+      if (res.fieldErrors?.seats?.[0]) setError("seats", { message: tr(res.fieldErrors.seats[0]) ?? res.fieldErrors.seats[0] });
+      else setProblem(res.status === 0 ? t("buy.offline") : (tr(res.error) ?? res.error));
       // a purchase that is already finished cannot be resumed: the next press starts a new one
       if (res.status === 409) setAttempt(null);
       return;
@@ -61,16 +65,16 @@ export function BuySeatsForm({ plans, currency, org, enabled }: { plans: PriceTi
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-xl flex-col gap-4 rounded border border-line bg-panel p-4" aria-labelledby="buy-h">
       <ErrorSummary control={control} />
       <h2 id="buy-h" className="text-2xl">
-        Buy seats
+        {t("buy.heading")}
       </h2>
       <Field
-        label="Seats to add"
+        label={t("buy.seats")}
         type="number"
         inputMode="numeric"
         min={1}
         max={MAX_SEATS_PER_CHECKOUT}
         step={1}
-        hint={`From 1 to ${MAX_SEATS_PER_CHECKOUT} in one purchase. One seat is one person in your organization, managers included.`}
+        hint={t("buy.hint", { max: MAX_SEATS_PER_CHECKOUT })}
         error={formState.errors.seats?.message}
         className="max-w-40 font-mono"
         {...register("seats")}
@@ -78,26 +82,25 @@ export function BuySeatsForm({ plans, currency, org, enabled }: { plans: PriceTi
       <p className="text-lg" aria-live="polite" data-testid="quote">
         {q ? (
           <>
-            <span className="font-mono">{q.seats}</span> × <span className="font-mono">{formatMoney(q.unitAmount, currency)}</span> ({q.plan.name}) ={" "}
-            <strong className="font-mono">{formatMoney(q.amount, currency)}</strong> <span className="text-sm text-muted">{currency.toUpperCase()}</span>
+            {t.rich("buy.quote", { seats: q.seats, unit: formatMoney(q.unitAmount, currency), plan: q.plan.name, amount: formatMoney(q.amount, currency), mono: (x) => <span className="font-mono">{x}</span>, b: (x) => <strong className="font-mono">{x}</strong> })}{" "}
+            <span className="text-sm text-muted">{currency.toUpperCase()}</span>
           </>
         ) : (
-          <span className="text-muted">Enter a number of seats to see the price.</span>
+          <span className="text-muted">{t("buy.enter")}</span>
         )}
       </p>
       <FormError message={problem} />
       {enabled ? (
         <div className="flex flex-wrap items-center gap-3">
           <Button type="submit" disabled={formState.isSubmitting || leaving}>
-            {leaving ? "Opening the payment page…" : formState.isSubmitting ? "Starting checkout…" : "Continue to payment"}
+            {leaving ? t("buy.opening") : formState.isSubmitting ? t("buy.starting") : t("continue")}
           </Button>
         </div>
       ) : (
-        <p className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">Buying seats is switched off on this Riser instance: no payment service is configured.</p>
+        <p className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">{t("buy.off")}</p>
       )}
       <p className="text-sm text-muted">
-        You pay on the payment service&apos;s page. Seats are added when it confirms the payment, usually within seconds; a receipt is mailed to your
-        organization&apos;s managers.
+        {t("buy.note")}
       </p>
     </form>
   );

@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import Link from "next/link";
 import { useEffect, useState } from "react";
 import useSWR from "swr";
@@ -15,6 +16,7 @@ const GIVE_UP_MS = 90_000;
  * processed (seats are added only then), or says plainly that it is still waiting.
  */
 export function CheckoutStatus({ initial, billingHref }: { initial: Status; billingHref: string }) {
+  const tt = useTranslations("billing");
   const [since] = useState(() => Date.now());
   const [gaveUp, setGaveUp] = useState(false);
   const done = FINAL.has(initial.status);
@@ -29,19 +31,17 @@ export function CheckoutStatus({ initial, billingHref }: { initial: Status; bill
     return () => clearTimeout(t);
   }, [c.status, since]);
 
-  const s = c.seats === 1 ? "" : "s";
   if (c.status === "paid") {
     return (
       <div className="flex max-w-prose flex-col gap-3 rounded border border-pass bg-pass-light p-4" role="status" data-testid="checkout-paid">
         <p className="text-xl font-bold text-pass">
-          Payment received: {c.seats} seat{s} added.
+          {tt("status.paid", { seats: c.seats })}
         </p>
         <p>
-          {c.orgName} now has <strong className="font-mono">{c.seatsNow}</strong> seats. You paid {formatMoney(c.amount, c.currency)}; the receipt is on the billing
-          page and in your mail.
+          {tt.rich("status.paidBody", { org: c.orgName, seats: c.seatsNow, amount: formatMoney(c.amount, c.currency), b: (x) => <strong className="font-mono">{x}</strong> })}
         </p>
         <p>
-          <Link href={billingHref}>Back to seats and billing</Link>
+          <Link href={billingHref}>{tt("back")}</Link>
         </p>
       </div>
     );
@@ -49,26 +49,24 @@ export function CheckoutStatus({ initial, billingHref }: { initial: Status; bill
   if (c.status === "expired" || c.status === "failed") {
     return (
       <div className="flex max-w-prose flex-col gap-3 rounded border border-caution bg-caution-light p-4" role="status" data-testid="checkout-ended">
-        <p className="text-xl font-bold text-caution">{c.status === "failed" ? "The payment failed." : "This checkout ended without payment."}</p>
-        <p>Nothing was charged and no seats were added.</p>
+        <p className="text-xl font-bold text-caution">{c.status === "failed" ? tt("status.failed") : tt("status.expired")}</p>
+        <p>{tt("status.nothingCharged")}</p>
         <p>
-          <Link href={billingHref}>Back to seats and billing</Link> to try again.
+          {tt.rich("status.tryAgain", { link: (x) => <Link href={billingHref}>{x}</Link> })}
         </p>
       </div>
     );
   }
   return (
     <div className="flex max-w-prose flex-col gap-3 rounded border border-water bg-water-light p-4" role="status" aria-live="polite" data-testid="checkout-waiting">
-      <p className="text-xl font-bold">Waiting for the payment service to confirm…</p>
+      <p className="text-xl font-bold">{tt("status.waiting")}</p>
       <p>
-        Seats are added only when the payment service confirms the payment of {c.seats} seat{s} ({formatMoney(c.amount, c.currency)}). This usually takes a few
-        seconds; this page updates by itself.
+        {tt("status.waitingBody", { seats: c.seats, amount: formatMoney(c.amount, c.currency) })}
       </p>
-      {error ? <p className="text-caution">Riser could not check the status just now ({error.message}). It keeps trying.</p> : null}
+      {error ? <p className="text-caution">{tt("status.checkFailed", { message: error.message })}</p> : null}
       {gaveUp ? (
         <p className="font-bold">
-          Still no confirmation. If you paid, the seats appear as soon as it arrives, and you will get a receipt by mail; nothing is charged twice. Check the{" "}
-          <Link href={billingHref}>billing page</Link> later.
+          {tt.rich("status.gaveUp", { link: (x) => <Link href={billingHref}>{x}</Link> })}
         </p>
       ) : null}
     </div>

@@ -1,3 +1,4 @@
+import { useTranslations } from "next-intl";
 import { Table } from "@/components/ui/table";
 import { formatMoney } from "@/lib/billing/browser";
 import type { Receipt } from "@/lib/billing";
@@ -5,14 +6,15 @@ import { formatDayTime } from "./format";
 
 /** Every payment that added seats, newest first. */
 export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
+  const t = useTranslations("billing");
   return (
     <section aria-labelledby="receipts-h" className="flex flex-col gap-3">
       <h2 id="receipts-h" className="text-2xl">
-        Receipts
+        {t("receipts.heading")}
       </h2>
       {receipts.length === 0 ? (
         <p className="rounded border border-line bg-panel p-4" data-testid="receipts-empty">
-          No payments yet. Receipts appear here as soon as the payment service confirms a purchase.
+          {t("receipts.none")}
         </p>
       ) : (
         <>
@@ -25,25 +27,25 @@ export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
                   <span className="font-mono">{formatMoney(r.amount, r.currency)} {r.currency.toUpperCase()}</span>
                 </p>
                 <p className="text-sm">
-                  <span className="font-mono">+{r.seatsAdded}</span> seats ({r.seatsBefore ?? "?"} → {r.seatsAfter ?? "?"}) · {formatDayTime(r.paidAt)}
+                  {t.rich("receipts.card", { added: r.seatsAdded, before: r.seatsBefore ?? "?", after: r.seatsAfter ?? "?", mono: (x) => <span className="font-mono">{x}</span> })} · {formatDayTime(r.paidAt)}
                 </p>
-                <p className="text-sm text-muted">Bought by {r.boughtBy}</p>
+                <p className="text-sm text-muted">{t("receipts.boughtBy", { name: r.boughtBy })}</p>
                 <p className="font-mono text-xs text-muted [overflow-wrap:anywhere]">{r.reference}</p>
               </li>
             ))}
           </ul>
           <Table
             className="hidden sm:block"
-            label="Payments for seats, newest first"
+            label={t("receipts.label")}
             rows={receipts}
             rowKey={(r) => r.id}
             tableProps={{ "data-testid": "receipts" }}
             rowProps={(r) => ({ "data-testid": `receipt-${r.number}` })}
             columns={[
-              { key: "date", header: "Date", className: "whitespace-nowrap", cell: (r) => formatDayTime(r.paidAt) },
+              { key: "date", header: t("receipts.date"), className: "whitespace-nowrap", cell: (r) => formatDayTime(r.paidAt) },
               {
                 key: "receipt",
-                header: "Receipt",
+                header: t("receipts.receipt"),
                 cell: (r) => (
                   <>
                     <span className="font-mono">{r.number}</span>
@@ -53,11 +55,11 @@ export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
                   </>
                 ),
               },
-              { key: "added", header: "Seats added", headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => `+${r.seatsAdded}` },
-              { key: "before-after", header: "Seats before → after", headerClassName: "px-3 py-2 text-right align-bottom", className: "whitespace-nowrap text-right font-mono", cell: (r) => `${r.seatsBefore ?? "?"} → ${r.seatsAfter ?? "?"}` },
+              { key: "added", header: t("receipts.added"), headerClassName: "px-3 py-2 text-right align-bottom", className: "text-right font-mono", cell: (r) => `+${r.seatsAdded}` },
+              { key: "before-after", header: t("receipts.beforeAfter"), headerClassName: "px-3 py-2 text-right align-bottom", className: "whitespace-nowrap text-right font-mono", cell: (r) => `${r.seatsBefore ?? "?"} → ${r.seatsAfter ?? "?"}` },
               {
                 key: "amount",
-                header: "Amount",
+                header: t("receipts.amount"),
                 headerClassName: "px-3 py-2 text-right align-bottom",
                 className: "whitespace-nowrap text-right font-mono",
                 cell: (r) => (
@@ -66,7 +68,7 @@ export function ReceiptsTable({ receipts }: { receipts: Receipt[] }) {
                   </>
                 ),
               },
-              { key: "by", header: "Bought by", cell: (r) => r.boughtBy },
+              { key: "by", header: t("receipts.by"), cell: (r) => r.boughtBy },
             ]}
           />
         </>

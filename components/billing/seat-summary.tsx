@@ -1,5 +1,6 @@
+import { useTranslations } from "next-intl";
 import type { SeatSummary } from "@/lib/billing";
-import { formatDay, plural } from "./format";
+import { formatDay } from "./format";
 
 function Figure({ label, value, detail, testId }: { label: string; value: number; detail?: string; testId: string }) {
   return (
@@ -17,30 +18,30 @@ function Figure({ label, value, detail, testId }: { label: string; value: number
 
 /** Seats, seats in use and free seats, with the trial's state. */
 export function SeatFigures({ s }: { s: SeatSummary }) {
+  const t = useTranslations("billing");
   return (
     <section aria-labelledby="seats-h" className="flex flex-col gap-3">
       <h2 id="seats-h" className="text-2xl">
-        Seats
+        {t("figures.seats")}
       </h2>
       <dl className="grid grid-cols-3 gap-2 sm:gap-3">
-        <Figure label="Seats" value={s.seats} testId="seats-total" detail={s.trial === "active" ? "trial seats included" : undefined} />
-        <Figure label="In use" value={s.used} testId="seats-used" detail={`${plural(s.members, "person", "people")}, ${plural(s.pending, "open invitation")}`} />
-        <Figure label="Free" value={s.free} testId="seats-free" detail={s.free === 0 ? "buy seats to invite more" : undefined} />
+        <Figure label={t("figures.seats")} value={s.seats} testId="seats-total" detail={s.trial === "active" ? t("figures.trialIncluded") : undefined} />
+        <Figure label={t("figures.used")} value={s.used} testId="seats-used" detail={t("figures.usedDetail", { members: s.members, pending: s.pending })} />
+        <Figure label={t("figures.free")} value={s.free} testId="seats-free" detail={s.free === 0 ? t("figures.buyMore") : undefined} />
       </dl>
       {s.trial === "active" && s.trialEndsAt ? (
         <p className="max-w-prose rounded border border-water bg-water-light px-3 py-2" data-testid="trial-note">
-          Your organization is on its trial until <strong>{formatDay(s.trialEndsAt)}</strong>. Buying seats ends the trial, and the trial&apos;s seats stay with
-          your organization.
+          {t.rich("figures.trialActive", { date: formatDay(s.trialEndsAt), b: (c) => <strong>{c}</strong> })}
         </p>
       ) : null}
       {s.trial === "ended" && s.trialEndsAt ? (
         <p className="max-w-prose rounded border border-caution bg-caution-light px-3 py-2 text-caution" role="status" data-testid="trial-note">
-          The trial ended on <strong>{formatDay(s.trialEndsAt)}</strong>. Everyone already in keeps access; buy seats to invite more people.
+          {t.rich("figures.trialEnded", { date: formatDay(s.trialEndsAt), b: (c) => <strong>{c}</strong> })}
         </p>
       ) : null}
       {s.used > s.seats ? (
         <p className="max-w-prose text-sm text-caution">
-          More seats are in use than your organization has. Nobody loses access, but new invitations wait until there are free seats.
+          {t("figures.over")}
         </p>
       ) : null}
     </section>

@@ -1,3 +1,4 @@
+import { useTranslations } from "next-intl";
 import Image from "next/image";
 import { evidenceUrl, type EvidenceItem } from "@/lib/signoffs";
 import { formatBytes } from "@/lib/signoffs/browser";
@@ -7,16 +8,17 @@ import { formatBytes } from "@/lib/signoffs/browser";
  * through the checking route (never straight to the store), so the browser's own session decides.
  */
 export function EvidenceThumbs({ signOffId, items }: { signOffId: string; items: EvidenceItem[] }) {
-  if (!items.length) return <p className="text-sm text-muted">No files.</p>;
+  const t = useTranslations("signoffs");
+  if (!items.length) return <p className="text-sm text-muted">{t("noFiles")}</p>;
   return (
-    <ul className="flex flex-wrap gap-3" aria-label="Evidence files">
+    <ul className="flex flex-wrap gap-3" aria-label={t("filesLabel")}>
       {items.map((e, i) => (
         <li key={e.id} className="w-40">
           <a href={evidenceUrl(signOffId, e.id)} target="_blank" rel="noopener" className="block rounded border border-line bg-panel p-1 no-underline">
             {e.thumbnail ? (
               <Image
                 src={evidenceUrl(signOffId, e.id, true)}
-                alt={`Photo ${i + 1} of ${items.length}: ${e.name}`}
+                alt={t("photoAlt", { n: i + 1, total: items.length, name: e.name })}
                 width={152}
                 height={114}
                 unoptimized

@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import Link from "next/link";
 import type { Viewer } from "@/lib/access";
 import { signOffsOfPerson } from "@/lib/signoffs";
@@ -13,13 +14,14 @@ const day = (d: Date) => isoDay(d);
  */
 export async function PersonSignOffs({ viewer, personId }: { viewer: Viewer; personId: string }) {
   const items = await signOffsOfPerson(viewer, personId);
+  const t = await getTranslations("signoffs");
   return (
     <section aria-labelledby="person-signoffs-h" className="flex flex-col gap-3">
       <h2 id="person-signoffs-h" className="text-2xl">
-        Practical sign-offs
+        {t("heading")}
       </h2>
       {items.length === 0 ? (
-        <p className="text-muted">No sign-offs sent yet.</p>
+        <p className="text-muted">{t("noneSent")}</p>
       ) : (
         <ul className="flex flex-col gap-3">
           {items.map((s) => (
@@ -32,12 +34,12 @@ export async function PersonSignOffs({ viewer, personId }: { viewer: Viewer; per
                 <SignOffBadge status={s.status} />
               </div>
               <p className="mt-1 text-sm text-muted">
-                Sent {day(s.submittedAt)}
-                {s.reviewedAt ? ` · ${s.status === "approved" ? "approved" : "returned"} by ${s.reviewerName ?? "—"} on ${day(s.reviewedAt)}` : ""}
+                {t("sent", { date: day(s.submittedAt) })}
+                {s.reviewedAt ? ` · ${t("reviewedBy", { status: s.status === "approved" ? "approved" : "returned", name: s.reviewerName ?? "—", date: day(s.reviewedAt) })}` : ""}
                 {s.status === "submitted" ? (
                   <>
                     {" · "}
-                    <Link href="/team/sign-offs">review it</Link>
+                    <Link href="/team/sign-offs">{t("reviewIt")}</Link>
                   </>
                 ) : null}
               </p>

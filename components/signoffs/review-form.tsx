@@ -1,4 +1,6 @@
 "use client";
+import { useTranslations } from "next-intl";
+import { useFieldError } from "@/components/team/use-field-error";
 import { useRouter } from "next/navigation";
 import { useEffect, useId, useState } from "react";
 import { useForm } from "react-hook-form";
@@ -11,6 +13,8 @@ type Decision = "approve" | "return";
 
 /** Approve, or return with a comment (required), one waiting sign-off. The server checks again. */
 export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learnerName: string; skillTitle: string }) {
+  const t = useTranslations("signoffs");
+  const tr = useFieldError();
   const fieldId = useId();
   const [problem, setProblem] = useState<string | null>(null);
   const [outcome, setOutcome] = useState<string | null>(null);
@@ -21,8 +25,8 @@ export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learne
   // confirmation stays readable for a moment first.
   useEffect(() => {
     if (!outcome) return;
-    const t = setTimeout(() => router.refresh(), 1500);
-    return () => clearTimeout(t);
+    const timer = setTimeout(() => router.refresh(), 1500);
+    return () => clearTimeout(timer);
   }, [outcome, router]);
 
   async function decide(decision: Decision) {
@@ -31,34 +35,34 @@ export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learne
     const parsed = reviewInput.safeParse({ decision, comment: getValues("comment") });
     if (!parsed.success) {
       const msg = parsed.error.issues.find((i) => i.path[0] === "comment")?.message;
-      if (msg) setError("comment", { message: msg });
-      else setProblem(parsed.error.issues[0]?.message ?? "Check the form.");
+      if (msg) setError("comment", { message: tr(msg) });
+      else setProblem(tr(parsed.error.issues[0]?.message) ?? t("checkForm"));
       return;
     }
     setBusy(decision);
     const res = await postJson<{ status: string; moduleCompleted: boolean }>(`/api/sign-offs/${id}/review`, parsed.data);
     setBusy(null);
     if (!res.ok) {
-      if (res.fieldErrors?.comment?.[0]) setError("comment", { message: res.fieldErrors.comment[0] });
-      else setProblem(res.error);
+      if (res.fieldErrors?.comment?.[0]) setError("comment", { message: tr(res.fieldErrors.comment[0]) });
+      else setProblem(tr(res.error) ?? res.error);
       return;
     }
     setOutcome(
       res.data.status === "approved"
-        ? `✓ Approved. ${learnerName} has been e-mailed.${res.data.moduleCompleted ? " This completed the module for them." : ""}`
-        : `Returned to ${learnerName} with your comment; they have been e-mailed.`,
+        ? t("approvedDone", { name: learnerName, completed: res.data.moduleCompleted ? "yes" : "no" })
+        : t("returnedDone", { name: learnerName }),
     );
   }
 
   if (outcome) return <FormNotice message={outcome} />;
   const error = formState.errors.comment?.message;
   return (
-    <form onSubmit={(e) => e.preventDefault()} noValidate className="flex flex-col gap-2" aria-label={`Review: ${skillTitle}, ${learnerName}`}>
+    <form onSubmit={(e) => e.preventDefault()} noValidate className="flex flex-col gap-2" aria-label={t("reviewLabel", { skill: skillTitle, name: learnerName })}>
       <label htmlFor={fieldId} className="font-bold">
-        Comment for {learnerName}
+        {t("commentFor", { name: learnerName })}
       </label>
       <p id={`${fieldId}-hint`} className="text-sm text-muted">
-        Required when you return it: say what is missing or needs redoing.
+        {t("commentHint")}
       </p>
       <textarea
         id={fieldId}
@@ -76,10 +80,10 @@ export function ReviewForm({ id, learnerName, skillTitle }: { id: string; learne
       <FormError message={problem} />
       <div className="flex flex-wrap gap-2">
         <Button type="button" onClick={() => decide("approve")} disabled={busy !== null}>
-          {busy === "approve" ? "Approving…" : "Approve sign-off"}
+          {busy === "approve" ? t("approving") : t("approve")}
         </Button>
         <Button type="button" variant="secondary" onClick={() => decide("return")} disabled={busy !== null}>
-          {busy === "return" ? "Returning…" : "Return with comment"}
+          {busy === "return" ? t("returning") : t("return")}
         </Button>
       </div>
     </form>

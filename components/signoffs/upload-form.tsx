@@ -1,4 +1,6 @@
 "use client";
+import { useTranslations } from "next-intl";
+import { useFieldError, useTranslatedResolver } from "@/components/team/use-field-error";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
@@ -12,7 +14,7 @@ import { ACCEPT, MAX_FILES, MAX_UPLOAD_LABEL, checkChosenFiles, uploadFormInput,
 type ServerAnswer = { status: number; body: { error?: string; fieldErrors?: Record<string, string[]> } };
 
 /** XMLHttpRequest rather than fetch: it reports upload progress, which matters on a job-site phone. */
-function send(form: FormData, onProgress: (pct: number) => void): Promise<ServerAnswer> {
+function send(form: FormData, onProgress: (pct: number) => void, offline: string): Promise<ServerAnswer> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", "/api/sign-offs");
@@ -27,16 +29,18 @@ function send(form: FormData, onProgress: (pct: number) => void): Promise<Server
       }
       resolve({ status: xhr.status, body });
     };
-    xhr.onerror = () => resolve({ status: 0, body: { error: "The upload stopped: no connection. Nothing was stored; try again when you have signal." } });
+    xhr.onerror = () => resolve({ status: 0, body: { error: offline } });
     xhr.send(form);
   });
 }
 
 /** Upload progress in words; spoken in quarter steps so a screen reader is not flooded. */
-const progressText = (pct: number | null) => `${pct ?? 0}% — keep this page open`;
 
 /** The learner's evidence upload for one skill: files, a note, progress, and every error in words. */
 export function UploadForm({ module, skill, skillTitle }: { module: string; skill: string; skillTitle: string }) {
+  const t = useTranslations("signoffs");
+  const tr = useFieldError();
+  const progressText = (pct: number | null) => t("progress", { pct: pct ?? 0 });
   const router = useRouter();
   const id = useId();
   const [files, setFiles] = useState<File[]>([]);
@@ -44,7 +48,7 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
   const [problem, setProblem] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
-  const { register, handleSubmit, formState, setError, control } = useForm<UploadFormInput>({ resolver: zodResolver(uploadFormInput), defaultValues: { note: "" } });
+  const { register, handleSubmit, formState, setError, control } = useForm<UploadFormInput>({ resolver: useTranslatedResolver(zodResolver(uploadFormInput)), defaultValues: { note: "" } });
 
   async function onSubmit(values: UploadFormInput) {
     setProblem(null);
@@ -58,30 +62,30 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
     form.set("note", values.note);
     for (const f of files) form.append("files", f, f.name);
     setProgress(0);
-    const res = await send(form, setProgress);
+    const res = await send(form, setProgress, t("offline"));
     setProgress(null);
     if (res.status === 201) {
-      setDone("Sent for review. Your manager gets an e-mail; you get one when it is decided.");
+      setDone(t("sentForReview"));
       router.refresh();
       return;
     }
     const fe = res.body.fieldErrors ?? {};
     if (fe.files?.[0]) setFileError(fe.files[0]);
-    if (fe.note?.[0]) setError("note", { message: fe.note[0] });
-    if (!fe.files?.[0] && !fe.note?.[0]) setProblem(res.body.error ?? `The upload failed (${res.status}). Nothing was stored; try again.`);
+    if (fe.note?.[0]) setError("note", { message: tr(fe.note[0]) ?? fe.note[0] });
+    if (!fe.files?.[0] && !fe.note?.[0]) setProblem(tr(res.body.error) ?? t("uploadFailed", { status: res.status }));
   }
 
   const noteError = formState.errors.note?.message;
   const busy = progress !== null;
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3" aria-label={`Send evidence: ${skillTitle}`}>
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-3" aria-label={t("sendLabel", { skill: skillTitle })}>
       <ErrorSummary control={control} extra={[fileError ? { field: `${id}-files`, message: fileError } : null]} />
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-files`} className="font-bold">
-          Photos or PDF
+          {t("files")}
         </label>
         <p id={`${id}-files-hint`} className="text-sm text-muted">
-          JPEG, PNG or HEIC photos, or a PDF — up to {MAX_FILES} files, {MAX_UPLOAD_LABEL} in all. Location and camera details are removed from photos before they are stored.
+          {t("filesHint", { max: MAX_FILES, size: MAX_UPLOAD_LABEL })}
         </p>
         <input
           id={`${id}-files`}
@@ -106,7 +110,7 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
       </div>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-note`} className="font-bold">
-          Note for the reviewer (optional)
+          {t("note")}
         </label>
         <textarea
           id={`${id}-note`}
@@ -114,7 +118,7 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
           disabled={busy}
           aria-invalid={noteError ? true : undefined}
           aria-describedby={noteError ? `${id}-note-error` : undefined}
-          placeholder="Where and when, who watched, anything the photo does not show"
+          placeholder={t("notePlaceholder")}
           className={`rounded border bg-panel px-3 py-2 ${noteError ? "border-caution" : "border-ink/40"}`}
           {...register("note")}
         />
@@ -128,14 +132,14 @@ export function UploadForm({ module, skill, skillTitle }: { module: string; skil
       <FormNotice message={done} />
       {busy ? (
         <div className="flex items-center gap-3">
-          <progress max={100} value={progress} className="h-3 w-48" aria-label="Upload progress" />
+          <progress max={100} value={progress} className="h-3 w-48" aria-label={t("progressLabel")} />
           <span className="font-mono text-sm">{progressText(progress)}</span>
         </div>
       ) : null}
       <LiveMessage message={busy ? progressText(Math.floor((progress ?? 0) / 25) * 25) : ""} delay={1000} testId="upload-announcement" />
       <div>
         <Button type="submit" disabled={busy}>
-          {busy ? "Sending…" : "Send for sign-off"}
+          {busy ? t("sending") : t("send")}
         </Button>
       </div>
     </form>

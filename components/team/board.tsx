@@ -3,6 +3,7 @@
 // details are in ./board-cell.tsx.
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { FormError } from "@/components/ui/field";
@@ -11,7 +12,8 @@ import { useDebounced } from "@/components/ui/use-debounced";
 import { getJson } from "@/lib/fetcher";
 import type { BoardPage } from "@/lib/team";
 import type { RichRow } from "@/lib/team";
-import { BOARD_STATUSES, STATUS_LABELS, type BoardSort, type BoardStatus } from "@/lib/team/browser";
+import { BOARD_STATUSES, type BoardSort, type BoardStatus } from "@/lib/team/browser";
+import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/browser";
 import { isoDay } from "@/lib/dates";
 import { BoardCellView } from "./board-cell";
 
@@ -48,6 +50,7 @@ const col = createColumnHelper<RichRow>();
 type RichPage = Omit<BoardPage, "rows"> & { rows: RichRow[] };
 
 export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialPage }: Props) {
+  const t = useTranslations("team");
   const [f, setF] = useState<BoardFilters>(initial);
   const [search, setSearch] = useState(initial.q);
   const qs = queryString(f, org);
@@ -74,7 +77,7 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
   const columns = useMemo(
     () => [
       col.accessor("name", {
-        header: "Person",
+        header: t("board.col.person"),
         cell: (c) => (
           <div className="min-w-40">
             <Link href={`/team/people/${c.row.original.id}`} className="font-bold">
@@ -85,11 +88,23 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
         ),
       }),
       col.accessor("team", {
-        header: "Team",
+        header: t("invite.team"),
         cell: (c) => {
-          const t = c.getValue();
+          const name = c.getValue();
           const orgName = showOrgNames ? teams.find((x) => x.id === c.row.original.teamId)?.orgName : null;
-          return <span className="whitespace-nowrap">{t ?? <span className="text-muted">No team</span>}{orgName ? <span className="block text-xs text-muted">{orgName}</span> : null}</span>;
+          return <span className="whitespace-nowrap">{name ?? <span className="text-muted">{t("noTeam")}</span>}{orgName ? <span className="block text-xs text-muted">{orgName}</span> : null}</span>;
+        },
+      }),
+      col.accessor("language", {
+        header: t("board.col.language"),
+        enableSorting: false,
+        cell: (c) => {
+          const l = c.getValue();
+          return isLocale(l) ? (
+            <span lang={l} className="whitespace-nowrap" data-testid="person-language">
+              {LANGUAGE_NAMES[l]}
+            </span>
+          ) : null;
         },
       }),
       ...shownModules.map((m) =>
@@ -105,17 +120,17 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
         }),
       ),
       col.accessor("passed", {
-        header: "Passed",
+        header: t("board.col.passed"),
         cell: (c) => (
           <span className="font-mono">
             {c.getValue()}/{shownModules.length}
           </span>
         ),
       }),
-      col.accessor("overdue", { header: "Overdue", cell: (c) => <span className={`font-mono ${c.getValue() ? "font-bold text-caution" : ""}`}>{c.getValue()}</span> }),
-      col.accessor("nextDue", { header: "Next due", cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{isoDay(c.getValue())}</span> : <span className="text-muted">—</span>) }),
+      col.accessor("overdue", { header: t("board.col.overdue"), cell: (c) => <span className={`font-mono ${c.getValue() ? "font-bold text-caution" : ""}`}>{c.getValue()}</span> }),
+      col.accessor("nextDue", { header: t("board.col.nextDue"), cell: (c) => (c.getValue() ? <span className="whitespace-nowrap font-mono text-sm">{isoDay(c.getValue())}</span> : <span className="text-muted">—</span>) }),
     ],
-    [shownModules, showOrgNames, teams],
+    [shownModules, showOrgNames, teams, t],
   );
 
   const sortColumn = Object.entries(SORT_OF).find(([, v]) => v === f.sort)?.[0] ?? "name";
@@ -146,43 +161,43 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
   return (
     <section aria-labelledby="board-heading" className="mb-10">
       <h2 id="board-heading" className="mb-3 text-2xl">
-        People and modules
+        {t("board.heading")}
       </h2>
-      <form role="search" aria-label="Filter the board" className="mb-4 grid grid-cols-1 gap-3 rounded border border-line bg-panel p-3 sm:grid-cols-2 lg:grid-cols-6" onSubmit={(e) => e.preventDefault()}>
+      <form role="search" aria-label={t("board.filterLabel")} className="mb-4 grid grid-cols-1 gap-3 rounded border border-line bg-panel p-3 sm:grid-cols-2 lg:grid-cols-6" onSubmit={(e) => e.preventDefault()}>
         <div className="flex min-w-0 flex-col gap-1">
-          <label htmlFor="board-team" className="text-sm font-bold">Team</label>
+          <label htmlFor="board-team" className="text-sm font-bold">{t("invite.team")}</label>
           <select id="board-team" value={f.team} onChange={(e) => set({ team: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
-            <option value="">All teams</option>
-            {teams.map((t) => (
-              <option key={t.id} value={t.id}>{showOrgNames ? `${t.orgName} · ${t.name}` : t.name}</option>
+            <option value="">{t("board.allTeams")}</option>
+            {teams.map((x) => (
+              <option key={x.id} value={x.id}>{showOrgNames ? `${x.orgName} · ${x.name}` : x.name}</option>
             ))}
-            <option value="none">No team</option>
+            <option value="none">{t("noTeam")}</option>
           </select>
         </div>
         <div className="flex min-w-0 flex-col gap-1">
-          <label htmlFor="board-status" className="text-sm font-bold">Status</label>
+          <label htmlFor="board-status" className="text-sm font-bold">{t("board.status")}</label>
           <select id="board-status" value={f.status} onChange={(e) => set({ status: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
-            <option value="">Any status</option>
+            <option value="">{t("board.anyStatus")}</option>
             {BOARD_STATUSES.map((s) => (
-              <option key={s} value={s}>{STATUS_LABELS[s]}</option>
+              <option key={s} value={s}>{t(`status.${s}`)}</option>
             ))}
           </select>
         </div>
         <div className="flex min-w-0 flex-col gap-1">
-          <label htmlFor="board-module" className="text-sm font-bold">Module</label>
+          <label htmlFor="board-module" className="text-sm font-bold">{t("board.module")}</label>
           <select id="board-module" value={f.module} onChange={(e) => set({ module: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
-            <option value="">All modules</option>
+            <option value="">{t("board.allModules")}</option>
             {modules.map((m) => (
               <option key={m.slug} value={m.slug}>{m.title}</option>
             ))}
           </select>
         </div>
         <div className="flex min-w-0 flex-col gap-1">
-          <label htmlFor="board-due" className="text-sm font-bold">Open work due by</label>
+          <label htmlFor="board-due" className="text-sm font-bold">{t("board.dueBy")}</label>
           <input id="board-due" type="date" value={f.dueBefore} onChange={(e) => set({ dueBefore: e.target.value })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2" />
         </div>
         <div className="flex min-w-0 flex-col gap-1">
-          <label htmlFor="board-q" className="text-sm font-bold">Name or e-mail</label>
+          <label htmlFor="board-q" className="text-sm font-bold">{t("board.search")}</label>
           <input id="board-q" type="search" value={search} onChange={(e) => setSearch(e.target.value)} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2" />
         </div>
         <div className="flex items-end">
@@ -195,27 +210,27 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
             }}
             className="min-h-11 w-full rounded border border-ink/40 bg-paper px-4 font-bold disabled:opacity-50"
           >
-            Clear filters
+            {t("board.clear")}
           </button>
         </div>
       </form>
 
       <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
         <p role="status" aria-live="polite" className="text-sm">
-          {isLoading && !data ? "Loading the board…" : data ? (data.total ? `Showing ${from}–${to} of ${data.total.toLocaleString("en-US")} people` : "No one to show") : ""}
-          {isValidating && data ? <span className="ml-2 text-muted">Updating…</span> : null}
+          {isLoading && !data ? t("board.loading") : data ? (data.total ? t("board.showing", { from, to, total: data.total }) : t("board.nobody")) : ""}
+          {isValidating && data ? <span className="ml-2 text-muted">{t("board.updating")}</span> : null}
         </p>
         <p className="flex flex-wrap gap-4 text-sm">
-          <a href={`/api/team/board.csv${exportQs ? `?${exportQs}` : ""}`} download>Download this view (CSV)</a>
-          <a href={`/api/team/certificates.csv${org ? `?org=${encodeURIComponent(org)}` : ""}`} download>Download certificates (CSV)</a>
+          <a href={`/api/team/board.csv${exportQs ? `?${exportQs}` : ""}`} download>{t("board.csvView")}</a>
+          <a href={`/api/team/certificates.csv${org ? `?org=${encodeURIComponent(org)}` : ""}`} download>{t("board.csvCertificates")}</a>
         </p>
       </div>
 
       {error ? (
         <div className="mb-4 flex flex-col items-start gap-2">
-          <FormError message={`The board could not be loaded: ${(error as Error).message}`} />
+          <FormError message={t("board.loadFailed", { message: (error as Error).message })} />
           <button type="button" onClick={() => mutate()} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold">
-            Try again
+            {t("tryAgain")}
           </button>
         </div>
       ) : null}
@@ -225,17 +240,17 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
       ) : data && data.rows.length === 0 ? (
         <div className="rounded border border-line bg-panel p-6">
           {filtered ? (
-            <p>No one matches these filters. Clear a filter to see more people.</p>
+            <p>{t("board.noMatch")}</p>
           ) : (
             <p>
-              Nobody is in this organization yet. <Link href={`/team/invite${org ? `?org=${encodeURIComponent(org)}` : ""}`}>Invite people</Link> to start.
+              {t.rich("board.empty", { link: (c) => <Link href={`/team/invite${org ? `?org=${encodeURIComponent(org)}` : ""}`}>{c}</Link> })}
             </p>
           )}
         </div>
       ) : data ? (
-        <div role="region" aria-label="Team board table" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
+        <div role="region" aria-label={t("board.tableLabel")} tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
           <table className="w-full min-w-max border-collapse text-sm" aria-busy={isValidating}>
-            <caption className="sr-only">Training status of each person in each module{f.status ? `, people with “${STATUS_LABELS[f.status as BoardStatus]}”` : ""}</caption>
+            <caption className="sr-only">{f.status ? t("board.captionStatus", { status: t(`status.${f.status as BoardStatus}`) }) : t("board.caption")}</caption>
             <thead>
               {table.getHeaderGroups().map((hg) => (
                 <tr key={hg.id} className="border-b border-line bg-paper">
@@ -279,18 +294,18 @@ export function TeamBoard({ modules, teams, org, showOrgNames, initial, initialP
       ) : null}
 
       {data && data.total > 0 ? (
-        <nav aria-label="Board pages" className="mt-3 flex flex-wrap items-center gap-3">
+        <nav aria-label={t("board.pagesLabel")} className="mt-3 flex flex-wrap items-center gap-3">
           <button type="button" disabled={data.page <= 1} onClick={() => setF((o) => ({ ...o, page: o.page - 1 }))} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold disabled:opacity-50">
-            Previous
+            {t("board.previous")}
           </button>
           <span className="text-sm">
-            Page {data.page} of {data.pages}
+            {t("board.page", { page: data.page, pages: data.pages })}
           </span>
           <button type="button" disabled={data.page >= data.pages} onClick={() => setF((o) => ({ ...o, page: o.page + 1 }))} className="min-h-11 rounded border border-ink/40 bg-panel px-4 font-bold disabled:opacity-50">
-            Next
+            {t("board.next")}
           </button>
           <label htmlFor="board-size" className="ml-auto text-sm font-bold">
-            Per page
+            {t("board.perPage")}
           </label>
           <select id="board-size" value={f.pageSize} onChange={(e) => set({ pageSize: Number(e.target.value) })} className="min-h-11 w-full min-w-0 rounded border border-ink/40 bg-panel px-2">
             {PAGE_SIZES.map((n) => (

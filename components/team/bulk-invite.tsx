@@ -1,32 +1,36 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { useTranslations } from "next-intl";
 import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import type { RosterPreview } from "@/lib/team";
-import { ROLE_LABELS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/browser";
-import { plural } from "@/lib/plural";
+import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
+import { INVITE_ROLES, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/browser";
 
 type ImportResult = { imported: number; skipped: number; message: string };
 
-async function send(url: string, form: FormData): Promise<{ ok: true; data: unknown } | { ok: false; error: string; billing?: boolean }> {
+async function send(url: string, form: FormData, offline: string): Promise<{ ok: true; data: unknown } | { ok: false; error: string; billing?: boolean }> {
   try {
     const res = await fetch(url, { method: "POST", body: form });
     const data = await res.json().catch(() => ({}));
     if (!res.ok) return { ok: false, error: data.error ?? `Request failed (${res.status})`, billing: Boolean(data.billingUrl) };
     return { ok: true, data };
   } catch {
-    return { ok: false, error: "No connection. Check the network and try again; nothing was written." };
+    return { ok: false, error: offline };
   }
 }
 
 const SHOW_VALID = 100;
 
 /** Upload a CSV, see every row's problems, then import the valid rows (nothing is written before). */
-export function BulkInvite({ org }: { org: string | null }) {
+export function BulkInvite({ org, defaultLanguage }: { org: string | null; defaultLanguage: Locale }) {
+  const t = useTranslations("team");
   const router = useRouter();
   const inputId = useId();
+  const languageId = useId();
+  const [language, setLanguage] = useState<Locale>(defaultLanguage);
   const fileRef = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
   const [busy, setBusy] = useState(false);
@@ -47,10 +51,10 @@ export function BulkInvite({ org }: { org: string | null }) {
     setError(null);
     setResult(null);
     setPreview(null);
-    if (!file) return setError({ message: "Choose a CSV file first." });
-    if (file.size > ROSTER_MAX_BYTES) return setError({ message: `The file is ${Math.round(file.size / 1024)} KB; the limit is ${ROSTER_MAX_BYTES / (1024 * 1024)} MB. Split it into smaller files.` });
+    if (!file) return setError({ message: t("bulk.chooseFirst") });
+    if (file.size > ROSTER_MAX_BYTES) return setError({ message: t("bulk.tooLarge", { kb: Math.round(file.size / 1024), mb: ROSTER_MAX_BYTES / (1024 * 1024) }) });
     setBusy(true);
-    const res = await send("/api/team/invites/preview", formFor(file));
+    const res = await send("/api/team/invites/preview", formFor(file), t("bulk.offline"));
     setBusy(false);
     if (!res.ok) return setError({ message: res.error });
     setPreview(res.data as RosterPreview);
@@ -60,7 +64,7 @@ export function BulkInvite({ org }: { org: string | null }) {
     if (!file || !preview) return;
     setError(null);
     setBusy(true);
-    const res = await send("/api/team/invites/import", formFor(file, { fileHash: preview.fileHash }));
+    const res = await send("/api/team/invites/import", formFor(file, { fileHash: preview.fileHash, language }), t("bulk.offline"));
     setBusy(false);
     if (!res.ok) return setError({ message: res.error, billing: res.billing });
     setResult(res.data as ImportResult);
@@ -77,15 +81,15 @@ export function BulkInvite({ org }: { org: string | null }) {
   return (
     <div className="flex flex-col gap-4">
       <p className="max-w-prose">
-        One row per person with the columns <code>email</code>, <code>name</code>, <code>role</code> (learner, sales or manager; empty means learner) and <code>team</code> (a team name as on the board; empty means no team). Up to {ROSTER_MAX_ROWS.toLocaleString("en-US")} rows and {ROSTER_MAX_BYTES / (1024 * 1024)} MB per file, saved as “CSV UTF-8”.{" "}
+        {t.rich("bulk.intro", { rows: ROSTER_MAX_ROWS, mb: ROSTER_MAX_BYTES / (1024 * 1024), code: (c) => <code>{c}</code> })}{" "}
         <a href={`/api/team/invites/template.csv${org ? `?org=${encodeURIComponent(org)}` : ""}`} download>
-          Download the template
+          {t("bulk.template")}
         </a>
         .
       </p>
       <div className="flex flex-wrap items-end gap-3">
         <div className="flex min-w-0 max-w-full flex-col gap-1">
-          <label htmlFor={inputId} className="font-bold">Roster file (.csv)</label>
+          <label htmlFor={inputId} className="font-bold">{t("bulk.file")}</label>
           <input
             ref={fileRef}
             id={inputId}
@@ -100,45 +104,53 @@ export function BulkInvite({ org }: { org: string | null }) {
             className="min-h-11 w-full max-w-full rounded border border-ink/40 bg-panel px-2 py-2"
           />
         </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor={languageId} className="font-bold">{t("bulk.language")}</label>
+          <select id={languageId} value={language} onChange={(e) => setLanguage(e.target.value as Locale)} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+            {LOCALES.map((l) => (
+              <option key={l} value={l} lang={l}>{LANGUAGE_NAMES[l]}</option>
+            ))}
+          </select>
+        </div>
         <Button type="button" variant="secondary" onClick={check} disabled={busy || !file}>
-          {busy && !preview ? "Checking…" : "Check the file"}
+          {busy && !preview ? t("bulk.checking") : t("bulk.check")}
         </Button>
       </div>
       {error ? (
         <div className="flex flex-col gap-1">
           <FormError message={error.message} />
-          {error.billing ? <Link href="/team/billing">Go to the billing page to add seats</Link> : null}
+          {error.billing ? <Link href="/team/billing">{t("invite.billingLink")}</Link> : null}
         </div>
       ) : null}
       {result ? <FormNotice message={result.message} /> : null}
       {preview ? (
         <div className="flex flex-col gap-3" aria-live="polite">
           <p role="status" className="font-bold">
-            {plural(preview.total, "row")} in {preview.fileName}: {preview.valid} ready to invite, {preview.invalid} with problems. Nothing has been written yet.
+            {t("bulk.previewSummary", { total: preview.total, file: preview.fileName, valid: preview.valid, invalid: preview.invalid })}
           </p>
           <p className="text-sm text-muted">
-            Seats: {preview.seats.used} of {preview.seats.seats} taken (members and open invitations).
+            {t("bulk.seats", { used: preview.seats.used, seats: preview.seats.seats })}
           </p>
-          <div role="region" aria-label="Rows of the file" tabIndex={0} className="relative max-h-[32rem] overflow-auto rounded border border-line bg-panel">
+          <div role="region" aria-label={t("bulk.rowsRegion")} tabIndex={0} className="relative max-h-[32rem] overflow-auto rounded border border-line bg-panel">
             <table className="w-full border-collapse text-sm">
-              <caption className="sr-only">Every row of the uploaded file with its problems</caption>
+              <caption className="sr-only">{t("bulk.caption")}</caption>
               <thead className="sticky top-0 bg-paper">
                 <tr className="border-b border-line text-left">
-                  <th scope="col" className="px-2 py-2">Line</th>
-                  <th scope="col" className="px-2 py-2">E-mail</th>
-                  <th scope="col" className="px-2 py-2">Name</th>
-                  <th scope="col" className="px-2 py-2">Role</th>
-                  <th scope="col" className="px-2 py-2">Team</th>
-                  <th scope="col" className="px-2 py-2">Check</th>
+                  <th scope="col" className="px-2 py-2">{t("bulk.line")}</th>
+                  <th scope="col" className="px-2 py-2">{t("invite.email")}</th>
+                  <th scope="col" className="px-2 py-2">{t("col.name")}</th>
+                  <th scope="col" className="px-2 py-2">{t("invite.role")}</th>
+                  <th scope="col" className="px-2 py-2">{t("invite.team")}</th>
+                  <th scope="col" className="px-2 py-2">{t("bulk.checkCol")}</th>
                 </tr>
               </thead>
               <tbody>
                 {[...problemRows, ...shownValid].map((r) => (
                   <tr key={r.line} className={`border-b border-line align-top last:border-0 ${r.problems.length ? "bg-caution-light" : ""}`} data-line={r.line}>
                     <td className="px-2 py-2 font-mono">{r.line}</td>
-                    <td className="px-2 py-2 [overflow-wrap:anywhere]">{r.email || <span className="text-muted">(empty)</span>}</td>
+                    <td className="px-2 py-2 [overflow-wrap:anywhere]">{r.email || <span className="text-muted">{t("bulk.empty")}</span>}</td>
                     <td className="px-2 py-2">{r.name}</td>
-                    <td className="px-2 py-2">{r.roleValue ? ROLE_LABELS[r.roleValue as InviteRole] : r.role}</td>
+                    <td className="px-2 py-2">{r.roleValue && (INVITE_ROLES as readonly string[]).includes(r.roleValue) ? t(`role.${r.roleValue as InviteRole}`) : r.role}</td>
                     <td className="px-2 py-2">{r.team}</td>
                     <td className="px-2 py-2">
                       {r.problems.length ? (
@@ -148,7 +160,7 @@ export function BulkInvite({ org }: { org: string | null }) {
                           ))}
                         </ul>
                       ) : (
-                        <span className="text-pass">✓ Ready{r.notes.length ? ` — ${r.notes.join("; ")}` : ""}</span>
+                        <span className="text-pass">{t("bulk.ready")}{r.notes.length ? ` — ${r.notes.join("; ")}` : ""}</span>
                       )}
                     </td>
                   </tr>
@@ -158,18 +170,18 @@ export function BulkInvite({ org }: { org: string | null }) {
           </div>
           {validRows.length > SHOW_VALID && !showAll ? (
             <button type="button" onClick={() => setShowAll(true)} className="self-start underline">
-              Show all {validRows.length} ready rows
+              {t("bulk.showAll", { count: validRows.length })}
             </button>
           ) : null}
           <div className="flex flex-wrap gap-3">
             <Button type="button" onClick={doImport} disabled={busy || preview.valid === 0}>
-              {busy ? "Importing…" : `Invite the ${preview.valid} ready ${preview.valid === 1 ? "person" : "people"}`}
+              {busy ? t("bulk.importing") : t("bulk.import", { count: preview.valid })}
             </Button>
             <Button type="button" variant="secondary" onClick={() => setPreview(null)} disabled={busy}>
-              Cancel
+              {t("cancel")}
             </Button>
           </div>
-          {preview.invalid > 0 ? <p className="text-sm">Rows with problems are skipped. To include them, fix the file and check it again.</p> : null}
+          {preview.invalid > 0 ? <p className="text-sm">{t("bulk.skipNote")}</p> : null}
         </div>
       ) : null}
     </div>

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { useTranslations } from "next-intl";
 import { StatusBadge } from "@/components/team/status-badge";
 import { Table } from "@/components/ui/table";
 import { isoDay } from "@/lib/dates";
@@ -15,65 +16,67 @@ const mono = "font-mono";
 
 /** One person's modules: status, lessons, attempts, best score, due and valid-until dates. */
 export function PersonModules({ modules, cells }: { modules: Module[]; cells: Work["cells"] }) {
+  const t = useTranslations("team");
   return (
     <Table
-      label="Modules of this person"
+      label={t("record.modulesLabel")}
       density="compact"
       rows={modules}
       rowKey={(m) => m.slug}
       columns={[
-        { key: "module", header: "Module", rowHeader: true, cell: (m) => m.title },
-        { key: "status", header: "Status", cell: (m) => (cells[m.slug] ? <StatusBadge status={cells[m.slug]!.status} /> : null) },
-        { key: "lessons", header: "Lessons", className: mono, cell: (m) => (cells[m.slug] ? `${cells[m.slug]!.lessonsDone}/${cells[m.slug]!.lessonsTotal}` : "") },
-        { key: "attempts", header: "Attempts", className: mono, cell: (m) => cells[m.slug]?.attempts ?? 0 },
-        { key: "best", header: "Best score", className: mono, cell: (m) => (cells[m.slug]?.bestScore !== null && cells[m.slug]?.bestScore !== undefined ? `${cells[m.slug]!.bestScore}%` : "—") },
-        { key: "due", header: "Due", className: mono, cell: (m) => day(cells[m.slug]?.dueAt ?? null) },
-        { key: "valid", header: "Valid until", className: mono, cell: (m) => day(cells[m.slug]?.expiresAt ?? null) },
+        { key: "module", header: t("board.module"), rowHeader: true, cell: (m) => m.title },
+        { key: "status", header: t("board.status"), cell: (m) => (cells[m.slug] ? <StatusBadge status={cells[m.slug]!.status} /> : null) },
+        { key: "lessons", header: t("record.lessons"), className: mono, cell: (m) => (cells[m.slug] ? `${cells[m.slug]!.lessonsDone}/${cells[m.slug]!.lessonsTotal}` : "") },
+        { key: "attempts", header: t("record.attempts"), className: mono, cell: (m) => cells[m.slug]?.attempts ?? 0 },
+        { key: "best", header: t("record.best"), className: mono, cell: (m) => (cells[m.slug]?.bestScore !== null && cells[m.slug]?.bestScore !== undefined ? `${cells[m.slug]!.bestScore}%` : "—") },
+        { key: "due", header: t("assign.dueCol"), className: mono, cell: (m) => day(cells[m.slug]?.dueAt ?? null) },
+        { key: "valid", header: t("record.validUntil"), className: mono, cell: (m) => day(cells[m.slug]?.expiresAt ?? null) },
       ]}
     />
   );
 }
 
 export function PersonAttempts({ attempts }: { attempts: History["attempts"] }) {
+  const t = useTranslations("team");
   return (
     <Table
-      label="Quiz attempts"
+      label={t("person.attempts")}
       density="compact"
       rows={attempts}
       rowKey={(a) => a.id}
-      empty={<p>No quiz attempts yet.</p>}
+      empty={<p>{t("record.noAttempts")}</p>}
       columns={[
-        { key: "module", header: "Module", cell: (a) => a.title ?? a.module },
-        { key: "started", header: "Started", className: mono, cell: (a) => day(a.startedAt) },
-        { key: "submitted", header: "Submitted", className: mono, cell: (a) => day(a.submittedAt) },
-        { key: "score", header: "Score", className: mono, cell: (a) => (a.score !== null ? `${a.score}% (pass ${a.passMark}%)` : "—") },
+        { key: "module", header: t("board.module"), cell: (a) => a.title ?? a.module },
+        { key: "started", header: t("record.started"), className: mono, cell: (a) => day(a.startedAt) },
+        { key: "submitted", header: t("record.submitted"), className: mono, cell: (a) => day(a.submittedAt) },
+        { key: "score", header: t("record.score"), className: mono, cell: (a) => (a.score !== null ? t("record.scoreValue", { score: a.score, pass: a.passMark }) : "—") },
         {
           key: "result",
-          header: "Result",
-          cell: (a) => (a.status !== "graded" ? "Open" : a.passed ? <strong className="text-pass">Passed</strong> : <strong className="text-caution">Not passed</strong>),
+          header: t("record.result"),
+          cell: (a) => (a.status !== "graded" ? t("record.open") : a.passed ? <strong className="text-pass">{t("status.passed")}</strong> : <strong className="text-caution">{t("record.notPassed")}</strong>),
         },
       ]}
     />
   );
 }
 
-const CERT_STATUS = { valid: "Valid", expiring: "Valid, expiring soon", expired: "Expired", revoked: "Revoked" } as const;
 
 export function PersonCertificates({ certificates }: { certificates: History["certificates"] }) {
+  const t = useTranslations("team");
   return (
     <Table
-      label="Certificates"
+      label={t("person.certificates")}
       density="compact"
       rows={certificates}
       rowKey={(c) => c.id}
-      empty={<p>No certificates yet.</p>}
+      empty={<p>{t("record.noCertificates")}</p>}
       columns={[
-        { key: "serial", header: "Serial", className: mono, cell: (c) => <Link href={`/verify/${c.code}`}>{c.serial}</Link> },
-        { key: "title", header: "Module or path", cell: (c) => c.title },
-        { key: "hours", header: "CE hours", className: mono, cell: (c) => Number(c.ceHours) },
-        { key: "issued", header: "Issued", className: mono, cell: (c) => day(c.issuedAt) },
-        { key: "expires", header: "Expires", className: mono, cell: (c) => day(c.expiresAt) },
-        { key: "status", header: "Status", cell: (c) => CERT_STATUS[c.status] },
+        { key: "serial", header: t("record.serial"), className: mono, cell: (c) => <Link href={`/verify/${c.code}`}>{c.serial}</Link> },
+        { key: "title", header: t("assign.item"), cell: (c) => c.title },
+        { key: "hours", header: t("record.ceHours"), className: mono, cell: (c) => Number(c.ceHours) },
+        { key: "issued", header: t("record.issued"), className: mono, cell: (c) => day(c.issuedAt) },
+        { key: "expires", header: t("record.expires"), className: mono, cell: (c) => day(c.expiresAt) },
+        { key: "status", header: t("board.status"), cell: (c) => t(`record.cert.${c.status}`) },
       ]}
     />
   );
@@ -81,7 +84,8 @@ export function PersonCertificates({ certificates }: { certificates: History["ce
 
 /** Lessons done, grouped by module. */
 export function PersonLessons({ lessons }: { lessons: History["lessons"] }) {
-  if (lessons.length === 0) return <p>No lessons done yet.</p>;
+  const t = useTranslations("team");
+  if (lessons.length === 0) return <p>{t("record.noLessons")}</p>;
   const byModule = new Map<string, History["lessons"]>();
   for (const l of lessons) byModule.set(l.module, [...(byModule.get(l.module) ?? []), l]);
   return (
@@ -93,7 +97,7 @@ export function PersonLessons({ lessons }: { lessons: History["lessons"] }) {
             {list.map((l) => (
               <li key={l.position}>
                 {l.lesson} <span className="font-mono text-muted">{day(l.completedAt)}</span>
-                {l.deviceReadingSeconds !== null ? <span className="text-muted">{` · marked offline, ${Math.round(l.deviceReadingSeconds / 60)} min reported by the phone`}</span> : null}
+                {l.deviceReadingSeconds !== null ? <span className="text-muted">{` · ${t("record.offline", { minutes: Math.round(l.deviceReadingSeconds / 60) })}`}</span> : null}
               </li>
             ))}
           </ul>

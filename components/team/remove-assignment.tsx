@@ -1,9 +1,11 @@
 "use client";
 import { useRouter } from "next/navigation";
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { postJson } from "@/lib/fetcher";
 
 export function RemoveAssignment({ id, label }: { id: number; label: string }) {
+  const t = useTranslations("team");
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -12,7 +14,7 @@ export function RemoveAssignment({ id, label }: { id: number; label: string }) {
       <button
         type="button"
         disabled={busy}
-        aria-label={`Remove the assignment: ${label}`}
+        aria-label={t("assign.removeLabel", { label })}
         onClick={async () => {
           setBusy(true);
           setError(null);
@@ -23,7 +25,7 @@ export function RemoveAssignment({ id, label }: { id: number; label: string }) {
         }}
         className="min-h-11 rounded border border-ink/40 bg-panel px-3 font-bold disabled:opacity-50"
       >
-        {busy ? "Removing…" : "Remove"}
+        {busy ? t("assign.removing") : t("assign.remove")}
       </button>
       {error ? <span role="alert" className="text-sm text-caution">{error}</span> : null}
     </span>

@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 import dynamic from "next/dynamic";
 import type { CalculatorEmbedProps } from "./types";
 
@@ -8,8 +9,13 @@ import type { CalculatorEmbedProps } from "./types";
  */
 const Lazy = dynamic(() => import("./calculator").then((m) => m.Calculator), {
   ssr: true,
-  loading: () => <p className="my-4 rounded border border-line bg-panel p-3 text-muted">Loading the calculator…</p>,
+  loading: () => <LoadingCalculator />,
 });
+
+function LoadingCalculator() {
+  const t = useTranslations("tools");
+  return <p className="my-4 rounded border border-line bg-panel p-3 text-muted">{t("loading")}</p>;
+}
 
 export function CalculatorEmbed(props: CalculatorEmbedProps) {
   return (

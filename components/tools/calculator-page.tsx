@@ -1,16 +1,18 @@
 import Link from "next/link";
-import { CALCULATOR_INFO, isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
+import { useTranslations } from "next-intl";
+import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
 import { PageTitle } from "@/components/ui/page-title";
 import { Calculator } from "./calculator";
 
 /** body of /tools/[calculator]; the route calls notFound() when `isCalculatorId(params.calculator)` is false */
 export function CalculatorPage({ id }: { id: CalculatorId }) {
+  const t = useTranslations("tools");
   return (
     <>
       <p className="mb-2 text-sm">
-        <Link href="/tools">← All calculators</Link>
+        <Link href="/tools">{t("allCalculators")}</Link>
       </p>
-      <PageTitle title={CALCULATOR_INFO[id].title} lead={CALCULATOR_INFO[id].summary} />
+      <PageTitle title={t(`info.${id}.title`)} lead={t(`info.${id}.summary`)} />
       <Calculator id={id} embedded={false} />
     </>
   );

@@ -1,11 +1,10 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useTranslations } from "next-intl";
 import { useEffect, useMemo, type ReactNode } from "react";
 import { FormProvider, useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
 import {
-  CALCULATOR_CAUTION_TEXT,
-  CALCULATOR_INFO,
   calculatorFormSchema,
   calculatorReport,
   convertInputUnits,
@@ -88,9 +87,10 @@ export function CalculatorShell<TValues extends FieldValues>({
   children: ReactNode;
   embedded?: boolean;
 }) {
+  const t = useTranslations("tools");
   const { form, report, input } = state;
   const units = (useWatch({ control: form.control, name: "units" as never }) as unknown as Units | undefined) ?? "us";
-  const info = CALCULATOR_INFO[id];
+  const info = { title: t(`info.${id}.title`), summary: t(`info.${id}.summary`) };
 
   function switchUnits(next: Units) {
     if (next === units) return;
@@ -111,13 +111,13 @@ export function CalculatorShell<TValues extends FieldValues>({
           <form
             noValidate
             className="flex flex-col gap-4"
-            aria-label={`${info.title} inputs`}
+            aria-label={t("inputsLabel", { title: info.title })}
             onSubmit={form.handleSubmit(() => undefined)}
           >
             <UnitSwitch units={units} onSwitch={switchUnits} />
             {children}
             <button type="submit" className="sr-only">
-              Calculate
+              {t("calculate")}
             </button>
           </form>
           <div className="flex min-w-0 flex-col gap-4" id={`${id}-result`}>
@@ -130,10 +130,10 @@ export function CalculatorShell<TValues extends FieldValues>({
             ) : (
               <>
                 <div role="status" className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">
-                  <p>Fix the highlighted fields to see the result.</p>
+                  <p>{t("fixFields")}</p>
                   <ErrorList errors={form.formState.errors} />
                 </div>
-                <p className="text-sm text-muted">{CALCULATOR_CAUTION_TEXT}</p>
+                <p className="text-sm text-muted">{t("caution")}</p>
               </>
             )}
           </div>
@@ -149,6 +149,7 @@ export function CalculatorShell<TValues extends FieldValues>({
  * pass/short verdict) in view at the bottom of the screen while the inputs are edited.
  */
 function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
+  const t = useTranslations("tools");
   const headline = report?.results[0];
   const margin = report?.results.find((r) => r.label === "Margin" || r.label === "Shortfall");
   return (
@@ -162,16 +163,16 @@ function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport
           <span className="font-mono font-bold">{headline.text}</span>
           {report?.verdict ? (
             <span className={`ml-2 font-bold ${report.verdict.result === "pass" ? "text-pass" : "text-caution"}`}>
-              {report.verdict.result === "pass" ? "Pass" : "Short"}
+              {report.verdict.result === "pass" ? t("pass") : t("short")}
               {margin ? ` (${margin.label.toLowerCase()} ${margin.text})` : ""}
             </span>
           ) : null}
         </p>
       ) : (
-        <p className="text-sm font-bold text-caution">Fix the highlighted fields to see the result.</p>
+        <p className="text-sm font-bold text-caution">{t("fixFields")}</p>
       )}
       <a href={`#${id}-result`} className="inline-flex min-h-6 shrink-0 items-center text-sm">
-        Full result
+        {t("fullResult")}
       </a>
     </div>
   );

@@ -1,3 +1,4 @@
+import { useTranslations } from "next-intl";
 import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
 import { ElevationCalculator } from "./elevation";
 import { FlowTestCalculator } from "./flow-test";
@@ -24,10 +25,11 @@ export const CALCULATOR_COMPONENTS: Record<CalculatorId, (props: CalculatorProps
  * rather than breaking the lesson.
  */
 export function Calculator({ id, preset, embedded = true }: CalculatorEmbedProps) {
+  const t = useTranslations("tools");
   if (!isCalculatorId(id)) {
     return (
       <p role="alert" className="my-4 rounded border border-caution bg-caution-light p-3 text-caution">
-        Unknown calculator “{String(id)}”.
+        {t("unknown", { id: String(id) })}
       </p>
     );
   }

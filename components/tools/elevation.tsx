@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
 import { inputFromPreset } from "@/lib/hydraulics";
@@ -10,6 +11,7 @@ import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function ElevationCalculator({ preset, embedded }: CalculatorProps) {
+  const t = useTranslations("tools");
   const defaults = useMemo(() => flatFormValues("elevation", inputFromPreset("elevation", preset)), [preset]);
   const state = useCalculator("elevation", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
@@ -17,9 +19,9 @@ export function ElevationCalculator({ preset, embedded }: CalculatorProps) {
     <CalculatorShell id="elevation" state={state} embedded={embedded}>
       <NumberField
         name="height"
-        label="Height of the highest sprinkler above the gauge"
+        label={t("heightOfTheHighestSprinklerAbove")}
         unit={unitLabels(units).length}
-        hint="Measure from the gauge or the water main connection to the sprinkler's deflector."
+        hint={t("measureFromTheGaugeOrThe")}
       />
     </CalculatorShell>
   );

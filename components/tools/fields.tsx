@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useId, type SelectHTMLAttributes } from "react";
 import { get, useFormContext } from "react-hook-form";
 import { Field } from "@/components/ui/field";
@@ -19,6 +20,7 @@ export function NumberField({
   hint?: string;
   optional?: boolean;
 }) {
+  const t = useTranslations("tools");
   const {
     register,
     formState: { errors },
@@ -26,7 +28,7 @@ export function NumberField({
   const error = (get(errors, name) as { message?: string } | undefined)?.message;
   return (
     <Field
-      label={`${label}${unit ? ` (${unit})` : ""}${optional ? " — optional" : ""}`}
+      label={`${label}${unit ? ` (${unit})` : ""}${optional ? ` — ${t("optional")}` : ""}`}
       hint={hint}
       error={error}
       inputMode="decimal"
@@ -62,14 +64,15 @@ export function TextField({ name, label }: { name: string; label: string }) {
 
 /** US / SI switch: converts what is typed when flipped */
 export function UnitSwitch({ units, onSwitch }: { units: "us" | "si"; onSwitch: (next: "us" | "si") => void }) {
+  const t = useTranslations("tools");
   const name = useId();
   const options = [
-    { value: "us" as const, label: "US (psi, gpm, ft)" },
-    { value: "si" as const, label: "SI (bar, L/min, m)" },
+    { value: "us" as const, label: t("unitsUs") },
+    { value: "si" as const, label: t("unitsSi") },
   ];
   return (
     <fieldset className="flex flex-wrap items-center gap-3">
-      <legend className="mb-1 font-bold">Units</legend>
+      <legend className="mb-1 font-bold">{t("units")}</legend>
       {options.map((o) => (
         <label
           key={o.value}

@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
 import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
@@ -16,6 +17,7 @@ export const sizeOptions = (material: string | undefined) =>
   );
 
 export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
+  const t = useTranslations("tools");
   const defaults = useMemo(() => flatFormValues("friction-loss", inputFromPreset("friction-loss", preset)), [preset]);
   const state = useCalculator("friction-loss", defaults);
   const [units, material] = useWatch({ control: state.form.control, name: ["units", "material"] });
@@ -23,39 +25,39 @@ export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
   const plastic = material === "cpvc" || material === "pex";
   return (
     <CalculatorShell id="friction-loss" state={state} embedded={embedded}>
-      <SelectField name="material" label="Pipe material" options={MATERIAL_OPTIONS} />
-      <SelectField name="nominalSize" label="Nominal size" options={sizeOptions(material)} />
-      <NumberField name="flow" label="Flow" unit={u.flow} />
-      <NumberField name="length" label="Pipe length" unit={u.length} />
+      <SelectField name="material" label={t("pipeMaterial")} options={MATERIAL_OPTIONS} />
+      <SelectField name="nominalSize" label={t("nominalSize")} options={sizeOptions(material)} />
+      <NumberField name="flow" label={t("flow")} unit={u.flow} />
+      <NumberField name="length" label={t("pipeLength")} unit={u.length} />
       <NumberField
         name="elbows"
-        label="90° elbows"
+        label={t("90Elbows")}
         optional
-        hint={plastic ? "Steel and copper only (NFPA 13's chart): for CPVC and PEX use the listed length below." : "Equivalent lengths from NFPA 13's steel pipe chart."}
+        hint={plastic ? t("steelAndCopperOnlyNfpa13") : t("equivalentLengthsFromNfpa13S")}
       />
-      <NumberField name="teeBranches" label="Tees with the flow turned 90°" optional />
+      <NumberField name="teeBranches" label={t("teesWithTheFlowTurned90")} optional />
       <NumberField
         name="listedFittingsLength"
-        label={plastic ? "Fittings, total listed equivalent length" : "Other fittings, listed equivalent length"}
+        label={plastic ? t("fittingsTotalListedEquivalentLength") : t("otherFittingsListedEquivalentLength")}
         unit={u.length}
         optional
-        hint={plastic ? "CPVC and PEX fittings use the pipe maker's listed equivalent lengths." : undefined}
+        hint={plastic ? t("cpvcAndPexFittingsUseThe") : undefined}
       />
       <details className="rounded border border-line bg-panel p-3">
-        <summary className="cursor-pointer font-bold">Maker&apos;s listed values (optional)</summary>
+        <summary className="cursor-pointer font-bold">{t("makerSListedValuesOptional")}</summary>
         <div className="mt-3 flex flex-col gap-4">
           <NumberField
             name="insideDiameter"
-            label="Listed inside diameter"
+            label={t("listedInsideDiameter")}
             unit={u.diameter}
             optional
             hint={
               plastic
-                ? "Blank uses the average bore of the pipe standard (OD minus twice the average wall), smaller than OD minus twice the minimum wall. Enter the pipe's listed value: it governs."
-                : "Blank uses the published ID of the pipe standard. A listed value you enter governs."
+                ? t("idHintPlastic")
+                : t("idHintSteel")
             }
           />
-          <NumberField name="cFactor" label="C-factor" optional hint="Leave blank for the NFPA 13 table value." />
+          <NumberField name="cFactor" label={t("cFactor")} optional hint={t("leaveBlankForTheNfpa13")} />
         </div>
       </details>
     </CalculatorShell>

@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import type { CalculatorId } from "@/lib/hydraulics";
@@ -9,6 +10,7 @@ export const SUMMARY_PDF_ENDPOINT = "/api/tools/summary";
 
 /** asks the server to recompute these inputs and return a one-page PDF summary, then downloads it */
 export function PdfButton({ id, input }: { id: CalculatorId; input: unknown }) {
+  const t = useTranslations("tools");
   const [state, setState] = useState<"idle" | "busy" | "error">("idle");
   const [message, setMessage] = useState<string | null>(null);
 
@@ -23,7 +25,7 @@ export function PdfButton({ id, input }: { id: CalculatorId; input: unknown }) {
       });
       if (!res.ok) {
         const body = (await res.json().catch(() => null)) as { error?: string } | null;
-        throw new Error(body?.error ?? `The summary could not be made (${res.status}).`);
+        throw new Error(body?.error ?? t("pdfFailedStatus", { status: res.status }));
       }
       const blob = await res.blob();
       const url = URL.createObjectURL(blob);
@@ -37,14 +39,14 @@ export function PdfButton({ id, input }: { id: CalculatorId; input: unknown }) {
       setState("idle");
     } catch (e) {
       setState("error");
-      setMessage(e instanceof Error ? e.message : "The summary could not be made.");
+      setMessage(e instanceof Error ? e.message : t("pdfFailed"));
     }
   }
 
   return (
     <div className="flex flex-col gap-2">
       <Button type="button" variant="secondary" onClick={download} disabled={state === "busy" || input === null}>
-        {state === "busy" ? "Preparing the PDF…" : "Download PDF summary"}
+        {state === "busy" ? t("pdfBusy") : t("pdfDownload")}
       </Button>
       {message ? (
         <p role="alert" className="text-sm font-bold text-caution">

@@ -1,3 +1,4 @@
+import { useTranslations } from "next-intl";
 import type { CalculatorReport } from "@/lib/hydraulics";
 
 const statusStyle = {
@@ -5,13 +6,14 @@ const statusStyle = {
   check: "border-line bg-panel text-ink",
   fails: "border-caution bg-caution-light text-caution",
 } as const;
-const statusLabel = { ok: "OK: ", check: "", fails: "Fails: " } as const;
 
 /** formula, steps, results, checks, sources and the caution for one calculation */
 export function ReportView({ report }: { report: CalculatorReport }) {
+  const t = useTranslations("tools");
+  const statusLabel = { ok: t("statusOk"), check: "", fails: t("statusFails") };
   const [headline, ...more] = report.results;
   return (
-    <section aria-label="Result" className="flex min-w-0 flex-col gap-4 break-words" data-report={report.id}>
+    <section aria-label={t("result")} className="flex min-w-0 flex-col gap-4 break-words" data-report={report.id}>
       {headline ? (
         <div className="rounded border border-line bg-panel p-4" aria-live="polite">
           <p className="text-sm text-muted">{headline.label}</p>
@@ -37,13 +39,13 @@ export function ReportView({ report }: { report: CalculatorReport }) {
           data-verdict={report.verdict.result}
           className={`rounded border px-3 py-2 font-bold ${report.verdict.result === "pass" ? "border-pass bg-pass-light text-pass" : "border-caution bg-caution-light text-caution"}`}
         >
-          {report.verdict.result === "pass" ? "Pass: " : "Short: "}
+          {report.verdict.result === "pass" ? t("passPrefix") : t("shortPrefix")}
           {report.verdict.text}
         </p>
       ) : null}
 
       <div>
-        <h3 className="font-bold">Formula</h3>
+        <h3 className="font-bold">{t("formula")}</h3>
         <ul className="mt-1 flex flex-col gap-1">
           {report.formula.map((line) => (
             <li key={line} className="rounded bg-paper px-2 py-1 font-mono text-sm text-ink">
@@ -54,7 +56,7 @@ export function ReportView({ report }: { report: CalculatorReport }) {
       </div>
 
       <div>
-        <h3 className="font-bold">Step by step</h3>
+        <h3 className="font-bold">{t("steps")}</h3>
         <ol className="mt-1 flex flex-col divide-y divide-line rounded border border-line bg-panel">
           {report.steps.map((s, i) => (
             <li key={`${i}-${s.label}`} className="grid gap-1 px-3 py-2 sm:grid-cols-[1fr_auto] sm:items-baseline">
@@ -70,7 +72,7 @@ export function ReportView({ report }: { report: CalculatorReport }) {
 
       {report.checks.length ? (
         <div>
-          <h3 className="font-bold">Check against the listing and the code</h3>
+          <h3 className="font-bold">{t("checks")}</h3>
           <ul className="mt-1 flex flex-col gap-1">
             {report.checks.map((c) => (
               <li key={c.text} className={`rounded border px-3 py-2 text-sm ${statusStyle[c.status]}`}>
@@ -83,7 +85,7 @@ export function ReportView({ report }: { report: CalculatorReport }) {
       ) : null}
 
       <div>
-        <h3 className="font-bold">Where the numbers come from</h3>
+        <h3 className="font-bold">{t("sources")}</h3>
         <ul className="mt-1 list-disc pl-5 text-sm text-muted">
           {report.notes.map((n) => (
             <li key={n}>{n}</li>
@@ -91,8 +93,8 @@ export function ReportView({ report }: { report: CalculatorReport }) {
         </ul>
       </div>
 
-      <aside className="rounded border-l-4 border-caution bg-caution-light p-3 text-ink" aria-label="Caution">
-        <p className="font-bold text-caution">Caution</p>
+      <aside className="rounded border-l-4 border-caution bg-caution-light p-3 text-ink" aria-label={t("cautionHeading")}>
+        <p className="font-bold text-caution">{t("cautionHeading")}</p>
         <p>{report.caution}</p>
       </aside>
     </section>

@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
 import { inputFromPreset } from "@/lib/hydraulics";
@@ -10,6 +11,7 @@ import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function SprinklerFlowCalculator({ preset, embedded }: CalculatorProps) {
+  const t = useTranslations("tools");
   const defaults = useMemo(() => flatFormValues("sprinkler-flow", inputFromPreset("sprinkler-flow", preset)), [preset]);
   const state = useCalculator("sprinkler-flow", defaults);
   const [units, solveFor] = useWatch({ control: state.form.control, name: ["units", "solveFor"] });
@@ -18,17 +20,17 @@ export function SprinklerFlowCalculator({ preset, embedded }: CalculatorProps) {
     <CalculatorShell id="sprinkler-flow" state={state} embedded={embedded}>
       <SelectField
         name="solveFor"
-        label="Find"
+        label={t("find")}
         options={[
           { value: "flow", label: "Flow at a pressure" },
           { value: "pressure", label: "Pressure for a flow" },
         ]}
       />
-      <NumberField name="k" label="K-factor" unit={u.k} hint="From the sprinkler's listing." />
+      <NumberField name="k" label={t("kFactor")} unit={u.k} hint={t("fromTheSprinklerSListing")} />
       {solveFor === "pressure" ? (
-        <NumberField name="flow" label="Flow wanted" unit={u.flow} hint="The listed flow for the coverage area used." />
+        <NumberField name="flow" label={t("flowWanted")} unit={u.flow} hint={t("theListedFlowForTheCoverage")} />
       ) : (
-        <NumberField name="pressure" label="Pressure at the sprinkler" unit={u.pressure} />
+        <NumberField name="pressure" label={t("pressureAtTheSprinkler")} unit={u.pressure} />
       )}
     </CalculatorShell>
   );

@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
 import { inputFromPreset } from "@/lib/hydraulics";
@@ -10,13 +11,14 @@ import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 export function StoredWaterCalculator({ preset, embedded }: CalculatorProps) {
+  const t = useTranslations("tools");
   const defaults = useMemo(() => flatFormValues("stored-water", inputFromPreset("stored-water", preset)), [preset]);
   const state = useCalculator("stored-water", defaults);
   const units = useWatch({ control: state.form.control, name: "units" });
   return (
     <CalculatorShell id="stored-water" state={state} embedded={embedded}>
-      <NumberField name="flow" label="Design flow" unit={unitLabels(units).flow} hint="The system demand's flow at the tank." />
-      <NumberField name="duration" label="Design duration" unit="min" hint="Set by the adopted code for the dwelling." />
+      <NumberField name="flow" label={t("designFlow")} unit={unitLabels(units).flow} hint={t("theSystemDemandSFlowAt")} />
+      <NumberField name="duration" label={t("designDuration")} unit="min" hint={t("setByTheAdoptedCodeFor")} />
     </CalculatorShell>
   );
 }

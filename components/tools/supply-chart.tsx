@@ -1,4 +1,5 @@
 "use client";
+import { useTranslations } from "next-intl";
 
 import { CartesianGrid, ComposedChart, Line, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { formatForDisplay, type ReportChart } from "@/lib/hydraulics";
@@ -28,6 +29,7 @@ function niceTicks(max: number): number[] {
  * an axis tick, and the margins leave room for every label.
  */
 export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: "pass" | "short" }) {
+  const t = useTranslations("tools");
   const fmtP = (v: number) => formatForDisplay(v, chart.pressureUnit);
   const fmtQ = (v: number) => formatForDisplay(v, chart.flowUnit);
   const first = chart.supply[0];
@@ -36,13 +38,11 @@ export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: 
   const yPeak = Math.max(first?.pressure ?? 0, chart.demand?.pressure ?? 0);
   const yTicks = niceTicks(yPeak * 1.15);
   const summary =
-    `Supply curve from ${first ? fmtP(first.pressure) : "the static pressure"} at no flow, falling as flow rises, shown up to ${fmtQ(chart.flowMax)}.` +
-    (chart.demand
-      ? ` Demand point: ${fmtQ(chart.demand.flow)} at ${fmtP(chart.demand.pressure)}${verdict ? ` (${verdict === "pass" ? "below the curve: the supply is enough" : "above the curve: the supply is short"})` : ""}.`
-      : "") +
-    (chart.test ? "" : " The test reading itself lies beyond this range of flows.");
+    t("chartSummary", { start: first ? fmtP(first.pressure) : t("chartStatic"), max: fmtQ(chart.flowMax) }) +
+    (chart.demand ? ` ${t("chartDemandPoint", { flow: fmtQ(chart.demand.flow), pressure: fmtP(chart.demand.pressure), verdict: verdict ?? "none" })}` : "") +
+    (chart.test ? "" : ` ${t("chartTestBeyond")}`);
   return (
-    <figure className="min-w-0 rounded border border-line bg-panel p-3" aria-label="Demand versus supply">
+    <figure className="min-w-0 rounded border border-line bg-panel p-3" aria-label={t("chartLabel")}>
       <div className="h-72 w-full" aria-hidden="true">
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={chart.supply} margin={{ top: 24, right: 24, bottom: 28, left: 16 }} accessibilityLayer={false} tabIndex={-1}>
@@ -68,7 +68,7 @@ export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: 
               formatter={(value) => (typeof value === "number" ? fmtP(value) : String(value))}
               labelFormatter={(label) => (typeof label === "number" ? fmtQ(label) : String(label))}
             />
-            <Line dataKey="pressure" name="Supply (flow test)" stroke={WATER} strokeWidth={2} dot={false} isAnimationActive={false} />
+            <Line dataKey="pressure" name={t("chartSupply")} stroke={WATER} strokeWidth={2} dot={false} isAnimationActive={false} />
             {chart.test ? <ReferenceDot x={chart.test.flow} y={chart.test.pressure} r={4} fill={WATER} stroke={INK} ifOverflow="discard" /> : null}
             {chart.demand ? (
               <ReferenceDot
@@ -77,7 +77,7 @@ export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: 
                 r={6}
                 fill={COPPER}
                 stroke={INK}
-                label={{ value: "Demand", position: "left", offset: 10, fill: INK }}
+                label={{ value: t("chartDemand"), position: "left", offset: 10, fill: INK }}
                 ifOverflow="extendDomain"
               />
             ) : null}

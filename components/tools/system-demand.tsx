@@ -1,5 +1,6 @@
 "use client";
 
+import { useTranslations } from "next-intl";
 import { useMemo, useRef, useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
@@ -13,6 +14,7 @@ import type { CalculatorProps } from "./types";
 
 /** one pipe run: material, size, length, rise and fittings */
 function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
+  const t = useTranslations("tools");
   const { control } = useFormContext<SystemDemandFormValues>();
   const [units, material] = useWatch({ control, name: ["units", `${prefix}.material` as "units"] }) as [string, string];
   const u = unitLabels(units === "si" ? "si" : "us");
@@ -20,33 +22,33 @@ function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
   return (
     <fieldset className="flex flex-col gap-3 rounded border border-line bg-panel p-3">
       <legend className="px-1 font-bold">{title}</legend>
-      <TextField name={`${prefix}.label`} label="Label" />
-      <SelectField name={`${prefix}.material`} label="Material" options={MATERIAL_OPTIONS} />
-      <SelectField name={`${prefix}.nominalSize`} label="Nominal size" options={sizeOptions(material)} />
-      <NumberField name={`${prefix}.length`} label="Length" unit={u.length} />
-      <NumberField name={`${prefix}.elevation`} label="Rise toward the sprinkler" unit={u.length} optional hint="Negative if the pipe drops." />
+      <TextField name={`${prefix}.label`} label={t("label")} />
+      <SelectField name={`${prefix}.material`} label={t("material")} options={MATERIAL_OPTIONS} />
+      <SelectField name={`${prefix}.nominalSize`} label={t("nominalSize")} options={sizeOptions(material)} />
+      <NumberField name={`${prefix}.length`} label={t("length")} unit={u.length} />
+      <NumberField name={`${prefix}.elevation`} label={t("riseTowardTheSprinkler")} unit={u.length} optional hint={t("negativeIfThePipeDrops")} />
       <NumberField
         name={`${prefix}.elbows`}
-        label="90° elbows"
+        label={t("90Elbows")}
         optional
-        hint={plastic ? "Steel and copper only: CPVC and PEX take the listed length below." : undefined}
+        hint={plastic ? t("steelAndCopperOnlyCpvcAnd") : undefined}
       />
-      <NumberField name={`${prefix}.teeBranches`} label="Tees, flow turned 90°" optional />
+      <NumberField name={`${prefix}.teeBranches`} label={t("teesFlowTurned90")} optional />
       <NumberField
         name={`${prefix}.listedFittingsLength`}
-        label={plastic ? "Fittings, listed equivalent length" : "Other fittings, listed equivalent length"}
+        label={plastic ? t("fittingsListedEquivalentLength") : t("otherFittingsListedEquivalentLength")}
         unit={u.length}
         optional
       />
       <NumberField
         name={`${prefix}.insideDiameter`}
-        label="Listed inside diameter"
+        label={t("listedInsideDiameter")}
         unit={u.diameter}
         optional
         hint={
           plastic
-            ? "Blank uses the average bore of the pipe standard (smaller than OD minus twice the minimum wall). The pipe's listed value governs."
-            : "Blank uses the published ID of the pipe standard."
+            ? t("idHintPlasticShort")
+            : t("idHintSteelShort")
         }
       />
     </fieldset>
@@ -54,6 +56,7 @@ function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
 }
 
 function DemandFields() {
+  const t = useTranslations("tools");
   const { control } = useFormContext<SystemDemandFormValues>();
   const sprinklers = useFieldArray({ control, name: "sprinklers" });
   const segments = useFieldArray({ control, name: "segments" });
@@ -62,25 +65,25 @@ function DemandFields() {
   const u = unitLabels(units);
   return (
     <>
-      <h3 className="font-bold">Design sprinklers</h3>
+      <h3 className="font-bold">{t("designSprinklers")}</h3>
       {sprinklers.fields.map((field, i) => (
         <fieldset key={field.id} className="flex flex-col gap-3 rounded border border-line p-3">
-          <legend className="px-1 font-bold">Sprinkler {String.fromCharCode(65 + i)}</legend>
-          <TextField name={`sprinklers.${i}.label`} label="Label" />
-          <NumberField name={`sprinklers.${i}.k`} label="K-factor" unit={u.k} hint="From the sprinkler's listing." />
-          <NumberField name={`sprinklers.${i}.minFlow`} label="Listed flow for the coverage" unit={u.flow} />
-          <NumberField name={`sprinklers.${i}.minPressure`} label="Listed minimum pressure" unit={u.pressure} optional />
+          <legend className="px-1 font-bold">{t("sprinklerN", { letter: String.fromCharCode(65 + i) })}</legend>
+          <TextField name={`sprinklers.${i}.label`} label={t("label")} />
+          <NumberField name={`sprinklers.${i}.k`} label={t("kFactor")} unit={u.k} hint={t("fromTheSprinklerSListing")} />
+          <NumberField name={`sprinklers.${i}.minFlow`} label={t("listedFlowForTheCoverage")} unit={u.flow} />
+          <NumberField name={`sprinklers.${i}.minPressure`} label={t("listedMinimumPressure")} unit={u.pressure} optional />
           <NumberField
             name={`sprinklers.${i}.coverageArea`}
-            label="Coverage area"
+            label={t("coverageArea")}
             unit={u.area}
             optional
-            hint="Checks NFPA 13D's minimum density of 0.05 gpm/ft². The 7 psi minimum pressure is always applied."
+            hint={t("checksNfpa13dSMinimumDensity")}
           />
-          <SegmentFields prefix={`sprinklers.${i}.branch`} title="Branch from the split point (length 0 if none)" />
+          <SegmentFields prefix={`sprinklers.${i}.branch`} title={t("branchFromTheSplitPointLength")} />
           {sprinklers.fields.length > 1 ? (
             <Button type="button" variant="secondary" onClick={() => sprinklers.remove(i)}>
-              Remove this sprinkler
+              {t("removeThisSprinkler")}
             </Button>
           ) : null}
         </fieldset>
@@ -93,50 +96,50 @@ function DemandFields() {
             sprinklers.append({ label: "Sprinkler B", k: "4.9", minFlow: "13", minPressure: "", coverageArea: "", branch: { ...emptySegment("Branch B"), length: "0" } })
           }
         >
-          Add a second design sprinkler
+          {t("addASecondDesignSprinkler")}
         </Button>
       ) : null}
 
-      <h3 className="font-bold">Pipe from the source to the split point</h3>
-      <p className="text-sm text-muted">List the runs from the water source toward the sprinklers.</p>
+      <h3 className="font-bold">{t("pipeFromTheSourceToThe")}</h3>
+      <p className="text-sm text-muted">{t("listTheRunsFromTheWater")}</p>
       {segments.fields.map((field, i) => (
         <div key={field.id} className="flex flex-col gap-2">
-          <SegmentFields prefix={`segments.${i}`} title={`Pipe run ${i + 1}`} />
+          <SegmentFields prefix={`segments.${i}`} title={t("pipeRunN", { n: i + 1 })} />
           <Button type="button" variant="secondary" onClick={() => segments.remove(i)}>
-            Remove pipe run {i + 1}
+            {t("removePipeRun", { n: i + 1 })}
           </Button>
         </div>
       ))}
       {segments.fields.length < INPUT_CAPS.pipeRuns ? (
         <Button type="button" variant="secondary" onClick={() => segments.append(emptySegment(`Pipe run ${segments.fields.length + 1}`))}>
-          Add a pipe run
+          {t("addAPipeRun")}
         </Button>
       ) : null}
 
-      <h3 className="font-bold">Devices (loss at the design flow)</h3>
-      <p className="text-sm text-muted">Meter, backflow preventer, valves: read each loss from the maker&apos;s flow-loss curve.</p>
+      <h3 className="font-bold">{t("devicesLossAtTheDesignFlow")}</h3>
+      <p className="text-sm text-muted">{t("meterBackflowPreventerValvesReadEach")}</p>
       {devices.fields.map((field, i) => (
         <fieldset key={field.id} className="flex flex-col gap-3 rounded border border-line p-3">
-          <legend className="px-1 font-bold">Device {i + 1}</legend>
-          <TextField name={`devices.${i}.label`} label="Device" />
-          <NumberField name={`devices.${i}.loss`} label="Loss" unit={u.pressure} />
+          <legend className="px-1 font-bold">{t("deviceN", { n: i + 1 })}</legend>
+          <TextField name={`devices.${i}.label`} label={t("device")} />
+          <NumberField name={`devices.${i}.loss`} label={t("loss")} unit={u.pressure} />
           <Button type="button" variant="secondary" onClick={() => devices.remove(i)}>
-            Remove device {i + 1}
+            {t("removeDevice", { n: i + 1 })}
           </Button>
         </fieldset>
       ))}
       {devices.fields.length < INPUT_CAPS.devices ? (
         <Button type="button" variant="secondary" onClick={() => devices.append({ label: "", loss: "" })}>
-          Add a device
+          {t("addADevice")}
         </Button>
       ) : null}
 
       <NumberField
         name="additionalFlow"
-        label="Additional flow at the same time"
+        label={t("additionalFlowAtTheSameTime")}
         unit={u.flow}
         optional
-        hint="For example domestic flow, where the adopted code requires it."
+        hint={t("forExampleDomesticFlowWhereThe")}
       />
 
       <SupplyFields />
@@ -149,6 +152,7 @@ function DemandFields() {
  * the schema) and keeps them to put back if the box is ticked again.
  */
 function SupplyFields() {
+  const t = useTranslations("tools");
   const { control, getValues, setValue } = useFormContext<SystemDemandFormValues>();
   const units = useWatch({ control, name: "units" });
   const u = unitLabels(units);
@@ -167,14 +171,14 @@ function SupplyFields() {
     <>
       <label className="inline-flex min-h-11 items-center gap-2">
         <input type="checkbox" checked={on} onChange={(e) => toggle(e.target.checked)} />
-        Compare with a hydrant flow test
+        {t("compareWithAHydrantFlowTest")}
       </label>
       {on ? (
         <fieldset className="flex flex-col gap-3 rounded border border-line p-3">
-          <legend className="px-1 font-bold">Water supply (flow test)</legend>
-          <NumberField name="supply.staticPressure" label="Static pressure" unit={u.pressure} />
-          <NumberField name="supply.residualPressure" label="Residual pressure" unit={u.pressure} />
-          <NumberField name="supply.testFlow" label="Test flow" unit={u.flow} />
+          <legend className="px-1 font-bold">{t("waterSupplyFlowTest")}</legend>
+          <NumberField name="supply.staticPressure" label={t("staticPressure")} unit={u.pressure} />
+          <NumberField name="supply.residualPressure" label={t("residualPressure")} unit={u.pressure} />
+          <NumberField name="supply.testFlow" label={t("testFlow")} unit={u.flow} />
         </fieldset>
       ) : null}
     </>

@@ -1,26 +1,28 @@
 import Link from "next/link";
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_IDS, CALCULATOR_INFO } from "@/lib/hydraulics";
+import { useTranslations } from "next-intl";
+import { CALCULATOR_IDS } from "@/lib/hydraulics";
 import { PageTitle } from "@/components/ui/page-title";
 
 /** body of /tools: the calculators, each with a line on what it does */
 export function ToolsIndex() {
+  const t = useTranslations("tools");
   return (
     <>
       <PageTitle
-        title="Calculators"
-        lead="Work the numbers behind a home sprinkler design in US or SI units, with every step shown and a printable summary for a training file."
+        title={t("indexTitle")}
+        lead={t("indexLead")}
       />
       <ul className="grid gap-4 sm:grid-cols-2">
         {CALCULATOR_IDS.map((id) => (
           <li key={id} className="rounded border border-line bg-panel p-4">
             <h2 className="text-lg font-bold">
-              <Link href={`/tools/${id}`}>{CALCULATOR_INFO[id].title}</Link>
+              <Link href={`/tools/${id}`}>{t(`info.${id}.title`)}</Link>
             </h2>
-            <p className="mt-1 text-muted">{CALCULATOR_INFO[id].summary}</p>
+            <p className="mt-1 text-muted">{t(`info.${id}.summary`)}</p>
           </li>
         ))}
       </ul>
-      <p className="mt-6 max-w-prose rounded border-l-4 border-caution bg-caution-light p-3">{CALCULATOR_CAUTION_TEXT}</p>
+      <p className="mt-6 max-w-prose rounded border-l-4 border-caution bg-caution-light p-3">{t("caution")}</p>
     </>
   );
 }

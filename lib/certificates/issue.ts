@@ -8,8 +8,9 @@ import { findModule, loadCatalog } from "@/lib/content";
 import { env } from "@/lib/env";
 import { log } from "@/lib/log";
 import { sendMail } from "@/lib/mail";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { metrics } from "@/lib/metrics";
-import { addMonthsUtc, certificateStatus, formatCertificateDate, formatSerial, verificationUrl } from "./status";
+import { addMonthsUtc, certificateStatus, formatSerial, verificationUrl } from "./status";
 import { addCredentialEntry } from "./credential-entry";
 
 export type IssuedCertificate = Pick<Certificate, "id" | "serial" | "kind" | "subjectSlug" | "subjectTitle" | "verificationCode" | "expiresAt">;
@@ -94,7 +95,7 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
   const at = completion.completedAt;
   // One issuer at a time per person: path checks below see every certificate committed before.
   const [holder] = await tx
-    .select({ id: user.id, name: user.name, email: user.email, organizationId: user.organizationId })
+    .select({ id: user.id, name: user.name, email: user.email, organizationId: user.organizationId, language: user.language })
     .from(user)
     .where(eq(user.id, completion.userId))
     .for("update");
@@ -185,7 +186,7 @@ async function issueInTransaction(tx: Tx, completion: typeof moduleCompletion.$i
     issued.push({ id, serial: serial.serial, kind: values.kind, subjectSlug: values.subjectSlug, subjectTitle: values.subjectTitle, verificationCode, expiresAt: values.expiresAt });
   }
   // the mails are queued in this transaction: each exists exactly when its certificate does
-  if (notify) for (const c of issued) await mailIssued(tx, holder.email, holder.name, c);
+  if (notify) for (const c of issued) await mailIssued(tx, holder.email, holder.name, c, holder.language);
   return { issued, email: holder.email, holderName: holder.name };
 }
 
@@ -219,25 +220,27 @@ async function latestValidCertificate(tx: Tx, userId: string, kind: "module" | "
   return row && certificateStatus(row, at) === "valid" ? row : null;
 }
 
-async function mailIssued(tx: Tx, to: string, holderName: string, c: IssuedCertificate) {
+async function mailIssued(tx: Tx, to: string, holderName: string, c: IssuedCertificate, language: string) {
   const link = verificationUrl(env.APP_URL, c.verificationCode);
-  const what = c.kind === "path" ? `the learning path "${c.subjectTitle}"` : `the module "${c.subjectTitle}"`;
+  const t = mailTranslator(language);
   await sendMail({
     to,
     key: `certificate.issued:${c.id}`,
     kind: "certificate.issued",
-    subject: `Your Riser certificate: ${c.subjectTitle}`,
+    subject: t("certificate.issuedSubject", { title: c.subjectTitle }),
     text: [
-      `Hello ${holderName},`,
+      greeting(t, holderName),
       "",
-      `You completed ${what}. Your certificate ${c.serial} is valid until ${formatCertificateDate(c.expiresAt)}.`,
+      t("certificate.issuedBody", {
+        kind: c.kind,
+        title: c.subjectTitle,
+        serial: c.serial,
+        date: mailDate(language, c.expiresAt),
+        link,
+        certificates: `${env.APP_URL.replace(/\/+$/, "")}/certificates`,
+      }),
       "",
-      "Anyone you show it to (a builder, an inspector, a licensing body) can check it here:",
-      link,
-      "",
-      `Download the PDF and find all your certificates at ${env.APP_URL.replace(/\/+$/, "")}/certificates`,
-      "",
-      "— Riser",
+      t("signature"),
     ].join("\n"),
   }, tx);
 }

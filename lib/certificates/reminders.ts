@@ -5,8 +5,9 @@ import { db } from "@/db/client";
 import { certificate, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { expiringHorizon } from "@/lib/expiring";
-import { daysUntil, formatCertificateDate } from "./status";
+import { daysUntil } from "./status";
 
 export type ReminderRun = { due: number; sent: number; failed: number; skipped: number };
 
@@ -31,6 +32,7 @@ export async function sendExpiryReminders(opts: { now?: Date; limit?: number } =
       holderName: certificate.holderName,
       expiresAt: certificate.expiresAt,
       email: user.email,
+      language: user.language,
     })
     .from(certificate)
     .leftJoin(user, eq(user.id, certificate.userId))
@@ -62,24 +64,25 @@ export async function sendExpiryReminders(opts: { now?: Date; limit?: number } =
       run.skipped++; // the account is gone; the claim stays so nobody retries
       continue;
     }
+    const t = mailTranslator(c.language);
     const renewHow =
       c.kind === "module"
-        ? `To renew it, pass the module again: ${base}/modules/${c.subjectSlug}`
-        : `To renew it, renew the path's modules as they come due; a new path certificate follows. Your certificates: ${base}/certificates`;
+        ? t("certificate.renewModule", { link: `${base}/modules/${c.subjectSlug}` })
+        : t("certificate.renewPath", { link: `${base}/certificates` });
     const days = daysUntil(c.expiresAt, now);
     const { ok } = await sendMail({
       to: c.email,
       kind: "certificate.expiry-reminder",
-      subject: `Your Riser certificate expires in ${days} day${days === 1 ? "" : "s"}: ${c.subjectTitle}`,
+      subject: t("certificate.expirySubject", { days, title: c.subjectTitle }),
       text: [
-        `Hello ${c.holderName},`,
+        greeting(t, c.holderName),
         "",
-        `Your certificate ${c.serial} for "${c.subjectTitle}" expires on ${formatCertificateDate(c.expiresAt)}.`,
+        t("certificate.expiryBody", { serial: c.serial, title: c.subjectTitle, date: mailDate(c.language, c.expiresAt) }),
         renewHow,
         "",
-        "This is the only reminder Riser sends for this certificate.",
+        t("certificate.onlyReminder"),
         "",
-        "— Riser",
+        t("signature"),
       ].join("\n"),
     });
     if (ok) run.sent++;

@@ -33,3 +33,4 @@ export async function sendMail(mail: Mail, tx?: Tx): Promise<{ ok: boolean }> {
 }
 export * from "./outbox";
 export * from "./worker";
+export * from "./i18n";

@@ -14,6 +14,7 @@ import { checkAndRecordCompletion } from "@/lib/completion";
 import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { greeting, mailTranslator } from "@/lib/mail";
 
 export type ReviewResult = { id: string; status: "approved" | "returned"; reviewedAt: string; moduleCompleted: boolean };
 
@@ -56,21 +57,23 @@ export async function reviewSignOff(viewer: Viewer, id: string, input: { decisio
   const moduleTitle = mod?.meta.title ?? row.moduleSlug;
   const moduleCompleted = status === "approved" ? (await checkAndRecordCompletion(row.userId, row.moduleSlug)) !== null : false;
 
-  const [learner] = await db.select({ email: user.email, name: user.name }).from(user).where(eq(user.id, row.userId));
+  const [learner] = await db.select({ email: user.email, name: user.name, language: user.language }).from(user).where(eq(user.id, row.userId));
   if (learner) {
     const link = `${env.APP_URL}/modules/${row.moduleSlug}/sign-offs`;
+    const t = mailTranslator(learner.language);
+    const names = { reviewer: viewer.name, module: moduleTitle, skill: skillTitle };
     await sendMail(
       status === "approved"
         ? {
             to: learner.email,
-            subject: `Signed off: ${skillTitle}`,
-            text: `Hello ${learner.name},\n\n${viewer.name} approved your practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}${comment ? `\nComment: ${comment}` : ""}${moduleCompleted ? `\n\nThis completes the module "${moduleTitle}".` : ""}\n\nYour sign-offs: ${link}\n`,
+            subject: t("signoff.approvedSubject", { skill: skillTitle }),
+            text: `${greeting(t, learner.name)}\n\n${t("signoff.approvedBody", names)}${comment ? `\n${t("signoff.comment", { comment })}` : ""}${moduleCompleted ? `\n\n${t("signoff.completes", { module: moduleTitle })}` : ""}\n\n${t("signoff.yourSignoffs", { link })}\n`,
             kind: "signoff-approved",
           }
         : {
             to: learner.email,
-            subject: `Sign-off returned: ${skillTitle}`,
-            text: `Hello ${learner.name},\n\n${viewer.name} returned your practical sign-off with this comment:\n\n  ${comment}\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nSend new evidence when you are ready: ${link}\n`,
+            subject: t("signoff.returnedSubject", { skill: skillTitle }),
+            text: `${greeting(t, learner.name)}\n\n${t("signoff.returnedBody", { ...names, comment: comment ?? "", link })}\n`,
             kind: "signoff-returned",
           },
     );

@@ -17,6 +17,7 @@ import { hitRateLimit } from "@/lib/rate-limit";
 import { findModule } from "@/lib/content";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { mailTranslator } from "@/lib/mail";
 import { deleteObjectsQuietly, isStorageDown, putObject } from "@/lib/storage";
 import { EvidenceError, prepareEvidence, type PreparedEvidence } from "./evidence";
 import { evidenceKeys } from "./keys";
@@ -211,14 +212,15 @@ function liveConflict(status: string): DomainError {
 async function notifyReviewers(tx: Tx, viewer: Viewer, signOffId: string, moduleTitle: string, skillTitle: string): Promise<void> {
   if (!viewer.organizationId) return;
   const managers = await tx
-    .select({ email: user.email })
+    .select({ email: user.email, language: user.language })
     .from(user)
     .where(and(eq(user.organizationId, viewer.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
   for (const m of managers.filter((x) => x.email !== viewer.email)) {
+    const t = mailTranslator(m.language);
     await sendMail({
       to: m.email,
-      subject: `Sign-off to review: ${viewer.name}`,
-      text: `${viewer.name} sent evidence for a practical sign-off.\n\nModule: ${moduleTitle}\nSkill: ${skillTitle}\n\nReview it (approve, or return it with a comment): ${env.APP_URL}/team/sign-offs\n`,
+      subject: t("signoff.submittedSubject", { learner: viewer.name }),
+      text: `${t("signoff.submittedBody", { learner: viewer.name, module: moduleTitle, skill: skillTitle, link: `${env.APP_URL}/team/sign-offs` })}\n`,
       kind: "signoff-submitted",
       key: `signoff-submitted:${signOffId}:${m.email}`,
     }, tx);

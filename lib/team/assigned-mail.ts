@@ -4,6 +4,7 @@ import { db } from "@/db/client";
 import { reminderLog, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { itemTitle } from "./board";
 
 /**
@@ -11,16 +12,15 @@ import { itemTitle } from "./board";
  * as kind "assigned" before sending; a failed send releases the claim so a later call retries).
  * A due-date change does not mail again; the reminders cover the due date.
  */
-const dayText = (d: Date) => new Intl.DateTimeFormat("en-US", { weekday: "short", month: "long", day: "numeric", year: "numeric", timeZone: "UTC" }).format(d);
 export const assignedKey = (kind: string, slug: string) => `assigned:${kind}:${slug}`;
 
-export async function mailAssigned(p: { orgId: string; userIds: string[]; teamIds: string[]; kind: "module" | "path"; slug: string; dueAt: Date; assignedBy: string }) {
+export async function mailAssigned(p: { orgId: string; userIds: string[]; teamIds: string[]; kind: "module" | "path"; slug: string; dueAt: Date; assignedBy: string | null }) {
   const conds = [];
   if (p.userIds.length) conds.push(inArray(user.id, p.userIds));
   if (p.teamIds.length) conds.push(inArray(user.teamId, p.teamIds));
   if (!conds.length) return { sent: 0 };
   const people = await db
-    .select({ id: user.id, name: user.name, email: user.email })
+    .select({ id: user.id, name: user.name, email: user.email, language: user.language })
     .from(user)
     .where(and(eq(user.organizationId, p.orgId), or(...conds), or(isNull(user.banned), eq(user.banned, false))));
   const key = assignedKey(p.kind, p.slug);
@@ -30,11 +30,12 @@ export async function mailAssigned(p: { orgId: string; userIds: string[]; teamId
   for (const person of people) {
     const [claim] = await db.insert(reminderLog).ignore().values({ kind: "assigned", userId: person.id, periodKey: key, sentAt: new Date() });
     if (claim.affectedRows !== 1) continue;
+    const t = mailTranslator(person.language);
     const res = await sendMail({
       to: person.email,
       kind: "assigned",
-      subject: `New training for you: ${title}`,
-      text: `Hello ${person.name},\n\n${p.assignedBy} assigned you ${p.kind === "path" ? "the learning path" : "the module"} “${title}”, due ${dayText(p.dueAt)}.\n\nStart here:\n${link}\n\nIt is also on your page “My training”, soonest due first. You will get a reminder shortly before it is due.`,
+      subject: t("assigned.subject", { title }),
+      text: `${greeting(t, person.name)}\n\n${t("assigned.body", { by: p.assignedBy ?? t("assigned.byFallback"), kind: p.kind, title, date: mailDate(person.language, p.dueAt, "weekdayLong"), link })}`,
     });
     if (res.ok) sent++;
     else await db.delete(reminderLog).where(and(eq(reminderLog.kind, "assigned"), eq(reminderLog.userId, person.id), eq(reminderLog.periodKey, key)));

@@ -40,6 +40,8 @@ export type BoardRow = {
   teamId: string | null;
   team: string | null;
   organizationId: string;
+  /** the person's language, "en" or "es" */
+  language?: string;
   passed: number;
   overdue: number;
   nextDue: string | null;
@@ -63,6 +65,8 @@ export type Person = {
   teamId: string | null;
   team: string | null;
   organizationId: string;
+  /** the person's language (pages and mail), "en" or "es" */
+  language?: string;
 };
 
 export async function rows<T>(query: SQL): Promise<T[]> {
@@ -118,7 +122,7 @@ function peopleWhere(f: PeopleFilter): SQL {
   return sql.join(parts, sql` AND `);
 }
 
-type PersonRow = { id: string; name: string; email: string; role: string; team_id: string | null; team_name: string | null; organization_id: string };
+type PersonRow = { id: string; name: string; email: string; role: string; team_id: string | null; team_name: string | null; organization_id: string; language: string };
 const toPerson = (r: PersonRow): Person => ({
   id: r.id,
   name: r.name,
@@ -127,6 +131,7 @@ const toPerson = (r: PersonRow): Person => ({
   teamId: r.team_id,
   team: r.team_name,
   organizationId: r.organization_id,
+  language: r.language,
 });
 
 function nameOrder(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): SQL {
@@ -137,7 +142,7 @@ function nameOrder(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefined): S
 
 /** People matching the filter in the given order; with `limit`, one page plus the total count. */
 async function listPeople(f: PeopleFilter, order: SQL, limit?: { limit: number; offset: number }): Promise<{ people: Person[]; total: number }> {
-  const select = sql`SELECT u.id, u.name, u.email, u.role, u.team_id, t.name AS team_name, u.organization_id
+  const select = sql`SELECT u.id, u.name, u.email, u.role, u.team_id, t.name AS team_name, u.organization_id, u.language
 FROM user u LEFT JOIN team t ON t.id = u.team_id WHERE ${peopleWhere(f)} ${order}`;
   if (!limit) {
     const list = await rows<PersonRow>(select);

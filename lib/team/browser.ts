@@ -2,3 +2,4 @@
 export * from "./chart";
 export * from "./first-day-steps";
 export * from "./schemas";
+export * from "./error-keys";

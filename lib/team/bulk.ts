@@ -11,6 +11,7 @@ import { sendMail } from "@/lib/mail";
 import { insertInvitation, inviteMail, pendingEmails } from "./invites";
 import { checkRoster, decodeRoster, parseRoster, type CheckedRow, type RawRosterRow } from "./roster";
 import { ROSTER_MAX_BYTES } from "./schemas";
+import type { Locale } from "@/lib/i18n/browser";
 import { assertSeatAvailable, seatUsage } from "@/lib/billing";
 
 export type RosterPreview = {
@@ -85,7 +86,7 @@ export async function previewRoster(org: { orgId: string; orgName: string }, byt
  * against the data as it is now, inside one transaction that writes every valid row or none.
  * Mails go out after the response.
  */
-export async function importRoster(viewer: Viewer, org: { orgId: string; orgName: string }, bytes: Uint8Array, fileName: string, previewHash: string, ip: string) {
+export async function importRoster(viewer: Viewer, org: { orgId: string; orgName: string }, bytes: Uint8Array, fileName: string, previewHash: string, ip: string, language: Locale) {
   if (fileHashOf(bytes) !== previewHash) throw new DomainError("conflict", "The file differs from the one you previewed. Check it again before importing.");
   const raw = rowsOf(bytes, fileName);
   const teamNames = new Map((await db.select({ id: team.id, name: team.name }).from(team).where(eq(team.organizationId, org.orgId))).map((t) => [t.id, t.name]));
@@ -96,7 +97,7 @@ export async function importRoster(viewer: Viewer, org: { orgId: string; orgName
     const mails: ReturnType<typeof inviteMail>[] = [];
     for (const r of valid) {
       const email = r.email.toLowerCase();
-      const created = await insertInvitation(tx, org.orgId, { email, name: r.name || null, role: r.roleValue!, teamId: r.teamId }, viewer);
+      const created = await insertInvitation(tx, org.orgId, { email, name: r.name || null, role: r.roleValue!, teamId: r.teamId, language }, viewer);
       await audit(
         {
           actor: viewer,
@@ -105,11 +106,11 @@ export async function importRoster(viewer: Viewer, org: { orgId: string; orgName
           targetType: "invitation",
           targetId: created.id,
           ip,
-          details: { email, role: r.roleValue, teamId: r.teamId, replaced: created.replaced, via: "csv", line: r.line },
+          details: { email, role: r.roleValue, teamId: r.teamId, language, replaced: created.replaced, via: "csv", line: r.line },
         },
         tx,
       );
-      mails.push(inviteMail({ to: email, name: r.name || null, orgName: org.orgName, inviterName: viewer.name, role: r.roleValue!, teamName: r.teamId ? teamNames.get(r.teamId) : null, token: created.token, expiresAt: created.expiresAt }));
+      mails.push(inviteMail({ to: email, name: r.name || null, orgName: org.orgName, inviterName: viewer.name, role: r.roleValue!, teamName: r.teamId ? teamNames.get(r.teamId) : null, token: created.token, expiresAt: created.expiresAt, language }));
     }
     if (valid.length) await assertSeatAvailable(org.orgId, 0, tx);
     return { imported: valid.length, skipped: rows.length - valid.length, mails, rows };

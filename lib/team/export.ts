@@ -22,7 +22,7 @@ const stamp = () => isoDay(new Date());
 export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Response> {
   const modules = boardModules(f.module);
   const perModule = (title: string) => [title, `${title}: completed`, `${title}: score`, `${title}: certificate`, `${title}: due`];
-  const header = ["Name", "E-mail", "Team", ...modules.flatMap((m) => perModule(m.title)), "Modules passed", "Overdue", "Next due"];
+  const header = ["Name", "E-mail", "Team", ...modules.flatMap((m) => perModule(m.title)), "Modules passed", "Overdue", "Next due", "Language"];
   return csvResponse(`riser-team-board-${stamp()}.csv`, header, async function* () {
     for await (const chunk of boardRowsInChunks(scope, f)) {
       const rich = await withCellExtras(chunk);
@@ -46,6 +46,7 @@ export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Respons
         r.passed,
         r.overdue,
         day(r.nextDue),
+        r.language ?? "",
       ]);
     }
   });

@@ -17,3 +17,4 @@ export * from "./schemas";
 export * from "./teams";
 export * from "./summary";
 export * from "./security";
+export * from "./org-language";

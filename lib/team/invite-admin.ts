@@ -42,6 +42,7 @@ export async function listInvitations(orgId: string, now = new Date()) {
       name: invitation.name,
       role: invitation.role,
       team: team.name,
+      language: invitation.language,
       createdAt: invitation.createdAt,
       lastSentAt: invitation.lastSentAt,
       sendCount: invitation.sendCount,
@@ -113,7 +114,7 @@ export async function resendInvitation(viewer: Viewer, id: string, ip: string) {
   });
   const [org] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, orgId));
   const [t] = row.teamId ? await db.select({ name: team.name }).from(team).where(eq(team.id, row.teamId)) : [];
-  const mail = await sendMail(inviteMail({ to: row.email, name: row.name, orgName: org?.name ?? "", inviterName: viewer.name, role: row.role as InviteRole, teamName: t?.name ?? null, token, expiresAt }));
+  const mail = await sendMail(inviteMail({ to: row.email, name: row.name, orgName: org?.name ?? "", inviterName: viewer.name, role: row.role as InviteRole, teamName: t?.name ?? null, token, expiresAt, language: row.language }));
   return { email: row.email, expiresAt, mailed: mail.ok };
 }
 

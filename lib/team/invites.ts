@@ -9,12 +9,15 @@ import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
-import { INVITE_DAYS, ROLE_LABELS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
+import { INVITE_DAYS, endOfDayUtc, type AcceptInviteInput, type AssignItem, type InviteRole } from "./schemas";
 import { mailAssigned } from "./assigned-mail";
 import { after } from "next/server";
+import { getTranslations } from "next-intl/server";
 import { loadCatalog } from "@/lib/content";
 import { assertSeatAvailable } from "@/lib/billing";
 import { addDays, longDate } from "@/lib/dates";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
+import { isLocale, type Locale } from "@/lib/i18n/browser";
 
 
 /** 256 random bits, URL-safe. Only its SHA-256 is stored: a database leak reveals no usable link. */
@@ -26,7 +29,7 @@ export const hashInviteToken = (token: string) => createHash("sha256").update(to
 export const inviteUrl = (token: string) => `${env.APP_URL}/invite/${token}`;
 
 export type InviteRow = typeof invitation.$inferSelect;
-export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null; assign?: AssignItem[] };
+export type NewInvite = { email: string; name?: string | null; role: InviteRole; teamId: string | null; assign?: AssignItem[]; language: Locale };
 
 /**
  * Writes one invitation inside the caller's transaction: earlier open invitations for the same
@@ -49,6 +52,7 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
     name: invite.name ?? null,
     role: invite.role,
     assignOnAccept: invite.assign?.length ? invite.assign : null,
+    language: invite.language,
     tokenHash: hashInviteToken(token),
     invitedBy: invitedBy.id,
     createdAt: now,
@@ -59,21 +63,23 @@ export async function insertInvitation(tx: Tx, orgId: string, invite: NewInvite,
 
 const dateText = (d: Date) => longDate(d);
 
-export function inviteMail(p: { to: string; name?: string | null; orgName: string; inviterName: string; role: InviteRole; teamName?: string | null; token: string; expiresAt: Date }) {
-  const where = p.teamName ? ` (${p.teamName})` : "";
+export function inviteMail(p: { to: string; name?: string | null; orgName: string; inviterName: string; role: InviteRole; teamName?: string | null; token: string; expiresAt: Date; language?: string | null }) {
+  const t = mailTranslator(p.language);
   return {
     to: p.to,
     kind: "invite",
-    subject: `You are invited to train with ${p.orgName} on Riser`,
-    text: `Hello${p.name ? ` ${p.name}` : ""},
+    subject: t("invite.subject", { org: p.orgName }),
+    text: `${greeting(t, p.name)}
 
-${p.inviterName} has invited you to ${p.orgName}${where} on Riser, the training app for residential sprinkler work, as ${ROLE_LABELS[p.role].toLowerCase()}.
-
-Open this link to choose your password and start:
-
-${inviteUrl(p.token)}
-
-The link works once and expires on ${dateText(p.expiresAt)} (${INVITE_DAYS} days). If you did not expect this invitation, ignore this message; no account is created unless you open the link.`,
+${t("invite.body", {
+  inviter: p.inviterName,
+  org: p.orgName,
+  where: p.teamName ? ` (${p.teamName})` : "",
+  role: t(`role.${p.role}`),
+  url: inviteUrl(p.token),
+  date: mailDate(p.language, p.expiresAt),
+  days: INVITE_DAYS,
+})}`,
   };
 }
 
@@ -107,7 +113,8 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
   checkAssignItems(input.assign);
   const existing = await accountState(input.email, org.orgId);
   if (existing.state === "member") {
-    throw new DomainError("conflict", `${existing.name} (${input.email}) is already a member of ${org.orgName}. Nothing was sent and nothing changed.`);
+    const t = await getTranslations("teamApi");
+    throw new DomainError("conflict", t("alreadyMember", { name: existing.name, email: input.email, org: org.orgName }));
   }
   const created = await db.transaction(async (tx) => {
     const row = await insertInvitation(tx, org.orgId, input, viewer);
@@ -122,13 +129,13 @@ export async function inviteOne(viewer: Viewer, org: { orgId: string; orgName: s
         targetType: "invitation",
         targetId: row.id,
         ip,
-        details: { email: input.email, role: input.role, teamId: input.teamId, replaced: row.replaced },
+        details: { email: input.email, role: input.role, teamId: input.teamId, language: input.language, replaced: row.replaced },
       },
       tx,
     );
     return row;
   });
-  const mail = await sendMail(inviteMail({ to: input.email, name: input.name, orgName: org.orgName, inviterName: viewer.name, role: input.role, teamName, token: created.token, expiresAt: created.expiresAt }));
+  const mail = await sendMail(inviteMail({ to: input.email, name: input.name, orgName: org.orgName, inviterName: viewer.name, role: input.role, teamName, token: created.token, expiresAt: created.expiresAt, language: input.language }));
   return { id: created.id, email: input.email, replaced: created.replaced, mailed: mail.ok, expiresAt: created.expiresAt };
 }
 
@@ -224,7 +231,8 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
     throw err;
   }
   await db.transaction(async (tx) => {
-    await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
+    // the invitation's language is the new account's starting language (changeable under Account)
+    await tx.update(user).set({ emailVerified: true, language: isLocale(inv.language) ? inv.language : "en" }).where(eq(user.id, userId));
     await tx.update(invitation).set({ acceptedUserId: userId }).where(eq(invitation.id, inv.id));
     await audit(
       { actor: { id: userId, email: inv.email }, organizationId: inv.organizationId, action: "invite.accept", targetType: "invitation", targetId: inv.id, ip, details: { role: inv.role, teamId: inv.teamId } },
@@ -248,7 +256,7 @@ export async function acceptInvite(input: AcceptInviteInput, headers: Headers, i
     const [inviter] = inv.invitedBy ? await db.select({ name: user.name }).from(user).where(eq(user.id, inv.invitedBy)) : [];
     after(async () => {
       for (const item of items) {
-        await mailAssigned({ orgId: inv.organizationId, userIds: [userId], teamIds: [], kind: item.kind, slug: item.slug, dueAt: endOfDayUtc(item.dueAt), assignedBy: inviter?.name ?? "Your training manager" });
+        await mailAssigned({ orgId: inv.organizationId, userIds: [userId], teamIds: [], kind: item.kind, slug: item.slug, dueAt: endOfDayUtc(item.dueAt), assignedBy: inviter?.name ?? null });
       }
     });
   }

@@ -11,7 +11,7 @@ import { isExpiring } from "@/lib/expiring";
 export async function personById(id: string): Promise<(Person & { orgName: string; organizationSince: Date | null }) | null> {
   if (!/^[A-Za-z0-9-]{1,36}$/.test(id)) return null;
   const [p] = await db
-    .select({ id: user.id, name: user.name, email: user.email, role: user.role, teamId: user.teamId, team: team.name, organizationId: user.organizationId, orgName: organization.name, organizationSince: user.organizationSince })
+    .select({ id: user.id, name: user.name, email: user.email, role: user.role, teamId: user.teamId, team: team.name, organizationId: user.organizationId, orgName: organization.name, organizationSince: user.organizationSince, language: user.language })
     .from(user)
     .leftJoin(team, eq(team.id, user.teamId))
     .leftJoin(organization, eq(organization.id, user.organizationId))

@@ -4,10 +4,11 @@ import { db } from "@/db/client";
 import { assignment, moduleCompletion, organization, reminderLog, user } from "@/db/schema";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { greeting, mailDate, mailTranslator } from "@/lib/mail";
 import { itemModules, itemTitle, passedModules, type Person } from "./board";
 import { teamTotals } from "./summary";
 import { isoWeek } from "./period";
-import { addDays, isoDay, weekdayLongDate } from "@/lib/dates";
+import { addDays, isoDay } from "@/lib/dates";
 import { refresherCountFor } from "@/lib/refreshers";
 
 export { isoWeek };
@@ -42,18 +43,16 @@ async function release(kind: string, userId: string, keys: string[]) {
   if (keys.length) await db.delete(reminderLog).where(and(eq(reminderLog.kind, kind), eq(reminderLog.userId, userId), inArray(reminderLog.periodKey, keys)));
 }
 
-const dayText = (d: Date) => weekdayLongDate(d);
-
 type Candidate = { assignmentId: number; kind: string; slug: string; dueAt: Date; person: Person };
 
 /** Effective assignments (direct and through the current team) due on or before `until`. */
 async function dueAssignments(until: Date): Promise<Candidate[]> {
   const [rows] = (await db.execute(sql`
-SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id
+SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id, u.language
 FROM assignment a JOIN user u ON u.id = a.user_id AND u.organization_id = a.organization_id
 WHERE a.user_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.banned = 0)
 UNION ALL
-SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id
+SELECT a.id, a.kind, a.target_slug, a.due_at, u.id AS user_id, u.name, u.email, u.role, u.team_id, u.organization_id, u.language
 FROM assignment a JOIN user u ON u.team_id = a.team_id AND u.organization_id = a.organization_id
 WHERE a.team_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.banned = 0) AND u.role <> 'admin'`)) as unknown as [Record<string, unknown>[]];
   return rows.map((r) => ({
@@ -69,6 +68,7 @@ WHERE a.team_id IS NOT NULL AND a.due_at <= ${until} AND (u.banned IS NULL OR u.
       teamId: (r.team_id as string | null) ?? null,
       team: null,
       organizationId: String(r.organization_id),
+      language: String(r.language ?? "en"),
     },
   }));
 }
@@ -116,24 +116,20 @@ export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}
   let failed = 0;
   await inParallel([...claimed.values()], async ({ person, kind, items }) => {
     items.sort((a, b) => a.dueAt.getTime() - b.dueAt.getTime());
+    const t = mailTranslator(person.language);
     const lines = items.map((i) => {
-      const what = i.kind === "path" ? "learning path" : "module";
       const link = i.kind === "module" ? `${env.APP_URL}/modules/${i.slug}` : `${env.APP_URL}/modules?path=${i.slug}`;
-      return `- ${itemTitle(i.kind, i.slug)} (${what}), ${kind === "overdue" ? "was due" : "due"} ${dayText(i.dueAt)}\n  ${link}`;
+      const date = mailDate(person.language, i.dueAt, "weekdayLong");
+      return `${t("reminder.line", { title: itemTitle(i.kind, i.slug), kind: i.kind, overdue: kind === "overdue" ? "yes" : "no", date })}\n  ${link}`;
     });
-    const subject =
-      kind === "overdue"
-        ? `Overdue training: ${items.length === 1 ? itemTitle(items[0]!.kind, items[0]!.slug) : `${items.length} items`}`
-        : `Training due soon: ${items.length === 1 ? itemTitle(items[0]!.kind, items[0]!.slug) : `${items.length} items`}`;
-    const intro =
-      kind === "overdue"
-        ? "This training assigned to you is past its due date:"
-        : `This training assigned to you is due within ${DUE_SOON_DAYS} days:`;
+    const what = items.length === 1 ? itemTitle(items[0]!.kind, items[0]!.slug) : t("reminder.items", { count: items.length });
+    const subject = kind === "overdue" ? t("reminder.overdueSubject", { what }) : t("reminder.dueSoonSubject", { what });
+    const intro = kind === "overdue" ? t("reminder.overdueIntro") : t("reminder.dueSoonIntro", { days: DUE_SOON_DAYS });
     const res = await sendMail({
       to: person.email,
       kind: `reminder-${kind}`,
       subject,
-      text: `Hello ${person.name},\n\n${intro}\n\n${lines.join("\n")}\n\nYour assigned work, in due-date order: ${env.APP_URL}/learn\n\nYour training manager sets these dates; if one looks wrong, ask them.`,
+      text: `${greeting(t, person.name)}\n\n${t("reminder.body", { intro, lines: lines.join("\n"), url: `${env.APP_URL}/learn` })}`,
     });
     if (res.ok) sent++;
     else {
@@ -151,7 +147,7 @@ export async function sendDueReminders({ now = new Date() }: { now?: Date } = {}
 /** Weekly digest to each manager: totals per team, overdue and expiring counts, last week's completions. */
 export async function sendManagerDigests({ now = new Date() }: { now?: Date } = {}) {
   const managers = await db
-    .select({ id: user.id, name: user.name, email: user.email, organizationId: user.organizationId, orgName: organization.name })
+    .select({ id: user.id, name: user.name, email: user.email, language: user.language, organizationId: user.organizationId, orgName: organization.name })
     .from(user)
     .innerJoin(organization, eq(organization.id, user.organizationId))
     .where(and(eq(user.role, "manager"), sql`(${user.banned} IS NULL OR ${user.banned} = 0)`));
@@ -181,16 +177,28 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
       .where(and(eq(assignment.organizationId, orgId), gte(assignment.createdAt, weekAgo), lte(assignment.createdAt, now)));
     const refreshers = await refresherCountFor(orgId);
     const sum = (k: "people" | "overdue" | "expiring" | "expired") => totals.reduce((n, t) => n + t[k], 0);
-    const lines = totals.map((t) => {
-      const pct = t.cells ? Math.round((t.passed / t.cells) * 100) : 0;
-      return `- ${t.team}: ${t.people} ${t.people === 1 ? "person" : "people"}, ${t.passed} of ${t.cells} modules passed (${pct}%), ${t.overdue} overdue, ${t.expiring} certificates expiring`;
-    });
     for (const m of mine) {
+      const t = mailTranslator(m.language);
+      const lines = totals.map((x) =>
+        t("digest.line", { team: x.team, people: x.people, passed: x.passed, cells: x.cells, pct: x.cells ? Math.round((x.passed / x.cells) * 100) : 0, overdue: x.overdue, expiring: x.expiring }),
+      );
       const res = await sendMail({
         to: m.email,
         kind: "digest",
-        subject: `Weekly training summary for ${m.orgName} (${week})`,
-        text: `Hello ${m.name},\n\nWhere ${m.orgName} stands this week (${week}):\n\n${lines.join("\n") || "- No people yet."}\n\nOverdue modules: ${sum("overdue")}\nCertificates expiring within 30 days: ${sum("expiring")}\nExpired certificates: ${sum("expired")}\nPeople with a refresher due after a lesson changed: ${refreshers}\nModules completed in the last 7 days: ${Number(done?.n ?? 0)}\nAssignments falling due in the next 7 days: ${Number(openAssignments?.n ?? 0)}\nWork assigned in the last 7 days: ${Number(newlyAssigned?.n ?? 0)} (each person was e-mailed once when it was assigned)\n\nThe team board, with filters and exports: ${env.APP_URL}/team`,
+        subject: t("digest.subject", { org: m.orgName, week }),
+        text: `${greeting(t, m.name)}\n\n${t("digest.body", {
+          org: m.orgName,
+          week,
+          lines: lines.join("\n") || t("digest.noPeople"),
+          overdue: sum("overdue"),
+          expiring: sum("expiring"),
+          expired: sum("expired"),
+          refreshers,
+          done: Number(done?.n ?? 0),
+          due: Number(openAssignments?.n ?? 0),
+          assigned: Number(newlyAssigned?.n ?? 0),
+          url: `${env.APP_URL}/team`,
+        })}`,
       });
       if (res.ok) sent++;
       else {

@@ -5,10 +5,14 @@
 import { z } from "zod";
 import { email, password, personName } from "@/lib/auth/browser";
 import { slug } from "@/lib/content/browser";
+import { LOCALES } from "@/lib/i18n/browser";
 
 export const INVITE_ROLES = ["learner", "sales", "manager"] as const;
 export type InviteRole = (typeof INVITE_ROLES)[number];
 export const ROLE_LABELS: Record<InviteRole, string> = { learner: "Learner", sales: "Sales", manager: "Manager" };
+
+/** A manager's choice of the language new invitations start with. */
+export const orgLanguageSchema = z.object({ language: z.enum(LOCALES, { message: "Choose English or Español" }), org: z.string().max(36).optional() });
 
 /** How long an invitation link works (Riser's own choice). */
 export const INVITE_DAYS = 7;
@@ -35,6 +39,8 @@ export const inviteSchema = z.object({
     .transform((v) => (v ? v : undefined)),
   role: z.enum(INVITE_ROLES, { message: "Choose learner, sales or manager" }),
   teamId: optionalId,
+  /** the invitation's language (mail and the new account); absent → the organization's default */
+  language: z.enum(LOCALES, { message: "Choose English or Español" }).optional(),
   /** admins only: which organization the invitation is for */
   org: optionalId,
   /** work assigned when the invitation is accepted */

@@ -10,7 +10,6 @@ import "server-only";
 import type { PDFPage, RGB } from "pdf-lib";
 import { C, createPdf, defaultFontDir, type Face, type Typesetter } from "@/lib/pdf";
 import {
-  CALCULATOR_INFO,
   HydraulicsInputError,
   calculatorReport,
   isCalculatorId,
@@ -18,6 +17,7 @@ import {
   type CalculatorReport,
 } from "@/lib/hydraulics";
 import { utcStamp } from "@/lib/dates";
+import { catalogTranslator, type CatalogT } from "@/lib/i18n";
 
 const PAGE = { width: 612, height: 792, margin: 40 }; // US Letter, points
 
@@ -65,11 +65,11 @@ async function row(l: Layout, label: string, value: string, work?: string) {
   if (work) await text(l, work, { face: "mono", size: l.size * 0.85, color: C.muted, x: PAGE.margin + 10 });
 }
 
-async function drawReport(l: Layout, report: CalculatorReport, date: Date) {
+async function drawReport(l: Layout, report: CalculatorReport, date: Date, tr: CatalogT) {
   const stamp = utcStamp(date);
-  await text(l, "Riser · calculation summary", { face: "bold", size: l.size * 0.9, color: C.muted });
-  await text(l, report.title, { face: "bold", size: l.size * 1.8, gap: 2 });
-  await text(l, `${report.units === "si" ? "SI units (bar, L/min, m)" : "US units (psi, gpm, ft)"} · computed ${stamp}`, {
+  await text(l, tr("pdf.kicker"), { face: "bold", size: l.size * 0.9, color: C.muted });
+  await text(l, tr(`info.${report.id}.title`), { face: "bold", size: l.size * 1.8, gap: 2 });
+  await text(l, tr("pdf.unitsLine", { units: report.units, stamp }), {
     size: l.size * 0.9,
     color: C.muted,
   });
@@ -77,7 +77,7 @@ async function drawReport(l: Layout, report: CalculatorReport, date: Date) {
   // caution first, boxed, so it cannot be missed
   const boxTop = l.y - 4;
   const measureOnly: Layout = { ...l, page: null, y: boxTop - 6 };
-  await text(measureOnly, `Caution: ${report.caution}`, { face: "bold", x: PAGE.margin + 8, width: PAGE.width - 2 * PAGE.margin - 16 });
+  await text(measureOnly, tr("pdf.caution", { text: tr("caution") }), { face: "bold", x: PAGE.margin + 8, width: PAGE.width - 2 * PAGE.margin - 16 });
   const boxBottom = measureOnly.y - 6;
   l.page?.drawRectangle({
     x: PAGE.margin,
@@ -89,22 +89,22 @@ async function drawReport(l: Layout, report: CalculatorReport, date: Date) {
     borderWidth: 1,
   });
   l.y = boxTop - 6;
-  await text(l, `Caution: ${report.caution}`, { face: "bold", color: C.caution, x: PAGE.margin + 8, width: PAGE.width - 2 * PAGE.margin - 16 });
+  await text(l, tr("pdf.caution", { text: tr("caution") }), { face: "bold", color: C.caution, x: PAGE.margin + 8, width: PAGE.width - 2 * PAGE.margin - 16 });
   l.y = boxBottom - 4;
 
-  await heading(l, "Inputs");
+  await heading(l, tr("pdf.inputs"));
   for (const i of report.inputs) await row(l, i.label, i.text);
 
-  await heading(l, "Formula");
+  await heading(l, tr("formula"));
   for (const f of report.formula) await text(l, f, { face: "mono", size: l.size * 0.9 });
 
-  await heading(l, "Steps");
+  await heading(l, tr("pdf.steps"));
   for (const [i, s] of report.steps.entries()) await row(l, `${i + 1}. ${s.label}`, s.text, s.work);
 
-  await heading(l, "Result");
+  await heading(l, tr("result"));
   for (const r of report.results) await row(l, r.label, r.text);
   if (report.verdict) {
-    await text(l, `${report.verdict.result === "pass" ? "PASS" : "SHORT"}: ${report.verdict.text}`, {
+    await text(l, `${report.verdict.result === "pass" ? tr("pdf.pass") : tr("pdf.short")}: ${report.verdict.text}`, {
       face: "bold",
       color: report.verdict.result === "pass" ? C.pass : C.caution,
       gap: 2,
@@ -112,22 +112,22 @@ async function drawReport(l: Layout, report: CalculatorReport, date: Date) {
   }
 
   if (report.checks.length) {
-    await heading(l, "Check against the listing and the code");
+    await heading(l, tr("checks"));
     for (const c of report.checks) {
-      await text(l, `${c.status === "fails" ? "FAILS: " : c.status === "ok" ? "OK: " : "• "}${c.text}`, {
+      await text(l, `${c.status === "fails" ? tr("pdf.fails") : c.status === "ok" ? tr("statusOk") : "• "}${c.text}`, {
         size: l.size * 0.9,
         color: c.status === "fails" ? C.caution : C.ink,
       });
     }
   }
 
-  await heading(l, "Where the numbers come from");
+  await heading(l, tr("sources"));
   for (const n of report.notes) await text(l, `• ${n}`, { size: l.size * 0.85, color: C.muted });
 
   rule(l);
   await text(
     l,
-    "Recomputed by Riser's hydraulics library from the inputs above. Results are rounded for display (requirements up, supplies down). Keep with the training record; not a design submittal.",
+    tr("pdf.footer"),
     { size: l.size * 0.8, color: C.muted },
   );
 }
@@ -136,6 +136,8 @@ export interface SummaryPdfOptions {
   date?: Date;
   /** folder holding the font packages (default: ./node_modules under the working directory) */
   fontDir?: string;
+  /** the reader's language ("en" or "es"); the figures, units and sources are the same in both */
+  language?: string;
 }
 
 /** the summary PDF for a calculator and its inputs; throws HydraulicsInputError for bad input */
@@ -144,7 +146,8 @@ export async function calculatorSummaryPdf(id: string, input: unknown, options: 
   const report = calculatorReport(id, input);
   const date = options.date ?? new Date();
   const { doc, t } = await createPdf(options.fontDir ?? defaultFontDir());
-  doc.setTitle(`${CALCULATOR_INFO[id as CalculatorId].title} — Riser calculation summary`);
+  const tr = catalogTranslator(options.language, "tools");
+  doc.setTitle(tr("pdf.docTitle", { title: tr(`info.${id as CalculatorId}.title`) }));
   doc.setSubject("Calculation summary for a training file");
   doc.setCreator("Riser");
   doc.setProducer("Riser (pdf-lib)");
@@ -155,11 +158,11 @@ export async function calculatorSummaryPdf(id: string, input: unknown, options: 
   let size = 10;
   for (; size > 6; size -= 0.5) {
     const l: Layout = { t, page: null, y: PAGE.height - PAGE.margin, size };
-    await drawReport(l, report, date);
+    await drawReport(l, report, date, tr);
     if (l.y >= PAGE.margin) break;
   }
   const page = doc.addPage([PAGE.width, PAGE.height]);
-  await drawReport({ t, page, y: PAGE.height - PAGE.margin, size }, report, date);
+  await drawReport({ t, page, y: PAGE.height - PAGE.margin, size }, report, date, tr);
   return doc.save();
 }
 

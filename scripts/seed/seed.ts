@@ -51,6 +51,7 @@ async function seedDemo() {
         role: p.role,
         organizationId: p.org ? orgIds[p.org]! : null,
         teamId: p.org && p.team ? teamIds[`${p.org}/${p.team}`]! : null,
+        language: p.language ?? "en",
       });
       await tx.insert(account).values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: hash });
     }

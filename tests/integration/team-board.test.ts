@@ -188,6 +188,7 @@ describe("exports", () => {
       "Modules passed",
       "Overdue",
       "Next due",
+      "Language",
     ]);
     // Per cell: completion date, score, certificate serial and due date in their own columns.
     const passedRow = rows.find((r) => r[0] === "Paloma Passed")!;

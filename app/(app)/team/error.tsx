@@ -1,6 +1,8 @@
 "use client";
+import { useTranslations } from "next-intl";
 import { ErrorState } from "@/components/shell/route-states";
 
 export default function TeamError({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
-  return <ErrorState error={error} reset={reset} area="the team pages" home={{ href: "/team", label: "Back to the team board" }} />;
+  const t = useTranslations("team");
+  return <ErrorState error={error} reset={reset} area={t("error.area")} home={{ href: "/team", label: t("error.home") }} />;
 }

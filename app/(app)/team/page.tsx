@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
+import { getLocale, getTranslations } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import { TeamBoard, type BoardFilters } from "@/components/team/board";
 import { OrgPicker } from "@/components/team/org-picker";
@@ -13,10 +13,14 @@ import { withCellExtras } from "@/lib/team";
 import { boardQuerySchema, parseBoardQuery } from "@/lib/team";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 
-export const metadata: Metadata = { title: "Team board" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("team");
+  return { title: t("board.title") };
+}
 
 export default async function TeamPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const viewer = await requireViewer("manager", "/team");
+  const t = await getTranslations("team");
   const raw = await searchParams;
   const params = new URLSearchParams(Object.entries(raw).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
   const parsed = parseBoardQuery(params);
@@ -45,8 +49,8 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   return (
     <>
       <PageTitle
-        title="Team board"
-        lead={`${scope.orgName ?? "All organizations"}: who has passed what, what is in progress, what is overdue, and which certificates run out soon.`}
+        title={t("board.title")}
+        lead={t("board.lead", { org: scope.orgName ?? t("orgPicker.all") })}
       />
       <TeamNav current="/team" org={scope.orgId && viewer.role === "admin" ? scope.orgId : null} />
       {viewer.role === "admin" ? <OrgPicker orgs={orgs} current={scope.orgId} action="/team" /> : null}

@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import type { Metadata } from "next";
 import { ContentStatus } from "@/components/admin/content-status";
 import { PageTitle } from "@/components/ui/page-title";
@@ -5,16 +6,20 @@ import { requireViewer } from "@/lib/access";
 import { contentStatus } from "@/lib/admin";
 import { asJson } from "@/components/ui/server-first";
 
-export const metadata: Metadata = { title: "Content · Admin" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("admin");
+  return { title: `${t("content.title")} · ${t("title")}` };
+}
 
 export default async function AdminContentPage() {
   await requireViewer("admin", "/admin/content");
+  const t = await getTranslations("admin");
   const status = asJson<Awaited<ReturnType<typeof contentStatus>>>(await contentStatus());
   return (
     <>
       <PageTitle
-        title="Content"
-        lead="Lessons, code cards and quiz questions live in the repository and are synced into the catalog. Items removed from the content are retired, never deleted, so nobody's records lose their reference."
+        title={t("content.title")}
+        lead={t("content.lead")}
       />
       <ContentStatus initial={status} />
     </>

@@ -1,15 +1,20 @@
+import { getTranslations } from "next-intl/server";
 import type { Metadata } from "next";
 import { OrganizationsConsole } from "@/components/admin/organizations-console";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 
-export const metadata: Metadata = { title: "Organizations · Admin" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("admin");
+  return { title: `${t("organizations.title")} · ${t("title")}` };
+}
 
 export default async function AdminOrganizationsPage() {
   await requireViewer("admin", "/admin/organizations");
+  const t = await getTranslations("admin");
   return (
     <>
-      <PageTitle title="Organizations" lead="Sprinkler contractors and home builders on this instance, with their training seats and how many people each has." />
+      <PageTitle title={t("organizations.title")} lead={t("organizations.lead")} />
       <OrganizationsConsole />
     </>
   );

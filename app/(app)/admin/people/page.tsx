@@ -1,17 +1,22 @@
+import { getTranslations } from "next-intl/server";
 import type { Metadata } from "next";
 import { PeopleConsole } from "@/components/admin/people-console";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { organizationOptions } from "@/lib/admin";
 
-export const metadata: Metadata = { title: "People · Admin" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("admin");
+  return { title: `${t("people.title")} · ${t("title")}` };
+}
 
 export default async function AdminPeoplePage() {
   const viewer = await requireViewer("admin", "/admin/people");
+  const t = await getTranslations("admin");
   const organizations = await organizationOptions();
   return (
     <>
-      <PageTitle title="People" lead="Everyone on this instance, across organizations. Role changes and bans need a reason; every change goes into the audit log." />
+      <PageTitle title={t("people.title")} lead={t("people.lead")} />
       <PeopleConsole organizations={organizations} viewerId={viewer.id} />
     </>
   );

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
+import { getLocale, getTranslations } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import { AssignForm } from "@/components/team/assign-form";
 import { OrgPicker } from "@/components/team/org-picker";
@@ -15,10 +15,14 @@ import { isoDay } from "@/lib/dates";
 import { InviteeWork } from "@/components/team/invitee-work";
 import { listInvitations } from "@/lib/team";
 
-export const metadata: Metadata = { title: "Assign work" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("team");
+  return { title: t("nav.assign") };
+}
 
 export default async function AssignPage({ searchParams }: { searchParams: Promise<{ org?: string }> }) {
   const viewer = await requireViewer("manager", "/team/assign");
+  const t = await getTranslations("team");
   const { org } = await searchParams;
   const scope = await pageScope(viewer, org);
   const adminOrg = viewer.role === "admin" ? scope.orgId : null;
@@ -34,18 +38,18 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
     .map((i) => ({ id: i.id, email: i.email, name: i.name, items: i.assignOnAccept ?? [] }));
   return (
     <>
-      <PageTitle title="Assign work" lead="Give people or whole teams a module or a learning path with a due date. Learners see it on their own page, soonest first, and get reminders." />
+      <PageTitle title={t("nav.assign")} lead={t("assign.lead")} />
       <TeamNav current="/team/assign" org={adminOrg} />
       {viewer.role === "admin" ? <OrgPicker orgs={orgs} current={scope.orgId} allowAll={false} action="/team/assign" /> : null}
       {scope.orgId ? (
         <AssignForm
           modules={catalog.modules.map((m) => ({ slug: m.slug, title: m.meta.title }))}
           paths={catalog.paths.map((p) => ({ slug: p.slug, title: p.title }))}
-          teams={teams.map((t) => ({ id: t.id, name: t.name }))}
+          teams={teams.map((x) => ({ id: x.id, name: x.name }))}
           org={adminOrg}
         />
       ) : (
-        <p>Choose the organization to assign work in.</p>
+        <p>{t("assign.chooseOrg")}</p>
       )}
       {scope.orgId ? (
         <InviteeWork
@@ -56,27 +60,27 @@ export default async function AssignPage({ searchParams }: { searchParams: Promi
         />
       ) : null}
       <section aria-labelledby="current" className="mt-10">
-        <h2 id="current" className="mb-3 text-2xl">Current assignments</h2>
+        <h2 id="current" className="mb-3 text-2xl">{t("assign.current")}</h2>
         <Table
-          label="Current assignments"
+          label={t("assign.current")}
           density="compact"
           rows={assignments}
           rowKey={(a) => a.id}
-          empty={<p>Nothing assigned yet.</p>}
+          empty={<p>{t("assign.nothing")}</p>}
           columns={[
             {
               key: "due",
-              header: "Due",
+              header: t("assign.dueCol"),
               cell: (a) => (
                 <span className={`font-mono ${a.past ? "font-bold text-caution" : ""}`}>
                   {isoDay(a.dueAt)}
-                  {a.past ? " (past)" : ""}
+                  {a.past ? ` ${t("assign.past")}` : ""}
                 </span>
               ),
             },
-            { key: "what", header: "Module or path", cell: (a) => <>{a.title} <span className="text-muted">({a.kind === "path" ? "learning path" : "module"})</span></> },
-            { key: "who", header: "Assigned to", cell: (a) => <>{a.target} <span className="text-muted">({a.targetType === "team" ? "whole team" : "person"})</span></> },
-            { key: "actions", header: <span className="sr-only">Actions</span>, className: "text-right", cell: (a) => <RemoveAssignment id={a.id} label={`${a.title} for ${a.target}`} /> },
+            { key: "what", header: t("assign.item"), cell: (a) => <>{a.title} <span className="text-muted">({a.kind === "path" ? t("assign.kindPath") : t("assign.kindModule")})</span></> },
+            { key: "who", header: t("assign.to"), cell: (a) => <>{a.target} <span className="text-muted">({a.targetType === "team" ? t("assign.wholeTeam") : t("assign.person")})</span></> },
+            { key: "actions", header: <span className="sr-only">{t("invitePage.actions")}</span>, className: "text-right", cell: (a) => <RemoveAssignment id={a.id} label={t("assign.forTarget", { title: a.title, target: a.target })} /> },
           ]}
         />
       </section>

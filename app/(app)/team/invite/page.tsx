@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { getTranslations } from "next-intl/server";
 import Link from "next/link";
 import { BulkInvite } from "@/components/team/bulk-invite";
 import { ActionButton } from "@/components/team/action-button";
@@ -7,22 +8,25 @@ import { OrgPicker } from "@/components/team/org-picker";
 import { TeamNav } from "@/components/team/team-nav";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
-import { INVITE_STATUS_LABELS, listInvitations } from "@/lib/team";
-import { plural } from "@/lib/plural";
-import { ROLE_LABELS, type InviteRole } from "@/lib/team";
+import { INVITE_ROLES, listInvitations, orgDefaultLanguage, type InviteRole } from "@/lib/team";
+import { isLocale, LANGUAGE_NAMES } from "@/lib/i18n/browser";
 import { allOrganizations, pageScope, teamsInScope } from "@/lib/access";
 import { BILLING_PATH, seatUsage } from "@/lib/billing";
 
-export const metadata: Metadata = { title: "Invite people" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("team");
+  return { title: t("nav.invite") };
+}
 
 export default async function InvitePage({ searchParams }: { searchParams: Promise<{ org?: string }> }) {
   const viewer = await requireViewer("manager", "/team/invite");
+  const t = await getTranslations("team");
   const { org } = await searchParams;
   const scope = await pageScope(viewer, org);
   const adminOrg = viewer.role === "admin" ? scope.orgId : null;
   const head = (
     <>
-      <PageTitle title="Invite people" lead="Invite one person, or a whole roster from a CSV file. Each invitation mail carries a single-use link that expires." />
+      <PageTitle title={t("nav.invite")} lead={t("invitePage.lead")} />
       <TeamNav current="/team/invite" org={adminOrg} />
       {viewer.role === "admin" ? <OrgPicker orgs={await allOrganizations()} current={scope.orgId} allowAll={false} action="/team/invite" /> : null}
     </>
@@ -31,11 +35,11 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
     return (
       <>
         {head}
-        <p>Choose the organization the invitations are for.</p>
+        <p>{t("invitePage.chooseOrg")}</p>
       </>
     );
   }
-  const [teams, usage, all] = await Promise.all([teamsInScope(scope), seatUsage(scope.orgId), listInvitations(scope.orgId)]);
+  const [teams, usage, all, defaultLanguage] = await Promise.all([teamsInScope(scope), seatUsage(scope.orgId), listInvitations(scope.orgId), orgDefaultLanguage(scope.orgId)]);
   const open = all.filter((i) => i.status === "pending" || i.status === "expired");
   const closed = all.filter((i) => i.status !== "pending" && i.status !== "expired").slice(0, 50);
   const q = adminOrg ? `?org=${adminOrg}` : "";
@@ -44,29 +48,29 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
     <>
       {head}
       <p className="mb-6 rounded border border-line bg-panel px-3 py-2">
-        <strong>{scope.orgName}</strong>: {used} of {usage.seats} seats taken ({plural(usage.members, "member")}, {plural(usage.pending, "open invitation")}).{" "}
-        {used >= usage.seats ? <strong className="text-caution">All seats are taken. </strong> : null}
-        <Link href={BILLING_PATH}>Seats and billing</Link>
+        <strong>{scope.orgName}</strong>: {t("invitePage.seats", { used, seats: usage.seats, members: usage.members, pending: usage.pending })}{" "}
+        {used >= usage.seats ? <strong className="text-caution">{t("invitePage.full")} </strong> : null}
+        <Link href={BILLING_PATH}>{t("invitePage.billing")}</Link>
       </p>
       <div className="grid gap-10">
         <section aria-labelledby="one" className="min-w-0">
-          <h2 id="one" className="mb-3 text-2xl">One person</h2>
-          <InviteForm teams={teams.map((t) => ({ id: t.id, name: t.name }))} org={adminOrg} />
+          <h2 id="one" className="mb-3 text-2xl">{t("invitePage.one")}</h2>
+          <InviteForm teams={teams.map((x) => ({ id: x.id, name: x.name }))} org={adminOrg} defaultLanguage={defaultLanguage} />
         </section>
         <section aria-labelledby="bulk" className="min-w-0">
-          <h2 id="bulk" className="mb-3 text-2xl">A roster from a CSV file</h2>
-          <BulkInvite org={adminOrg} />
+          <h2 id="bulk" className="mb-3 text-2xl">{t("invitePage.bulk")}</h2>
+          <BulkInvite org={adminOrg} defaultLanguage={defaultLanguage} />
         </section>
       </div>
       <section aria-labelledby="open" className="mt-10">
-        <h2 id="open" className="mb-3 text-2xl">Invitations</h2>
+        <h2 id="open" className="mb-3 text-2xl">{t("invitePage.invitations")}</h2>
         <p className="mb-3 text-sm text-muted">
-          An open invitation holds a seat until it is accepted, revoked or expires. Revoke frees the seat at once; Resend mails a new link (the old one stops working).
+          {t("invitePage.openNote")}
         </p>
-        {open.length === 0 ? <p>No open invitations.</p> : <InviteTable rows={open} actions q={q} />}
+        {open.length === 0 ? <p>{t("invitePage.noOpen")}</p> : <InviteTable rows={open} actions q={q} />}
         {closed.length ? (
           <details className="mt-4">
-            <summary className="cursor-pointer font-bold">Accepted, revoked and replaced ({closed.length})</summary>
+            <summary className="cursor-pointer font-bold">{t("invitePage.closed", { count: closed.length })}</summary>
             <InviteTable rows={closed} q={q} />
           </details>
         ) : null}
@@ -77,21 +81,23 @@ export default async function InvitePage({ searchParams }: { searchParams: Promi
 
 type Row = Awaited<ReturnType<typeof listInvitations>>[number];
 
-function InviteTable({ rows, actions, q }: { rows: Row[]; actions?: boolean; q: string }) {
+async function InviteTable({ rows, actions, q }: { rows: Row[]; actions?: boolean; q: string }) {
+  const t = await getTranslations("team");
   const day = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "—");
   return (
-    <div role="region" aria-label="Invitations" tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
+    <div role="region" aria-label={t("invitePage.invitations")} tabIndex={0} className="relative overflow-x-auto rounded border border-line bg-panel">
       <table className="w-full border-collapse text-sm">
         <thead>
           <tr className="border-b border-line bg-paper text-left">
-            <th scope="col" className="px-2 py-2">E-mail</th>
-            <th scope="col" className="px-2 py-2">Name</th>
-            <th scope="col" className="px-2 py-2">Role</th>
-            <th scope="col" className="px-2 py-2">Team</th>
-            <th scope="col" className="px-2 py-2">Status</th>
-            <th scope="col" className="px-2 py-2">Sent</th>
-            <th scope="col" className="px-2 py-2">Link expires</th>
-            {actions ? <th scope="col" className="px-2 py-2">Actions</th> : null}
+            <th scope="col" className="px-2 py-2">{t("invite.email")}</th>
+            <th scope="col" className="px-2 py-2">{t("col.name")}</th>
+            <th scope="col" className="px-2 py-2">{t("invite.role")}</th>
+            <th scope="col" className="px-2 py-2">{t("invite.team")}</th>
+            <th scope="col" className="px-2 py-2">{t("invite.language")}</th>
+            <th scope="col" className="px-2 py-2">{t("board.status")}</th>
+            <th scope="col" className="px-2 py-2">{t("invitePage.sent")}</th>
+            <th scope="col" className="px-2 py-2">{t("invitePage.expires")}</th>
+            {actions ? <th scope="col" className="px-2 py-2">{t("invitePage.actions")}</th> : null}
           </tr>
         </thead>
         <tbody>
@@ -99,17 +105,18 @@ function InviteTable({ rows, actions, q }: { rows: Row[]; actions?: boolean; q: 
             <tr key={i.id} className="border-b border-line last:border-0">
               <td className="px-2 py-2 break-all">{i.email}</td>
               <td className="px-2 py-2">{i.name ?? ""}</td>
-              <td className="px-2 py-2">{ROLE_LABELS[i.role as InviteRole] ?? i.role}</td>
-              <td className="px-2 py-2">{i.team ?? "No team"}</td>
-              <td className="px-2 py-2">{INVITE_STATUS_LABELS[i.status]}{i.assignOnAccept?.length ? ` · ${plural(i.assignOnAccept.length, "item")} to assign on acceptance` : ""}</td>
-              <td className="px-2 py-2 font-mono">{day(i.lastSentAt ?? i.createdAt)}{i.sendCount > 1 ? ` (${plural(i.sendCount, "time")})` : ""}</td>
+              <td className="px-2 py-2">{(INVITE_ROLES as readonly string[]).includes(i.role) ? t(`role.${i.role as InviteRole}`) : i.role}</td>
+              <td className="px-2 py-2">{i.team ?? t("noTeam")}</td>
+              <td className="px-2 py-2">{isLocale(i.language) ? <span lang={i.language}>{LANGUAGE_NAMES[i.language]}</span> : i.language}</td>
+              <td className="px-2 py-2">{t(`inviteStatus.${i.status}`)}{i.assignOnAccept?.length ? ` · ${t("invitePage.toAssign", { count: i.assignOnAccept.length })}` : ""}</td>
+              <td className="px-2 py-2 font-mono">{day(i.lastSentAt ?? i.createdAt)}{i.sendCount > 1 ? ` (${t("invitePage.times", { count: i.sendCount })})` : ""}</td>
               <td className="px-2 py-2 font-mono">{day(i.expiresAt)}</td>
               {actions ? (
                 <td className="px-2 py-2">
                   <span className="flex flex-wrap gap-2">
-                    <ActionButton url={`/api/team/invites/${i.id}/resend${q}`} label="Resend" busyLabel="Sending…" ariaLabel={`Resend the invitation to ${i.email}`} />
+                    <ActionButton url={`/api/team/invites/${i.id}/resend${q}`} label={t("invitePage.resend")} busyLabel={t("invite.sending")} ariaLabel={t("invitePage.resendLabel", { email: i.email })} />
                     {i.status === "pending" ? (
-                      <ActionButton url={`/api/team/invites/${i.id}/revoke${q}`} label="Revoke" busyLabel="Revoking…" danger ariaLabel={`Revoke the invitation to ${i.email}`} confirm={`Revoke the invitation to ${i.email}? The link stops working and the seat is free at once.`} />
+                      <ActionButton url={`/api/team/invites/${i.id}/revoke${q}`} label={t("invitePage.revoke")} busyLabel={t("invitePage.revoking")} danger ariaLabel={t("invitePage.revokeLabel", { email: i.email })} confirm={t("invitePage.revokeConfirm", { email: i.email })} />
                     ) : null}
                   </span>
                 </td>

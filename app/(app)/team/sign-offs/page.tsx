@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
+import { getLocale, getTranslations } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import Link from "next/link";
 import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
@@ -11,22 +11,19 @@ import { requireViewer } from "@/lib/access";
 import { reviewQueue, waitingCount, type QueueFilter } from "@/lib/signoffs";
 import { daysSince, isoDay } from "@/lib/dates";
 
-export const metadata: Metadata = { title: "Sign-offs to review" };
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations("team");
+  return { title: t("signoffs.title") };
+}
 
-const TABS: { key: QueueFilter; label: string }[] = [
-  { key: "submitted", label: "Waiting" },
-  { key: "approved", label: "Approved" },
-  { key: "returned", label: "Returned" },
-];
+const TABS: QueueFilter[] = ["submitted", "approved", "returned"];
 
 const day = (d: Date) => isoDay(d);
-function waited(d: Date): string {
-  const days = daysSince(d);
-  return days === 0 ? "today" : days === 1 ? "1 day ago" : `${days} days ago`;
-}
 
 export default async function TeamSignOffsPage({ searchParams }: { searchParams: Promise<{ status?: string; org?: string }> }) {
   const viewer = await requireViewer("manager", "/team/sign-offs");
+  const t = await getTranslations("team");
+  const waited = (d: Date) => t("signoffs.waited", { days: daysSince(d) });
   const sp = await searchParams;
   const filter: QueueFilter = sp.status === "approved" || sp.status === "returned" ? sp.status : "submitted";
   const admin = viewer.role === "admin";
@@ -41,29 +38,29 @@ export default async function TeamSignOffsPage({ searchParams }: { searchParams:
   return (
     <div className="flex flex-col gap-4">
       <PageTitle
-        title="Sign-offs to review"
-        lead={`Practical skills your ${admin ? "organizations'" : "organization's"} people performed in front of an observer. Check the evidence against what the observer must see, then approve it or return it with a comment. The learner is e-mailed either way, and every decision goes into the audit log.`}
+        title={t("signoffs.title")}
+        lead={t("signoffs.lead", { admin: admin ? "yes" : "no" })}
       />
       <TeamNav current="/team/sign-offs" org={org} />
-      <nav aria-label="Sign-off status" className="flex flex-wrap gap-2">
-        {TABS.map((t) => (
+      <nav aria-label={t("signoffs.statusNav")} className="flex flex-wrap gap-2">
+        {TABS.map((key) => (
           <Link
-            key={t.key}
-            href={hrefFor(t.key)}
-            aria-current={t.key === filter ? "page" : undefined}
-            className={`inline-flex min-h-11 items-center rounded border px-3 py-2 text-sm font-bold no-underline sm:text-base ${t.key === filter ? "border-ink bg-ink text-paper" : "border-ink/40 bg-panel text-ink"}`}
+            key={key}
+            href={hrefFor(key)}
+            aria-current={key === filter ? "page" : undefined}
+            className={`inline-flex min-h-11 items-center rounded border px-3 py-2 text-sm font-bold no-underline sm:text-base ${key === filter ? "border-ink bg-ink text-paper" : "border-ink/40 bg-panel text-ink"}`}
           >
-            {t.label}
-            {t.key === "submitted" ? <span className="ml-1 font-mono">({waiting})</span> : null}
+            {t(`signoffs.tab.${key}`)}
+            {key === "submitted" ? <span className="ml-1 font-mono">({waiting})</span> : null}
           </Link>
         ))}
       </nav>
       {items.length === 0 ? (
         <p className="rounded border border-line bg-panel p-4" role="status">
-          {filter === "submitted" ? "Nothing is waiting for review." : `No ${filter} sign-offs yet.`}
+          {filter === "submitted" ? t("signoffs.nothing") : t("signoffs.none", { filter })}
         </p>
       ) : (
-        <ol className="flex flex-col gap-4" aria-label={`${TABS.find((t) => t.key === filter)!.label} sign-offs`}>
+        <ol className="flex flex-col gap-4" aria-label={t("signoffs.listLabel", { filter })}>
           {items.map((s) => {
             const own = s.learner.id === viewer.id;
             return (
@@ -72,7 +69,7 @@ export default async function TeamSignOffsPage({ searchParams }: { searchParams:
                   <div>
                     <h2 className="text-xl">{s.learner.name}</h2>
                     <p className="text-sm text-muted">
-                      {[s.teamName, admin ? s.organizationName : null].filter(Boolean).join(" · ") || "No team"} · sent {day(s.submittedAt)}
+                      {[s.teamName, admin ? s.organizationName : null].filter(Boolean).join(" · ") || t("noTeam")} · {t("signoffs.sent", { date: day(s.submittedAt) })}
                       {filter === "submitted" ? ` (${waited(s.submittedAt)})` : ""}
                     </p>
                   </div>
@@ -84,20 +81,20 @@ export default async function TeamSignOffsPage({ searchParams }: { searchParams:
                 </p>
                 {s.skill ? (
                   <details className="mt-2">
-                    <summary className="cursor-pointer font-bold text-water">What the observer must see</summary>
+                    <summary className="cursor-pointer font-bold text-water">{t("signoffs.observe")}</summary>
                     <ul className="mt-1 list-disc pl-6">
                       {s.skill.observe.map((o) => (
                         <li key={o}>{o}</li>
                       ))}
                     </ul>
                     <p className="mt-1 text-sm">
-                      <span className="font-bold">Evidence asked for:</span> {s.skill.evidence}
+                      <span className="font-bold">{t("signoffs.evidence")}</span> {s.skill.evidence}
                     </p>
                   </details>
                 ) : null}
                 {s.note ? (
                   <p className="mt-2 whitespace-pre-line">
-                    <span className="font-bold">Note:</span> {s.note}
+                    <span className="font-bold">{t("signoffs.note")}</span> {s.note}
                   </p>
                 ) : null}
                 <div className="mt-3">
@@ -105,11 +102,11 @@ export default async function TeamSignOffsPage({ searchParams }: { searchParams:
                 </div>
                 {s.status !== "submitted" ? (
                   <p className="mt-3 text-sm">
-                    {s.status === "approved" ? "Approved" : "Returned"} by {s.reviewerName ?? "—"} on {s.reviewedAt ? day(s.reviewedAt) : "—"}
+                    {t("signoffs.reviewed", { status: s.status === "approved" ? "approved" : "returned", name: s.reviewerName ?? "—", date: s.reviewedAt ? day(s.reviewedAt) : "—" })}
                     {s.reviewComment ? `: “${s.reviewComment}”` : ""}
                   </p>
                 ) : own ? (
-                  <p className="mt-3 rounded border border-line bg-paper p-2 text-sm">This is your own sign-off: another manager or an admin reviews it.</p>
+                  <p className="mt-3 rounded border border-line bg-paper p-2 text-sm">{t("signoffs.own")}</p>
                 ) : (
                   <div className="mt-3 border-t border-line pt-3">
                     <ReviewForm id={s.id} learnerName={s.learner.name} skillTitle={s.skill?.title ?? s.skillId} />

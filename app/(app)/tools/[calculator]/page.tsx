@@ -1,14 +1,15 @@
+import { getTranslations } from "next-intl/server";
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CalculatorPage, isCalculatorId } from "@/components/tools/calculator-page";
 import { requireViewer } from "@/lib/access";
-import { CALCULATOR_INFO } from "@/lib/hydraulics";
 
 type Params = { params: Promise<{ calculator: string }> };
 
 export async function generateMetadata({ params }: Params): Promise<Metadata> {
   const { calculator } = await params;
-  return { title: isCalculatorId(calculator) ? CALCULATOR_INFO[calculator].title : "Calculator" };
+  const t = await getTranslations("tools");
+  return { title: isCalculatorId(calculator) ? t(`info.${calculator}.title`) : t("calculator") };
 }
 
 export default async function ToolPage({ params }: Params) {

@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { createAssignments } from "@/lib/team";
 import { assignSchema } from "@/lib/team";
@@ -11,5 +12,6 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, assignSchema);
   const org = await resolveWriteOrg(viewer, input.org);
   const r = await createAssignments(viewer, org, input, clientIp(req));
-  return json({ ok: true, ...r, message: `Assigned to ${r.assigned} ${r.assigned === 1 ? "target" : "targets"}, due ${r.dueAt.slice(0, 10)}.` }, 201);
+  const t = await getTranslations("teamApi");
+  return json({ ok: true, ...r, message: t("assigned", { count: r.assigned, due: r.dueAt.slice(0, 10) }) }, 201);
 });

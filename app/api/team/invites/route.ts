@@ -1,6 +1,7 @@
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { listInvitations } from "@/lib/team";
-import { inviteOne } from "@/lib/team";
+import { inviteOne, orgDefaultLanguage } from "@/lib/team";
+import { getTranslations } from "next-intl/server";
 import { inviteSchema } from "@/lib/team";
 import { resolveScope, resolveWriteOrg } from "@/lib/access";
 
@@ -12,10 +13,10 @@ import { resolveScope, resolveWriteOrg } from "@/lib/access";
 export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, inviteSchema);
   const org = await resolveWriteOrg(viewer, input.org);
-  const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign }, clientIp(req));
-  const message = r.replaced
-    ? `A new invitation went to ${r.email}; the earlier link no longer works.`
-    : `Invitation sent to ${r.email}. The link works once, for 7 days.`;
+  const language = input.language ?? (await orgDefaultLanguage(org.orgId));
+  const r = await inviteOne(viewer, org, { email: input.email, name: input.name ?? null, role: input.role, teamId: input.teamId ?? null, assign: input.assign, language }, clientIp(req));
+  const t = await getTranslations("teamApi");
+  const message = r.replaced ? t("inviteReplaced", { email: r.email }) : t("inviteSent", { email: r.email });
   return json({ ok: true, id: r.id, email: r.email, replaced: r.replaced > 0, mailed: r.mailed, message }, 201);
 });
 

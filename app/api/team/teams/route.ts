@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { createTeamSchema } from "@/lib/team";
 import { resolveScope, resolveWriteOrg } from "@/lib/access";
@@ -14,5 +15,6 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const input = await readJson(req, createTeamSchema);
   const org = await resolveWriteOrg(viewer, input.org);
   const created = await createTeam(viewer, org.orgId, input.name, clientIp(req));
-  return json({ ok: true, team: created, message: `Team “${created.name}” created.` }, 201);
+  const t = await getTranslations("teamApi");
+  return json({ ok: true, team: created, message: t("teamCreated", { name: created.name }) }, 201);
 });

@@ -1,7 +1,8 @@
 import { ApiError, clientIp, json, route } from "@/lib/api";
-import { importRoster, readUpload } from "@/lib/team";
+import { importRoster, orgDefaultLanguage, readUpload } from "@/lib/team";
+import { isLocale } from "@/lib/i18n/browser";
+import { getTranslations } from "next-intl/server";
 import { resolveWriteOrg } from "@/lib/access";
-import { plural } from "@/lib/plural";
 
 /**
  * POST /api/team/invites/import (multipart: file, fileHash from the preview, org? for admins) →
@@ -12,6 +13,10 @@ export const POST = route("manager", async ({ req, viewer }) => {
   const fileHash = form.get("fileHash");
   if (typeof fileHash !== "string" || !/^[0-9a-f]{64}$/.test(fileHash)) throw new ApiError(400, "Preview the file first, then import it.");
   const org = await resolveWriteOrg(viewer, (form.get("org") as string | null) || new URL(req.url).searchParams.get("org"));
-  const result = await importRoster(viewer, org, bytes, fileName, fileHash, clientIp(req));
-  return json({ ok: true, ...result, message: `${plural(result.imported, "invitation")} sent; ${plural(result.skipped, "row")} skipped.` }, 201);
+  const chosen = form.get("language");
+  if (chosen !== null && chosen !== "" && !isLocale(chosen)) throw new ApiError(400, "Some fields need attention.", { language: ["Choose English or Español"] });
+  const language = isLocale(chosen) ? chosen : await orgDefaultLanguage(org.orgId);
+  const result = await importRoster(viewer, org, bytes, fileName, fileHash, clientIp(req), language);
+  const t = await getTranslations("teamApi");
+  return json({ ok: true, ...result, message: t("importDone", { imported: result.imported, skipped: result.skipped }) }, 201);
 });

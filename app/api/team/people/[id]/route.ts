@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { updatePerson } from "@/lib/team";
 import { updatePersonSchema } from "@/lib/team";
@@ -6,5 +7,6 @@ import { updatePersonSchema } from "@/lib/team";
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
   const input = await readJson(req, updatePersonSchema);
   const r = await updatePerson(viewer, params.id, input, clientIp(req));
-  return json({ ok: true, changed: r.changed, message: r.changed ? `${r.person.name} updated.` : "Nothing changed." });
+  const t = await getTranslations("teamApi");
+  return json({ ok: true, changed: r.changed, message: r.changed ? t("personUpdated", { name: r.person.name }) : t("nothingChanged") });
 });

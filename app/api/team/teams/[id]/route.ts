@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { updateTeamSchema } from "@/lib/team";
 import { renameTeam, setTeamArchived } from "@/lib/team";
@@ -9,14 +10,15 @@ import { renameTeam, setTeamArchived } from "@/lib/team";
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
   const input = await readJson(req, updateTeamSchema);
   const ip = clientIp(req);
+  const t = await getTranslations("teamApi");
   const messages: string[] = [];
   if (input.name !== undefined) {
     const r = await renameTeam(viewer, params.id, input.name, ip);
-    messages.push(`Team renamed to “${r.name}”.`);
+    messages.push(t("teamRenamed", { name: r.name }));
   }
   if (input.archived !== undefined) {
     const r = await setTeamArchived(viewer, params.id, input.archived, ip);
-    messages.push(input.archived ? `Team “${r.name}” archived: its people keep their records.` : `Team “${r.name}” restored.`);
+    messages.push(input.archived ? t("teamArchived", { name: r.name }) : t("teamRestored", { name: r.name }));
   }
   return json({ ok: true, message: messages.join(" ") });
 });

@@ -1,3 +1,4 @@
+import { getTranslations } from "next-intl/server";
 import { clientIp, json, readJson, route } from "@/lib/api";
 import { addInvitationWork } from "@/lib/team";
 import { inviteAssignSchema } from "@/lib/team";
@@ -9,5 +10,6 @@ import { inviteAssignSchema } from "@/lib/team";
 export const POST = route<{ id: string }>("manager", async ({ req, viewer, params }) => {
   const input = await readJson(req, inviteAssignSchema);
   const r = await addInvitationWork(viewer, params.id, input.items, clientIp(req));
-  return json({ ok: true, message: `Saved: ${r.email} gets this work when they accept the invitation.` });
+  const t = await getTranslations("teamApi");
+  return json({ ok: true, message: t("inviteWorkSaved", { email: r.email }) });
 });
