@@ -1,6 +1,6 @@
 import { json, readJson, route } from "@/lib/api";
-import { saveLanguage } from "@/lib/account";
-import { languageChoice, languageCookie } from "@/lib/i18n";
+import { languageCookie, saveLanguage } from "@/lib/account";
+import { languageChoice } from "@/lib/i18n";
 
 /**
  * POST /api/account/language { language: "en" | "es" } → remembers the choice in a cookie and, for a
