@@ -1,7 +1,8 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
 import { NextIntlClientProvider } from "next-intl";
-import { getLocale, getTranslations } from "next-intl/server";
+import { getLocale, getMessages, getTranslations } from "next-intl/server";
+import { CLIENT_NAMESPACES } from "@/lib/i18n/browser";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { RouteFocus } from "@/components/ui/route-focus";
@@ -20,11 +21,13 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // Every page renders per request: its scripts carry the nonce of that request's CSP (proxy.ts).
   // Prerendered HTML would hold no nonce, and the policy allows no other inline script.
   await connection();
-  const [locale, t] = await Promise.all([getLocale(), getTranslations("shell")]);
+  const [locale, t, messages] = await Promise.all([getLocale(), getTranslations("shell"), getMessages()]);
+  // only what components read in the browser travels with the page (lib/i18n/client-namespaces.ts)
+  const clientMessages = Object.fromEntries(CLIENT_NAMESPACES.filter((n) => n in messages).map((n) => [n, messages[n]]));
   return (
     <html lang={locale} className={`${bodyFont.variable} ${monoFont.variable}`}>
       <body>
-        <NextIntlClientProvider>
+        <NextIntlClientProvider messages={clientMessages}>
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-panel focus:px-3 focus:py-2">
           {t("skipToMain")}
         </a>

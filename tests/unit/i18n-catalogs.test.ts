@@ -8,8 +8,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { parse, TYPE, type MessageFormatElement } from "@formatjs/icu-messageformat-parser";
 import { describe, expect, it } from "vitest";
-import { LOCALES } from "@/lib/i18n/browser";
-import { negotiateLocale } from "@/lib/i18n/browser";
+import { CLIENT_NAMESPACES, LOCALES, negotiateLocale } from "@/lib/i18n/browser";
+
 
 const dir = path.resolve(import.meta.dirname, "../../messages");
 type Tree = { [k: string]: string | Tree };
@@ -99,5 +99,22 @@ describe("Accept-Language negotiation (RFC 9110 §12.5.4)", () => {
     expect(negotiateLocale("")).toBe("en");
     expect(negotiateLocale(null)).toBe("en");
     expect(negotiateLocale(";;,,q=abc")).toBe("en");
+  });
+});
+
+describe("catalogs sent to the browser", () => {
+  it("include every namespace a component reads with useTranslations (the rest stay on the server)", () => {
+    const root = path.resolve(import.meta.dirname, "../..");
+    const used = new Set<string>();
+    const walk = (d: string) => {
+      for (const e of readdirSync(d, { withFileTypes: true })) {
+        const p = path.join(d, e.name);
+        if (e.isDirectory()) walk(p);
+        else if (/\.tsx?$/.test(e.name)) for (const m of readFileSync(p, "utf8").matchAll(/useTranslations\(\s*(?:"([^"]*)")?\s*\)/g)) used.add(m[1] ?? "(no namespace)");
+      }
+    };
+    for (const d of ["app", "components", "lib"]) walk(path.join(root, d));
+    expect(used.size).toBeGreaterThan(5);
+    expect([...used].filter((n) => !(CLIENT_NAMESPACES as readonly string[]).includes(n)).sort()).toEqual([]);
   });
 });
