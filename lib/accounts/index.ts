@@ -48,7 +48,7 @@ export async function createAccount(
 }
 
 /** Sign-up: a new organization on its trial allowance, and its first manager. Nothing remains if a step fails. */
-export async function createOrganizationWithManager(input: SignUpInput, headers: Headers): Promise<Outcome> {
+export async function createOrganizationWithManager(input: SignUpInput, headers: Headers, language: "en" | "es" = "en"): Promise<Outcome> {
   if (await emailTaken(input.email)) {
     return { ok: false, message: "Some fields need attention.", fieldErrors: { email: ["An account with this e-mail exists. Sign in, or reset the password."] } };
   }
@@ -59,9 +59,11 @@ export async function createOrganizationWithManager(input: SignUpInput, headers:
     kind: "contractor",
     seats: TRIAL_SEATS,
     trialEndsAt: addDays(new Date(), TRIAL_DAYS),
+    // invitations start in the language the company signed up in; the manager can change it
+    defaultLanguage: language,
   });
   try {
-    const result = await createAccount(input, { organizationId, teamId: null, role: "manager" }, headers);
+    const result = await createAccount(input, { organizationId, teamId: null, role: "manager", language }, headers);
     if (!result.ok) await db.delete(organization).where(eq(organization.id, organizationId));
     return result;
   } catch (err) {

@@ -13,5 +13,7 @@ export type SignupPlacement = {
   role: "learner" | "sales" | "manager";
   /** true only for invite acceptance: opening the mailed link proved the address (no confirm mail) */
   emailVerified?: true;
+  /** the new account's language: the language the sign-up form was filled in (lib/i18n LOCALES) */
+  language?: "en" | "es";
 };
 export const signupContext = new AsyncLocalStorage<SignupPlacement>();

@@ -9,7 +9,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { user } from "@/db/schema";
+import { organization, user } from "@/db/schema";
 import { signUpSchema } from "@/lib/auth/browser";
 import { anonymous, freshIp, postJson, signIn } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
@@ -49,6 +49,20 @@ describe("API refusals in the request's language", () => {
     expect(body.error).toBe(es.fieldsNeedAttention);
     expect(body.fieldErrors.email).toEqual([es.emailFormat]);
     expect(body.fieldErrors.password).toEqual([es.passwordMin]);
+  });
+
+  it("a company that signs up in Spanish gets a Spanish account and Spanish invitations by default", async () => {
+    const email = `alta-${Date.now().toString(36)}@test.example`;
+    const res = await anonymous().fetch("/api/account/sign-up", {
+      method: "POST",
+      headers: { "content-type": "application/json", "accept-language": "es-US,es;q=0.9,en;q=0.5" },
+      body: JSON.stringify({ name: "Rosalba Quintanar", email, password: "una-frase-larga-de-prueba-2026", organizationName: "Rociadores Piedra Alta" }),
+    });
+    expect(res.status).toBe(201);
+    const [row] = await db.select({ language: user.language, organizationId: user.organizationId }).from(user).where(eq(user.email, email));
+    expect(row?.language).toBe("es");
+    const [org2] = await db.select({ defaultLanguage: organization.defaultLanguage }).from(organization).where(eq(organization.id, row!.organizationId!));
+    expect(org2?.defaultLanguage).toBe("es");
   });
 
   it("words a quiz refusal in the learner's stored language, whatever the browser says", async () => {

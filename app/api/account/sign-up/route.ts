@@ -1,5 +1,5 @@
 import { ApiError, clientIp, json, readJson, route } from "@/lib/api";
-import { inRequestLanguage } from "@/lib/i18n";
+import { inRequestLanguage, requestLocale } from "@/lib/i18n";
 import { createOrganizationWithManager } from "@/lib/accounts";
 import { signUpSchema } from "@/lib/auth";
 import { hitSignupLimits, rememberSignupBrowser, releasePendingAddress, signupCookie } from "@/lib/auth";
@@ -14,7 +14,8 @@ export const POST = inRequestLanguage(route("public", async ({ req }) => {
   const limit = await hitSignupLimits(clientIp(req), input.email);
   if (!limit.allowed) return json({ error: limit.message }, { status: 429, headers: { "Retry-After": String(limit.retryAfterSeconds) } });
   await releasePendingAddress(input.email);
-  const result = await createOrganizationWithManager(input, req.headers);
+  // the new manager reads Riser in the language the form was in (their Account page changes it)
+  const result = await createOrganizationWithManager(input, req.headers, await requestLocale());
   if (!result.ok) throw new ApiError(400, result.message, result.fieldErrors);
   const nonce = await rememberSignupBrowser(result.userId);
   return json({ ok: true, message: "Check your e-mail: we sent a link to confirm the address." }, { status: 201, headers: { "Set-Cookie": signupCookie(nonce) } });
