@@ -51,6 +51,8 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/offline/versions", rule: "signed-in" },
   { route: "/api/auth/[...all]", rule: "public", sample: "/api/auth/get-session" },
   { route: "/api/account/sign-up", rule: "public", method: "POST", okStatus: 400 },
+  // the language switch works before sign-in (a cookie) and after (the account too)
+  { route: "/api/account/language", rule: "public", method: "POST", okStatus: 400 },
   // account settings
   { route: "/account", rule: "signed-in" },
   { route: "/api/account/sessions", rule: "signed-in" },
@@ -148,6 +150,8 @@ export const ROUTES: RouteEntry[] = [
   { route: "/api/team/teams", rule: "manager", sample: "/api/team/teams", okStatus: 200 },
   { route: "/api/team/security", rule: "manager" },
   { route: "/api/team/security", rule: "manager", method: "POST", okStatus: 400 },
+  { route: "/api/team/language", rule: "manager" },
+  { route: "/api/team/language", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/team/teams", rule: "manager", method: "POST", okStatus: 400 },
   { route: "/api/team/teams/[id]", rule: "manager", sample: "/api/team/teams/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },
   { route: "/api/team/people/[id]", rule: "manager", sample: "/api/team/people/00000000-0000-4000-8000-000000000000", method: "POST", okStatus: 400 },
