@@ -6,6 +6,7 @@ import { signInAs } from "./helpers";
 test("a calculator computes from typed inputs, shows field errors and downloads its PDF summary", async ({ page }) => {
   await signInAs(page, "callum@quillmoor.example");
   await page.goto("/tools/sprinkler-flow");
+  await page.waitForLoadState("networkidle"); // the form computes through its script once hydrated
   await page.getByLabel(/^K-factor/).fill("5.6");
   await page.getByLabel(/^Pressure at the sprinkler/).fill("16");
   // Q = K√P = 5.6 × √16 = 22.4 gpm (NFPA 13D discharge relation; arithmetic exact)
