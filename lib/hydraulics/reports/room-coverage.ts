@@ -3,8 +3,9 @@ import { roomCoverage } from "../coverage";
 import type { RoomCoverageReportInput } from "../schemas";
 import { fromUs, toUs } from "../units";
 import { f, g, mapErrors, unitSet, type CalculatorReport } from "./common";
+import { englishReportT, type ReportT } from "./text";
 
-export function roomCoverageReport(input: RoomCoverageReportInput): CalculatorReport {
+export function roomCoverageReport(input: RoomCoverageReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units, length: L, width: W, maxSpacing: S, maxArea: A, minSpacing: minS, maxWallDistance: maxWall } = input;
   const u = unitSet(units);
   const r = mapErrors(
@@ -28,44 +29,44 @@ export function roomCoverageReport(input: RoomCoverageReportInput): CalculatorRe
     title: CALCULATOR_INFO["room-coverage"].title,
     units,
     formula: [
-      "Sprinklers along each side ≥ side ÷ maximum spacing (rounded up)",
-      "Spacing each way × spacing each way ≤ maximum coverage area; distance to a wall = half the spacing",
+      t("roomCoverage.formulaCount"),
+      t("roomCoverage.formulaArea"),
     ],
     inputs: [
-      { label: "Room", text: `${f(L, u.length)} × ${f(W, u.length)}` },
-      { label: "Listed maximum spacing", text: f(S, u.length) },
-      { label: "Listed maximum coverage area", text: f(A, u.area) },
-      ...(minS === undefined ? [] : [{ label: "Listed minimum spacing", text: f(minS, u.length) }]),
-      ...(maxWall === undefined ? [] : [{ label: "Listed maximum distance to a wall", text: f(maxWall, u.length) }]),
+      { label: t("roomCoverage.room"), text: `${f(L, u.length)} × ${f(W, u.length)}` },
+      { label: t("roomCoverage.maxSpacing"), text: f(S, u.length) },
+      { label: t("roomCoverage.maxArea"), text: f(A, u.area) },
+      ...(minS === undefined ? [] : [{ label: t("roomCoverage.minSpacing"), text: f(minS, u.length) }]),
+      ...(maxWall === undefined ? [] : [{ label: t("roomCoverage.maxWall"), text: f(maxWall, u.length) }]),
     ],
     steps: [
       ...(maxWall === undefined
         ? []
-        : [{ label: "Spacing limit from the wall distance", work: `smaller of ${g(S)} and 2 × ${g(maxWall)}`, text: f(limit, u.length) }]),
-      { label: "Along the length", work: `${g(L)} ÷ ${g(limit)} = ${g(L / limit)} → ${r.columns}`, text: `${r.columns} × ${f(sL, u.length)} spacing` },
-      { label: "Along the width", work: `${g(W)} ÷ ${g(limit)} = ${g(W / limit)} → ${r.rows}`, text: `${r.rows} × ${f(sW, u.length)} spacing` },
+        : [{ label: t("roomCoverage.spacingLimit"), work: t("roomCoverage.spacingLimitWork", { spacing: g(S), wall: g(maxWall) }), text: f(limit, u.length) }]),
+      { label: t("roomCoverage.alongLength"), work: `${g(L)} ÷ ${g(limit)} = ${g(L / limit)} → ${r.columns}`, text: t("roomCoverage.spacingText", { count: String(r.columns), spacing: f(sL, u.length) }) },
+      { label: t("roomCoverage.alongWidth"), work: `${g(W)} ÷ ${g(limit)} = ${g(W / limit)} → ${r.rows}`, text: t("roomCoverage.spacingText", { count: String(r.rows), spacing: f(sW, u.length) }) },
       {
-        label: "Area each sprinkler covers",
+        label: t("roomCoverage.areaEach"),
         work: `${g(sL)} × ${g(sW)} ≤ ${g(A)}`,
         text: f(area, u.area, "up"),
       },
     ],
     results: [
-      { label: "Sprinklers", text: String(r.sprinklers), value: r.sprinklers, unit: "count" },
-      { label: "Layout (along length × along width)", text: `${r.columns} × ${r.rows}`, value: r.sprinklers, unit: null },
-      { label: "Spacing along the length", text: f(sL, u.length), value: sL, unit: u.length },
-      { label: "Spacing along the width", text: f(sW, u.length), value: sW, unit: u.length },
+      { label: t("roomCoverage.sprinklers"), text: String(r.sprinklers), value: r.sprinklers, unit: "count" },
+      { label: t("roomCoverage.layout"), text: `${r.columns} × ${r.rows}`, value: r.sprinklers, unit: null },
+      { label: t("roomCoverage.spacingLength"), text: f(sL, u.length), value: sL, unit: u.length },
+      { label: t("roomCoverage.spacingWidth"), text: f(sW, u.length), value: sW, unit: u.length },
       {
-        label: "Distance to the walls",
-        text: `${f(sL / 2, u.length)} and ${f(sW / 2, u.length)}`,
+        label: t("roomCoverage.wallDistance"),
+        text: t("roomCoverage.wallDistanceText", { alongLength: f(sL / 2, u.length), alongWidth: f(sW / 2, u.length) }),
         value: Math.max(sL, sW) / 2,
         unit: u.length,
       },
-      { label: "Area per sprinkler", text: f(area, u.area, "up"), value: area, unit: u.area },
+      { label: t("roomCoverage.areaPer"), text: f(area, u.area, "up"), value: area, unit: u.area },
     ],
     checks: r.checks.map((c) => ({ status: c.status, text: c.message })),
     notes: [
-      "A regular grid with each sprinkler centred in its share of the room. The spacing, area, wall-distance and obstruction rules that apply are the sprinkler's listing and the adopted code's.",
+      t("roomCoverage.noteGrid"),
     ],
     caution: CALCULATOR_CAUTION_TEXT,
   };
