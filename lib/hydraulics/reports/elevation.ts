@@ -1,4 +1,3 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { BAR_PER_M_OF_WATER, PSI_PER_FT_OF_WATER, WATER_DENSITY_LB_PER_CU_FT } from "../elevation";
 import { HydraulicsInputError, INPUT_LIMITS } from "../errors";
 import type { ElevationReportInput } from "../schemas";
@@ -13,7 +12,7 @@ export function elevationReport({ units, height: h }: ElevationReportInput, t: R
   const p = h * rate;
   return {
     id: "elevation",
-    title: CALCULATOR_INFO.elevation.title,
+    title: t("title.elevation"),
     units,
     formula: [units === "si" ? t("elevation.formulaSi") : t("elevation.formulaUs")],
     inputs: [{ label: t("elevation.height"), text: f(h, u.length) }],
@@ -29,6 +28,6 @@ export function elevationReport({ units, height: h }: ElevationReportInput, t: R
       t("elevation.noteWeight"),
       t("elevation.noteRise"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

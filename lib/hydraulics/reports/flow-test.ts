@@ -1,4 +1,3 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { flowAtResidualGpm, flowTestAvailablePsi, supplyMargin, type FlowTest } from "../flow-test";
 import type { FlowTestReportInput } from "../schemas";
 import { fromUs, toUs } from "../units";
@@ -29,7 +28,7 @@ export function flowTestReport(input: FlowTestReportInput, t: ReportT = englishR
 
   const report: CalculatorReport = {
     id: "flow-test",
-    title: CALCULATOR_INFO["flow-test"].title,
+    title: t("title.flow-test"),
     units,
     formula: [
       t("flowTest.formulaPressure"),
@@ -72,7 +71,7 @@ export function flowTestReport(input: FlowTestReportInput, t: ReportT = englishR
       t("flowTest.noteCarry"),
     ],
     chart: supplyChart(test, pd === undefined ? null : { flowGpm: toUs("flow", qd, units), pressurePsi: toUs("pressure", pd, units) }, units),
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
   if (avail.beyondSupply) {
     report.checks.push({ status: "fails", text: t("flowTest.checkBeyond") });

@@ -1,4 +1,3 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { HydraulicsInputError } from "../errors";
 import { FITTING_LABELS, fittingsEquivalentLength } from "../fittings";
 import { frictionLossBarPerM, frictionLossPsiPerFt, pipeVelocityFtPerS } from "../friction";
@@ -116,14 +115,14 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
 
   return {
     id: "friction-loss",
-    title: CALCULATOR_INFO["friction-loss"].title,
+    title: t("title.friction-loss"),
     units,
     formula: [
       t("frictionLoss.formulaLoss", { constant, lossUnit: u.lossPerLength, flowUnit: u.flow, diameterUnit: u.diameter }),
       t("frictionLoss.formulaTotal"),
     ],
     inputs: [
-      { label: t("frictionLoss.pipe"), text: t("frictionLoss.pipeText", { material: info.label, size: nominalSize }) },
+      { label: t("frictionLoss.pipe"), text: t("frictionLoss.pipeText", { material: t(`material.${material}`), size: nominalSize }) },
       { label: t("frictionLoss.flow"), text: f(flow, u.flow) },
       { label: t("frictionLoss.pipeLength"), text: f(length, u.length) },
       ...(elbows ? [{ label: t("frictionLoss.elbows"), text: String(elbows) }] : []),
@@ -141,6 +140,6 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
     ],
     checks: [],
     notes,
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

@@ -1,9 +1,39 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
-import { roomCoverage } from "../coverage";
+import { roomCoverage, type CoverageCheck } from "../coverage";
 import type { RoomCoverageReportInput } from "../schemas";
 import { fromUs, toUs } from "../units";
 import { f, g, mapErrors, unitSet, type CalculatorReport } from "./common";
 import { englishReportT, type ReportT } from "./text";
+
+const FIXED_CHECKS: Record<string, string> = {
+  "min-wall-distance": "minWallDistance",
+  obstructions: "obstructions",
+  "sloped-ceiling": "slopedCeiling",
+  "beams-soffits": "beamsSoffits",
+  "room-shape": "roomShape",
+  "sprinkler-type": "sprinklerType",
+};
+
+/**
+ * The library's coverage checks in the report's language. Their figures are the library's (feet,
+ * to 0.1 ft, worked out the same way); a check this does not know keeps the library's words.
+ */
+function checkText(c: CoverageCheck, sLFt: number, sWFt: number, columns: number, rows: number, minSpacingFt: number | undefined, t: ReportT) {
+  const fixed = FIXED_CHECKS[c.id];
+  if (fixed) return t(`coverageChecks.${fixed}`);
+  if (c.id === "min-spacing") {
+    if (minSpacingFt === undefined) return c.status === "check" ? t("coverageChecks.minSpacingCheck") : t("coverageChecks.minSpacingOne");
+    if (c.status === "ok") return t("coverageChecks.minSpacingOk");
+    const closest = Math.min(columns > 1 ? sLFt : Infinity, rows > 1 ? sWFt : Infinity);
+    return t("coverageChecks.minSpacingFails", { closest: closest.toFixed(1), minimum: String(minSpacingFt) });
+  }
+  if (c.id === "wall-distance") {
+    return c.status === "check"
+      ? t("coverageChecks.wallCheck", { alongLength: (sLFt / 2).toFixed(1), alongWidth: (sWFt / 2).toFixed(1) })
+      : t("coverageChecks.wallOk");
+  }
+  if (c.id === "listed-flow") return t("coverageChecks.listedFlow", { alongLength: sLFt.toFixed(1), alongWidth: sWFt.toFixed(1) });
+  return c.message;
+}
 
 export function roomCoverageReport(input: RoomCoverageReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units, length: L, width: W, maxSpacing: S, maxArea: A, minSpacing: minS, maxWallDistance: maxWall } = input;
@@ -26,7 +56,7 @@ export function roomCoverageReport(input: RoomCoverageReportInput, t: ReportT = 
   const area = fromUs("area", r.areaPerSprinklerSqFt, units);
   return {
     id: "room-coverage",
-    title: CALCULATOR_INFO["room-coverage"].title,
+    title: t("title.room-coverage"),
     units,
     formula: [
       t("roomCoverage.formulaCount"),
@@ -64,10 +94,13 @@ export function roomCoverageReport(input: RoomCoverageReportInput, t: ReportT = 
       },
       { label: t("roomCoverage.areaPer"), text: f(area, u.area, "up"), value: area, unit: u.area },
     ],
-    checks: r.checks.map((c) => ({ status: c.status, text: c.message })),
+    checks: r.checks.map((c) => ({
+      status: c.status,
+      text: checkText(c, r.spacingAlongLengthFt, r.spacingAlongWidthFt, r.columns, r.rows, minS === undefined ? undefined : toUs("length", minS, units), t),
+    })),
     notes: [
       t("roomCoverage.noteGrid"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

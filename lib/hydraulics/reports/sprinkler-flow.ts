@@ -1,4 +1,3 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import type { SprinklerFlowReportInput } from "../schemas";
 import { CODE_FLOORS, sprinklerFlowGpm, sprinklerPressurePsi } from "../sprinkler";
 import { fromUs, toUs } from "../units";
@@ -25,7 +24,7 @@ export function sprinklerFlowReport(input: SprinklerFlowReportInput, t: ReportT 
     t("sprinklerFlow.noteFloor", { source: CODE_FLOORS.source.minPressurePsi }),
     t("sprinklerFlow.noteSame", { other }),
   ];
-  const base = { id: "sprinkler-flow" as const, title: CALCULATOR_INFO["sprinkler-flow"].title, units, formula, caution: CALCULATOR_CAUTION_TEXT };
+  const base = { id: "sprinkler-flow" as const, title: t("title.sprinkler-flow"), units, formula, caution: t("common.caution") };
   if (solveFor === "flow") {
     const p = input.pressure as number; // the schema requires it when solving for flow
     const qUs = mapErrors(NAMES, () => sprinklerFlowGpm(kUs, toUs("pressure", p, units)));

@@ -1,4 +1,3 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import type { StoredWaterReportInput } from "../schemas";
 import { storedWaterGal } from "../storage";
 import { fromUs, toUs } from "../units";
@@ -11,7 +10,7 @@ export function storedWaterReport({ units, flow: q, duration: minutes }: StoredW
   const v = fromUs("volume", gal, units);
   return {
     id: "stored-water",
-    title: CALCULATOR_INFO["stored-water"].title,
+    title: t("title.stored-water"),
     units,
     formula: [t("storedWater.formula", { volume: u.volume, flow: u.flow })],
     inputs: [
@@ -27,6 +26,6 @@ export function storedWaterReport({ units, flow: q, duration: minutes }: StoredW
       t("storedWater.noteDuration"),
       t("storedWater.noteRounded"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

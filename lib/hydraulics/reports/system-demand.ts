@@ -2,11 +2,9 @@
  * System demand report: each step back from the design sprinklers to the source with its numbers,
  * the demand, and (with a flow test) the supply, the margin and a chart.
  */
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { systemDemand } from "../demand";
 import { HydraulicsInputError } from "../errors";
 import { supplyMargin } from "../flow-test";
-import { PIPE_DATA } from "../pipe-data";
 import type { RoundingDirection } from "../rounding";
 import type { SystemDemandReportInput } from "../schemas";
 import { CODE_FLOORS } from "../sprinkler";
@@ -16,6 +14,15 @@ import { demandInputUs } from "./demand-input";
 import { FLOW_TEST_NAMES } from "./flow-test";
 import { supplyChart } from "./supply";
 import { englishReportT, type ReportT } from "./text";
+
+/** what set a sprinkler's design point (the library's words) → its calcReports key */
+const GOVERNORS: Record<string, string> = {
+  "listed flow": "listedFlow",
+  "listed minimum pressure": "listedMinimumPressure",
+  "code minimum density": "codeMinimumDensity",
+  "code minimum pressure": "codeMinimumPressure",
+  "balanced to the split-point pressure": "balanced",
+};
 
 export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units } = raw;
@@ -34,7 +41,17 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
   const density = `${g(Number(densityValue.toPrecision(3)))} ${u.flow}/${u.area}`;
   const governor = (note: string | undefined) => {
     const m = /set by the (.+)$/.exec(note ?? "");
-    return m ? t("systemDemand.setBy", { what: m[1] ?? "" }) : "";
+    if (!m) return "";
+    const what = m[1] ?? "";
+    return t("systemDemand.setBy", { what: GOVERNORS[what] ? t(`governor.${GOVERNORS[what]}`) : what });
+  };
+  // the library's bore basis up to its colon, in the report's language
+  const boreBasis = (basis: string) => {
+    const head = basis.split(":")[0] ?? "";
+    if (head === "average bore") return t("frictionLoss.averageBore");
+    if (head === "published ID") return t("frictionLoss.publishedId");
+    if (head === "entered from the pipe's listing") return t("systemDemandSteps.boreEntered");
+    return head;
   };
   const P = (psi: number, dir: RoundingDirection = "nearest") => f(fromUs("pressure", psi, units), u.pressure, dir);
   const Q = (gpm: number) => f(fromUs("flow", gpm, units), u.flow);
@@ -56,11 +73,11 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
               pressureUnit: u.pressure,
             });
       return {
-        label: t("systemDemand.pipeLabel", { label: s.label, material: PIPE_DATA[d.material].label, size: d.nominalSize, flow: Q(s.flowGpm) }),
+        label: t("systemDemand.pipeLabel", { label: s.label, material: t(`material.${d.material}`), size: d.nominalSize, flow: Q(s.flowGpm) }),
         work: t("systemDemand.pipeWork", {
           bore: g(fromUs("diameter", d.insideDiameterIn, units)),
           diameterUnit: u.diameter,
-          basis: d.insideDiameterBasis.split(":")[0] ?? "",
+          basis: boreBasis(d.insideDiameterBasis),
           perLength: g(per),
           lossUnit: u.lossPerLength,
           length: g(len),
@@ -89,17 +106,21 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
         node === undefined
           ? (s.note ?? "")
           : t("systemDemand.balanceWork", { pressure: P(node) });
-      return { label: `${s.label}: ${Q(s.flowGpm)}`, work, text: P(s.pressureRequiredPsi, "up") };
+      const name = s.label.endsWith(" balanced") ? t("systemDemandSteps.balanced", { label: s.label.slice(0, -" balanced".length) }) : s.label;
+      return { label: `${name}: ${Q(s.flowGpm)}`, work, text: P(s.pressureRequiredPsi, "up") };
     }
     if (s.kind === "additional-flow") {
       return {
-        label: `${s.label}: ${Q(s.flowGpm)}`,
+        label: `${t("systemDemand.additionalFlow")}: ${Q(s.flowGpm)}`,
         work: t("systemDemand.additionalWork", { sprinklers: Q(result.flowGpm - s.flowGpm), additional: Q(s.flowGpm), total: Q(result.flowGpm) }),
         text: P(s.pressureRequiredPsi, "up"),
       };
     }
     if (s.kind === "device") {
       return { label: s.label, work: t("systemDemand.deviceWork"), text: `+${P(s.pressureAddedPsi)} → ${P(s.pressureRequiredPsi, "up")}` };
+    }
+    if (s.kind === "junction") {
+      return { label: `${t("systemDemandSteps.splitPoint")}: ${Q(s.flowGpm)}`, work: t("systemDemandSteps.junctionWork"), text: P(s.pressureRequiredPsi, "up") };
     }
     return { label: `${s.label}: ${Q(s.flowGpm)}`, work: s.note ?? "", text: P(s.pressureRequiredPsi, "up") };
   });
@@ -108,7 +129,7 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
   const pressure = fromUs("pressure", result.pressurePsi, units);
   const report: CalculatorReport = {
     id: "system-demand",
-    title: CALCULATOR_INFO["system-demand"].title,
+    title: t("title.system-demand"),
     units,
     formula: [
       t("systemDemand.formulaSprinkler"),
@@ -142,7 +163,7 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
       t("systemDemand.noteFittings"),
       t("systemDemand.noteBalance"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
   if (result.clampedAtZero) {
     report.checks.push({ status: "check", text: t("systemDemand.checkClamped") });
