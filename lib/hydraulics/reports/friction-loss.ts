@@ -54,7 +54,7 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
       ? {
           label: t("frictionLoss.idLabel", {
             basis: plastic ? t("frictionLoss.averageBore") : t("frictionLoss.publishedId"),
-            source: info.dimensionSource.split(" (")[0] ?? "",
+            source: t(`pipe.${material}.dimensionSource`).split(" (")[0] ?? "",
           }),
           work: plastic
             ? t("frictionLoss.idWorkPlastic", {
@@ -62,7 +62,7 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
                 wall: String(dims.wallIn),
                 tableId: String(dims.tableWallInsideDiameterIn),
               })
-            : t("frictionLoss.idWork", { od: String(dims.outsideDiameterIn), wallBasis: info.wallBasis, wall: String(dims.wallIn) }),
+            : t("frictionLoss.idWork", { od: String(dims.outsideDiameterIn), wallBasis: t(plastic ? "wallBasis.minimum" : "wallBasis.nominal"), wall: String(dims.wallIn) }),
           text: f(id, u.diameter),
         }
       : { label: t("frictionLoss.idEntered"), work: t("common.entered"), text: f(id, u.diameter) },
@@ -100,9 +100,9 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
   const notes = [
     t("frictionLoss.noteHazen", { form: units === "si" ? t("frictionLoss.hazenSi") : t("frictionLoss.hazenUs") }),
     t("frictionLoss.noteId", {
-      text: idOverride === undefined ? `${info.boreBasis}; ${info.dimensionSource}` : t("frictionLoss.noteIdEntered"),
+      text: idOverride === undefined ? `${t(`pipe.${material}.boreBasis`)}; ${t(`pipe.${material}.dimensionSource`)}` : t("frictionLoss.noteIdEntered"),
     }),
-    t("frictionLoss.noteC", { c: String(c), source: cOverride === undefined ? info.cFactorSource : t("common.entered") }),
+    t("frictionLoss.noteC", { c: String(c), source: cOverride === undefined ? t(`pipe.${material}.cFactorSource`) : t("common.entered") }),
     t("common.nominalBore"),
   ];
   if (fit.items.some((i) => i.chartFt !== undefined)) {
@@ -111,7 +111,7 @@ export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = 
     );
   }
   if (plastic) notes.push(t("frictionLoss.notePlastic"));
-  if (info.note) notes.push(info.note);
+  if (info.note) notes.push(t(`pipe.${material}.note`));
 
   return {
     id: "friction-loss",

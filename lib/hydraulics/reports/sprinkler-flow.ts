@@ -21,7 +21,7 @@ export function sprinklerFlowReport(input: SprinklerFlowReportInput, t: ReportT 
   const other = units === "si" ? t("sprinklerFlow.otherUs", { k: f(kUs, "K-US") }) : t("sprinklerFlow.otherSi", { k: f(fromUs("k", kUs, "si"), "K-SI") });
   const notes = [
     t("sprinklerFlow.noteDischarge"),
-    t("sprinklerFlow.noteFloor", { source: CODE_FLOORS.source.minPressurePsi }),
+    t("sprinklerFlow.noteFloor", { source: t("codeFloor.minPressure") }),
     t("sprinklerFlow.noteSame", { other }),
   ];
   const base = { id: "sprinkler-flow" as const, title: t("title.sprinkler-flow"), units, formula, caution: t("common.caution") };

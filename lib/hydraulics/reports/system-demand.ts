@@ -158,7 +158,7 @@ export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = en
     ],
     notes: [
       t("systemDemand.noteFriction"),
-      t("systemDemand.noteFloors", { density: CODE_FLOORS.source.minDensityGpmPerSqFt, pressure: CODE_FLOORS.source.minPressurePsi }),
+      t("systemDemand.noteFloors", { density: t("codeFloor.minDensity"), pressure: t("codeFloor.minPressure") }),
       t("common.nominalBore"),
       t("systemDemand.noteFittings"),
       t("systemDemand.noteBalance"),

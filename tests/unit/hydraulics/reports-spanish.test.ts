@@ -5,7 +5,7 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { CALCULATOR_IDS, calculatorReport, convertInputUnits, inputFromPreset, type CalculatorId, type CalculatorReport } from "../../../lib/hydraulics";
+import { CALCULATOR_IDS, PIPE_MATERIALS, calculatorReport, convertInputUnits, inputFromPreset, type CalculatorId, type CalculatorReport } from "../../../lib/hydraulics";
 import { catalogTranslator } from "../../../lib/i18n/translator";
 
 type Tree = { [key: string]: string | Tree };
@@ -53,13 +53,12 @@ const citations = (r: CalculatorReport) =>
   texts(r).flatMap((s) => s.match(/NFPA \d+D?|ASTM [A-Z]\d+|ASME B[\d.]+M|AWWA C\d+/g) ?? []).sort();
 const count = (r: CalculatorReport, phrase: string) => texts(r).join("\n").split(phrase).length - 1;
 
-describe.each(["us", "si"] as const)("Spanish calculator reports (%s units)", (units) => {
-  const spanish = catalogTranslator("es", "calcReports");
-  it.each(CALCULATOR_IDS)("%s: same figures as the English report, words from the Spanish catalog", (id) => {
-    const usInput = { ...inputFromPreset(id), ...INPUTS[id], units: "us" };
-    const input = units === "si" ? { ...convertInputUnits(usInput, "us", "si"), units } : usInput;
-    const en = calculatorReport(id, input);
-    const sp = calculatorReport(id, input, spanish);
+const spanish = catalogTranslator("es", "calcReports");
+
+/** builds the report in both languages and checks the Spanish one against the English one and the catalog */
+function compareLanguages(id: CalculatorId, input: Record<string, unknown>) {
+  const en = calculatorReport(id, input);
+  const sp = calculatorReport(id, input, spanish);
 
     // the figures: values, units, chart, verdict and check outcomes are the library's, whatever the language
     expect(sp.results.map((x) => [x.value, x.unit])).toEqual(en.results.map((x) => [x.value, x.unit]));
@@ -93,6 +92,16 @@ describe.each(["us", "si"] as const)("Spanish calculator reports (%s units)", (u
     // no line of the Spanish report is an English catalog message that has a Spanish wording
     const englishOnly = new Set([...EN].filter(([k, v]) => ES.get(k) !== v).map(([, v]) => v));
     expect(spText.filter((line) => englishOnly.has(line))).toEqual([]);
+}
+
+describe.each(["us", "si"] as const)("Spanish calculator reports (%s units)", (units) => {
+  it.each(CALCULATOR_IDS)("%s: same figures as the English report, words from the Spanish catalog", (id) => {
+    const usInput = { ...inputFromPreset(id), ...INPUTS[id], units: "us" };
+    compareLanguages(id, units === "si" ? { ...convertInputUnits(usInput, "us", "si"), units } : usInput);
+  });
+  it.each(PIPE_MATERIALS)("friction loss in %s: the pipe's sources and notes keep their figures in Spanish", (material) => {
+    const usInput = { units: "us", material, nominalSize: "1", flow: 20, length: 60 };
+    compareLanguages("friction-loss", units === "si" ? { ...convertInputUnits(usInput, "us", "si"), units } : usInput);
   });
 });
 
