@@ -11,6 +11,7 @@ import {
   parseCalculatorInput,
   type CalculatorId,
   type CalculatorReport,
+  type ReportT,
   type Units,
 } from "@/lib/hydraulics";
 import { UnitSwitch } from "./fields";
@@ -39,14 +40,16 @@ export function useCalculator<TValues extends FieldValues>(id: CalculatorId, def
   });
   const values = useWatch({ control: form.control });
   const key = JSON.stringify(values);
+  // the report's words in the reader's language; its numbers come from lib/hydraulics either way
+  const tr = useTranslations("calcReports") as unknown as ReportT;
   const { report, input } = useMemo(() => {
     try {
       const parsed = parseCalculatorInput(id, JSON.parse(key));
-      return { report: calculatorReport(id, parsed), input: parsed as unknown };
+      return { report: calculatorReport(id, parsed, tr), input: parsed as unknown };
     } catch {
       return { report: null, input: null };
     }
-  }, [id, key]);
+  }, [id, key, tr]);
   const { trigger, formState } = form;
   useEffect(() => {
     if (formState.isDirty || formState.submitCount > 0) void trigger();
@@ -150,8 +153,9 @@ export function CalculatorShell<TValues extends FieldValues>({
  */
 function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
   const t = useTranslations("tools");
+  const tr = useTranslations("calcReports");
   const headline = report?.results[0];
-  const margin = report?.results.find((r) => r.label === "Margin" || r.label === "Shortfall");
+  const margin = report?.results.find((r) => r.label === tr("common.margin") || r.label === tr("common.shortfall"));
   return (
     <div
       className="sticky bottom-0 z-10 -mx-4 mt-4 flex items-center justify-between gap-3 border-t border-line bg-paper px-4 py-2 lg:hidden"

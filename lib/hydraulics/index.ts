@@ -85,7 +85,7 @@ export {
   type DemandStep,
   type SegmentDetail,
 } from "./demand";
-export { calculatorReport, parseCalculatorInput, FITTING_NAMES, NOMINAL_BORE_NOTE } from "./reports";
+export { calculatorReport, parseCalculatorInput, englishReportT, FITTING_NAMES, NOMINAL_BORE_NOTE, type ReportT } from "./reports";
 export { shownMargin } from "./reports/common";
 export { calculatorFormSchema, fieldLabel } from "./form-schema";
 

@@ -5,6 +5,6 @@
  * a component reads a namespace that is not listed here.
  */
 export const CLIENT_NAMESPACES = [
-  "account", "admin", "adminConsole", "auth", "billing", "certificates", "editions", "errors", "fieldErrors", "learn", "lesson",
+  "account", "admin", "adminConsole", "auth", "billing", "calcReports", "certificates", "editions", "errors", "fieldErrors", "learn", "lesson",
   "marketing", "modules", "offline", "quiz", "search", "shell", "signoffs", "system", "team", "tools", "ui", "verify",
 ] as const;

@@ -143,7 +143,7 @@ export interface SummaryPdfOptions {
 /** the summary PDF for a calculator and its inputs; throws HydraulicsInputError for bad input */
 export async function calculatorSummaryPdf(id: string, input: unknown, options: SummaryPdfOptions = {}): Promise<Uint8Array> {
   if (!isCalculatorId(id)) throw new HydraulicsInputError("id", "unknown calculator");
-  const report = calculatorReport(id, input);
+  const report = calculatorReport(id, input, catalogTranslator(options.language, "calcReports"));
   const date = options.date ?? new Date();
   const { doc, t } = await createPdf(options.fontDir ?? defaultFontDir());
   const tr = catalogTranslator(options.language, "tools");

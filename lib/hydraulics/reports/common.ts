@@ -3,6 +3,7 @@ import type { CalculatorId } from "../catalog";
 import { HydraulicsInputError } from "../errors";
 import { displayDecimals, formatForDisplay, roundForDisplay, type DisplayUnit, type RoundingDirection } from "../rounding";
 import type { Units } from "../units";
+import { englishReportT, type ReportT } from "./text";
 
 export interface ReportLine {
   label: string;
@@ -106,10 +107,10 @@ export function shownMargin(availablePsiOrBar: number, requiredPsiOrBar: number,
  * the rounded figures do; the margin is the difference of the rounded figures, a shortfall is never
  * shown smaller than either the exact or the rounded difference.
  */
-export function supplyComparison(availableExact: number, requiredExact: number, exactPass: boolean, unit: "psi" | "bar") {
+export function supplyComparison(availableExact: number, requiredExact: number, exactPass: boolean, unit: "psi" | "bar", t: ReportT = englishReportT) {
   const shown = shownMargin(availableExact, requiredExact, unit);
   const d = displayDecimals(unit);
-  const work = `${shown.available.toFixed(d)} available (rounded down) − ${shown.required.toFixed(d)} needed (rounded up)`;
+  const work = t("common.marginWork", { available: shown.available.toFixed(d), required: shown.required.toFixed(d) });
   if (exactPass && shown.pass) return { pass: true as const, work, value: shown.margin, text: f(shown.margin, unit) };
   const short = Math.max(-shown.margin, requiredExact - availableExact, 0);
   return { pass: false as const, work, value: short, text: f(short, unit, "up") };

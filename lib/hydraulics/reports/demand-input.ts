@@ -6,9 +6,10 @@ import type { FlowTest } from "../flow-test";
 import type { SegmentReportInput, SystemDemandReportInput } from "../schemas";
 import { toUs, type Units } from "../units";
 import { fittingList, fittingsError } from "./fittings";
+import { englishReportT, type ReportT } from "./text";
 
-function segment(s: SegmentReportInput, units: Units): { seg: PipeSegmentInput; fittings: FittingInput[] } {
-  const fittings = fittingList(s.elbows, s.teeBranches, s.listedFittingsLength, units);
+function segment(s: SegmentReportInput, units: Units, t: ReportT): { seg: PipeSegmentInput; fittings: FittingInput[] } {
+  const fittings = fittingList(s.elbows, s.teeBranches, s.listedFittingsLength, units, t("common.listedFittings"));
   return {
     fittings,
     seg: {
@@ -30,13 +31,13 @@ export interface DemandInputUs {
   fieldOf: (e: HydraulicsInputError) => HydraulicsInputError;
 }
 
-export function demandInputUs(raw: SystemDemandReportInput): DemandInputUs {
+export function demandInputUs(raw: SystemDemandReportInput, t: ReportT = englishReportT): DemandInputUs {
   const { units } = raw;
   const segFittings: FittingInput[][] = [];
   const branchFittings: (FittingInput[] | undefined)[] = [];
   const input: SystemDemandInput = {
     sprinklers: raw.sprinklers.map((s, i) => {
-      const branch = s.branch ? segment(s.branch, units) : undefined;
+      const branch = s.branch ? segment(s.branch, units, t) : undefined;
       branchFittings[i] = branch?.fittings;
       return {
         label: s.label,
@@ -48,11 +49,11 @@ export function demandInputUs(raw: SystemDemandReportInput): DemandInputUs {
       };
     }),
     supplyPath: raw.segments.map((s, i) => {
-      const r = segment(s, units);
+      const r = segment(s, units, t);
       segFittings[i] = r.fittings;
       return r.seg;
     }),
-    deviceLosses: (raw.devices ?? []).map((d, i) => ({ label: d.label ?? `Device ${i + 1}`, lossPsi: toUs("pressure", d.loss, units) })),
+    deviceLosses: (raw.devices ?? []).map((d, i) => ({ label: d.label ?? t("systemDemand.device", { number: String(i + 1) }), lossPsi: toUs("pressure", d.loss, units) })),
     additionalFlowGpm: raw.additionalFlow === undefined ? undefined : toUs("flow", raw.additionalFlow, units),
   };
   const supply: FlowTest | undefined = raw.supply && {

@@ -3,11 +3,17 @@ import { HydraulicsInputError } from "../errors";
 import { FITTING_LABELS, type FittingInput } from "../fittings";
 import { toUs, type Units } from "../units";
 
-export function fittingList(elbows: number | undefined, tees: number | undefined, listed: number | undefined, units: Units): FittingInput[] {
+export function fittingList(
+  elbows: number | undefined,
+  tees: number | undefined,
+  listed: number | undefined,
+  units: Units,
+  listedLabel = "Listed fittings (maker's equivalent lengths)",
+): FittingInput[] {
   const list: FittingInput[] = [];
   if (elbows) list.push({ kind: "elbow-90", count: elbows });
   if (tees) list.push({ kind: "tee-branch", count: tees });
-  if (listed) list.push({ label: "Listed fittings (maker's equivalent lengths)", equivalentLengthFt: toUs("length", listed, units) });
+  if (listed) list.push({ label: listedLabel, equivalentLengthFt: toUs("length", listed, units) });
   return list;
 }
 

@@ -1,16 +1,23 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { HydraulicsInputError } from "../errors";
-import { fittingsEquivalentLength } from "../fittings";
+import { FITTING_LABELS, fittingsEquivalentLength } from "../fittings";
 import { frictionLossBarPerM, frictionLossPsiPerFt, pipeVelocityFtPerS } from "../friction";
 import { PIPE_DATA, hazenWilliamsC, pipeDimensions } from "../pipe-data";
 import type { FrictionLossReportInput } from "../schemas";
 import { fromUs, toUs } from "../units";
 import { f, g, mapErrors, unitSet, type CalculatorReport, type ReportStep } from "./common";
-import { NOMINAL_BORE_NOTE, fittingList, fittingsError } from "./fittings";
+import { fittingList, fittingsError } from "./fittings";
+import { englishReportT, type ReportT } from "./text";
 
 const NAMES = { flowGpm: "flow", flowLpm: "flow", cFactor: "cFactor", insideDiameterIn: "insideDiameter", insideDiameterMm: "insideDiameter" };
 
-export function frictionLossReport(input: FrictionLossReportInput): CalculatorReport {
+/** the fitting names the form offers, in the report's language (other names are the library's) */
+function fittingName(label: string, t: ReportT) {
+  if (label === FITTING_LABELS["elbow-90"]) return t("common.elbow90");
+  if (label === FITTING_LABELS["tee-branch"]) return t("common.teeBranch");
+  return label;
+}
+
+export function frictionLossReport(input: FrictionLossReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units, material, nominalSize, flow, length, elbows, teeBranches: tees, listedFittingsLength: listed } = input;
   const { insideDiameter: idOverride, cFactor: cOverride } = input;
   const u = unitSet(units);
@@ -18,7 +25,7 @@ export function frictionLossReport(input: FrictionLossReportInput): CalculatorRe
   const dims = mapErrors({}, () => pipeDimensions(material, nominalSize));
   const idIn = idOverride === undefined ? dims.insideDiameterIn : toUs("diameter", idOverride, units);
   const c = cOverride ?? hazenWilliamsC(material);
-  const fittings = fittingList(elbows, tees, listed, units);
+  const fittings = fittingList(elbows, tees, listed, units, t("common.listedFittings"));
   let fit: ReturnType<typeof fittingsEquivalentLength>;
   try {
     fit = fittingsEquivalentLength(material, nominalSize, fittings, {
@@ -45,80 +52,94 @@ export function frictionLossReport(input: FrictionLossReportInput): CalculatorRe
   const steps: ReportStep[] = [
     idOverride === undefined
       ? {
-          label: `Inside diameter (${plastic ? "average bore" : "published ID"}, ${info.dimensionSource.split(" (")[0]})`,
+          label: t("frictionLoss.idLabel", {
+            basis: plastic ? t("frictionLoss.averageBore") : t("frictionLoss.publishedId"),
+            source: t(`pipe.${material}.dimensionSource`).split(" (")[0] ?? "",
+          }),
           work: plastic
-            ? `OD ${dims.outsideDiameterIn} − 2 × (minimum wall ${dims.wallIn} + half the wall tolerance) — not OD − 2 × minimum wall (${dims.tableWallInsideDiameterIn} in)`
-            : `OD ${dims.outsideDiameterIn} − 2 × ${info.wallBasis} ${dims.wallIn} in`,
+            ? t("frictionLoss.idWorkPlastic", {
+                od: String(dims.outsideDiameterIn),
+                wall: String(dims.wallIn),
+                tableId: String(dims.tableWallInsideDiameterIn),
+              })
+            : t("frictionLoss.idWork", { od: String(dims.outsideDiameterIn), wallBasis: t(plastic ? "wallBasis.minimum" : "wallBasis.nominal"), wall: String(dims.wallIn) }),
           text: f(id, u.diameter),
         }
-      : { label: "Inside diameter (the pipe's listed value, entered — it governs)", work: "entered", text: f(id, u.diameter) },
+      : { label: t("frictionLoss.idEntered"), work: t("common.entered"), text: f(id, u.diameter) },
   ];
   for (const item of fit.items) {
     steps.push({
-      label: `Fittings: ${item.count} × ${item.label}`,
+      label: t("frictionLoss.fittingsLabel", { count: String(item.count), fitting: fittingName(item.label, t) }),
       work:
         item.chartFt === undefined
-          ? `${item.count} × ${g(fromUs("length", item.eachFt, units))} ${u.length} (entered)`
-          : `${item.count} × ${item.chartFt} ft chart × ${g(item.cMultiplier ?? 1)} for C${item.diameterMultiplier !== 1 ? ` × ${g(item.diameterMultiplier ?? 1)} for the bore` : ""}`,
+          ? t("frictionLoss.fittingsWorkEntered", { count: String(item.count), each: g(fromUs("length", item.eachFt, units)), unit: u.length })
+          : t("frictionLoss.fittingsWorkChart", {
+              count: String(item.count),
+              chart: String(item.chartFt),
+              cMultiplier: g(item.cMultiplier ?? 1),
+              bore: item.diameterMultiplier !== 1 ? t("frictionLoss.fittingsWorkBore", { multiplier: g(item.diameterMultiplier ?? 1) }) : "",
+            }),
       text: f(fromUs("length", item.totalFt, units), u.length),
     });
   }
   steps.push(
-    { label: "Length with fittings", work: `${g(length)} + ${g(fitLen)}`, text: f(totalLen, u.length) },
+    { label: t("frictionLoss.lengthWithFittings"), work: `${g(length)} + ${g(fitLen)}`, text: f(totalLen, u.length) },
     {
-      label: "Loss per unit length",
+      label: t("frictionLoss.lossPerLength"),
       work: `${constant} × ${g(flow)}^1.85 ÷ (${g(c)}^1.85 × ${g(id)}^4.87)`,
       text: f(per, u.lossPerLength),
     },
-    { label: "Friction loss", work: `${g(per)} × ${g(totalLen)}`, text: f(loss, u.pressure, "up") },
+    { label: t("frictionLoss.frictionLoss"), work: `${g(per)} × ${g(totalLen)}`, text: f(loss, u.pressure, "up") },
     {
-      label: "Velocity in the pipe",
-      work: units === "si" ? `flow ÷ bore area` : `0.4085 × ${g(flow)} ÷ ${g(id)}²`,
+      label: t("frictionLoss.velocityInPipe"),
+      work: units === "si" ? t("frictionLoss.velocityWorkSi") : `0.4085 × ${g(flow)} ÷ ${g(id)}²`,
       text: `${g(velocity)} ${u.velocity}`,
     },
   );
 
   const notes = [
-    `Hazen-Williams in the form NFPA 13 prints: ${units === "si" ? "bar per metre with Q in L/min and d in mm" : "psi per foot with Q in gpm and d in inches"}.`,
-    `Inside diameter: ${idOverride === undefined ? `${info.boreBasis}; ${info.dimensionSource}` : "entered from the pipe's listing (it governs over the table)"}.`,
-    `C = ${c}: ${cOverride === undefined ? info.cFactorSource : "entered"}.`,
-    NOMINAL_BORE_NOTE,
+    t("frictionLoss.noteHazen", { form: units === "si" ? t("frictionLoss.hazenSi") : t("frictionLoss.hazenUs") }),
+    t("frictionLoss.noteId", {
+      text: idOverride === undefined ? `${t(`pipe.${material}.boreBasis`)}; ${t(`pipe.${material}.dimensionSource`)}` : t("frictionLoss.noteIdEntered"),
+    }),
+    t("frictionLoss.noteC", { c: String(c), source: cOverride === undefined ? t(`pipe.${material}.cFactorSource`) : t("common.entered") }),
+    t("common.nominalBore"),
   ];
   if (fit.items.some((i) => i.chartFt !== undefined)) {
     notes.push(
-      "Fitting lengths: NFPA 13 equivalent schedule 40 steel pipe length chart (C = 120) with its C-factor multiplier; for other bores × (ID ÷ schedule 40 ID)^4.87 (from memory — verify against the adopted edition).",
+      t("frictionLoss.noteFittings"),
     );
   }
-  if (plastic) notes.push("CPVC and PEX fittings take the pipe maker's listed equivalent lengths; enter their total as listed fittings.");
-  if (info.note) notes.push(info.note);
+  if (plastic) notes.push(t("frictionLoss.notePlastic"));
+  if (info.note) notes.push(t(`pipe.${material}.note`));
 
   return {
     id: "friction-loss",
-    title: CALCULATOR_INFO["friction-loss"].title,
+    title: t("title.friction-loss"),
     units,
     formula: [
-      `p = ${constant} × Q^1.85 ÷ (C^1.85 × d^4.87)   (${u.lossPerLength}; Q in ${u.flow}, d in ${u.diameter})`,
-      `Friction loss = p × (pipe length + fitting equivalent length)`,
+      t("frictionLoss.formulaLoss", { constant, lossUnit: u.lossPerLength, flowUnit: u.flow, diameterUnit: u.diameter }),
+      t("frictionLoss.formulaTotal"),
     ],
     inputs: [
-      { label: "Pipe", text: `${info.label}, ${nominalSize} in nominal` },
-      { label: "Flow", text: f(flow, u.flow) },
-      { label: "Pipe length", text: f(length, u.length) },
-      ...(elbows ? [{ label: "90° elbows", text: String(elbows) }] : []),
-      ...(tees ? [{ label: "Tees, flow turned 90°", text: String(tees) }] : []),
-      ...(listed ? [{ label: "Listed fittings, total", text: f(listed, u.length) }] : []),
-      ...(idOverride === undefined ? [] : [{ label: "Listed inside diameter", text: f(idOverride, u.diameter) }]),
-      { label: "C-factor", text: String(c) },
+      { label: t("frictionLoss.pipe"), text: t("frictionLoss.pipeText", { material: t(`material.${material}`), size: nominalSize }) },
+      { label: t("frictionLoss.flow"), text: f(flow, u.flow) },
+      { label: t("frictionLoss.pipeLength"), text: f(length, u.length) },
+      ...(elbows ? [{ label: t("frictionLoss.elbows"), text: String(elbows) }] : []),
+      ...(tees ? [{ label: t("frictionLoss.tees"), text: String(tees) }] : []),
+      ...(listed ? [{ label: t("frictionLoss.listedTotal"), text: f(listed, u.length) }] : []),
+      ...(idOverride === undefined ? [] : [{ label: t("frictionLoss.listedId"), text: f(idOverride, u.diameter) }]),
+      { label: t("frictionLoss.cFactor"), text: String(c) },
     ],
     steps,
     results: [
-      { label: "Friction loss", text: f(loss, u.pressure, "up"), value: loss, unit: u.pressure },
-      { label: "Loss per unit length", text: f(per, u.lossPerLength), value: per, unit: u.lossPerLength },
-      { label: "Velocity", text: `${g(velocity)} ${u.velocity}`, value: velocity, unit: null },
-      { label: "Inside diameter used", text: f(id, u.diameter), value: id, unit: u.diameter },
+      { label: t("frictionLoss.frictionLoss"), text: f(loss, u.pressure, "up"), value: loss, unit: u.pressure },
+      { label: t("frictionLoss.lossPerLength"), text: f(per, u.lossPerLength), value: per, unit: u.lossPerLength },
+      { label: t("frictionLoss.velocity"), text: `${g(velocity)} ${u.velocity}`, value: velocity, unit: null },
+      { label: t("frictionLoss.idUsed"), text: f(id, u.diameter), value: id, unit: u.diameter },
     ],
     checks: [],
     notes,
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

@@ -10,8 +10,9 @@ import { roomCoverageReport } from "./room-coverage";
 import { sprinklerFlowReport } from "./sprinkler-flow";
 import { storedWaterReport } from "./stored-water";
 import { systemDemandReport } from "./system-demand";
+import { englishReportT, type ReportT } from "./text";
 
-const BUILDERS: { [K in CalculatorId]: (input: CalculatorInputs[K]) => CalculatorReport } = {
+const BUILDERS: { [K in CalculatorId]: (input: CalculatorInputs[K], t: ReportT) => CalculatorReport } = {
   "sprinkler-flow": sprinklerFlowReport,
   "friction-loss": frictionLossReport,
   elevation: elevationReport,
@@ -33,11 +34,16 @@ export function parseCalculatorInput<I extends CalculatorId>(id: I, input: unkno
   return parsed.data as CalculatorInputs[I];
 }
 
-/** the whole report for a calculator; throws HydraulicsInputError naming the input field */
-export function calculatorReport(id: CalculatorId, input: unknown): CalculatorReport {
+/**
+ * The whole report for a calculator; throws HydraulicsInputError naming the input field. `t` is a
+ * calcReports translator in the reader's language (English when left out); the numbers do not
+ * depend on it.
+ */
+export function calculatorReport(id: CalculatorId, input: unknown, t: ReportT = englishReportT): CalculatorReport {
   const parsed = parseCalculatorInput(id, input);
-  return (BUILDERS[id] as (i: typeof parsed) => CalculatorReport)(parsed);
+  return (BUILDERS[id] as (i: typeof parsed, t: ReportT) => CalculatorReport)(parsed, t);
 }
 
 export type { CalculatorReport, ReportChart, ReportLine, ReportResult, ReportStep } from "./common";
+export { englishReportT, type ReportT } from "./text";
 export { FITTING_NAMES, NOMINAL_BORE_NOTE } from "./fittings";

@@ -1,30 +1,30 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import type { SprinklerFlowReportInput } from "../schemas";
 import { CODE_FLOORS, sprinklerFlowGpm, sprinklerPressurePsi } from "../sprinkler";
 import { fromUs, toUs } from "../units";
 import { f, g, mapErrors, unitSet, type CalculatorReport } from "./common";
+import { englishReportT, type ReportT } from "./text";
 
 const NAMES = { kFactor: "k", pressurePsi: "pressure", flowGpm: "flow" };
 
-export function sprinklerFlowReport(input: SprinklerFlowReportInput): CalculatorReport {
+export function sprinklerFlowReport(input: SprinklerFlowReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units, solveFor, k } = input;
   const u = unitSet(units);
   const kUs = toUs("k", k, units);
   const floor = fromUs("pressure", CODE_FLOORS.minPressurePsi, units);
   const formula =
     solveFor === "flow"
-      ? [`Q = K × √P   (Q in ${u.flow}, K in ${u.kLabel}, P in ${u.pressure})`]
+      ? [t("sprinklerFlow.formulaFlow", { flowUnit: u.flow, kUnit: u.kLabel, pressureUnit: u.pressure })]
       : [
-          `P = (Q ÷ K)²   (P in ${u.pressure}, Q in ${u.flow}, K in ${u.kLabel})`,
-          `and never below ${f(floor, u.pressure)}, NFPA 13D's minimum operating pressure`,
+          t("sprinklerFlow.formulaPressure", { pressureUnit: u.pressure, flowUnit: u.flow, kUnit: u.kLabel }),
+          t("sprinklerFlow.formulaFloor", { floor: f(floor, u.pressure) }),
         ];
-  const other = units === "si" ? `K ${f(kUs, "K-US")} in US units` : `K ${f(fromUs("k", kUs, "si"), "K-SI")} in SI units`;
+  const other = units === "si" ? t("sprinklerFlow.otherUs", { k: f(kUs, "K-US") }) : t("sprinklerFlow.otherSi", { k: f(fromUs("k", kUs, "si"), "K-SI") });
   const notes = [
-    "Q = K√P is the discharge relation used by NFPA 13 and NFPA 13D. The K-factor, and the minimum flow and pressure for each coverage area, come from the sprinkler's listing.",
-    `Code floor: ${CODE_FLOORS.source.minPressurePsi}.`,
-    `The same sprinkler is ${other} (K_SI = K_US × 14.416, from the gallon and the bar).`,
+    t("sprinklerFlow.noteDischarge"),
+    t("sprinklerFlow.noteFloor", { source: t("codeFloor.minPressure") }),
+    t("sprinklerFlow.noteSame", { other }),
   ];
-  const base = { id: "sprinkler-flow" as const, title: CALCULATOR_INFO["sprinkler-flow"].title, units, formula, caution: CALCULATOR_CAUTION_TEXT };
+  const base = { id: "sprinkler-flow" as const, title: t("title.sprinkler-flow"), units, formula, caution: t("common.caution") };
   if (solveFor === "flow") {
     const p = input.pressure as number; // the schema requires it when solving for flow
     const qUs = mapErrors(NAMES, () => sprinklerFlowGpm(kUs, toUs("pressure", p, units)));
@@ -33,19 +33,19 @@ export function sprinklerFlowReport(input: SprinklerFlowReportInput): Calculator
     return {
       ...base,
       inputs: [
-        { label: "K-factor", text: `${f(k, u.k)} ${u.kLabel}` },
-        { label: "Pressure at the sprinkler", text: f(p, u.pressure) },
+        { label: t("sprinklerFlow.kFactor"), text: `${f(k, u.k)} ${u.kLabel}` },
+        { label: t("sprinklerFlow.pressureAt"), text: f(p, u.pressure) },
       ],
       steps: [
-        { label: "Square root of the pressure", work: `√${g(p)}`, text: g(Math.sqrt(p)) },
-        { label: "Flow", work: `${g(k)} × ${g(Math.sqrt(p))}`, text: f(q, u.flow) },
+        { label: t("sprinklerFlow.sqrt"), work: `√${g(p)}`, text: g(Math.sqrt(p)) },
+        { label: t("sprinklerFlow.flow"), work: `${g(k)} × ${g(Math.sqrt(p))}`, text: f(q, u.flow) },
       ],
-      results: [{ label: "Flow from the sprinkler", text: f(q, u.flow), value: q, unit: u.flow }],
+      results: [{ label: t("sprinklerFlow.flowFrom"), text: f(q, u.flow), value: q, unit: u.flow }],
       checks: below
         ? [
             {
               status: "fails",
-              text: `${f(p, u.pressure)} is below NFPA 13D's minimum operating pressure of ${f(floor, u.pressure)}: a design sprinkler must have at least that.`,
+              text: t("sprinklerFlow.checkBelow", { pressure: f(p, u.pressure), floor: f(floor, u.pressure) }),
             },
           ]
         : [],
@@ -60,27 +60,27 @@ export function sprinklerFlowReport(input: SprinklerFlowReportInput): Calculator
   return {
     ...base,
     inputs: [
-      { label: "K-factor", text: `${f(k, u.k)} ${u.kLabel}` },
-      { label: "Flow wanted", text: f(q, u.flow) },
+      { label: t("sprinklerFlow.kFactor"), text: `${f(k, u.k)} ${u.kLabel}` },
+      { label: t("sprinklerFlow.flowWanted"), text: f(q, u.flow) },
     ],
     steps: [
-      { label: "Flow ÷ K", work: `${g(q)} ÷ ${g(k)}`, text: g(q / k) },
-      { label: "Pressure from the flow", work: `${g(q / k)}²`, text: f(pFormula, u.pressure, "up") },
+      { label: t("sprinklerFlow.flowOverK"), work: `${g(q)} ÷ ${g(k)}`, text: g(q / k) },
+      { label: t("sprinklerFlow.pressureFromFlow"), work: `${g(q / k)}²`, text: f(pFormula, u.pressure, "up") },
       {
-        label: "Pressure needed (at least the code's minimum)",
-        work: `larger of ${g(pFormula)} and ${g(floor)}`,
+        label: t("sprinklerFlow.pressureNeeded"),
+        work: t("sprinklerFlow.largerOf", { formula: g(pFormula), floor: g(floor) }),
         text: f(p, u.pressure, "up"),
       },
     ],
-    results: [{ label: "Pressure needed at the sprinkler", text: f(p, u.pressure, "up"), value: p, unit: u.pressure }],
+    results: [{ label: t("sprinklerFlow.pressureNeededAt"), text: f(p, u.pressure, "up"), value: p, unit: u.pressure }],
     checks: floorGoverns
       ? [
           {
             status: "check",
-            text: `(Q ÷ K)² gives ${f(pFormula, u.pressure, "up")}, below NFPA 13D's ${f(floor, u.pressure)} minimum operating pressure, so ${f(floor, u.pressure)} governs; the sprinkler then flows K√P, more than asked.`,
+            text: t("sprinklerFlow.checkFloor", { pressure: f(pFormula, u.pressure, "up"), floor: f(floor, u.pressure) }),
           },
         ]
       : [],
-    notes: [...notes, "Pressure needed is rounded up, so the display never understates it."],
+    notes: [...notes, t("sprinklerFlow.noteRounded")],
   };
 }

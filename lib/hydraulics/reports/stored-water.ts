@@ -1,31 +1,31 @@
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import type { StoredWaterReportInput } from "../schemas";
 import { storedWaterGal } from "../storage";
 import { fromUs, toUs } from "../units";
 import { f, g, mapErrors, unitSet, type CalculatorReport } from "./common";
+import { englishReportT, type ReportT } from "./text";
 
-export function storedWaterReport({ units, flow: q, duration: t }: StoredWaterReportInput): CalculatorReport {
+export function storedWaterReport({ units, flow: q, duration: minutes }: StoredWaterReportInput, t: ReportT = englishReportT): CalculatorReport {
   const u = unitSet(units);
-  const gal = mapErrors({ flowGpm: "flow", durationMin: "duration" }, () => storedWaterGal(toUs("flow", q, units), t));
+  const gal = mapErrors({ flowGpm: "flow", durationMin: "duration" }, () => storedWaterGal(toUs("flow", q, units), minutes));
   const v = fromUs("volume", gal, units);
   return {
     id: "stored-water",
-    title: CALCULATOR_INFO["stored-water"].title,
+    title: t("title.stored-water"),
     units,
-    formula: [`V = Q × t   (V in ${u.volume}, Q in ${u.flow}, t in minutes)`],
+    formula: [t("storedWater.formula", { volume: u.volume, flow: u.flow })],
     inputs: [
-      { label: "Design flow", text: f(q, u.flow) },
-      { label: "Design duration", text: `${f(t, "min")}` },
+      { label: t("storedWater.designFlow"), text: f(q, u.flow) },
+      { label: t("storedWater.designDuration"), text: `${f(minutes, "min")}` },
     ],
-    steps: [{ label: "Volume", work: `${g(q)} × ${g(t)}`, text: f(v, u.volume, "up") }],
-    results: [{ label: "Water to store", text: f(v, u.volume, "up"), value: v, unit: u.volume }],
+    steps: [{ label: t("storedWater.volume"), work: `${g(q)} × ${g(minutes)}`, text: f(v, u.volume, "up") }],
+    results: [{ label: t("storedWater.waterToStore"), text: f(v, u.volume, "up"), value: v, unit: u.volume }],
     checks: [
-      { status: "check", text: "This is usable water: add what the tank holds below its outlet and any allowance the tank or pump maker requires." },
+      { status: "check", text: t("storedWater.checkUsable") },
     ],
     notes: [
-      "The design duration comes from the adopted code (NFPA 13D sets it by the dwelling's size and stories — check the adopted edition and local amendments).",
-      "Volume is rounded up, so the display never understates the tank.",
+      t("storedWater.noteDuration"),
+      t("storedWater.noteRounded"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
 }

@@ -2,25 +2,32 @@
  * System demand report: each step back from the design sprinklers to the source with its numbers,
  * the demand, and (with a flow test) the supply, the margin and a chart.
  */
-import { CALCULATOR_CAUTION_TEXT, CALCULATOR_INFO } from "../catalog";
 import { systemDemand } from "../demand";
 import { HydraulicsInputError } from "../errors";
 import { supplyMargin } from "../flow-test";
-import { PIPE_DATA } from "../pipe-data";
 import type { RoundingDirection } from "../rounding";
 import type { SystemDemandReportInput } from "../schemas";
 import { CODE_FLOORS } from "../sprinkler";
 import { fromUs } from "../units";
 import { f, g, mapErrors, supplyComparison, unitSet, type CalculatorReport, type ReportStep } from "./common";
 import { demandInputUs } from "./demand-input";
-import { NOMINAL_BORE_NOTE } from "./fittings";
 import { FLOW_TEST_NAMES } from "./flow-test";
 import { supplyChart } from "./supply";
+import { englishReportT, type ReportT } from "./text";
 
-export function systemDemandReport(raw: SystemDemandReportInput): CalculatorReport {
+/** what set a sprinkler's design point (the library's words) → its calcReports key */
+const GOVERNORS: Record<string, string> = {
+  "listed flow": "listedFlow",
+  "listed minimum pressure": "listedMinimumPressure",
+  "code minimum density": "codeMinimumDensity",
+  "code minimum pressure": "codeMinimumPressure",
+  "balanced to the split-point pressure": "balanced",
+};
+
+export function systemDemandReport(raw: SystemDemandReportInput, t: ReportT = englishReportT): CalculatorReport {
   const { units } = raw;
   const u = unitSet(units);
-  const { input, supply, fieldOf } = demandInputUs(raw);
+  const { input, supply, fieldOf } = demandInputUs(raw, t);
   let result: ReturnType<typeof systemDemand>;
   try {
     result = systemDemand(input);
@@ -34,7 +41,17 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
   const density = `${g(Number(densityValue.toPrecision(3)))} ${u.flow}/${u.area}`;
   const governor = (note: string | undefined) => {
     const m = /set by the (.+)$/.exec(note ?? "");
-    return m ? ` (set by the ${m[1]})` : "";
+    if (!m) return "";
+    const what = m[1] ?? "";
+    return t("systemDemand.setBy", { what: GOVERNORS[what] ? t(`governor.${GOVERNORS[what]}`) : what });
+  };
+  // the library's bore basis up to its colon, in the report's language
+  const boreBasis = (basis: string) => {
+    const head = basis.split(":")[0] ?? "";
+    if (head === "average bore") return t("frictionLoss.averageBore");
+    if (head === "published ID") return t("frictionLoss.publishedId");
+    if (head === "entered from the pipe's listing") return t("systemDemandSteps.boreEntered");
+    return head;
   };
   const P = (psi: number, dir: RoundingDirection = "nearest") => f(fromUs("pressure", psi, units), u.pressure, dir);
   const Q = (gpm: number) => f(fromUs("flow", gpm, units), u.flow);
@@ -46,17 +63,39 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
       const vel = fromUs("velocity", d.velocityFtPerS, units);
       const fric = fromUs("pressure", d.frictionPsi, units);
       const elev = fromUs("pressure", d.elevationPsi, units);
-      const elevText = d.elevationChangeFt === 0 ? "" : `; elevation ${g(fromUs("length", d.elevationChangeFt, units))} ${u.length} → ${g(elev)} ${u.pressure}`;
+      const elevText =
+        d.elevationChangeFt === 0
+          ? ""
+          : t("systemDemand.elevation", {
+              rise: g(fromUs("length", d.elevationChangeFt, units)),
+              lengthUnit: u.length,
+              pressure: g(elev),
+              pressureUnit: u.pressure,
+            });
       return {
-        label: `${s.label}: ${PIPE_DATA[d.material].label}, ${d.nominalSize} in, ${Q(s.flowGpm)}`,
-        work: `bore ${g(fromUs("diameter", d.insideDiameterIn, units))} ${u.diameter} (${d.insideDiameterBasis.split(":")[0]}); ${g(per)} ${u.lossPerLength} × ${g(len)} ${u.length} (${g(fromUs("length", d.fittingsEquivalentFt, units))} of it fittings) = ${g(fric)} ${u.pressure}${elevText}; velocity ${g(vel)} ${u.velocity}`,
+        label: t("systemDemand.pipeLabel", { label: s.label, material: t(`material.${d.material}`), size: d.nominalSize, flow: Q(s.flowGpm) }),
+        work: t("systemDemand.pipeWork", {
+          bore: g(fromUs("diameter", d.insideDiameterIn, units)),
+          diameterUnit: u.diameter,
+          basis: boreBasis(d.insideDiameterBasis),
+          perLength: g(per),
+          lossUnit: u.lossPerLength,
+          length: g(len),
+          lengthUnit: u.length,
+          fittings: g(fromUs("length", d.fittingsEquivalentFt, units)),
+          friction: g(fric),
+          pressureUnit: u.pressure,
+          elevation: elevText,
+          velocity: g(vel),
+          velocityUnit: u.velocity,
+        }),
         text: `+${P(s.pressureAddedPsi)} → ${P(s.pressureRequiredPsi, "up")}`,
       };
     }
     if (s.kind === "sprinkler") {
       return {
         label: `${s.label}: ${Q(s.flowGpm)}`,
-        work: `largest of the listed flow, K√(listed pressure), ${density} × coverage and K√(${P(CODE_FLOORS.minPressurePsi)}); P = (Q ÷ K)²${governor(s.note)}`,
+        work: t("systemDemand.sprinklerWork", { density, floor: P(CODE_FLOORS.minPressurePsi), governor: governor(s.note) }),
         text: P(s.pressureRequiredPsi, "up"),
       };
     }
@@ -66,18 +105,22 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
       const work =
         node === undefined
           ? (s.note ?? "")
-          : `At the split point this branch sees ${P(node)}, more than its minimum needs, so it flows more than its listed minimum.`;
-      return { label: `${s.label}: ${Q(s.flowGpm)}`, work, text: P(s.pressureRequiredPsi, "up") };
+          : t("systemDemand.balanceWork", { pressure: P(node) });
+      const name = s.label.endsWith(" balanced") ? t("systemDemandSteps.balanced", { label: s.label.slice(0, -" balanced".length) }) : s.label;
+      return { label: `${name}: ${Q(s.flowGpm)}`, work, text: P(s.pressureRequiredPsi, "up") };
     }
     if (s.kind === "additional-flow") {
       return {
-        label: `${s.label}: ${Q(s.flowGpm)}`,
-        work: `drawn at the same time: ${Q(result.flowGpm - s.flowGpm)} to the sprinklers + ${Q(s.flowGpm)} = ${Q(result.flowGpm)} through the supply path`,
+        label: `${t("systemDemand.additionalFlow")}: ${Q(s.flowGpm)}`,
+        work: t("systemDemand.additionalWork", { sprinklers: Q(result.flowGpm - s.flowGpm), additional: Q(s.flowGpm), total: Q(result.flowGpm) }),
         text: P(s.pressureRequiredPsi, "up"),
       };
     }
     if (s.kind === "device") {
-      return { label: s.label, work: "entered loss at the design flow", text: `+${P(s.pressureAddedPsi)} → ${P(s.pressureRequiredPsi, "up")}` };
+      return { label: s.label, work: t("systemDemand.deviceWork"), text: `+${P(s.pressureAddedPsi)} → ${P(s.pressureRequiredPsi, "up")}` };
+    }
+    if (s.kind === "junction") {
+      return { label: `${t("systemDemandSteps.splitPoint")}: ${Q(s.flowGpm)}`, work: t("systemDemandSteps.junctionWork"), text: P(s.pressureRequiredPsi, "up") };
     }
     return { label: `${s.label}: ${Q(s.flowGpm)}`, work: s.note ?? "", text: P(s.pressureRequiredPsi, "up") };
   });
@@ -86,62 +129,63 @@ export function systemDemandReport(raw: SystemDemandReportInput): CalculatorRepo
   const pressure = fromUs("pressure", result.pressurePsi, units);
   const report: CalculatorReport = {
     id: "system-demand",
-    title: CALCULATOR_INFO["system-demand"].title,
+    title: t("title.system-demand"),
     units,
     formula: [
-      "Sprinkler: Q = the largest of the listed flow, K√(listed minimum pressure), 0.05 gpm/ft² × coverage area and K√(7 psi); P = (Q ÷ K)²",
-      `Each pipe run: Hazen-Williams loss × (length + fittings) + ${units === "si" ? "0.098 bar/m" : "0.433 psi/ft"} × rise`,
-      "Demand at the source = sprinkler pressure + every run's loss and rise + device losses",
+      t("systemDemand.formulaSprinkler"),
+      t("systemDemand.formulaRun", { rate: units === "si" ? "0.098 bar/m" : "0.433 psi/ft" }),
+      t("systemDemand.formulaSource"),
     ],
     inputs: [
       ...result.sprinklers.map((s) => ({ label: s.label, text: `K ${f(fromUs("k", s.kFactor, units), u.k)}` })),
-      { label: "Pipe runs", text: String(input.supplyPath.length) },
+      { label: t("systemDemand.pipeRuns"), text: String(input.supplyPath.length) },
       ...(input.deviceLosses ?? []).map((d) => ({ label: d.label, text: P(d.lossPsi) })),
-      ...(input.additionalFlowGpm ? [{ label: "Additional flow", text: Q(input.additionalFlowGpm) }] : []),
+      ...(input.additionalFlowGpm ? [{ label: t("systemDemand.additionalFlow"), text: Q(input.additionalFlowGpm) }] : []),
       ...(input.sprinklers.some((s) => s.coverageAreaSqFt === undefined)
         ? []
-        : input.sprinklers.map((s, i) => ({ label: `Coverage, sprinkler ${String.fromCharCode(65 + i)}`, text: f(fromUs("area", s.coverageAreaSqFt ?? 0, units), u.area) }))),
+        : input.sprinklers.map((s, i) => ({ label: t("systemDemand.coverage", { letter: String.fromCharCode(65 + i) }), text: f(fromUs("area", s.coverageAreaSqFt ?? 0, units), u.area) }))),
     ],
     steps,
     results: [
-      { label: "Pressure needed at the source", text: f(pressure, u.pressure, "up"), value: pressure, unit: u.pressure },
-      { label: "Flow needed at the source", text: f(flow, u.flow, "up"), value: flow, unit: u.flow },
+      { label: t("systemDemand.pressureAtSource"), text: f(pressure, u.pressure, "up"), value: pressure, unit: u.pressure },
+      { label: t("systemDemand.flowAtSource"), text: f(flow, u.flow, "up"), value: flow, unit: u.flow },
     ],
     checks: [
       {
         status: "check",
-        text: "The number of design sprinklers, their listed flows and pressures, and whether domestic flow is added come from the listing and the adopted code.",
+        text: t("systemDemand.checkListing"),
       },
     ],
     notes: [
-      "Friction: Hazen-Williams as printed in NFPA 13; bores: copper and steel the published IDs (ASTM B88, ASME B36.10M), CPVC and PEX the average bore, OD − 2 × (minimum wall + half the wall tolerance) of ASTM F442 and ASTM F876 (tolerances from memory — verify); a listed inside diameter you enter governs. C-factors from NFPA 13's table (from memory — verify).",
-      `Code floors per design sprinkler: ${CODE_FLOORS.source.minDensityGpmPerSqFt}; ${CODE_FLOORS.source.minPressurePsi}.`,
-      NOMINAL_BORE_NOTE,
-      "Fittings on steel and copper: NFPA 13's equivalent length chart with its C-factor multiplier (from memory — verify); CPVC and PEX: the maker's listed lengths you entered.",
-      "With two sprinklers the one needing less pressure is balanced to the split point, so it flows a little more than its minimum. Requirements are rounded up.",
+      t("systemDemand.noteFriction"),
+      t("systemDemand.noteFloors", { density: t("codeFloor.minDensity"), pressure: t("codeFloor.minPressure") }),
+      t("common.nominalBore"),
+      t("systemDemand.noteFittings"),
+      t("systemDemand.noteBalance"),
     ],
-    caution: CALCULATOR_CAUTION_TEXT,
+    caution: t("common.caution"),
   };
   if (result.clampedAtZero) {
-    report.checks.push({ status: "check", text: "A large drop in elevation more than paid for the losses somewhere; the requirement there was held at 0." });
+    report.checks.push({ status: "check", text: t("systemDemand.checkClamped") });
   }
   if (supply) {
     const m = mapErrors(FLOW_TEST_NAMES, () => supplyMargin({ flowGpm: result.flowGpm, pressurePsi: result.pressurePsi }, supply), "supply.");
     const available = fromUs("pressure", m.availablePsi, units);
-    const c = supplyComparison(available, pressure, m.result === "pass", u.pressure);
+    const c = supplyComparison(available, pressure, m.result === "pass", u.pressure, t);
+    const marginLabel = c.pass ? t("common.margin") : t("common.shortfall");
     report.results.push(
-      { label: "Pressure the supply offers at that flow", text: f(available, u.pressure, "down"), value: available, unit: u.pressure },
-      { label: c.pass ? "Margin" : "Shortfall", text: c.text, value: c.value, unit: u.pressure },
+      { label: t("systemDemand.supplyOffers"), text: f(available, u.pressure, "down"), value: available, unit: u.pressure },
+      { label: marginLabel, text: c.text, value: c.value, unit: u.pressure },
     );
     report.steps.push(
-      { label: "Supply from the flow test at the demand flow", work: "P = Ps − (Ps − Pr) × (Q ÷ Qt)^1.85 (NFPA 291)", text: f(available, u.pressure, "down") },
-      { label: c.pass ? "Margin" : "Shortfall", work: c.work, text: c.text },
+      { label: t("systemDemand.supplyStep"), work: "P = Ps − (Ps − Pr) × (Q ÷ Qt)^1.85 (NFPA 291)", text: f(available, u.pressure, "down") },
+      { label: marginLabel, work: c.work, text: c.text },
     );
     report.verdict = c.pass
-      ? { result: "pass", text: `Supply exceeds the demand by ${c.text}.` }
+      ? { result: "pass", text: t("systemDemand.verdictPass", { margin: c.text }) }
       : {
           result: "short",
-          text: `Supply is short by ${c.text}: the system will not deliver its design flow as drawn. A qualified designer decides the change (pipe or service size, a pump or a tank) with the AHJ.`,
+          text: t("systemDemand.verdictShort", { shortfall: c.text }),
         };
     report.chart = supplyChart(supply, { flowGpm: result.flowGpm, pressurePsi: result.pressurePsi }, units);
   }
