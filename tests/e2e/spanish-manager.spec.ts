@@ -33,8 +33,15 @@ async function throwAwayManager(): Promise<string> {
     const org = (rows as { organization_id: string }[])[0]!.organization_id;
     await conn.query("insert into user (id, name, email, email_verified, role, organization_id, created_at, updated_at) values (?, 'Test Gerente', ?, 1, 'manager', ?, now(), now())", [id, email, org]);
     await conn.query("insert into account (id, account_id, provider_id, user_id, password, created_at, updated_at) values (?, ?, 'credential', ?, ?, now(), now())", [randomUUID(), id, id, await hashPassword(DEMO_PASSWORD)]);
-    // this manager takes a seat and its invitation another: earlier tests may have filled the demo's seats
-    await conn.query("update organization set seats = seats + 2 where id = ?", [org]);
+    // earlier tests may have filled the demo's seats (members and open invitations both count): leave
+    // room for this test's invitation
+    await conn.query(
+      `update organization set seats = greatest(seats,
+         (select count(*) from user where organization_id = ?)
+         + (select count(*) from invitation where organization_id = ? and accepted_at is null and revoked_at is null and expires_at > now(3)) + 2)
+       where id = ?`,
+      [org, org, org],
+    );
     return email;
   } finally {
     await conn.end();
