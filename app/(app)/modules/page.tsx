@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import Link from "next/link";
-import { getTranslations } from "next-intl/server";
+import { getLocale, getTranslations } from "next-intl/server";
 import { PageTitle } from "@/components/ui/page-title";
 import { requireViewer } from "@/lib/access";
 import { completionsOf } from "@/lib/completion";

@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import Link from "next/link";
-import { getFormatter, getTranslations } from "next-intl/server";
+import { getFormatter, getLocale, getTranslations } from "next-intl/server";
 import { notFound } from "next/navigation";
 import { QuizRunner } from "@/components/quiz/quiz-runner";
 import { requireViewer } from "@/lib/access";

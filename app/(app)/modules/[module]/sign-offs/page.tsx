@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
-import { getLocale } from "next-intl/server";
 import { localeOf } from "@/lib/i18n/browser";
 import Link from "next/link";
 import { useFormatter, useTranslations } from "next-intl";
-import { getTranslations } from "next-intl/server";
+import { getLocale, getTranslations } from "next-intl/server";
 import { notFound } from "next/navigation";
 import { EvidenceThumbs } from "@/components/signoffs/evidence-thumbs";
 import { SignOffBadge } from "@/components/signoffs/status-badge";
