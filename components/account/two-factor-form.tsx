@@ -57,6 +57,7 @@ export function TwoFactorForm({ enabled, required }: { enabled: boolean; require
     const { error } = await authClient.twoFactor.disable({ password });
     if (error) {
       if (error.code === "INVALID_PASSWORD") return pw.setError("password", { message: t("notYourPassword") });
+      if (error.code === "PASSWORD_TOO_SHORT_FOR_ONE_FACTOR") return setFormError(t("lengthenBeforeTurnOff"));
       return setFormError(error.status === 429 ? t("tooManyAttempts") : (error.message ?? t("turnOffFailed")));
     }
     pw.reset({ password: "" });

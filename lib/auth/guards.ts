@@ -2,8 +2,8 @@ import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { APIError, getSessionFromCtx } from "better-auth/api";
 import { db } from "@/db/client";
-import { session } from "@/db/schema";
-import { passwordProblem } from "./password-policy";
+import { session, user } from "@/db/schema";
+import { MIN_PASSWORD_LENGTH, minPasswordLength, passwordProblem } from "./password-policy";
 import { forgetCachedSessions } from "./session-cache";
 
 /**
@@ -58,4 +58,63 @@ export function assertPasswordAllowed(path: string, body: unknown): void {
   if (typeof candidate !== "string") return;
   const problem = passwordProblem(candidate, { email: typeof b.email === "string" ? b.email : null });
   if (problem) throw new APIError("BAD_REQUEST", { message: problem, code: "PASSWORD_NOT_ALLOWED" });
+}
+
+type LengthCtx = HookCtx & {
+  path: string;
+  query?: Record<string, unknown>;
+  context: { internalAdapter: { findVerificationValue: (identifier: string) => Promise<{ value: string; expiresAt: Date } | null | undefined> } };
+};
+
+async function hasSecondFactor(userId: string | null | undefined): Promise<boolean> {
+  if (!userId) return false;
+  const [row] = await db.select({ on: user.twoFactorEnabled }).from(user).where(eq(user.id, userId)).limit(1);
+  return row?.on === true;
+}
+
+const tooShort = (min: number) =>
+  new APIError("BAD_REQUEST", {
+    message: min === MIN_PASSWORD_LENGTH ? "Use at least 15 characters (a few words make a good one)" : "Use at least 8 characters",
+    code: "PASSWORD_TOO_SHORT",
+  });
+
+/**
+ * Password length per NIST SP 800-63B-4 §3.1.1.2: 15 characters when the password is the account's
+ * only factor, 8 when it also has two-step sign-in (better-auth's own floor is the 8). Sign-up has no
+ * second factor yet; a change or reset looks at the account; and two-step sign-in cannot be turned
+ * off while the password is shorter than the single-factor minimum (the request carries it).
+ */
+export async function assertPasswordLength(ctx: LengthCtx): Promise<void> {
+  const b = (ctx.body ?? {}) as { password?: unknown; newPassword?: unknown; token?: unknown };
+  if (ctx.path === "/sign-up/email") {
+    if (typeof b.password === "string" && b.password.length < MIN_PASSWORD_LENGTH) throw tooShort(MIN_PASSWORD_LENGTH);
+    return;
+  }
+  if (ctx.path === "/change-password" && typeof b.newPassword === "string") {
+    const current = await getSessionFromCtx(ctx);
+    if (!current) return; // better-auth answers 401 itself
+    const min = minPasswordLength(await hasSecondFactor(current.user.id));
+    if (b.newPassword.length < min) throw tooShort(min);
+    return;
+  }
+  if (ctx.path === "/reset-password" && typeof b.newPassword === "string") {
+    const token = typeof b.token === "string" ? b.token : typeof ctx.query?.token === "string" ? ctx.query.token : null;
+    const pending = token ? await ctx.context.internalAdapter.findVerificationValue(`reset-password:${token}`) : null;
+    // an unknown token: the single-factor rule (better-auth then refuses the token itself)
+    const min = minPasswordLength(await hasSecondFactor(pending?.value));
+    if (b.newPassword.length < min) throw tooShort(min);
+    return;
+  }
+  if (ctx.path === "/two-factor/disable" && typeof b.password === "string" && b.password.length > 0 && b.password.length < MIN_PASSWORD_LENGTH) {
+    const current = await getSessionFromCtx(ctx);
+    if (!current) return;
+    // only the right password is answered this way; a wrong one gets better-auth's INVALID_PASSWORD
+    const credential = (await ctx.context.internalAdapter.findAccounts(current.user.id)).find((a) => a.providerId === "credential");
+    const ok = credential?.password ? await ctx.context.password.verify({ hash: credential.password, password: b.password }) : false;
+    if (!ok) return;
+    throw new APIError("BAD_REQUEST", {
+      message: "Your password has fewer than 15 characters, the minimum without two-step sign-in. Choose a longer password first, then turn two-step sign-in off.",
+      code: "PASSWORD_TOO_SHORT_FOR_ONE_FACTOR",
+    });
+  }
 }

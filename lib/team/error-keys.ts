@@ -25,6 +25,7 @@ export const FIELD_ERROR_KEYS: Record<string, string> = {
   "Choose one of your organization's teams": "chooseOwnTeam",
   "Choose a CSV file": "chooseCsv",
   "Use at least 15 characters (a few words make a good one)": "passwordLength",
+  "Use at least 8 characters": "passwordLength8",
   "At most 128 characters": "max128",
   "Some fields need attention.": "someFields",
   "Set up two-step sign-in for your own account first": "ownTwoFactorFirst",

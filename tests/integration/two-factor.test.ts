@@ -3,13 +3,14 @@
 // own library. Admins without it are refused on admin APIs and sent to enrolment from admin pages;
 // enrolment switches on only after a right code; sign-in then needs the code; wrong codes share the
 // per-account throttle of passwords; a backup code works once; a TOTP code signs in once (RFC 6238
-// §5.2); an organization can require it of its managers.
+// §5.2); an organization can require it of its managers; the shortest password allowed follows it
+// (NIST SP 800-63B-4 §3.1.1.2: 15 characters without a second factor, 8 with one).
 import { createHash } from "node:crypto";
 import { and, count, desc, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { auditLog, rateLimitBucket, session, totpCodeUse, user } from "@/db/schema";
-import { APP, cookiesOf, fetchFrom, freshIp, mailsTo } from "../helpers/http";
+import { APP, cookiesOf, fetchFrom, freshIp, linkIn, mailsTo, waitForMail } from "../helpers/http";
 import { createOrganization, createPerson } from "../helpers/fixtures";
 import { codeForUri } from "../helpers/totp";
 
@@ -294,5 +295,59 @@ describe("an organization may require it of its managers", () => {
     const mj = (await enrol((await passwordStep(manager.email, manager.password)).jar, manager.password)).jar;
     expect((await call(mj, "/api/team/security", { requireManagerTwoFactor: true, org: otherOrg.id })).status).toBe(403);
     expect((await call(mj, "/api/team/security", { requireManagerTwoFactor: "yes" })).status).toBe(400);
+  });
+});
+
+describe("password length follows the second factor (NIST SP 800-63B-4 §3.1.1.2: 15 characters without one, 8 with one)", () => {
+  const change = (jar: string, currentPassword: string, newPassword: string) => call(jar, "/api/auth/change-password", { currentPassword, newPassword, revokeOtherSessions: false });
+
+  /** The token of a mailed reset link (the link itself redirects to /reset-password?token=…). */
+  async function resetToken(email: string): Promise<string> {
+    expect((await call("", "/api/auth/request-password-reset", { email, redirectTo: "/reset-password" })).status).toBe(200);
+    const hop = await fetchFrom(freshIp(), linkIn((await waitForMail(email, /reset/i)).text), { redirect: "manual" });
+    return new URL(hop.headers.get("location")!, APP).searchParams.get("token")!;
+  }
+
+  it("without two-step sign-in a new password needs 15 characters, by change and by reset", async () => {
+    const org = await createOrganization("Long password crew");
+    const person = await createPerson({ tag: "pw-one-factor", organizationId: org.id });
+    const { jar } = await passwordStep(person.email, person.password);
+    const short = await change(jar, person.password, "quarry-bend-9"); // 13 characters
+    expect(short.status).toBe(400);
+    expect(short.json).toMatchObject({ code: "PASSWORD_TOO_SHORT", message: expect.stringMatching(/15 characters/) });
+    expect((await passwordStep(person.email, "quarry-bend-9")).status).toBe(401);
+
+    const reset = await call("", "/api/auth/reset-password", { newPassword: "quarry-bend-9", token: await resetToken(person.email) });
+    expect(reset.status).toBe(400);
+    expect(reset.json).toMatchObject({ code: "PASSWORD_TOO_SHORT" });
+    expect((await passwordStep(person.email, person.password)).status).toBe(200);
+  });
+
+  it("with it, 8 characters are enough (7 are not), and it cannot be turned off while the password is under 15", async () => {
+    const org = await createOrganization("Short password crew");
+    const person = await createPerson({ tag: "pw-two-factor", organizationId: org.id });
+    const { jar } = await enrol((await passwordStep(person.email, person.password)).jar, person.password);
+
+    const seven = await change(jar, person.password, "tq7-marl".slice(0, 7));
+    expect(seven.status).toBe(400);
+    expect(seven.json).toMatchObject({ code: "PASSWORD_TOO_SHORT", message: expect.stringMatching(/8 characters/) });
+    const eight = await change(jar, person.password, "tq7-marl");
+    expect(eight.status, JSON.stringify(eight.json)).toBe(200);
+    const first = await passwordStep(person.email, "tq7-marl");
+    expect(first.status).toBe(200);
+    expect(first.json.twoFactorRedirect).toBe(true); // the code is still asked for
+
+    // turning the second factor off would leave an 8-character single factor: refused, still on
+    const off = await call(eight.jar, "/api/auth/two-factor/disable", { password: "tq7-marl" });
+    expect(off.status).toBe(400);
+    expect(off.json).toMatchObject({ code: "PASSWORD_TOO_SHORT_FOR_ONE_FACTOR" });
+    expect(await twoFactorOn(person.id)).toBe(true);
+    // a wrong password is answered as wrong, not as short
+    expect((await call(eight.jar, "/api/auth/two-factor/disable", { password: "nope-123" })).json).toMatchObject({ code: "INVALID_PASSWORD" });
+
+    // a reset of this account takes 8 characters too
+    const reset = await call("", "/api/auth/reset-password", { newPassword: "brm4-kelp", token: await resetToken(person.email) });
+    expect(reset.status, JSON.stringify(reset.json)).toBe(200);
+    expect((await passwordStep(person.email, "brm4-kelp")).json.twoFactorRedirect).toBe(true);
   });
 });

@@ -42,7 +42,7 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
           <LanguageForm current={localeOf(locale)} />
         </Section>
         <Section id="password-h" title={t("password")} lead={t("passwordLead")}>
-          <PasswordForm />
+          <PasswordForm hasSecondFactor={viewer.twoFactorEnabled} />
         </Section>
         <Section
           id="two-factor-h"
