@@ -79,12 +79,13 @@ describe("role matrix", () => {
  * must get 403 or 404 and never a byte of that organization's data.
  */
 describe("role matrix across organizations", () => {
-  const foreign = { orgId: "", learnerId: "", learnerEmail: "", learnerName: "", attemptId: "", certificateId: 0, serial: "", signOffId: "", evidenceId: "", checkoutId: "", assignmentId: 0, jurisdictionId: "" };
+  const foreign = { orgId: "", learnerId: "", learnerEmail: "", learnerName: "", attemptId: "", certificateId: 0, serial: "", signOffId: "", evidenceId: "", checkoutId: "", assignmentId: 0, jurisdictionId: "", teamId: "" };
   const FOREIGN_RULE = "Cross-organization local rule: pressure-test every loop twice";
 
   beforeAll(async () => {
     const org = await createOrganization("Cross-Org Sprinkler Co");
     foreign.orgId = org.id;
+    foreign.teamId = org.teamId;
     const [learner] = await createPeople(1, { organizationId: org.id, teamId: org.teamId, tag: "xorg-learner" });
     const [manager] = await createPeople(1, { organizationId: org.id, role: "manager", tag: "xorg-manager" });
     Object.assign(foreign, { learnerId: learner!.id, learnerEmail: learner!.email, learnerName: learner!.name });
@@ -140,6 +141,9 @@ describe("role matrix across organizations", () => {
     { method: "GET", path: `/api/billing/checkout/${foreign.checkoutId}` },
     { method: "DELETE", path: `/api/team/assignments/${foreign.assignmentId}` },
     { method: "GET", path: `/team/people/${foreign.learnerId}` },
+    { method: "GET", path: `/api/team/people/${foreign.learnerId}/training-history?format=pdf` },
+    { method: "GET", path: `/api/team/people/${foreign.learnerId}/training-history?format=csv` },
+    { method: "GET", path: `/api/team/teams/${foreign.teamId}/training-history` },
     { method: "POST", path: `/api/team/jurisdictions/${foreign.jurisdictionId}`, body: { edition: 2025 } },
     { method: "DELETE", path: `/api/team/jurisdictions/${foreign.jurisdictionId}` },
     { method: "DELETE", path: `/api/team/amendments/freeze?org=${foreign.orgId}` },

@@ -58,6 +58,32 @@ describe("hours by reporting period (hand-worked)", () => {
 const settingArb = fc.record({ startYear: fc.integer({ min: 1990, max: 2040 }), startMonth: fc.integer({ min: 1, max: 12 }), lengthMonths: fc.constantFrom(6, 12, 24, 36, 48, 60) });
 const dateArb = fc.date({ min: new Date("2000-01-01T00:00:00Z"), max: new Date("2060-12-31T23:59:59Z"), noInvalidDate: true });
 
+/**
+ * An independent reckoning of the rule README "Portable credentials and training history" states, used
+ * as the oracle below: a period is found by counting whole months from the setting's start month (no
+ * call into lib/credentials/period.ts); module certificates count by issue date, paths and revoked ones
+ * never, a module counted once per period. Totals in hundredths of an hour.
+ */
+function reckon(certs: CountedCertificate[], s: PeriodSetting): Map<string, { hundredths: number; certificates: number }> {
+  const out = new Map<string, { hundredths: number; certificates: number }>();
+  const seen = new Set<string>();
+  const byDate = [...certs].sort((a, b) => a.issuedAt.getTime() - b.issuedAt.getTime());
+  for (const c of byDate) {
+    if (c.kind !== "module" || c.status === "revoked") continue;
+    const months = (c.issuedAt.getUTCFullYear() - s.startYear) * 12 + c.issuedAt.getUTCMonth() - (s.startMonth - 1);
+    const n = Math.floor(months / s.lengthMonths);
+    const startMonths = s.startYear * 12 + (s.startMonth - 1) + n * s.lengthMonths;
+    const key = `${Math.floor(startMonths / 12)}-${String((startMonths % 12) + 1).padStart(2, "0")}`;
+    if (seen.has(`${key}|${c.subjectSlug}`)) continue;
+    seen.add(`${key}|${c.subjectSlug}`);
+    const t = out.get(key) ?? { hundredths: 0, certificates: 0 };
+    t.hundredths += Math.round(c.ceHours * 100);
+    t.certificates += 1;
+    out.set(key, t);
+  }
+  return out;
+}
+
 describe("hours by reporting period (properties over random histories)", () => {
   it("every date lies in its period, which starts on the 1st at 00:00 UTC and lasts lengthMonths", () => {
     fc.assert(
@@ -102,6 +128,29 @@ describe("hours by reporting period (properties over random histories)", () => {
         for (const c of certs) if (c.kind === "module" && c.status !== "revoked" && counting.get(c) !== "counted") expect(counting.get(c)).toBe("repeat");
       }),
       { numRuns: 200 },
+    );
+  });
+
+  it("each period's total matches the certificates issued in it, reckoned independently (months counted from the setting's start)", () => {
+    const certArb = fc.record({
+      kind: fc.constantFrom("module" as const, "module" as const, "path" as const),
+      subjectSlug: fc.constantFrom("a", "b", "c"),
+      ceHours: fc.integer({ min: 25, max: 800 }).map((h) => h / 100),
+      issuedAt: dateArb,
+      status: fc.constantFrom("valid" as const, "expired" as const, "revoked" as const),
+    });
+    fc.assert(
+      fc.property(settingArb, fc.array(certArb, { maxLength: 40 }), (s, certs) => {
+        const expected = reckon(certs, s);
+        const { totals } = hoursByPeriod(certs, s);
+        const got = new Map(
+          totals
+            .filter((t) => t.certificates > 0 || t.hours > 0)
+            .map((t) => [`${t.start.getUTCFullYear()}-${String(t.start.getUTCMonth() + 1).padStart(2, "0")}`, { hundredths: Math.round(t.hours * 100), certificates: t.certificates }]),
+        );
+        expect(got).toEqual(expected);
+      }),
+      { numRuns: 300 },
     );
   });
 });
