@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { ErrorSummary } from "@/components/ui/error-summary";
 import { Field, FormError, FormNotice } from "@/components/ui/field";
 import { authClient } from "@/components/auth/auth-client";
-import { forgotSchema, resetSchema } from "@/lib/auth/browser";
+import { forgotSchema, resetSchemaFor } from "@/lib/auth/browser";
 
 export function ForgotPasswordForm() {
   const t = useTranslations("auth");
@@ -34,13 +34,16 @@ export function ForgotPasswordForm() {
   );
 }
 
-export function ResetPasswordForm({ token }: { token: string | null }) {
+type ResetValues = z.infer<ReturnType<typeof resetSchemaFor>>;
+
+/** hasSecondFactor: the token's account uses two-step sign-in, so 8 characters are enough (lib/auth/schemas.ts). */
+export function ResetPasswordForm({ token, hasSecondFactor = false }: { token: string | null; hasSecondFactor?: boolean }) {
   const t = useTranslations("auth");
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
-  const { register, handleSubmit, formState, control } = useForm<z.infer<typeof resetSchema>>({ resolver: zodResolver(resetSchema) });
+  const { register, handleSubmit, formState, control } = useForm<ResetValues>({ resolver: zodResolver(resetSchemaFor(hasSecondFactor)) });
   if (!token) return <FormError message={t("resetIncomplete")} />;
-  async function onSubmit(v: z.infer<typeof resetSchema>) {
+  async function onSubmit(v: ResetValues) {
     setError(null);
     const { error } = await authClient.resetPassword({ newPassword: v.password, token: token! });
     if (error) return setError(error.status === 400 ? t("resetExpired") : (error.message ?? t("changeFailed")));
@@ -50,7 +53,7 @@ export function ResetPasswordForm({ token }: { token: string | null }) {
     <form method="post" onSubmit={handleSubmit(onSubmit)} noValidate className="flex max-w-md flex-col gap-4">
       <ErrorSummary control={control} />
       <FormError message={error} />
-      <Field label={t("newPassword")} type="password" autoComplete="new-password" hint={t("passwordHint")} {...register("password")} error={formState.errors.password?.message} />
+      <Field label={t("newPassword")} type="password" autoComplete="new-password" hint={t(hasSecondFactor ? "passwordHintSecondFactor" : "passwordHint")} {...register("password")} error={formState.errors.password?.message} />
       <Field label={t("newPasswordAgain")} type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
       <Button type="submit" disabled={formState.isSubmitting}>{t("changePassword")}</Button>
     </form>

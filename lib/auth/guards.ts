@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { APIError, getSessionFromCtx } from "better-auth/api";
 import { db } from "@/db/client";
-import { session, user } from "@/db/schema";
+import { session, user, verification } from "@/db/schema";
 import { MIN_PASSWORD_LENGTH, minPasswordLength, passwordProblem } from "./password-policy";
 import { forgetCachedSessions } from "./session-cache";
 
@@ -60,16 +60,19 @@ export function assertPasswordAllowed(path: string, body: unknown): void {
   if (problem) throw new APIError("BAD_REQUEST", { message: problem, code: "PASSWORD_NOT_ALLOWED" });
 }
 
-type LengthCtx = HookCtx & {
-  path: string;
-  query?: Record<string, unknown>;
-  context: { internalAdapter: { findVerificationValue: (identifier: string) => Promise<{ value: string; expiresAt: Date } | null | undefined> } };
-};
+type LengthCtx = HookCtx & { path: string; query?: Record<string, unknown> };
 
 async function hasSecondFactor(userId: string | null | undefined): Promise<boolean> {
   if (!userId) return false;
   const [row] = await db.select({ on: user.twoFactorEnabled }).from(user).where(eq(user.id, userId)).limit(1);
   return row?.on === true;
+}
+
+/** Whether the account a password-reset token belongs to uses two-step sign-in (false for an unknown or expired token). */
+export async function resetTokenHasSecondFactor(token: string | null | undefined): Promise<boolean> {
+  if (!token || token.length > 255) return false;
+  const [row] = await db.select({ userId: verification.value, expiresAt: verification.expiresAt }).from(verification).where(eq(verification.identifier, `reset-password:${token}`)).limit(1);
+  return row !== undefined && row.expiresAt > new Date() && (await hasSecondFactor(row.userId));
 }
 
 const tooShort = (min: number) =>
@@ -99,9 +102,8 @@ export async function assertPasswordLength(ctx: LengthCtx): Promise<void> {
   }
   if (ctx.path === "/reset-password" && typeof b.newPassword === "string") {
     const token = typeof b.token === "string" ? b.token : typeof ctx.query?.token === "string" ? ctx.query.token : null;
-    const pending = token ? await ctx.context.internalAdapter.findVerificationValue(`reset-password:${token}`) : null;
     // an unknown token: the single-factor rule (better-auth then refuses the token itself)
-    const min = minPasswordLength(await hasSecondFactor(pending?.value));
+    const min = minPasswordLength(await resetTokenHasSecondFactor(token));
     if (b.newPassword.length < min) throw tooShort(min);
     return;
   }

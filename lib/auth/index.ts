@@ -225,3 +225,4 @@ export * from "./schemas";
 export * from "./signup";
 export * from "./signup-context";
 export { forgetCachedSessions, SESSION_CACHE_SECONDS } from "./session-cache";
+export { resetTokenHasSecondFactor } from "./guards";

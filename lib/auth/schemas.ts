@@ -32,6 +32,9 @@ export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const signInSchema = z.object({ email, password: z.string().min(1, "Enter your password") });
 export const forgotSchema = z.object({ email });
-export const resetSchema = z
-  .object({ password, confirm: z.string() })
-  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+/** A reset's new password: 8 characters will do for an account with two-step sign-in, 15 otherwise. */
+export const resetSchemaFor = (hasSecondFactor: boolean) =>
+  z
+    .object({ password: hasSecondFactor ? passwordWithSecondFactor : password, confirm: z.string() })
+    .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+export const resetSchema = resetSchemaFor(false);

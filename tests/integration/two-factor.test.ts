@@ -317,7 +317,9 @@ describe("password length follows the second factor (NIST SP 800-63B-4 §3.1.1.2
     expect(short.json).toMatchObject({ code: "PASSWORD_TOO_SHORT", message: expect.stringMatching(/15 characters/) });
     expect((await passwordStep(person.email, "quarry-bend-9")).status).toBe(401);
 
-    const reset = await call("", "/api/auth/reset-password", { newPassword: "quarry-bend-9", token: await resetToken(person.email) });
+    const token = await resetToken(person.email);
+    expect(await (await fetchFrom(freshIp(), `${APP}/reset-password?token=${encodeURIComponent(token)}`)).text()).toContain("At least 15 characters");
+    const reset = await call("", "/api/auth/reset-password", { newPassword: "quarry-bend-9", token });
     expect(reset.status).toBe(400);
     expect(reset.json).toMatchObject({ code: "PASSWORD_TOO_SHORT" });
     expect((await passwordStep(person.email, person.password)).status).toBe(200);
@@ -346,7 +348,10 @@ describe("password length follows the second factor (NIST SP 800-63B-4 §3.1.1.2
     expect((await call(eight.jar, "/api/auth/two-factor/disable", { password: "nope-123" })).json).toMatchObject({ code: "INVALID_PASSWORD" });
 
     // a reset of this account takes 8 characters too
-    const reset = await call("", "/api/auth/reset-password", { newPassword: "brm4-kelp", token: await resetToken(person.email) });
+    const token = await resetToken(person.email);
+    // the reset page's form asks for the 8 of this account (the hint and the browser-side check)
+    expect(await (await fetchFrom(freshIp(), `${APP}/reset-password?token=${encodeURIComponent(token)}`)).text()).toContain("At least 8 characters, since this account also signs in with a code");
+    const reset = await call("", "/api/auth/reset-password", { newPassword: "brm4-kelp", token });
     expect(reset.status, JSON.stringify(reset.json)).toBe(200);
     expect((await passwordStep(person.email, "brm4-kelp")).json.twoFactorRedirect).toBe(true);
   });

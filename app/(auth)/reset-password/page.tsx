@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { getTranslations } from "next-intl/server";
 import { ResetPasswordForm } from "@/components/auth/password-forms";
+import { resetTokenHasSecondFactor } from "@/lib/auth";
 import { PageTitle } from "@/components/ui/page-title";
 
 export async function generateMetadata(): Promise<Metadata> {
@@ -10,6 +11,7 @@ export async function generateMetadata(): Promise<Metadata> {
 export default async function ResetPasswordPage({ searchParams }: { searchParams: Promise<{ token?: string; error?: string; confirmed?: string }> }) {
   const { token, error, confirmed } = await searchParams;
   const t = await getTranslations("auth");
+  const hasSecondFactor = !error && (await resetTokenHasSecondFactor(token));
   return (
     <>
       <PageTitle title={t("resetTitle")} />
@@ -19,7 +21,7 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
           {t("confirmedElsewhere")}
         </p>
       ) : null}
-      <ResetPasswordForm token={error ? null : (token ?? null)} />
+      <ResetPasswordForm token={error ? null : (token ?? null)} hasSecondFactor={hasSecondFactor} />
     </>
   );
 }
