@@ -4,7 +4,7 @@ import nodemailer from "nodemailer";
 import { and, desc, eq, inArray, isNull, lte, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { mailLog, mailOutbox } from "@/db/schema";
-import { env } from "@/lib/env";
+import { env, isLocalInstance } from "@/lib/env";
 import { log, withLogContext } from "@/lib/log";
 import { metrics } from "@/lib/metrics";
 
@@ -37,7 +37,9 @@ const transport = nodemailer.createTransport({ url: env.SMTP_URL, pool: true, ma
   typeof nodemailer.createTransport
 >[0]);
 
-const keepBody = !(env.NODE_ENV === "production" && !env.MAIL_CATCHER_URL);
+// Bodies (reset and invitation links) are kept after sending only on a local instance (RISER_LOCAL=1 on a
+// loopback APP_URL), the same rule that shows them in the admin mail log (lib/admin/mail.ts).
+const keepBody = isLocalInstance(env);
 const messageDomain = (() => {
   try {
     return new URL(env.APP_URL).hostname || hostname();
