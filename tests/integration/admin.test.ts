@@ -139,6 +139,22 @@ describe("people", () => {
     expect((await postJson(admin, `/api/admin/people/${p.id}/role`, { role: "owner", reason: "Not a role" })).status).toBe(400);
   });
 
+  it("a change whose audit row cannot be written is not applied: both commit or neither (one transaction)", async () => {
+    // The audit row is made to fail in the database itself (an address longer than audit_log.ip's
+    // varchar(64), refused by MariaDB's strict mode); the role change before it must roll back.
+    const { changeRole } = await import("@/lib/admin");
+    const p = await createPerson({ tag: "role-atomic", organizationId: orgA.id });
+    const since = await lastAuditId();
+    await expect(changeRole({ id: adminId, email: demoByRole("admin").email }, p.id, "manager", "Audit row fails on purpose", { headers: new Headers(), ip: "9".repeat(200) })).rejects.toThrow();
+    const [row] = await db.select({ role: user.role }).from(user).where(eq(user.id, p.id));
+    expect(row!.role).toBe("learner");
+    expect(await auditSince(since, p.id)).toEqual([]);
+    // the same change with a writable audit row goes through, with its row
+    await changeRole({ id: adminId, email: demoByRole("admin").email }, p.id, "manager", "Audit row fine", { headers: new Headers(), ip: "127.0.0.1" });
+    expect((await db.select({ role: user.role }).from(user).where(eq(user.id, p.id)))[0]!.role).toBe("manager");
+    expect(await auditSince(since, p.id)).toHaveLength(1);
+  });
+
   it("an admin cannot change their own role", async () => {
     const res = await postJson(admin, `/api/admin/people/${adminId}/role`, { role: "learner", reason: "Trying to lock myself out" });
     expect(res.status).toBe(400);
