@@ -1,5 +1,6 @@
 // Setting up a real instance: demo data (people with a published password) refuses to load outside
-// the local profiles, and `npm run admin:create` makes an administrator with no password and a
+// the local profiles, the content catalog is synced by the migration step any instance runs (no demo
+// data needed), and `npm run admin:create` makes an administrator with no password and a
 // one-time link where its owner chooses one.
 import { spawnSync } from "node:child_process";
 import path from "node:path";
@@ -7,7 +8,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/demo";
-import { account, user } from "@/db/schema";
+import { account, catalogModule, user } from "@/db/schema";
 import { anonymous, APP, fetchFrom, freshIp, postJson, signIn, uniqueEmail } from "../helpers/http";
 import { codeForUri } from "../helpers/totp";
 
@@ -27,6 +28,27 @@ describe("demo data", () => {
     expect(r.stderr).toMatch(/Refused: demo data/);
     expect(r.stderr).toMatch(/admin:create/);
     expect((await db.select({ id: user.id }).from(user)).length).toBe(before.length);
+  });
+});
+
+describe("catalog sync", () => {
+  it("runs with the migrations on a hosted-like instance, without the demo data", async () => {
+    const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: "development" };
+    for (const k of ["RISER_LOCAL", "MAIL_CATCHER_URL", "INSECURE_COOKIES", "STRIPE_API_HOST", "STRIPE_API_PORT", "STRIPE_API_PROTOCOL"]) delete env[k];
+    const started = new Date(Date.now() - 1_000);
+    const r = tsx("scripts/migrate.ts", [], env);
+    expect(r.status, r.stdout + r.stderr).toBe(0);
+    expect(r.stdout).toMatch(/catalog synced/);
+    const rows = await db.select({ slug: catalogModule.slug, syncedAt: catalogModule.syncedAt, retiredAt: catalogModule.retiredAt }).from(catalogModule);
+    // every module of content/modules was written by this run (the content folder is the outside reference)
+    const { readdirSync } = await import("node:fs");
+    const onDisk = readdirSync(path.join(root, "content/modules"), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+    for (const slug of onDisk) {
+      const row = rows.find((x) => x.slug === slug);
+      expect(row, slug).toBeDefined();
+      expect(row!.retiredAt, slug).toBeNull();
+      expect(row!.syncedAt!.getTime(), slug).toBeGreaterThanOrEqual(started.getTime());
+    }
   });
 });
 
