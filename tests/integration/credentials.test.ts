@@ -120,7 +120,15 @@ describe("a certificate's credential", () => {
     expect(profile.type).toEqual(["Profile"]);
   });
 
-  it("revocation by a manager flips its bit in the status list, and /verify, /api/verify and the list agree", async () => {
+  it("the holder finds it on their certificates page (JSON and signed JWT, both downloads) with their training history", async () => {
+    const html = (await (await clientOf(learner.id)).fetch("/certificates").then((r) => r.text())).replace(/&amp;/g, "&");
+    expect(html).toMatch(new RegExp(`href="${APP}/api/verify/${code}/credential"[^>]*download`));
+    expect(html).toMatch(new RegExp(`href="${APP}/api/verify/${code}/credential\\?format=jwt"[^>]*download`));
+    expect(html).toContain('href="/api/account/training-history?format=pdf"');
+    expect(html).toContain('href="/api/account/training-history?format=csv"');
+  });
+
+    it("revocation by a manager flips its bit in the status list, and /verify, /api/verify and the list agree", async () => {
     const other = await issue(learner, "pipe-and-joining", daysFromNow(-2));
     const json = (await (await visitor.fetch(`/api/verify/${code}/credential`)).json()) as Credential;
     const otherJson = (await (await visitor.fetch(`/api/verify/${other.verificationCode}/credential`)).json()) as Credential;
