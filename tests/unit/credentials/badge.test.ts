@@ -122,4 +122,26 @@ describe("OpenBadgeCredential", () => {
     const vcCore = new Set(["VerifiableCredential", "BitstringStatusListEntry"]); // defined by https://www.w3.org/ns/credentials/v2
     for (const t of types) if (!vcCore.has(t)) expect(Object.keys(context), t).toContain(t);
   });
+
+  it("uses in each OB-typed object only terms the published context (context-3.0.3.json) defines for that type or at its top level", () => {
+    const context = (read("context-3.0.3.json")["@context"] ?? {}) as Record<string, { "@context"?: Record<string, unknown> } | unknown>;
+    const scoped = (t: string) => Object.keys(((context[t] as { "@context"?: Record<string, unknown> } | undefined)?.["@context"]) ?? {});
+    const checked: string[] = [];
+    const walk = (v: unknown) => {
+      if (Array.isArray(v)) return v.forEach(walk);
+      if (!v || typeof v !== "object") return;
+      const o = v as Record<string, unknown>;
+      const types = [o.type ?? []].flat().map(String);
+      // objects typed only by the OB context (VC 2.0 core types' terms live in the VC context, not shipped here)
+      if (types.length && types.every((t) => t in context)) {
+        const allowed = new Set([...Object.keys(context), ...types.flatMap(scoped)]);
+        for (const k of Object.keys(o)) if (!k.startsWith("@")) expect(allowed.has(k), `${types.join("/")}.${k}`).toBe(true);
+        checked.push(...types);
+      }
+      Object.values(o).forEach(walk);
+    };
+    walk(build());
+    // the objects the check reached: the subject, its achievement, its identity and the issuer
+    for (const t of ["AchievementSubject", "Achievement", "IdentityObject", "Profile"]) expect(checked, t).toContain(t);
+  });
 });
