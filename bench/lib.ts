@@ -1,6 +1,7 @@
 // Shared bench helpers: percentiles, result files, and signed session cookies for people created
 // directly in the database (so that a benchmark does not spend its time hashing passwords).
-import { mkdirSync, writeFileSync } from "node:fs";
+import { execFileSync } from "node:child_process";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 
 export const APP = process.env.APP_URL ?? "http://127.0.0.1:3000";
 
@@ -20,6 +21,40 @@ export function record(name: string, data: unknown) {
   const out = { name, at: new Date().toISOString(), node: process.version, ...(data as object) };
   writeFileSync(`bench/results/${name}.json`, JSON.stringify(out, null, 2) + "\n");
   console.log(JSON.stringify(out, null, 2));
+}
+
+/**
+ * CPU time (user + system, ms) the app server process has used so far, read from /proc (Linux); null
+ * when scripts/bench.mjs did not pass the server's pid. Divided by the requests served, it gives CPU
+ * per request: a figure that a busy machine moves far less than latency, and that bounds what one core
+ * can serve (1,000 / ms per request, per second).
+ */
+const CLK_TCK = (() => {
+  try {
+    return Number(execFileSync("getconf", ["CLK_TCK"], { encoding: "utf8" }).trim()) || 100;
+  } catch {
+    return 100;
+  }
+})();
+export function serverCpuMs(): number | null {
+  const pid = process.env.BENCH_SERVER_PID;
+  if (!pid) return null;
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+    // fields after the command name in parentheses start at field 3; utime and stime are fields 14 and 15
+    const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+    return ((Number(f[11]) + Number(f[12])) * 1000) / CLK_TCK;
+  } catch {
+    return null;
+  }
+}
+
+/** Runs `work` and returns its result with the server's CPU ms per request (null if unknown). */
+export async function withServerCpu<T>(requests: number, work: () => Promise<T>): Promise<T & { serverCpuMsPerRequest: number | null }> {
+  const before = serverCpuMs();
+  const result = await work();
+  const after = serverCpuMs();
+  return { ...result, serverCpuMsPerRequest: before === null || after === null || !requests ? null : +((after - before) / requests).toFixed(2) };
 }
 
 export { sessionCookieFor as sessionCookie } from "../tests/helpers/fixtures";

@@ -5,7 +5,7 @@
 import { performance } from "node:perf_hooks";
 import { pool } from "@/db/client";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../tests/helpers/fixtures";
-import { APP, Jar, record, sessionCookie, summary } from "./lib";
+import { APP, Jar, record, sessionCookie, summary, withServerCpu } from "./lib";
 
 const N = Number(process.env.BENCH_ATTEMPTS ?? 1000);
 void TEST_PASSWORD;
@@ -53,11 +53,11 @@ async function fifty(send: (i: number) => Promise<Response>) {
   return { latencyMs: summary(latencies), throughputPerSec: +(N / seconds).toFixed(1), non2xx };
 }
 
-const save = await fifty((i) =>
+const save = await withServerCpu(N, () => fifty((i) =>
   fetch(`${APP}/api/quiz/attempts/${attemptIds[i]}/answers`, { method: "PUT", headers: { cookie: jars[i]!.header, origin: APP, "content-type": "application/json" }, body: JSON.stringify({ answers: answersOf[i] }) }),
-);
+));
 
-const submit = await fifty((i) => fetch(`${APP}/api/quiz/attempts/${attemptIds[i]}/submit`, { method: "POST", headers: { cookie: jars[i]!.header, origin: APP } }));
+const submit = await withServerCpu(N, () => fifty((i) => fetch(`${APP}/api/quiz/attempts/${attemptIds[i]}/submit`, { method: "POST", headers: { cookie: jars[i]!.header, origin: APP } })));
 
 // exactly once: every attempt graded, each item marked, nothing left open
 const [[check]] = (await pool.query(

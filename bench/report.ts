@@ -18,7 +18,9 @@ const rows: Row[] = [];
 /** Marks figures that come from an earlier run than the baselines (a bench run for some names only). */
 const runAt = (r: Json | null) => (r ? Date.parse(r.at ?? r.date) : NaN);
 const older = (r: Json | null) => (tp && r && runAt(tp) - runAt(r) > 3_600_000 ? ` (earlier run, ${String(r.at ?? r.date).slice(0, 10)})` : "");
-const rps = (r: Json) => `${r.reqPerSec} req/s, p50 ${r.p50} ms, p99 ${r.p99} ms${r.non2xx ? `, ${r.non2xx} non-2xx` : ""}${r.errors ? `, ${r.errors} unanswered within 10 s` : ""}`;
+/** Server CPU per request: what one core can serve at most, whatever else the machine is doing. */
+const cpu = (r: Json) => (typeof r.serverCpuMsPerRequest === "number" ? `, server CPU ${r.serverCpuMsPerRequest} ms/request` : "");
+const rps = (r: Json) => `${r.reqPerSec} req/s, p50 ${r.p50} ms, p99 ${r.p99} ms${cpu(r)}${r.non2xx ? `, ${r.non2xx} non-2xx` : ""}${r.errors ? `, ${r.errors} unanswered within 10 s` : ""}`;
 
 if (tp) {
   const r = tp.runs;
@@ -43,7 +45,7 @@ if (quiz) {
   const q = (what: string, m: Json) =>
     rows.push({
       what: `${what}, ${quiz.concurrentLearners} concurrent learners, ${quiz.attempts} attempts`,
-      figure: `p50 ${m.latencyMs.p50.toFixed(0)} ms, p95 ${m.latencyMs.p95.toFixed(0)} ms, ${m.throughputPerSec}/s${m.non2xx ? `, ${m.non2xx} non-2xx` : ""}`,
+      figure: `p50 ${m.latencyMs.p50.toFixed(0)} ms, p95 ${m.latencyMs.p95.toFixed(0)} ms, ${m.throughputPerSec}/s${cpu(m)}${m.non2xx ? `, ${m.non2xx} non-2xx` : ""}`,
       target: "p95 ≤ 150 ms",
       met: m.latencyMs.p95 <= 150 && !m.non2xx,
       ratio: ratio(m.throughputPerSec),

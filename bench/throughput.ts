@@ -9,7 +9,7 @@ import { eq } from "drizzle-orm";
 import { db, pool } from "@/db/client";
 import { user } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
-import { APP, Jar, record, sessionCookie } from "./lib";
+import { APP, Jar, record, serverCpuMs, sessionCookie } from "./lib";
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONNECTIONS = 50;
@@ -17,7 +17,7 @@ const CONNECTIONS = 50;
 const [learner] = await db.select({ id: user.id }).from(user).where(eq(user.email, demoByRole("learner").email));
 const tokenCookie = await sessionCookie(learner!.id);
 
-type Run = { path: string; reqPerSec: number; p50: number; p97_5: number; p99: number; non2xx: number; errors: number };
+type Run = { path: string; reqPerSec: number; p50: number; p97_5: number; p99: number; non2xx: number; errors: number; serverCpuMsPerRequest: number | null };
 
 async function load(path: string, signedIn: boolean): Promise<Run> {
   const headers: Record<string, string> = signedIn ? { cookie: (await Jar.signedIn(tokenCookie)).header } : {};
@@ -25,8 +25,12 @@ async function load(path: string, signedIn: boolean): Promise<Run> {
   const probe = await fetch(`${APP}${path}`, { headers, redirect: "manual" });
   await probe.arrayBuffer();
   if (probe.status !== 200) throw new Error(`${path}: ${probe.status}`);
+  const cpuBefore = serverCpuMs();
   const r = await autocannon({ url: `${APP}${path}`, connections: CONNECTIONS, duration: SECONDS, headers });
-  return { path, reqPerSec: Math.round(r.requests.average), p50: r.latency.p50, p97_5: r.latency.p97_5, p99: r.latency.p99, non2xx: r.non2xx, errors: r.errors };
+  const cpuAfter = serverCpuMs();
+  const served = r.requests.total;
+  const serverCpuMsPerRequest = cpuBefore === null || cpuAfter === null || !served ? null : +((cpuAfter - cpuBefore) / served).toFixed(2);
+  return { path, reqPerSec: Math.round(r.requests.average), p50: r.latency.p50, p97_5: r.latency.p97_5, p99: r.latency.p99, non2xx: r.non2xx, errors: r.errors, serverCpuMsPerRequest };
 }
 
 const lesson = "/modules/freeze-protection/where-homes-freeze";

@@ -25,7 +25,8 @@ try {
   await app.serve();
   for (const n of names) {
     console.log(`\n=== bench: ${n} ===`);
-    run(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", `bench/${n}.ts`], { cwd: root, env: app.env });
+    // the server's pid lets a bench read its CPU time per request (bench/lib.ts serverCpuMs)
+    run(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", `bench/${n}.ts`], { cwd: root, env: { ...app.env, BENCH_SERVER_PID: String(app.server?.pid ?? "") } });
   }
   run(path.join(root, "node_modules/.bin/tsx"), ["bench/report.ts"], { cwd: root, env: app.env });
 } finally {
