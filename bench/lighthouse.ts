@@ -18,6 +18,10 @@ const PAGES = [
   { path: "/tools/system-demand", kind: "calculator" },
 ];
 
+// LH_PAGES=calculator,lesson measures only those kinds (for a quick before/after of one change)
+const only = process.env.LH_PAGES?.split(",").filter(Boolean);
+const measured = only?.length ? PAGES.filter((p) => only.includes(p.kind)) : PAGES;
+
 const [learner] = await db.select({ id: user.id }).from(user).where(eq(user.email, demoByRole("learner").email));
 const tokenCookie = await sessionCookie(learner!.id);
 await pool.end();
@@ -57,7 +61,7 @@ async function once(p: (typeof PAGES)[number]): Promise<Run | { error: string }>
 }
 
 const pages = [];
-for (const p of PAGES) {
+for (const p of measured) {
   const runs: Run[] = [];
   let error = "";
   for (let i = 0; i < RUNS; i++) {
