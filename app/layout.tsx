@@ -2,7 +2,7 @@ import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
 import { NextIntlClientProvider } from "next-intl";
 import { getLocale, getMessages, getTranslations } from "next-intl/server";
-import { CLIENT_NAMESPACES } from "@/lib/i18n/browser";
+import { BASE_NAMESPACES } from "@/lib/i18n/browser";
 import { SiteHeader } from "@/components/shell/site-header";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { RouteFocus } from "@/components/ui/route-focus";
@@ -22,8 +22,9 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // Prerendered HTML would hold no nonce, and the policy allows no other inline script.
   await connection();
   const [locale, t, messages] = await Promise.all([getLocale(), getTranslations("shell"), getMessages()]);
-  // only what components read in the browser travels with the page (lib/i18n/client-namespaces.ts)
-  const clientMessages = Object.fromEntries(CLIENT_NAMESPACES.filter((n) => n in messages).map((n) => [n, messages[n]]));
+  // only the base namespaces travel with every page; sections add theirs with <ScopedMessages>
+  // (lib/i18n/client-namespaces.ts)
+  const clientMessages = Object.fromEntries(BASE_NAMESPACES.filter((n) => n in messages).map((n) => [n, messages[n]]));
   return (
     <html lang={locale} className={`${bodyFont.variable} ${monoFont.variable}`}>
       <body>

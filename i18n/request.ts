@@ -1,5 +1,5 @@
 import { getRequestConfig } from "next-intl/server";
-import { INTL_TAG } from "@/lib/i18n/browser";
+import { FORMATS, INTL_TAG } from "@/lib/i18n/browser";
 import { requestLocale } from "@/lib/i18n";
 import { loadMessages } from "@/lib/i18n";
 
@@ -13,10 +13,7 @@ export default getRequestConfig(async () => {
     locale: INTL_TAG[locale],
     messages: loadMessages(locale),
     timeZone: "UTC",
-    formats: {
-      dateTime: { short: { year: "numeric", month: "short", day: "numeric" } },
-      number: { precise: { maximumFractionDigits: 2 } },
-    },
+    formats: FORMATS,
     // an unknown key shows its name instead of breaking the page; tests/unit/i18n-catalogs.test.ts
     // and the lint catch missing keys before they ship
     onError: () => undefined,

@@ -1,7 +1,6 @@
 "use client";
 import { useTranslations } from "next-intl";
-import { useEffect, useRef, useState } from "react";
-import useSWR from "swr";
+import { useCallback, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { useErrorText } from "@/components/ui/use-error-text";
 import { useOfflineState, useOnline } from "@/components/offline/use-offline";
@@ -10,6 +9,44 @@ import { flushQueue, offlineSupported, queueMark } from "@/lib/offline/browser";
 
 type Time = { lesson: string; readingSeconds: number | null; deviceReadingSeconds?: number | null };
 type Progress = { completed: string[]; readingTimes?: Time[] };
+
+/**
+ * The module's progress from the server, read again on `mutate()`, when the tab comes back into
+ * view and (below) when the connection returns. A few lines instead of a data-fetching library,
+ * which would be the largest script of its own on every lesson page.
+ */
+function useProgress(key: string) {
+  const [data, setData] = useState<Progress | undefined>(undefined);
+  const [error, setError] = useState<(Error & { status?: number }) | undefined>(undefined);
+  const [isLoading, setLoading] = useState(true);
+  const [round, setRound] = useState(0);
+  const reload = useCallback(() => setRound((n) => n + 1), []);
+  useEffect(() => {
+    let live = true;
+    getJson<Progress>(key).then(
+      (next) => {
+        if (!live) return;
+        setData(next);
+        setError(undefined);
+        setLoading(false);
+      },
+      (err: Error & { status?: number }) => {
+        if (!live) return;
+        setError(err);
+        setLoading(false);
+      },
+    );
+    return () => {
+      live = false;
+    };
+  }, [key, round]);
+  useEffect(() => {
+    const onVisible = () => document.visibilityState === "visible" && reload();
+    document.addEventListener("visibilitychange", onVisible);
+    return () => document.removeEventListener("visibilitychange", onVisible);
+  }, [reload]);
+  return { data, error, isLoading, mutate: reload };
+}
 
 /** Seconds this page has been on screen (visible tab) since it loaded: the phone's own measure. */
 function useVisibleSeconds(): () => number {
@@ -40,7 +77,7 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
   const t = useTranslations("lesson");
   const errorText = useErrorText();
   const key = `/api/progress?module=${module}`;
-  const { data, error, isLoading, mutate } = useSWR<Progress>(key, getJson);
+  const { data, error, isLoading, mutate } = useProgress(key);
   const online = useOnline();
   const { queue } = useOfflineState();
   const visibleSeconds = useVisibleSeconds();
@@ -53,9 +90,14 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
   const seconds = time?.readingSeconds ?? null;
   const deviceSeconds = time?.deviceReadingSeconds ?? null;
 
-  // A queued mark that was just sent: show the server's answer.
+  // A queued mark that was just sent: show the server's answer (the first read is already under way).
+  const firstRun = useRef(true);
   useEffect(() => {
-    if (online && !queued) void mutate();
+    if (firstRun.current) {
+      firstRun.current = false;
+      return;
+    }
+    if (online && !queued) mutate();
   }, [online, queued, mutate]);
 
   async function mark() {
@@ -72,7 +114,7 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
       await flushQueue();
     } else if (!res.ok) setProblem(res.error);
     setSaving(false);
-    await mutate();
+    mutate();
   }
 
   // Progress that could not load for want of a connection (no HTTP status) still lets a mark be queued.

@@ -1,26 +1,15 @@
-"use client";
-import { useTranslations } from "next-intl";
-import dynamic from "next/dynamic";
+import { ScopedMessages } from "@/components/i18n/scoped-messages";
+import { CalculatorEmbedLazy } from "./calculator-embed-lazy";
 import type { CalculatorEmbedProps } from "./types";
 
 /**
- * The calculator as embedded in lessons and cards, loaded only on pages that show one: the forms,
- * the hydraulics library and the chart library stay out of every other lesson's first load.
+ * A calculator in a lesson or card: the calculators' words travel only with pages that show one
+ * (the "tools" message scope), and the calculator itself loads lazily (./calculator-embed-lazy).
  */
-const Lazy = dynamic(() => import("./calculator").then((m) => m.Calculator), {
-  ssr: true,
-  loading: () => <LoadingCalculator />,
-});
-
-function LoadingCalculator() {
-  const t = useTranslations("tools");
-  return <p className="my-4 rounded border border-line bg-panel p-3 text-muted">{t("loading")}</p>;
-}
-
 export function CalculatorEmbed(props: CalculatorEmbedProps) {
   return (
-    <div className="wide not-prose my-6">
-      <Lazy {...props} />
-    </div>
+    <ScopedMessages scope="tools">
+      <CalculatorEmbedLazy {...props} />
+    </ScopedMessages>
   );
 }

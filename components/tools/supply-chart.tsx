@@ -1,14 +1,33 @@
 "use client";
 import { useTranslations } from "next-intl";
-
-import { CartesianGrid, ComposedChart, Line, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import dynamic from "next/dynamic";
+import { useEffect, useRef, useState } from "react";
 import { formatForDisplay, type ReportChart } from "@/lib/hydraulics";
 
-// palette from tailwind.config.ts
-const WATER = "#1B617A";
-const COPPER = "#9A4F12";
-const INK = "#14202B";
-const LINE = "#D5CFC3";
+// recharts (the drawing) is the largest script on a calculator page. It loads only once the chart's
+// box comes near the screen (on a phone the chart sits below the inputs), after the page is
+// interactive, so it never blocks the first input. The box is laid out from the start (no layout
+// shift) and the figure's caption, which says what the drawing shows, is in the page's HTML.
+const SupplyPlot = dynamic(() => import("./supply-plot").then((m) => m.SupplyPlot), { ssr: false });
+
+/** True once the element has come within `margin` of the viewport (true at once without IntersectionObserver). */
+function useNearScreen<T extends Element>(margin = "300px"): [React.RefObject<T | null>, boolean] {
+  const ref = useRef<T>(null);
+  const [near, setNear] = useState(false);
+  useEffect(() => {
+    const el = ref.current;
+    if (near || !el) return;
+    // every browser Riser supports has IntersectionObserver; without it the drawing loads at once
+    if (typeof IntersectionObserver === "undefined") {
+      const timer = setTimeout(() => setNear(true), 0);
+      return () => clearTimeout(timer);
+    }
+    const io = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setNear(true), { rootMargin: margin });
+    io.observe(el);
+    return () => io.disconnect();
+  }, [near, margin]);
+  return [ref, near];
+}
 
 /** round numbers for axis ticks: 0 … max in about five steps of 1, 2 or 5 × 10ⁿ */
 function niceTicks(max: number): number[] {
@@ -30,6 +49,7 @@ function niceTicks(max: number): number[] {
  */
 export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: "pass" | "short" }) {
   const t = useTranslations("tools");
+  const [box, near] = useNearScreen<HTMLDivElement>();
   const fmtP = (v: number) => formatForDisplay(v, chart.pressureUnit);
   const fmtQ = (v: number) => formatForDisplay(v, chart.flowUnit);
   const first = chart.supply[0];
@@ -43,46 +63,8 @@ export function SupplyChart({ chart, verdict }: { chart: ReportChart; verdict?: 
     (chart.test ? "" : ` ${t("chartTestBeyond")}`);
   return (
     <figure className="min-w-0 rounded border border-line bg-panel p-3" aria-label={t("chartLabel")}>
-      <div className="h-72 w-full" aria-hidden="true">
-        <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={chart.supply} margin={{ top: 24, right: 24, bottom: 28, left: 16 }} accessibilityLayer={false} tabIndex={-1}>
-            <CartesianGrid stroke={LINE} strokeDasharray="3 3" />
-            <XAxis
-              dataKey="flow"
-              type="number"
-              domain={[0, xMax]}
-              ticks={xTicks}
-              tickFormatter={(v: number) => String(v)}
-              label={{ value: `Flow (${chart.flowUnit})`, position: "insideBottom", offset: -18, fill: INK }}
-              stroke={INK}
-            />
-            <YAxis
-              type="number"
-              domain={[0, yTicks[yTicks.length - 1] ?? "auto"]}
-              ticks={yTicks}
-              tickFormatter={(v: number) => String(v)}
-              label={{ value: `Pressure (${chart.pressureUnit})`, angle: -90, position: "insideLeft", offset: 4, fill: INK, dy: 50 }}
-              stroke={INK}
-            />
-            <Tooltip
-              formatter={(value) => (typeof value === "number" ? fmtP(value) : String(value))}
-              labelFormatter={(label) => (typeof label === "number" ? fmtQ(label) : String(label))}
-            />
-            <Line dataKey="pressure" name={t("chartSupply")} stroke={WATER} strokeWidth={2} dot={false} isAnimationActive={false} />
-            {chart.test ? <ReferenceDot x={chart.test.flow} y={chart.test.pressure} r={4} fill={WATER} stroke={INK} ifOverflow="discard" /> : null}
-            {chart.demand ? (
-              <ReferenceDot
-                x={chart.demand.flow}
-                y={chart.demand.pressure}
-                r={6}
-                fill={COPPER}
-                stroke={INK}
-                label={{ value: t("chartDemand"), position: "left", offset: 10, fill: INK }}
-                ifOverflow="extendDomain"
-              />
-            ) : null}
-          </ComposedChart>
-        </ResponsiveContainer>
+      <div ref={box} className="h-72 w-full" aria-hidden="true">
+        {near ? <SupplyPlot chart={chart} xMax={xMax} xTicks={xTicks} yTicks={yTicks} /> : null}
       </div>
       <figcaption className="mt-2 text-sm text-muted">{summary}</figcaption>
     </figure>

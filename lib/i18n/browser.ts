@@ -4,3 +4,4 @@ export * from "./config";
 export * from "./negotiate";
 export * from "./error-text";
 export * from "./client-namespaces";
+export * from "./formats";

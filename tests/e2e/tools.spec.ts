@@ -66,6 +66,8 @@ test("system demand at phone width keeps a result summary in view, and its chart
   await expect(page.getByText("Additional flow: 5.0 gpm")).toBeVisible();
 
   await page.setViewportSize({ width: 1280, height: 900 });
+  // the drawing loads when its figure comes near the screen (components/tools/supply-chart.tsx)
+  await page.locator('figure[aria-label="Demand versus supply"]').scrollIntoViewIfNeeded();
   const chart = page.locator(".recharts-wrapper");
   await chart.scrollIntoViewIfNeeded();
   await expect(chart).toBeVisible();

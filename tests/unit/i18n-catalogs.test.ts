@@ -8,7 +8,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { parse, TYPE, type MessageFormatElement } from "@formatjs/icu-messageformat-parser";
 import { describe, expect, it } from "vitest";
-import { CLIENT_NAMESPACES, LOCALES, negotiateLocale } from "@/lib/i18n/browser";
+import { BASE_NAMESPACES, LOCALES, negotiateLocale, SCOPED_NAMESPACES } from "@/lib/i18n/browser";
+import { clientReadings, namespacesReadBy, ROOT, routeFiles } from "../helpers/client-graph";
 
 
 const dir = path.resolve(import.meta.dirname, "../../messages");
@@ -103,18 +104,46 @@ describe("Accept-Language negotiation (RFC 9110 §12.5.4)", () => {
 });
 
 describe("catalogs sent to the browser", () => {
-  it("include every namespace a component reads with useTranslations (the rest stay on the server)", () => {
-    const root = path.resolve(import.meta.dirname, "../..");
-    const used = new Set<string>();
+  // Follows the imports from every route file (and mdx-components.tsx, which lessons and cards use):
+  // each useTranslations call in code that runs in the browser must read a namespace carried by the
+  // root layout's base set or by a <ScopedMessages> provider around it (tests/helpers/client-graph.ts).
+  const entries = [...routeFiles(), path.join(ROOT, "mdx-components.tsx")];
+  const { readings, reached } = clientReadings(entries);
+  const scoped = SCOPED_NAMESPACES as Record<string, readonly string[]>;
+
+  it("include every namespace a browser component reads, on every route that shows it", () => {
+    expect(readings.length).toBeGreaterThan(20);
+    const missing = readings
+      .filter((r) => !(BASE_NAMESPACES as readonly string[]).includes(r.namespace) && !r.scopes.some((s) => scoped[s]?.includes(r.namespace)))
+      .map((r) => `${path.relative(ROOT, r.file)} reads "${r.namespace}" under ${path.relative(ROOT, r.entry)} (scopes: ${r.scopes.join(", ") || "base only"})`);
+    expect([...new Set(missing)].sort()).toEqual([]);
+  });
+
+  it("name only scopes that exist", () => {
+    const unknown = readings.flatMap((r) => r.scopes).filter((s) => !(s in scoped));
+    expect([...new Set(unknown)]).toEqual([]);
+  });
+
+  it("reach every component that calls useTranslations (so none escapes the check above)", () => {
+    const files: string[] = [];
     const walk = (d: string) => {
       for (const e of readdirSync(d, { withFileTypes: true })) {
         const p = path.join(d, e.name);
         if (e.isDirectory()) walk(p);
-        else if (/\.tsx?$/.test(e.name)) for (const m of readFileSync(p, "utf8").matchAll(/useTranslations\(\s*(?:"([^"]*)")?\s*\)/g)) used.add(m[1] ?? "(no namespace)");
+        else if (/\.tsx?$/.test(e.name) && namespacesReadBy(p).length) files.push(p);
       }
     };
-    for (const d of ["app", "components", "lib"]) walk(path.join(root, d));
-    expect(used.size).toBeGreaterThan(5);
-    expect([...used].filter((n) => !(CLIENT_NAMESPACES as readonly string[]).includes(n)).sort()).toEqual([]);
+    for (const d of ["app", "components", "lib"]) walk(path.join(ROOT, d));
+    expect(files.length).toBeGreaterThan(20);
+    expect(files.filter((f) => !reached.has(f)).map((f) => path.relative(ROOT, f))).toEqual([]);
+  });
+
+  it("keep the large section catalogs off the pages that do not use them", () => {
+    // the reason for the scopes: a lesson page carries neither the team board's nor the admin console's
+    // words, and the calculators' only inside an embedded calculator
+    for (const heavy of ["team", "adminConsole", "calcReports", "tools", "billing"]) {
+      expect(BASE_NAMESPACES as readonly string[]).not.toContain(heavy);
+      expect(scoped.lessons).not.toContain(heavy);
+    }
   });
 });

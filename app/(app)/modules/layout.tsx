@@ -1,0 +1,6 @@
+import { ScopedMessages } from "@/components/i18n/scoped-messages";
+
+/** Modules, lessons, quizzes and sign-offs: adds the "lessons" message scope for the browser (lib/i18n/client-namespaces.ts). */
+export default function ModulesLayout({ children }: { children: React.ReactNode }) {
+  return <ScopedMessages scope="lessons">{children}</ScopedMessages>;
+}
