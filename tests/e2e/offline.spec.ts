@@ -1,14 +1,20 @@
 // Job-site mode in the browser, in one pass to keep browser time small: what another person left on
 // the phone is gone at sign-in; keep a module, read it and use a calculator with no connection, mark
 // a lesson complete offline and send it when back online; a changed module replaces its stale copy;
-// signing out leaves nothing readable.
+// a reader who switches to Spanish gets the kept copy again in Spanish; signing out leaves nothing readable.
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import mysql from "mysql2/promise";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { loadCatalogFrom } from "../../lib/content/load";
 import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
 
 const MODULE = "freeze-protection";
 const LESSON = `/modules/${MODULE}/where-homes-freeze`;
+/** The Spanish twin's title (content/es) and the Spanish shell's sign-out words (messages/es). */
+const ES_LESSON_TITLE = loadCatalogFrom("content").es.lessons[`${MODULE}/where-homes-freeze`]!.title;
+const ES_SIGN_OUT = JSON.parse(readFileSync(path.join(process.cwd(), "messages", "es", "shell.json"), "utf8")).signOut as string;
 
 /** Riser's own storage on this phone: kept-page caches and the keys IndexedDB holds. */
 async function phoneStorage(page: Page) {
@@ -123,9 +129,12 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   await page.getByRole("button", { name: "Mark this lesson complete" }).click();
   await expect(page.getByTestId("mark-waiting")).toContainText("waiting to be sent");
   await expect(await sprinklerFlow(page)).toContainText("22.4");
-  // A quiz is graded on the server: offline it says so instead of pretending.
-  await page.goto(`/modules/${MODULE}/quiz`);
-  await expect(page.getByTestId("needs-connection")).toContainText("needs a connection");
+  // A quiz is graded on the server, certificates and the team board are per person: offline each
+  // says so instead of pretending.
+  for (const online of [`/modules/${MODULE}/quiz`, "/certificates", "/team"]) {
+    await page.goto(online);
+    await expect(page.getByTestId("needs-connection"), online).toContainText("needs a connection");
+  }
   await page.goto("/offline");
   await expect(page.getByTestId("kept-list")).toContainText("Freeze");
   await expect(page.getByTestId("queue-list")).toContainText("where-homes-freeze");
@@ -155,11 +164,21 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   expect(await cachedLesson(page)).not.toContain("stale copy");
   expect((await phoneStorage(page)).cacheNames).toHaveLength(1);
 
+  // The reader switches to Spanish: the kept copy is now stale and comes back in Spanish.
+  const switched = await page.request.post("/api/account/language", { data: { language: "es" }, headers: { origin: new URL(page.url()).origin } });
+  expect(switched.status()).toBe(200);
+  await page.reload();
+  await expect.poll(async () => (await getValue<{ locale?: string }>(page, `saved:${MODULE}`))?.locale, { timeout: 20_000 }).toBe("es");
+  expect(await cachedLesson(page)).toContain(ES_LESSON_TITLE);
+  expect(await cachedLesson(page)).toContain('lang="es-US"');
+  expect((await phoneStorage(page)).cacheNames).toHaveLength(1);
+
   // Sign out: kept pages and queue are gone, and the lesson is not readable from this phone.
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: ES_SIGN_OUT }).click();
   await page.waitForURL((u) => u.pathname === "/");
   await expect.poll(() => phoneStorage(page)).toEqual({ cacheNames: [], keys: [] });
   await context.setOffline(true);
   await page.goto(LESSON).catch(() => undefined);
   await expect(page.locator("body")).not.toContainText(title!);
+  await expect(page.locator("body")).not.toContainText(ES_LESSON_TITLE);
 });

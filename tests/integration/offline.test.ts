@@ -4,7 +4,8 @@
 import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { catalogLesson, catalogModule, lessonProgress } from "@/db/schema";
+import { catalogLesson, catalogModule, lessonProgress, user } from "@/db/schema";
+import { loadCatalog } from "@/lib/content";
 import { backdateOpens, clientOf, createOrganization, createPerson, openLessons } from "../helpers/fixtures";
 import { anonymous, getJson, postJson } from "../helpers/http";
 
@@ -92,6 +93,29 @@ describe("what a phone keeps for a module", () => {
     const versions = await getJson<{ modules: Record<string, string> }>(client, "/api/offline/versions");
     expect(versions.body.modules[MODULE]).toBe(body.version);
     expect((await getJson(client, "/api/offline/modules/no-such-module")).status).toBe(404);
+  });
+});
+
+describe("kept in the reader's language", () => {
+  it("gives a Spanish reader the Spanish titles and pages under a version of their own, so a change of language replaces kept copies", async () => {
+    const en = await clientOf((await createPerson({ tag: "offline-en" })).id);
+    const person = await createPerson({ tag: "offline-es" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, person.id));
+    const es = await clientOf(person.id);
+    const english = await getJson<{ locale: string; title: string; version: string; urls: string[] }>(en, `/api/offline/modules/${MODULE}`);
+    const spanish = await getJson<{ locale: string; title: string; version: string; urls: string[] }>(es, `/api/offline/modules/${MODULE}`);
+    expect(spanish.status).toBe(200);
+    // the titles as written in content/es and content/ (module.yaml, the lesson's frontmatter)
+    const catalog = loadCatalog();
+    expect(spanish.body).toMatchObject({ locale: "es", title: catalog.es.modules[MODULE]!.title });
+    expect(english.body).toMatchObject({ locale: "en", title: catalog.modules.find((m) => m.slug === MODULE)!.meta.title });
+    expect(spanish.body.urls).toEqual(english.body.urls);
+    expect(spanish.body.version).not.toBe(english.body.version);
+    expect((await getJson<{ modules: Record<string, string> }>(es, "/api/offline/versions")).body.modules[MODULE]).toBe(spanish.body.version);
+    // the lesson page the phone stores for this reader is the Spanish one
+    const page = await (await es.fetch(`/modules/${MODULE}/${LESSON}`)).text();
+    expect(page).toContain('lang="es-US"');
+    expect(page).toContain(catalog.es.lessons[`${MODULE}/${LESSON}`]!.title);
   });
 });
 
