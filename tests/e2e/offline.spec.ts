@@ -14,7 +14,11 @@ const MODULE = "freeze-protection";
 const LESSON = `/modules/${MODULE}/where-homes-freeze`;
 /** The Spanish twin's title (content/es) and the Spanish shell's sign-out words (messages/es). */
 const ES_LESSON_TITLE = loadCatalogFrom("content").es.lessons[`${MODULE}/where-homes-freeze`]!.title;
-const ES_SIGN_OUT = JSON.parse(readFileSync(path.join(process.cwd(), "messages", "es", "shell.json"), "utf8")).signOut as string;
+const esCatalog = (ns: string) => JSON.parse(readFileSync(path.join(process.cwd(), "messages", "es", `${ns}.json`), "utf8"));
+const ES_SIGN_OUT = esCatalog("shell").signOut as string;
+const ES_OFFLINE = esCatalog("offline") as { keep: string; removeLabel: string; keptLine: string };
+const ES_MODULE_TITLE = loadCatalogFrom("content").es.modules[MODULE]!.title;
+const LESSONS = loadCatalogFrom("content").modules.find((m) => m.slug === MODULE)!.lessons.map((l) => `/modules/${MODULE}/${l.slug}`);
 
 /** Riser's own storage on this phone: kept-page caches and the keys IndexedDB holds. */
 async function phoneStorage(page: Page) {
@@ -90,7 +94,7 @@ async function sprinklerFlow(page: Page) {
 }
 
 test("job-site mode: keep, read and calculate offline, queue and send a mark, replace a stale copy, and leave nothing for the next person", async ({ page, context }) => {
-  test.setTimeout(90_000);
+  test.setTimeout(150_000);
   const email = await throwAwayLearner();
   await signInAs(page, email);
 
@@ -123,6 +127,12 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   await expect(await sprinklerFlow(page)).toContainText("22.4");
 
   await context.setOffline(true);
+  // every lesson of the module opens from the phone (the kept copy, with its heading)
+  for (const other of LESSONS) {
+    await page.goto(other);
+    await expect(page.getByTestId("needs-connection"), other).toHaveCount(0);
+    await expect(page.locator("main h1"), other).toBeVisible();
+  }
   await page.goto(LESSON);
   await expect(page.getByRole("heading", { level: 1 })).toHaveText(title!);
   await expect(page.getByTestId("connection-notice")).toContainText("No connection");
@@ -172,6 +182,21 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   expect(await cachedLesson(page)).toContain(ES_LESSON_TITLE);
   expect(await cachedLesson(page)).toContain('lang="es-US"');
   expect((await phoneStorage(page)).cacheNames).toHaveLength(1);
+
+  // The offline page lists the kept module with its page count, size and date, and removes it.
+  await page.goto("/offline");
+  const kept = page.getByTestId("kept-list").getByRole("listitem").filter({ hasText: ES_MODULE_TITLE });
+  // the catalog's line with the number of pages the server's plan lists, a size and a date
+  const pages = ((await (await page.request.get(`/api/offline/modules/${MODULE}`)).json()) as { urls: string[] }).urls.length;
+  const line = ES_OFFLINE.keptLine.replace("{pages}", String(pages)).replace("{size}", "[\\d.]+ (B|KB|MB)").replace("{when}", ".*\\d");
+  await expect(kept).toContainText(new RegExp(line));
+  await kept.getByRole("button", { name: ES_OFFLINE.removeLabel.replace("{title}", ES_MODULE_TITLE) }).click();
+  await expect(page.getByTestId("kept-list")).toHaveCount(0);
+  await expect.poll(() => phoneStorage(page)).toEqual({ cacheNames: [], keys: [] });
+  // kept again (in Spanish) for the sign-out check below
+  await page.goto(`/modules/${MODULE}`);
+  await page.getByRole("button", { name: ES_OFFLINE.keep }).click();
+  await expect.poll(async () => (await phoneStorage(page)).cacheNames.length, { timeout: 30_000 }).toBe(1);
 
   // Sign out: kept pages and queue are gone, and the lesson is not readable from this phone.
   await page.getByRole("button", { name: ES_SIGN_OUT }).click();
