@@ -1,5 +1,6 @@
 import { createHash } from "node:crypto";
 import type { Catalog } from "@/lib/content";
+import { OFFLINE_PAGE } from "./names";
 
 /**
  * What "Keep on this phone" stores for one module, and the version that tells a phone its copy is
@@ -64,6 +65,8 @@ export function offlinePlan(catalog: Catalog, moduleSlug: string, buildId: strin
       ...cards.map((c) => `/reference/${c}`),
       "/glossary",
       "/tools",
+      // the "needs a connection" page in the reader's language, for pages that are not kept
+      OFFLINE_PAGE,
       ...calculatorIds.map((id) => `/tools/${id}`),
     ],
   };

@@ -17,17 +17,17 @@ import { signInAs, throwAwayLearner } from "./helpers";
 const catalog = (locale: string, ns: string): any => JSON.parse(readFileSync(path.join(process.cwd(), "messages", locale, `${ns}.json`), "utf8"));
 
 /** Every text the live region takes on, in order (a screen reader speaks each change). */
-async function recordLiveRegion(page: Page, testId: string) {
-  await page.getByTestId(testId).waitFor({ state: "attached" });
-  await page.evaluate((testId) => {
+async function recordLiveRegion(page: Page, selector: string) {
+  await page.locator(selector).waitFor({ state: "attached" });
+  await page.evaluate((selector) => {
     const w = window as unknown as { spoken: string[] };
     w.spoken = [];
-    const el = document.querySelector(`[data-testid="${testId}"]`)!;
+    const el = document.querySelector(selector)!;
     new MutationObserver(() => {
       const t = el.textContent ?? "";
       if (t && t !== w.spoken.at(-1)) w.spoken.push(t);
     }).observe(el, { childList: true, characterData: true, subtree: true });
-  }, testId);
+  }, selector);
   return () => page.evaluate(() => (window as unknown as { spoken: string[] }).spoken);
 }
 
@@ -46,7 +46,7 @@ test("navigation focuses the new heading; search counts are announced once per p
   await page.keyboard.press("Enter");
   await page.waitForURL("**/search");
   await expect(h1).toBeFocused();
-  const spoken = await recordLiveRegion(page, "search-announcement");
+  const spoken = await recordLiveRegion(page, '[data-testid="search-announcement"]');
   await page.keyboard.press("Tab"); // the search box follows the heading
   await expect(page.getByRole("searchbox")).toBeFocused();
   await page.keyboard.type("sidewall", { delay: 80 });
@@ -144,7 +144,7 @@ test("the evidence upload announces its progress in quarter steps, each once, no
   const photo = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: "#808080", noise: { type: "gaussian", mean: 128, sigma: 60 } } }).jpeg({ quality: 92 }).toBuffer();
   expect(photo.byteLength).toBeGreaterThan(1024 * 1024);
   await skill.getByLabel(en.files).setInputFiles({ name: "joint.jpg", mimeType: "image/jpeg", buffer: photo });
-  const spoken = await recordLiveRegion(page, "upload-announcement");
+  const spoken = await recordLiveRegion(page, '[data-testid="skill-pj-cpvc-joint-and-cure"] [data-testid="upload-announcement"]');
   const cdp = await context.newCDPSession(page);
   await cdp.send("Network.enable");
   await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 256 * 1024 });

@@ -6,6 +6,7 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { catalogLesson, catalogModule, lessonProgress, user } from "@/db/schema";
 import { loadCatalog } from "@/lib/content";
+import { OFFLINE_SHELL } from "@/lib/offline/names";
 import { backdateOpens, clientOf, createOrganization, createPerson, openLessons } from "../helpers/fixtures";
 import { anonymous, getJson, postJson } from "../helpers/http";
 
@@ -49,7 +50,8 @@ describe("installable", () => {
     expect(res.headers.get("cache-control")).toBe("no-cache");
     const body = await res.text();
     expect(body).toContain("/_next/static/");
-    expect(body).toContain('"/offline"');
+    // the offline page is precached under its own address (/offline itself comes from the network)
+    expect(body).toContain(JSON.stringify(OFFLINE_SHELL));
     expect(body).not.toContain("self.__SW_MANIFEST");
     // the CSP lets it load from this origin only
     expect(res.headers.get("content-security-policy")).toContain("worker-src 'self'");
@@ -85,6 +87,7 @@ describe("what a phone keeps for a module", () => {
     expect(body.urls).toContain(`/modules/${MODULE}/${LESSON}`);
     expect(body.urls).toContain("/glossary");
     expect(body.urls).toContain("/tools/sprinkler-flow");
+    expect(body.urls).toContain("/offline");
     expect(body.urls.some((u) => u.startsWith("/reference/"))).toBe(true);
     expect(body.urls.some((u) => u.endsWith("/quiz"))).toBe(false);
     // one page of each kind answers this person with 200 (the browser test stores them all)

@@ -20,6 +20,7 @@ describe("offline plan", () => {
     expect(p.urls.slice(0, 1 + mod.lessons.length)).toEqual([`/modules/${MODULE}`, ...mod.lessons.map((l) => `/modules/${MODULE}/${l.slug}`)]);
     for (const card of linkedCards(catalog, MODULE)) expect(p.urls).toContain(`/reference/${card}`);
     expect(p.urls).toContain("/glossary");
+    expect(p.urls).toContain("/offline"); // the "needs a connection" page, in the reader's language
     for (const id of CALCULATOR_IDS) expect(p.urls).toContain(`/tools/${id}`);
     expect(p.urls.filter((u) => u.includes("quiz") || u.includes("sign-offs"))).toEqual([]);
     expect(new Set(p.urls).size).toBe(p.urls.length);
