@@ -42,7 +42,9 @@ export async function buildServiceWorker(distDir = process.env.NEXT_DIST_DIR || 
     modifyURLPrefix: { "": "/_next/static/" },
     // File names under /_next/static carry their own content hash.
     dontCacheBustURLsMatching: /./,
-    additionalPrecacheEntries: [{ url: "/offline", revision: buildId }, ...iconEntries],
+    // the offline page under its own address (lib/offline/names.ts OFFLINE_SHELL), so that /offline
+    // itself still comes from the network in the reader's language while there is one
+    additionalPrecacheEntries: [{ url: "/offline?shell=1", revision: buildId }, ...iconEntries],
   });
   for (const w of result.warnings) console.warn(`[sw] ${w}`);
   console.log(`[sw] service worker: ${result.count} files precached (${Math.round(result.size / 1024)} KiB)`);

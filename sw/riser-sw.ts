@@ -6,12 +6,13 @@
 //   phone hydrates and its calculators run with no network.
 // - Page loads go to the network first. With no network, a page the person kept on this phone
 //   ("Keep on this phone" writes riser-saved-* caches from the page) is served from its cache; any
-//   other page gets the precached /offline page, which says plainly that it needs a connection.
+//   other page gets the offline page (kept with the modules, else precached), which says plainly
+//   that it needs a connection.
 // - When the server answers a kept page with a redirect (the session ended: signed out elsewhere,
 //   banned, expired), every kept copy is deleted, so nothing personal stays readable.
 // - Nothing else (API calls, quiz, certificates, uploads) is cached or answered by the worker.
 import { CacheFirst, ExpirationPlugin, Serwist, type PrecacheEntry, type RouteHandlerCallbackOptions } from "serwist";
-import { CACHE_PREFIX, OFFLINE_PAGE, SAVED_CACHE_PREFIX } from "../lib/offline/names";
+import { CACHE_PREFIX, OFFLINE_PAGE, OFFLINE_SHELL, SAVED_CACHE_PREFIX } from "../lib/offline/names";
 
 declare const self: ServiceWorkerGlobalScope & { __SW_MANIFEST: (PrecacheEntry | string)[] };
 
@@ -49,7 +50,9 @@ async function pageLoad({ request }: RouteHandlerCallbackOptions): Promise<Respo
     return res;
   } catch {
     if (kept) return kept;
-    return (await serwist.matchPrecache(OFFLINE_PAGE)) ?? Response.error();
+    // "needs a connection": the offline page kept with the reader's modules (in the reader's
+    // language), else the one precached when this worker was installed
+    return (await keptCopy(new Request(new URL(OFFLINE_PAGE, self.location.origin)))) ?? (await serwist.matchPrecache(OFFLINE_SHELL)) ?? Response.error();
   }
 }
 

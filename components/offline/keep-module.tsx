@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useTranslations } from "next-intl";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { keepModule, removeModule } from "@/lib/offline/browser";
+import { KeepError, keepModule, removeModule } from "@/lib/offline/browser";
 import { formatBytes, formatWhen } from "./format";
 import { useOfflineState, useOnline } from "./use-offline";
 
@@ -27,7 +27,10 @@ export function KeepModule({ module }: { module: string }) {
     try {
       await keepModule(module);
     } catch (err) {
-      setProblem(err instanceof Error ? err.message : String(err));
+      if (err instanceof KeepError) {
+        const { message, url, status } = err.detail;
+        setProblem(err.code === "planFailed" && message ? message : t(`errors.${err.code}`, { url: url ?? "", status: status ?? 0 }));
+      } else setProblem(t("errors.other", { message: err instanceof Error ? err.message : String(err) }));
     } finally {
       setBusy(false);
     }

@@ -7,9 +7,23 @@ import { SAVED_CACHE_PREFIX, SERVICE_WORKER_URL, savedCacheName } from "./names"
 
 export * from "./names";
 
-export type SavedModule = { module: string; title: string; version: string; savedAt: string; bytes: number; pages: number; cache: string };
+/** `locale`: the language the pages were stored in (the reader's, when they were kept). */
+export type SavedModule = { module: string; locale?: string; title: string; version: string; savedAt: string; bytes: number; pages: number; cache: string };
 export type QueuedMark = { module: string; lesson: string; readingSeconds: number; markedAt: string; note?: string };
-type Plan = { module: string; title: string; version: string; urls: string[] };
+type Plan = { module: string; locale: string; title: string; version: string; urls: string[] };
+
+/**
+ * Why keeping a module failed, as a code the page words through its message catalog (offline.errors.*);
+ * `detail` is the server's own (already translated) refusal or the address that could not be stored.
+ */
+export class KeepError extends Error {
+  constructor(
+    readonly code: "planFailed" | "sessionEnded" | "notStored" | "connectionDropped",
+    readonly detail: { message?: string; url?: string; status?: number } = {},
+  ) {
+    super(code);
+  }
+}
 
 /** Fired on window whenever what is kept or queued changes, so lists re-read it. */
 export const OFFLINE_CHANGED = "riser:offline-changed";
@@ -103,14 +117,15 @@ export async function savedModule(module: string): Promise<SavedModule | undefin
 export async function keepModule(module: string): Promise<SavedModule> {
   const res = await fetch(`/api/offline/modules/${encodeURIComponent(module)}`, { credentials: "same-origin" });
   const planBody = (await res.json().catch(() => ({}))) as Plan & { error?: string };
-  if (!res.ok) throw new Error(planBody.error ?? `The module list could not load (${res.status}).`);
+  if (!res.ok) throw new KeepError("planFailed", { message: planBody.error, status: res.status });
   if (navigator.serviceWorker) await navigator.serviceWorker.ready;
   const name = savedCacheName(planBody.module, planBody.version);
   const cache = await caches.open(name);
   let bytes = 0;
   const store = async (url: string) => {
     const page = await fetch(url, { credentials: "same-origin", redirect: "manual" });
-    if (!page.ok || page.type !== "basic") throw new Error(page.type === "opaqueredirect" ? "Your session has ended: sign in again, then keep the module." : `${url} could not be stored (${page.status}).`);
+    if (page.type === "opaqueredirect") throw new KeepError("sessionEnded");
+    if (!page.ok || page.type !== "basic") throw new KeepError("notStored", { url, status: page.status });
     bytes += (await page.clone().arrayBuffer()).byteLength;
     await cache.put(url, page);
   };
@@ -123,9 +138,9 @@ export async function keepModule(module: string): Promise<SavedModule> {
   } catch (err) {
     const previous = await savedModule(planBody.module);
     if (previous?.cache !== name) await caches.delete(name);
-    throw err instanceof TypeError ? new Error("The connection dropped while saving. Try again with a signal; nothing else changed.") : err;
+    throw err instanceof TypeError ? new KeepError("connectionDropped") : err;
   }
-  const saved: SavedModule = { module: planBody.module, title: planBody.title, version: planBody.version, savedAt: new Date().toISOString(), bytes, pages: planBody.urls.length, cache: name };
+  const saved: SavedModule = { module: planBody.module, locale: planBody.locale, title: planBody.title, version: planBody.version, savedAt: new Date().toISOString(), bytes, pages: planBody.urls.length, cache: name };
   await set(`saved:${planBody.module}`, saved, db());
   for (const old of await caches.keys()) if (old.startsWith(`${SAVED_CACHE_PREFIX}${planBody.module}@`) && old !== name) await caches.delete(old);
   changed();

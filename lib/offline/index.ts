@@ -2,7 +2,7 @@
 import "server-only";
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { loadCatalog } from "@/lib/content";
+import { loadCatalog, localizeCatalog, type ContentLocale } from "@/lib/content";
 import { CALCULATOR_IDS } from "@/lib/hydraulics";
 import { offlinePlan, type OfflinePlan } from "./plan";
 
@@ -18,24 +18,28 @@ function buildId(): string {
   }
 }
 
-let memo: { id: string; plans: Map<string, OfflinePlan> } | null = null;
+const memo = new Map<ContentLocale, { id: string; plans: Map<string, OfflinePlan> }>();
 
-function plans(): Map<string, OfflinePlan> {
+/** Every module's plan in the reader's language (the pages a phone stores are rendered in it). */
+function plans(locale: ContentLocale): Map<string, OfflinePlan> {
   const id = buildId();
-  if (!memo || memo.id !== id || process.env.NODE_ENV === "development") {
-    const catalog = loadCatalog();
-    const map = new Map<string, OfflinePlan>();
-    for (const m of catalog.modules) map.set(m.slug, offlinePlan(catalog, m.slug, id, CALCULATOR_IDS)!);
-    memo = { id, plans: map };
-  }
-  return memo.plans;
+  const hit = memo.get(locale);
+  if (hit && hit.id === id && process.env.NODE_ENV !== "development") return hit.plans;
+  const catalog = localizeCatalog(loadCatalog(), locale);
+  const map = new Map<string, OfflinePlan>();
+  for (const m of catalog.modules) map.set(m.slug, offlinePlan(catalog, m.slug, id, CALCULATOR_IDS, locale)!);
+  memo.set(locale, { id, plans: map });
+  return map;
 }
 
-export function planFor(moduleSlug: string): OfflinePlan | null {
-  return plans().get(moduleSlug) ?? null;
+export function planFor(moduleSlug: string, locale: ContentLocale): OfflinePlan | null {
+  return plans(locale).get(moduleSlug) ?? null;
 }
 
-/** Current version of every module's offline copy, for a phone to find its stale ones. */
-export function moduleVersions(): Record<string, string> {
-  return Object.fromEntries([...plans()].map(([slug, p]) => [slug, p.version]));
+/**
+ * Current version of every module's offline copy in the reader's language, for a phone to find its
+ * stale ones (a reader who changed language finds every copy stale and gets it in the new one).
+ */
+export function moduleVersions(locale: ContentLocale): Record<string, string> {
+  return Object.fromEntries([...plans(locale)].map(([slug, p]) => [slug, p.version]));
 }

@@ -1,5 +1,6 @@
 import { createHash } from "node:crypto";
 import type { Catalog } from "@/lib/content";
+import { OFFLINE_PAGE } from "./names";
 
 /**
  * What "Keep on this phone" stores for one module, and the version that tells a phone its copy is
@@ -7,6 +8,8 @@ import type { Catalog } from "@/lib/content";
  */
 export type OfflinePlan = {
   module: string;
+  /** The language the pages are stored in (the reader's: lessons, cards and glossary in it). */
+  locale: string;
   title: string;
   /** Content hash of everything the plan stores, plus the app build it was rendered with. */
   version: string;
@@ -33,14 +36,16 @@ export function linkedCards(catalog: Catalog, moduleSlug: string): string[] {
  * The plan for one module: its page, its lessons (figures are inline SVG in the lesson pages, and
  * glossary terms are defined inline by <Term>), the cards they link to, the glossary page and every
  * field calculator (they compute in the browser). `buildId` ties cached pages to the build whose
- * scripts they load; `calculatorIds` come from lib/hydraulics.
+ * scripts they load; `calculatorIds` come from lib/hydraulics. `catalog` is the catalog in the reader's
+ * language `locale` (lib/content localizeCatalog), so a Spanish reader's copy is versioned by the
+ * Spanish text and a change of language makes every kept copy stale.
  */
-export function offlinePlan(catalog: Catalog, moduleSlug: string, buildId: string, calculatorIds: readonly string[]): OfflinePlan | null {
+export function offlinePlan(catalog: Catalog, moduleSlug: string, buildId: string, calculatorIds: readonly string[], locale = "en"): OfflinePlan | null {
   const mod = catalog.modules.find((m) => m.slug === moduleSlug);
   if (!mod) return null;
   const cards = linkedCards(catalog, moduleSlug);
   const h = createHash("sha256");
-  h.update(`build:${buildId}\n`);
+  h.update(`build:${buildId}\nlocale:${locale}\n`);
   h.update(JSON.stringify(mod.meta));
   for (const l of mod.lessons) h.update(`\nlesson:${l.slug}\n${JSON.stringify(l.meta)}\n${l.body}`);
   for (const slug of cards) {
@@ -51,6 +56,7 @@ export function offlinePlan(catalog: Catalog, moduleSlug: string, buildId: strin
   h.update(`\ncalculators:${calculatorIds.join(",")}`);
   return {
     module: mod.slug,
+    locale,
     title: mod.meta.title,
     version: h.digest("hex").slice(0, 16),
     urls: [
@@ -59,6 +65,8 @@ export function offlinePlan(catalog: Catalog, moduleSlug: string, buildId: strin
       ...cards.map((c) => `/reference/${c}`),
       "/glossary",
       "/tools",
+      // the "needs a connection" page in the reader's language, for pages that are not kept
+      OFFLINE_PAGE,
       ...calculatorIds.map((id) => `/tools/${id}`),
     ],
   };

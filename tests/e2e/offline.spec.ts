@@ -1,14 +1,24 @@
 // Job-site mode in the browser, in one pass to keep browser time small: what another person left on
 // the phone is gone at sign-in; keep a module, read it and use a calculator with no connection, mark
 // a lesson complete offline and send it when back online; a changed module replaces its stale copy;
-// signing out leaves nothing readable.
+// a reader who switches to Spanish gets the kept copy again in Spanish; signing out leaves nothing readable.
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import mysql from "mysql2/promise";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { loadCatalogFrom } from "../../lib/content/load";
 import { backdateOpens, signInAs, throwAwayLearner } from "./helpers";
 
 const MODULE = "freeze-protection";
 const LESSON = `/modules/${MODULE}/where-homes-freeze`;
+/** The Spanish twin's title (content/es) and the Spanish shell's sign-out words (messages/es). */
+const ES_LESSON_TITLE = loadCatalogFrom("content").es.lessons[`${MODULE}/where-homes-freeze`]!.title;
+const esCatalog = (ns: string) => JSON.parse(readFileSync(path.join(process.cwd(), "messages", "es", `${ns}.json`), "utf8"));
+const ES_SIGN_OUT = esCatalog("shell").signOut as string;
+const ES_OFFLINE = esCatalog("offline") as { keep: string; removeLabel: string; keptLine: string };
+const ES_MODULE_TITLE = loadCatalogFrom("content").es.modules[MODULE]!.title;
+const LESSONS = loadCatalogFrom("content").modules.find((m) => m.slug === MODULE)!.lessons.map((l) => `/modules/${MODULE}/${l.slug}`);
 
 /** Riser's own storage on this phone: kept-page caches and the keys IndexedDB holds. */
 async function phoneStorage(page: Page) {
@@ -84,7 +94,7 @@ async function sprinklerFlow(page: Page) {
 }
 
 test("job-site mode: keep, read and calculate offline, queue and send a mark, replace a stale copy, and leave nothing for the next person", async ({ page, context }) => {
-  test.setTimeout(90_000);
+  test.setTimeout(150_000);
   const email = await throwAwayLearner();
   await signInAs(page, email);
 
@@ -117,15 +127,24 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   await expect(await sprinklerFlow(page)).toContainText("22.4");
 
   await context.setOffline(true);
+  // every lesson of the module opens from the phone (the kept copy, with its heading)
+  for (const other of LESSONS) {
+    await page.goto(other);
+    await expect(page.getByTestId("needs-connection"), other).toHaveCount(0);
+    await expect(page.locator("main h1"), other).toBeVisible();
+  }
   await page.goto(LESSON);
   await expect(page.getByRole("heading", { level: 1 })).toHaveText(title!);
   await expect(page.getByTestId("connection-notice")).toContainText("No connection");
   await page.getByRole("button", { name: "Mark this lesson complete" }).click();
   await expect(page.getByTestId("mark-waiting")).toContainText("waiting to be sent");
   await expect(await sprinklerFlow(page)).toContainText("22.4");
-  // A quiz is graded on the server: offline it says so instead of pretending.
-  await page.goto(`/modules/${MODULE}/quiz`);
-  await expect(page.getByTestId("needs-connection")).toContainText("needs a connection");
+  // A quiz is graded on the server, certificates and the team board are per person: offline each
+  // says so instead of pretending.
+  for (const online of [`/modules/${MODULE}/quiz`, "/certificates", "/team"]) {
+    await page.goto(online);
+    await expect(page.getByTestId("needs-connection"), online).toContainText("needs a connection");
+  }
   await page.goto("/offline");
   await expect(page.getByTestId("kept-list")).toContainText("Freeze");
   await expect(page.getByTestId("queue-list")).toContainText("where-homes-freeze");
@@ -155,11 +174,36 @@ test("job-site mode: keep, read and calculate offline, queue and send a mark, re
   expect(await cachedLesson(page)).not.toContain("stale copy");
   expect((await phoneStorage(page)).cacheNames).toHaveLength(1);
 
+  // The reader switches to Spanish: the kept copy is now stale and comes back in Spanish.
+  const switched = await page.request.post("/api/account/language", { data: { language: "es" }, headers: { origin: new URL(page.url()).origin } });
+  expect(switched.status()).toBe(200);
+  await page.reload();
+  await expect.poll(async () => (await getValue<{ locale?: string }>(page, `saved:${MODULE}`))?.locale, { timeout: 20_000 }).toBe("es");
+  expect(await cachedLesson(page)).toContain(ES_LESSON_TITLE);
+  expect(await cachedLesson(page)).toContain('lang="es-US"');
+  expect((await phoneStorage(page)).cacheNames).toHaveLength(1);
+
+  // The offline page lists the kept module with its page count, size and date, and removes it.
+  await page.goto("/offline");
+  const kept = page.getByTestId("kept-list").getByRole("listitem").filter({ hasText: ES_MODULE_TITLE });
+  // the catalog's line with the number of pages the server's plan lists, a size and a date
+  const pages = ((await (await page.request.get(`/api/offline/modules/${MODULE}`)).json()) as { urls: string[] }).urls.length;
+  const line = ES_OFFLINE.keptLine.replace("{pages}", String(pages)).replace("{size}", "[\\d.]+ (B|KB|MB)").replace("{when}", ".*\\d");
+  await expect(kept).toContainText(new RegExp(line));
+  await kept.getByRole("button", { name: ES_OFFLINE.removeLabel.replace("{title}", ES_MODULE_TITLE) }).click();
+  await expect(page.getByTestId("kept-list")).toHaveCount(0);
+  await expect.poll(() => phoneStorage(page)).toEqual({ cacheNames: [], keys: [] });
+  // kept again (in Spanish) for the sign-out check below
+  await page.goto(`/modules/${MODULE}`);
+  await page.getByRole("button", { name: ES_OFFLINE.keep }).click();
+  await expect.poll(async () => (await phoneStorage(page)).cacheNames.length, { timeout: 30_000 }).toBe(1);
+
   // Sign out: kept pages and queue are gone, and the lesson is not readable from this phone.
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: ES_SIGN_OUT }).click();
   await page.waitForURL((u) => u.pathname === "/");
   await expect.poll(() => phoneStorage(page)).toEqual({ cacheNames: [], keys: [] });
   await context.setOffline(true);
   await page.goto(LESSON).catch(() => undefined);
   await expect(page.locator("body")).not.toContainText(title!);
+  await expect(page.locator("body")).not.toContainText(ES_LESSON_TITLE);
 });

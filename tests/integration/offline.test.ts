@@ -4,7 +4,9 @@
 import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { catalogLesson, catalogModule, lessonProgress } from "@/db/schema";
+import { catalogLesson, catalogModule, lessonProgress, user } from "@/db/schema";
+import { loadCatalog } from "@/lib/content";
+import { OFFLINE_SHELL } from "@/lib/offline/names";
 import { backdateOpens, clientOf, createOrganization, createPerson, openLessons } from "../helpers/fixtures";
 import { anonymous, getJson, postJson } from "../helpers/http";
 
@@ -48,7 +50,8 @@ describe("installable", () => {
     expect(res.headers.get("cache-control")).toBe("no-cache");
     const body = await res.text();
     expect(body).toContain("/_next/static/");
-    expect(body).toContain('"/offline"');
+    // the offline page is precached under its own address (/offline itself comes from the network)
+    expect(body).toContain(JSON.stringify(OFFLINE_SHELL));
     expect(body).not.toContain("self.__SW_MANIFEST");
     // the CSP lets it load from this origin only
     expect(res.headers.get("content-security-policy")).toContain("worker-src 'self'");
@@ -84,6 +87,7 @@ describe("what a phone keeps for a module", () => {
     expect(body.urls).toContain(`/modules/${MODULE}/${LESSON}`);
     expect(body.urls).toContain("/glossary");
     expect(body.urls).toContain("/tools/sprinkler-flow");
+    expect(body.urls).toContain("/offline");
     expect(body.urls.some((u) => u.startsWith("/reference/"))).toBe(true);
     expect(body.urls.some((u) => u.endsWith("/quiz"))).toBe(false);
     // one page of each kind answers this person with 200 (the browser test stores them all)
@@ -92,6 +96,29 @@ describe("what a phone keeps for a module", () => {
     const versions = await getJson<{ modules: Record<string, string> }>(client, "/api/offline/versions");
     expect(versions.body.modules[MODULE]).toBe(body.version);
     expect((await getJson(client, "/api/offline/modules/no-such-module")).status).toBe(404);
+  });
+});
+
+describe("kept in the reader's language", () => {
+  it("gives a Spanish reader the Spanish titles and pages under a version of their own, so a change of language replaces kept copies", async () => {
+    const en = await clientOf((await createPerson({ tag: "offline-en" })).id);
+    const person = await createPerson({ tag: "offline-es" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, person.id));
+    const es = await clientOf(person.id);
+    const english = await getJson<{ locale: string; title: string; version: string; urls: string[] }>(en, `/api/offline/modules/${MODULE}`);
+    const spanish = await getJson<{ locale: string; title: string; version: string; urls: string[] }>(es, `/api/offline/modules/${MODULE}`);
+    expect(spanish.status).toBe(200);
+    // the titles as written in content/es and content/ (module.yaml, the lesson's frontmatter)
+    const catalog = loadCatalog();
+    expect(spanish.body).toMatchObject({ locale: "es", title: catalog.es.modules[MODULE]!.title });
+    expect(english.body).toMatchObject({ locale: "en", title: catalog.modules.find((m) => m.slug === MODULE)!.meta.title });
+    expect(spanish.body.urls).toEqual(english.body.urls);
+    expect(spanish.body.version).not.toBe(english.body.version);
+    expect((await getJson<{ modules: Record<string, string> }>(es, "/api/offline/versions")).body.modules[MODULE]).toBe(spanish.body.version);
+    // the lesson page the phone stores for this reader is the Spanish one
+    const page = await (await es.fetch(`/modules/${MODULE}/${LESSON}`)).text();
+    expect(page).toContain('lang="es-US"');
+    expect(page).toContain(catalog.es.lessons[`${MODULE}/${LESSON}`]!.title);
   });
 });
 

@@ -3,7 +3,7 @@
 import path from "node:path";
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
-import { loadCatalogFrom, type Catalog } from "@/lib/content";
+import { loadCatalogFrom, localizeCatalog, type Catalog } from "@/lib/content";
 import { CALCULATOR_IDS } from "@/lib/hydraulics";
 import { linkedCards, offlinePlan } from "@/lib/offline/plan";
 import { APP_ICONS, appIconSvg, palette } from "@/lib/theme";
@@ -20,6 +20,7 @@ describe("offline plan", () => {
     expect(p.urls.slice(0, 1 + mod.lessons.length)).toEqual([`/modules/${MODULE}`, ...mod.lessons.map((l) => `/modules/${MODULE}/${l.slug}`)]);
     for (const card of linkedCards(catalog, MODULE)) expect(p.urls).toContain(`/reference/${card}`);
     expect(p.urls).toContain("/glossary");
+    expect(p.urls).toContain("/offline"); // the "needs a connection" page, in the reader's language
     for (const id of CALCULATOR_IDS) expect(p.urls).toContain(`/tools/${id}`);
     expect(p.urls.filter((u) => u.includes("quiz") || u.includes("sign-offs"))).toEqual([]);
     expect(new Set(p.urls).size).toBe(p.urls.length);
@@ -52,6 +53,26 @@ describe("offline plan", () => {
     const otherChanged = clone();
     otherChanged.modules.find((m) => m.slug !== MODULE)!.lessons[0]!.body += "\nElsewhere.";
     expect(plan(otherChanged).version).toBe(base);
+  });
+
+  it("is kept in the reader's language: a Spanish copy carries the Spanish title, has its own version and goes stale when a Spanish twin changes", () => {
+    const es = (c: Catalog) => offlinePlan(localizeCatalog(c, "es"), MODULE, "build-1", CALCULATOR_IDS, "es")!;
+    const en = plan(catalog);
+    const spanish = es(catalog);
+    // the Spanish module title as written in content/es (its module.yaml), not the English one
+    expect(spanish.title).toBe(catalog.es.modules[MODULE]!.title);
+    expect(spanish.title).not.toBe(en.title);
+    expect(spanish.locale).toBe("es");
+    // same pages to store (the addresses carry no language), a different version: a reader who
+    // switches language finds every kept copy stale and gets it again in the new language
+    expect(spanish.urls).toEqual(en.urls);
+    expect(spanish.version).not.toBe(en.version);
+    const twinChanged = clone();
+    const key = `${MODULE}/${twinChanged.modules.find((m) => m.slug === MODULE)!.lessons[0]!.slug}`;
+    twinChanged.es.lessons[key]!.body += "\nUna oración más.";
+    expect(es(twinChanged).version).not.toBe(spanish.version);
+    // an edit to the Spanish text alone leaves the English copy as it was
+    expect(plan(twinChanged).version).toBe(en.version);
   });
 
   it("has no plan for a module that does not exist", () => {

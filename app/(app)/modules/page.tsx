@@ -29,18 +29,18 @@ export default async function ModulesPage({ searchParams }: { searchParams: Prom
     <>
       <PageTitle title={t("metaTitle")} lead={t("listLead")} />
       <form method="get" className="mb-6 flex flex-wrap items-end gap-4 rounded border border-line bg-panel p-3" aria-label={t("filter")}>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 max-w-full flex-col gap-1">
           <label htmlFor="path" className="text-sm font-bold">{t("path")}</label>
-          <select id="path" name="path" defaultValue={path ?? ""} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="path" name="path" defaultValue={path ?? ""} className="min-h-11 max-w-full rounded border border-ink/40 bg-panel px-2">
             <option value="">{t("allPaths")}</option>
             {catalog.paths.map((p) => (
               <option key={p.slug} value={p.slug}>{p.title}</option>
             ))}
           </select>
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 max-w-full flex-col gap-1">
           <label htmlFor="audience" className="text-sm font-bold">{t("for")}</label>
-          <select id="audience" name="audience" defaultValue={audience ?? ""} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="audience" name="audience" defaultValue={audience ?? ""} className="min-h-11 max-w-full rounded border border-ink/40 bg-panel px-2">
             <option value="">{t("everyone")}</option>
             {AUDIENCES.map((k) => (
               <option key={k} value={k}>{t(`audience.${k}`)}</option>

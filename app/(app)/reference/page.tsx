@@ -23,16 +23,16 @@ export default async function ReferencePage({ searchParams }: { searchParams: Pr
     <>
       <PageTitle title={t("title")} lead={t("lead")} />
       <form method="get" className="mb-6 flex flex-wrap items-end gap-4 rounded border border-line bg-panel p-3" aria-label={t("filter")}>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 max-w-full flex-col gap-1">
           <label htmlFor="topic" className="text-sm font-bold">{t("topicLabel")}</label>
-          <select id="topic" name="topic" defaultValue={topic ?? ""} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="topic" name="topic" defaultValue={topic ?? ""} className="min-h-11 max-w-full rounded border border-ink/40 bg-panel px-2">
             <option value="">{t("allTopics")}</option>
             {cardTopic.options.map((k) => <option key={k} value={k}>{topicLabel(k)}</option>)}
           </select>
         </div>
-        <div className="flex flex-col gap-1">
+        <div className="flex min-w-0 max-w-full flex-col gap-1">
           <label htmlFor="audience" className="text-sm font-bold">{tm("for")}</label>
-          <select id="audience" name="audience" defaultValue={audience ?? ""} className="min-h-11 rounded border border-ink/40 bg-panel px-2">
+          <select id="audience" name="audience" defaultValue={audience ?? ""} className="min-h-11 max-w-full rounded border border-ink/40 bg-panel px-2">
             <option value="">{tm("everyone")}</option>
             {AUDIENCES.map((k) => <option key={k} value={k}>{tm(`audience.${k}`)}</option>)}
           </select>

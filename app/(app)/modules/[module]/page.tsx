@@ -58,7 +58,7 @@ export default async function ModulePage({ params }: Params) {
         <p className="mt-1 text-sm text-muted" data-testid="module-lesson-count">{t("doneCount", { done: done.size, total: mod.lessons.length })}</p>
         <ol className="mt-3 flex flex-col gap-2">
           {mod.lessons.map((l, i) => (
-            <li key={l.slug} className="flex items-baseline gap-3 rounded border border-line bg-panel p-3">
+            <li key={l.slug} className="flex flex-wrap items-baseline gap-3 rounded border border-line bg-panel p-3">
               <span className="font-mono text-sm text-muted">{i + 1}.</span>
               <div className="flex-1">
                 <Link href={`/modules/${slug}/${l.slug}`} className="font-bold">{l.meta.title}</Link>
