@@ -121,7 +121,7 @@ describe("the system-demand form in Spanish", () => {
     function Options() {
       return createElement("ul", null, ...useMaterialOptions().map((o) => createElement("li", { key: o.value }, o.label)));
     }
-    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(NextIntlClientProvider, { locale, messages: loadMessages(locale), timeZone: "UTC" }, createElement(Options)));
+    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(NextIntlClientProvider, { locale, messages: loadMessages(locale), timeZone: "UTC", children: createElement(Options) }));
     const materials = (es.calcReports as { material: Record<string, string> }).material;
     const spanish = render("es");
     for (const name of Object.values(materials)) expect(spanish).toContain(name);
