@@ -3,7 +3,7 @@
 // documented input limits (lib/hydraulics/errors.ts INPUT_LIMITS: K-factor at most 100, 10,000 ft of
 // elevation), the sentence the English form has always shown ("<Field> <reason>."), and the Spanish
 // catalog as written in messages/es. Numbers must come through unchanged in both languages.
-import { createElement } from "react";
+import { createElement, type FunctionComponent, type ReactNode } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { NextIntlClientProvider } from "next-intl";
 import { describe, expect, it } from "vitest";
@@ -121,7 +121,8 @@ describe("the system-demand form in Spanish", () => {
     function Options() {
       return createElement("ul", null, ...useMaterialOptions().map((o) => createElement("li", { key: o.value }, o.label)));
     }
-    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(NextIntlClientProvider, { locale, messages: loadMessages(locale), timeZone: "UTC", children: createElement(Options) }));
+    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(Provider, { locale, messages: loadMessages(locale), timeZone: "UTC" }, createElement(Options)));
+    const Provider = NextIntlClientProvider as unknown as FunctionComponent<{ locale: string; messages: unknown; timeZone: string; children?: ReactNode }>;
     const materials = (es.calcReports as { material: Record<string, string> }).material;
     const spanish = render("es");
     for (const name of Object.values(materials)) expect(spanish).toContain(name);
