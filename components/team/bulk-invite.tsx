@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { FormError, FormNotice } from "@/components/ui/field";
 import type { RosterPreview } from "@/lib/team";
 import { LANGUAGE_NAMES, LOCALES, type Locale } from "@/lib/i18n/browser";
-import { INVITE_ROLES, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "@/lib/team/browser";
+import { INVITE_ROLES, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, rosterRowText, type InviteRole, type RosterMessage } from "@/lib/team/browser";
 
 type ImportResult = { imported: number; skipped: number; message: string };
 
@@ -74,6 +74,8 @@ export function BulkInvite({ org, defaultLanguage }: { org: string | null; defau
     router.refresh();
   }
 
+  // a row's problems and notes in the reader's language (the English text when an older server sent no keys)
+  const rowText = (messages: RosterMessage[] | undefined, english: string[]) => rosterRowText(messages, english, (key, values) => t(key as never, values as never));
   const problemRows = preview?.rows.filter((r) => r.problems.length > 0) ?? [];
   const validRows = preview?.rows.filter((r) => r.problems.length === 0) ?? [];
   const shownValid = showAll ? validRows : validRows.slice(0, SHOW_VALID);
@@ -155,12 +157,12 @@ export function BulkInvite({ org, defaultLanguage }: { org: string | null; defau
                     <td className="px-2 py-2">
                       {r.problems.length ? (
                         <ul className="font-bold text-caution">
-                          {r.problems.map((p) => (
+                          {rowText(r.problemMessages, r.problems).map((p) => (
                             <li key={p}>{p}</li>
                           ))}
                         </ul>
                       ) : (
-                        <span className="text-pass">{t("bulk.ready")}{r.notes.length ? ` — ${r.notes.join("; ")}` : ""}</span>
+                        <span className="text-pass">{t("bulk.ready")}{r.notes.length ? ` — ${rowText(r.noteMessages, r.notes).join("; ")}` : ""}</span>
                       )}
                     </td>
                   </tr>

@@ -32,7 +32,9 @@ export interface CalculatorState<TValues extends FieldValues> {
  * recomputes the report when the inputs are valid.
  */
 export function useCalculator<TValues extends FieldValues>(id: CalculatorId, defaultValues: TValues): CalculatorState<TValues> {
-  const schema = useMemo(() => calculatorFormSchema(id), [id]);
+  // the report's and the error sentences' words in the reader's language; numbers come from lib/hydraulics either way
+  const tr = useTranslations("calcReports") as unknown as ReportT;
+  const schema = useMemo(() => calculatorFormSchema(id, tr), [id, tr]);
   const form = useForm<TValues>({
     resolver: zodResolver(schema as never) as unknown as Resolver<TValues>,
     defaultValues: defaultValues as DefaultValues<TValues>,
@@ -40,8 +42,6 @@ export function useCalculator<TValues extends FieldValues>(id: CalculatorId, def
   });
   const values = useWatch({ control: form.control });
   const key = JSON.stringify(values);
-  // the report's words in the reader's language; its numbers come from lib/hydraulics either way
-  const tr = useTranslations("calcReports") as unknown as ReportT;
   const { report, input } = useMemo(() => {
     try {
       const parsed = parseCalculatorInput(id, JSON.parse(key));

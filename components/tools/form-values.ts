@@ -45,19 +45,45 @@ function segmentValues(s: SegmentReportInput | undefined, fallbackLabel: string)
 
 export const emptySegment = (label: string): SegmentFormValues => segmentValues(undefined, label);
 
-export function systemDemandFormValues(input: CalculatorInputs["system-demand"]): SystemDemandFormValues {
+/** the example system's labels (lib/hydraulics/presets.ts) → their keys in the tools catalog (`demandExample.*`) */
+const EXAMPLE_LABEL_KEYS: Record<string, string> = {
+  "Great room, far sprinkler": "farSprinkler",
+  "Branch to far sprinkler": "farBranch",
+  "Great room, near sprinkler": "nearSprinkler",
+  "Branch to near sprinkler": "nearBranch",
+  "Water service": "waterService",
+  "Riser and attic main": "riserMain",
+  "Water meter (1 in; loss at the design flow, maker's curve)": "meter",
+  "Backflow preventer (maker's curve)": "backflow",
+};
+
+/** a translator for the tools catalog (the example and default labels in the reader's language) */
+export type LabelT = (key: string, values?: Record<string, string | number>) => string;
+
+const englishLabels: LabelT = (key, values = {}) =>
+  key === "sprinklerN" ? `Sprinkler ${values.letter}` : key === "branchN" ? `Branch ${values.letter}` : key === "pipeRunN" ? `Pipe run ${values.n}` : key;
+
+/** form values for the system demand; without `t` the labels stay English */
+export function systemDemandFormValues(input: CalculatorInputs["system-demand"], t?: LabelT): SystemDemandFormValues {
+  const tl = t ?? englishLabels;
+  // an example label is shown in the reader's language; a label a lesson or a person wrote stays as written
+  const ex = (label: string) => (t && EXAMPLE_LABEL_KEYS[label] ? t(`demandExample.${EXAMPLE_LABEL_KEYS[label]}`) : label);
+  const seg = (s: SegmentReportInput | undefined, fallback: string) => {
+    const v = segmentValues(s, fallback);
+    return s?.label ? { ...v, label: ex(s.label) } : v;
+  };
   return {
     units: input.units,
     sprinklers: input.sprinklers.map((s, i) => ({
-      label: s.label ?? `Sprinkler ${String.fromCharCode(65 + i)}`,
+      label: s.label ? ex(s.label) : tl("sprinklerN", { letter: String.fromCharCode(65 + i) }),
       k: text(s.k),
       minFlow: text(s.minFlow),
       minPressure: text(s.minPressure),
       coverageArea: text(s.coverageArea),
-      branch: segmentValues(s.branch, `Branch ${String.fromCharCode(65 + i)}`),
+      branch: seg(s.branch, tl("branchN", { letter: String.fromCharCode(65 + i) })),
     })),
-    segments: input.segments.map((s, i) => segmentValues(s, `Pipe run ${i + 1}`)),
-    devices: (input.devices ?? []).map((d) => ({ label: d.label ?? "", loss: text(d.loss) })),
+    segments: input.segments.map((s, i) => seg(s, tl("pipeRunN", { n: i + 1 }))),
+    devices: (input.devices ?? []).map((d) => ({ label: d.label ? ex(d.label) : "", loss: text(d.loss) })),
     additionalFlow: text(input.additionalFlow),
     supply: {
       staticPressure: text(input.supply?.staticPressure),

@@ -3,14 +3,18 @@
 import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { PIPE_DATA, PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
+import { PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
 import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
-export const MATERIAL_OPTIONS = PIPE_MATERIALS.map((m) => ({ value: m, label: PIPE_DATA[m].label }));
+/** the pipe materials with their names in the reader's language (calcReports catalog) */
+export function useMaterialOptions() {
+  const t = useTranslations("calcReports");
+  return useMemo(() => PIPE_MATERIALS.map((m) => ({ value: m, label: t(`material.${m}`) })), [t]);
+}
 export const sizeOptions = (material: string | undefined) =>
   sizesFor((PIPE_MATERIALS as readonly string[]).includes(material ?? "") ? (material as (typeof PIPE_MATERIALS)[number]) : "copper-l").map(
     (s) => ({ value: s, label: `${s} in` }),
@@ -18,6 +22,7 @@ export const sizeOptions = (material: string | undefined) =>
 
 export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
+  const materialOptions = useMaterialOptions();
   const defaults = useMemo(() => flatFormValues("friction-loss", inputFromPreset("friction-loss", preset)), [preset]);
   const state = useCalculator("friction-loss", defaults);
   const [units, material] = useWatch({ control: state.form.control, name: ["units", "material"] });
@@ -25,7 +30,7 @@ export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
   const plastic = material === "cpvc" || material === "pex";
   return (
     <CalculatorShell id="friction-loss" state={state} embedded={embedded}>
-      <SelectField name="material" label={t("pipeMaterial")} options={MATERIAL_OPTIONS} />
+      <SelectField name="material" label={t("pipeMaterial")} options={materialOptions} />
       <SelectField name="nominalSize" label={t("nominalSize")} options={sizeOptions(material)} />
       <NumberField name="flow" label={t("flow")} unit={u.flow} />
       <NumberField name="length" label={t("pipeLength")} unit={u.length} />

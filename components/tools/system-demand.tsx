@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField, TextField } from "./fields";
-import { MATERIAL_OPTIONS, sizeOptions } from "./friction-loss";
+import { sizeOptions, useMaterialOptions } from "./friction-loss";
 import { emptySegment, systemDemandFormValues, type SystemDemandFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
@@ -19,11 +19,12 @@ function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
   const [units, material] = useWatch({ control, name: ["units", `${prefix}.material` as "units"] }) as [string, string];
   const u = unitLabels(units === "si" ? "si" : "us");
   const plastic = material === "cpvc" || material === "pex";
+  const materialOptions = useMaterialOptions();
   return (
     <fieldset className="flex flex-col gap-3 rounded border border-line bg-panel p-3">
       <legend className="px-1 font-bold">{title}</legend>
       <TextField name={`${prefix}.label`} label={t("label")} />
-      <SelectField name={`${prefix}.material`} label={t("material")} options={MATERIAL_OPTIONS} />
+      <SelectField name={`${prefix}.material`} label={t("material")} options={materialOptions} />
       <SelectField name={`${prefix}.nominalSize`} label={t("nominalSize")} options={sizeOptions(material)} />
       <NumberField name={`${prefix}.length`} label={t("length")} unit={u.length} />
       <NumberField name={`${prefix}.elevation`} label={t("riseTowardTheSprinkler")} unit={u.length} optional hint={t("negativeIfThePipeDrops")} />
@@ -93,7 +94,7 @@ function DemandFields() {
           type="button"
           variant="secondary"
           onClick={() =>
-            sprinklers.append({ label: "Sprinkler B", k: "4.9", minFlow: "13", minPressure: "", coverageArea: "", branch: { ...emptySegment("Branch B"), length: "0" } })
+            sprinklers.append({ label: t("sprinklerN", { letter: "B" }), k: "4.9", minFlow: "13", minPressure: "", coverageArea: "", branch: { ...emptySegment(t("branchN", { letter: "B" })), length: "0" } })
           }
         >
           {t("addASecondDesignSprinkler")}
@@ -111,7 +112,7 @@ function DemandFields() {
         </div>
       ))}
       {segments.fields.length < INPUT_CAPS.pipeRuns ? (
-        <Button type="button" variant="secondary" onClick={() => segments.append(emptySegment(`Pipe run ${segments.fields.length + 1}`))}>
+        <Button type="button" variant="secondary" onClick={() => segments.append(emptySegment(t("pipeRunN", { n: segments.fields.length + 1 })))}>
           {t("addAPipeRun")}
         </Button>
       ) : null}
@@ -186,7 +187,9 @@ function SupplyFields() {
 }
 
 export function SystemDemandCalculator({ preset, embedded }: CalculatorProps) {
-  const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset)), [preset]);
+  const t = useTranslations("tools");
+  // the example's labels in the reader's language (its figures are the same in both)
+  const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset), t), [preset, t]);
   const state = useCalculator("system-demand", defaults);
   return (
     <CalculatorShell id="system-demand" state={state} embedded={embedded}>

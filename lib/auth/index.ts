@@ -8,7 +8,7 @@ import { nextCookies } from "better-auth/next-js";
 import { db } from "@/db/client";
 import * as schema from "@/db/schema";
 import { env } from "@/lib/env";
-import { sendMail } from "@/lib/mail";
+import { mailTranslator, sendMail } from "@/lib/mail";
 import { nameProblem, normalizeName } from "@/lib/names";
 import { CLIENT_IP_HEADER } from "@/lib/client-ip";
 import { isDatabaseDown } from "@/lib/db-errors";
@@ -21,6 +21,12 @@ import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { hitSignInFromClient, lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 import { SESSION_CACHE_SECONDS, cachedSessionVersion, forgetCachedSessions } from "./session-cache";
 import { afterSecondStep, beforeSecondStep, SECOND_STEP_PATHS } from "./second-factor";
+
+/** the language a person chose (stored on their account), for mail written to them */
+async function storedLanguageOf(userId: string): Promise<string | null> {
+  const [row] = await db.select({ language: schema.user.language }).from(schema.user).where(eq(schema.user.id, userId));
+  return row?.language ?? null;
+}
 
 const signInEmailOf = (body: unknown) => {
   const email = (body as { email?: unknown } | undefined)?.email;
@@ -52,11 +58,13 @@ export const auth = betterAuth({
     revokeSessionsOnPasswordReset: true,
     resetPasswordTokenExpiresIn: 60 * 60,
     sendResetPassword: async ({ user, url }) => {
+      // written in the recipient's stored language (English when none)
+      const t = mailTranslator(await storedLanguageOf(user.id));
       await sendMail({
         to: user.email,
         kind: "password-reset",
-        subject: "Reset your Riser password",
-        text: `Hello ${user.name},\n\nSomeone asked to reset the password of your Riser account. If it was you, open this link within an hour:\n\n${url}\n\nIf it was not you, ignore this message; your password stays as it is.`,
+        subject: t("auth.reset.subject"),
+        text: `${t("helloName", { name: user.name })}\n\n${t("auth.reset.body", { url })}`,
       });
     },
   },
@@ -68,19 +76,20 @@ export const auth = betterAuth({
     expiresIn: 60 * 60 * 24,
     sendVerificationEmail: async ({ user, url }) => {
       // An e-mail change (account settings) sends this to the new address while the stored one is still the old.
-      const [stored] = await db.select({ email: schema.user.email }).from(schema.user).where(eq(schema.user.id, user.id));
+      const [stored] = await db.select({ email: schema.user.email, language: schema.user.language }).from(schema.user).where(eq(schema.user.id, user.id));
       if (stored && stored.email.toLowerCase() !== user.email.toLowerCase()) {
+        const t = mailTranslator(stored.language);
         await sendMail({
           to: user.email,
           kind: "change-email",
-          subject: "Confirm your new e-mail for Riser",
-          text: `Hello ${user.name},\n\nYou asked to use this address for your Riser account instead of ${stored.email}. Open this link to confirm; until you do, nothing changes:\n\n${url}\n\nThe link works for 24 hours. If you did not ask for this, ignore this message.`,
+          subject: t("auth.changeEmail.subject"),
+          text: `${t("helloName", { name: user.name })}\n\n${t("auth.changeEmail.body", { oldEmail: stored.email, url })}`,
         });
         await sendMail({
           to: stored.email,
           kind: "change-email-notice",
-          subject: "Your Riser e-mail address is about to change",
-          text: `Hello ${user.name},\n\nSomeone signed in to your Riser account asked to change its e-mail address to ${user.email}. The change happens only when the link sent to that address is opened.\n\nIf this was not you, sign in, change your password under Account, and choose "Sign out everywhere else".`,
+          subject: t("auth.changeNotice.subject"),
+          text: `${t("helloName", { name: user.name })}\n\n${t("auth.changeNotice.body", { newEmail: user.email })}`,
         });
         return;
       }

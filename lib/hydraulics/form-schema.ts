@@ -7,18 +7,14 @@ import type { z } from "zod";
 import type { CalculatorId } from "./catalog";
 import { HydraulicsInputError } from "./errors";
 import { calculatorReport } from "./reports";
+import { inputErrorSentence } from "./input-error-text";
+import type { ReportT } from "./reports/text";
 import { CALCULATOR_SCHEMAS, fieldPath } from "./schemas";
 
-/** "segments[0].listedFittingsLength" → "Listed fittings length" */
-export function fieldLabel(field: string): string {
-  const last = String(fieldPath(field).filter((p) => typeof p === "string").pop() ?? field);
-  const words = last.replace(/([a-z])([A-Z])/g, "$1 $2").toLowerCase();
-  const named: Record<string, string> = { k: "K-factor", "c factor": "C-factor", "tee branches": "Tees" };
-  const text = named[words] ?? words;
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
+export { fieldLabel } from "./input-error-text";
 
-export function calculatorFormSchema<I extends CalculatorId>(id: I) {
+/** `t`: the calcReports translator of the reader's language (English without one) */
+export function calculatorFormSchema<I extends CalculatorId>(id: I, t?: ReportT) {
   const schema = CALCULATOR_SCHEMAS[id] as unknown as z.ZodType<unknown, unknown>;
   return schema.superRefine((input, ctx) => {
     try {
@@ -26,8 +22,7 @@ export function calculatorFormSchema<I extends CalculatorId>(id: I) {
     } catch (e) {
       if (e instanceof HydraulicsInputError) {
         // library reasons read "must be …" (needs the field's name) or are whole sentences
-        const sentence = /^[A-Z]/.test(e.reason) ? e.reason : `${fieldLabel(e.field)} ${e.reason}`;
-        ctx.addIssue({ code: "custom", path: fieldPath(e.field), message: sentence.endsWith(".") ? sentence : `${sentence}.` });
+        ctx.addIssue({ code: "custom", path: fieldPath(e.field), message: inputErrorSentence(e, t) });
       } else {
         ctx.addIssue({ code: "custom", path: [], message: "These inputs could not be calculated." });
       }

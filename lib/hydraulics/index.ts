@@ -88,6 +88,7 @@ export {
 export { calculatorReport, parseCalculatorInput, englishReportT, FITTING_NAMES, NOMINAL_BORE_NOTE, type ReportT } from "./reports";
 export { shownMargin } from "./reports/common";
 export { calculatorFormSchema, fieldLabel } from "./form-schema";
+export { INPUT_FIELD_NAMES, inputErrorSentence } from "./input-error-text";
 
 /** the caution every calculator shows */
 export { CALCULATOR_CAUTION_TEXT as CALCULATOR_CAUTION } from "./catalog";

@@ -3,3 +3,4 @@ export * from "./chart";
 export * from "./first-day-steps";
 export * from "./schemas";
 export * from "./error-keys";
+export * from "./roster-text";

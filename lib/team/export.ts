@@ -11,6 +11,7 @@ import type { OrgScope } from "@/lib/access";
 import { isDone } from "./status";
 import { isoDay } from "@/lib/dates";
 import { isExpiring } from "@/lib/expiring";
+import { catalogTranslator, type Locale } from "@/lib/i18n";
 
 const day = (iso: string | null | undefined) => isoDay(iso);
 const stamp = () => isoDay(new Date());
@@ -19,10 +20,13 @@ const stamp = () => isoDay(new Date());
  * The filtered board as CSV: one row per person; per module its status, completion date, best
  * score, certificate serial and due date (five columns, so a spreadsheet can sort and filter each).
  */
-export async function boardCsv(scope: OrgScope, f: BoardFilter): Promise<Response> {
+export async function boardCsv(scope: OrgScope, f: BoardFilter, language: Locale = "en"): Promise<Response> {
   const modules = boardModules(f.module);
-  const perModule = (title: string) => [title, `${title}: completed`, `${title}: score`, `${title}: certificate`, `${title}: due`];
-  const header = ["Name", "E-mail", "Team", ...modules.flatMap((m) => perModule(m.title)), "Modules passed", "Overdue", "Next due", "Language"];
+  // the column headers in the downloader's language (module titles too); the cells stay as they are
+  const t = catalogTranslator(language, "team");
+  const titles = new Map(boardModules(f.module, language).map((m) => [m.slug, m.title]));
+  const perModule = (title: string) => [title, t("csv.completed", { title }), t("csv.score", { title }), t("csv.certificate", { title }), t("csv.due", { title })];
+  const header = [t("csv.name"), t("csv.email"), t("csv.team"), ...modules.flatMap((m) => perModule(titles.get(m.slug) ?? m.title)), t("csv.passed"), t("csv.overdue"), t("csv.nextDue"), t("csv.language")];
   return csvResponse(`riser-team-board-${stamp()}.csv`, header, async function* () {
     for await (const chunk of boardRowsInChunks(scope, f)) {
       const rich = await withCellExtras(chunk);

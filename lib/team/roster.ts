@@ -6,6 +6,9 @@
 import Papa from "papaparse";
 import { csvLines } from "@/lib/csv";
 import { z } from "zod";
+import { createTranslator } from "use-intl/core";
+import enTeam from "@/messages/en/team.json";
+import type { RosterMessage } from "./roster-text";
 import { INVITE_ROLES, ROSTER_COLUMNS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "./schemas";
 
 export type RosterFileProblem = { error: string };
@@ -81,9 +84,16 @@ export type RosterContext = {
   used: number;
 };
 
+const english = createTranslator({ locale: "en-US", messages: { team: enTeam }, namespace: "team" });
+/** the English text of a row message (what `problems` and `notes` hold) */
+export const rosterMessageEnglish = (m: RosterMessage) => (english as unknown as (k: string, v: Record<string, string>) => string)(`bulk.row.${m.key}`, m.values);
+
 export type CheckedRow = RawRosterRow & {
+  /** in English; `problemMessages` / `noteMessages` carry the same as catalog keys for other languages */
   problems: string[];
   notes: string[];
+  problemMessages: RosterMessage[];
+  noteMessages: RosterMessage[];
   teamId: string | null;
   roleValue: InviteRole | null;
 };
@@ -96,33 +106,37 @@ export function checkRoster(raw: RawRosterRow[], ctx: RosterContext): CheckedRow
   let free = Math.max(0, ctx.seats - ctx.used);
   const teamList = [...ctx.teams.values()].map((t) => t.name);
   return raw.map((r) => {
-    const problems: string[] = [];
-    const notes: string[] = [];
+    const problemMessages: RosterMessage[] = [];
+    const noteMessages: RosterMessage[] = [];
+    const problem = (key: string, values: Record<string, string> = {}) => problemMessages.push({ key, values });
     const email = r.email.toLowerCase();
-    if (!r.email) problems.push("E-mail is missing");
-    else if (email.length > 255 || !emailCheck.safeParse(email).success) problems.push(`Bad e-mail address: “${r.email}”`);
+    if (!r.email) problem("emailMissing");
+    else if (email.length > 255 || !emailCheck.safeParse(email).success) problem("badEmail", { email: r.email });
     const roleText = r.role.toLowerCase();
     const roleValue = roleText === "" ? "learner" : (INVITE_ROLES as readonly string[]).includes(roleText) ? (roleText as InviteRole) : null;
-    if (!roleValue) problems.push(`Unknown role “${r.role}”: use learner, sales or manager`);
+    if (!roleValue) problem("unknownRole", { role: r.role });
     let teamId: string | null = null;
     if (r.team) {
       const t = ctx.teams.get(r.team.toLowerCase());
       if (t) teamId = t.id;
-      else problems.push(`Unknown team “${r.team}”${teamList.length ? `: teams are ${teamList.slice(0, 8).join(", ")}${teamList.length > 8 ? ", …" : ""}` : ": your organization has no teams yet"}`);
+      else if (teamList.length) problem("unknownTeam", { team: r.team, teams: `${teamList.slice(0, 8).join(", ")}${teamList.length > 8 ? ", …" : ""}` });
+      else problem("unknownTeamNone", { team: r.team });
     }
-    if (r.name.length > 200) problems.push("Name is longer than 200 characters");
-    if (email && !problems.some((p) => p.startsWith("Bad e-mail"))) {
+    if (r.name.length > 200) problem("nameTooLong");
+    if (email && !problemMessages.some((p) => p.key === "badEmail")) {
       const seen = firstLine.get(email);
-      if (seen !== undefined) problems.push(`Duplicate in file: the same e-mail is on line ${seen}`);
+      if (seen !== undefined) problem("duplicate", { line: String(seen) });
       else firstLine.set(email, r.line);
-      if (ctx.members.has(email)) problems.push(`Already a member of ${ctx.orgName}: nothing will be sent`);
+      if (ctx.members.has(email)) problem("alreadyMember", { org: ctx.orgName });
     }
-    if (problems.length === 0) {
-      if (ctx.pending.has(email)) notes.push("Has an open invitation: a new link replaces it (no extra seat)");
+    if (problemMessages.length === 0) {
+      if (ctx.pending.has(email)) noteMessages.push({ key: "openInvitation", values: {} });
       else if (free > 0) free--;
-      else problems.push(`Over the seat count: your organization has ${ctx.seats} seats and all are taken; buy more on the billing page`);
+      else problem("overSeats", { seats: String(ctx.seats) });
     }
-    return { ...r, email: r.email, problems, notes, teamId, roleValue };
+    const problems = problemMessages.map(rosterMessageEnglish);
+    const notes = noteMessages.map(rosterMessageEnglish);
+    return { ...r, email: r.email, problems, notes, problemMessages, noteMessages, teamId, roleValue };
   });
 }
 

@@ -11,13 +11,14 @@ import type { PDFPage, RGB } from "pdf-lib";
 import { C, createPdf, defaultFontDir, type Face, type Typesetter } from "@/lib/pdf";
 import {
   HydraulicsInputError,
+  inputErrorSentence,
   calculatorReport,
   isCalculatorId,
   type CalculatorId,
   type CalculatorReport,
 } from "@/lib/hydraulics";
 import { utcStamp } from "@/lib/dates";
-import { catalogTranslator, type CatalogT } from "@/lib/i18n";
+import { catalogTranslator, storedLocale, type CatalogT } from "@/lib/i18n";
 
 const PAGE = { width: 612, height: 792, margin: 40 }; // US Letter, points
 
@@ -191,7 +192,9 @@ export async function summaryPdfResponse(request: Request, options: SummaryPdfOp
     });
   } catch (e) {
     if (e instanceof HydraulicsInputError) {
-      return Response.json({ error: `${e.field}: ${e.reason}`, field: e.field }, { status: 400 });
+      // English keeps the library's own words; another language gets the form's sentence in its catalog
+      const error = storedLocale(options.language) === "en" ? `${e.field}: ${e.reason}` : inputErrorSentence(e, catalogTranslator(options.language, "calcReports"));
+      return Response.json({ error, field: e.field }, { status: 400 });
     }
     throw e;
   }

@@ -103,13 +103,23 @@ describe("local rules", () => {
     expect((await postJson(mgrA, "/api/team/amendments", { topic: "freeze", body: "bell\u0007 on every loop" })).status).toBe(400);
     expect((await postJson(mgrA, "/api/team/amendments", { topic: "roofing", body: "A rule for a topic Riser does not have" })).status).toBe(400);
     expect((await postJson(mgrA, "/api/team/amendments/roofing", {}, "DELETE")).status).toBe(404);
+    // writing into another organization's topics is refused, and nothing is stored there
+    const foreign = await postJson(mgrB, "/api/team/amendments", { topic: "freeze", body: "A rule written into someone else's organization", org: a.id });
+    expect(foreign.status).toBe(403);
+    expect(await db.select().from(localAmendment).where(eq(localAmendment.organizationId, a.id))).toEqual([]);
   });
 
   it("shows the note, escaped, with author and date, to its own organization only, on lessons and cards of the topic", async () => {
+    const draft = await postJson(mgrA, "/api/team/amendments", { topic: "freeze", body: "Backflow preventer on every antifreeze loop (draft)" });
+    expect(draft.status, draft.text).toBe(200);
     const r = await postJson(mgrA, "/api/team/amendments", { topic: "freeze", body: NOTE });
     expect(r.status, r.text).toBe(200);
     const [audit] = await db.select().from(auditLog).where(and(eq(auditLog.organizationId, a.id), eq(auditLog.action, "amendment.create")));
     expect(audit!.targetId).toBe("freeze");
+    // the rewrite replaces the note (one row) and its audit row keeps both texts
+    const [update] = await db.select().from(auditLog).where(and(eq(auditLog.organizationId, a.id), eq(auditLog.action, "amendment.update")));
+    expect(update!.details).toMatchObject({ from: "Backflow preventer on every antifreeze loop (draft)", to: NOTE });
+    expect(await db.select().from(localAmendment).where(eq(localAmendment.organizationId, a.id))).toHaveLength(1);
     for (const path of ["/reference/antifreeze-systems", `/modules/${MODULE}/antifreeze-limits`]) {
       const mine = await html(learnerA, path);
       expect(mine).toContain("Local rule: Freeze protection");
@@ -140,6 +150,9 @@ describe("quiz and certificate follow the default edition", () => {
   it("draws only questions valid for 2016, records the edition, and names it on the certificate", async () => {
     const [tillow] = await db.select().from(jurisdiction).where(and(eq(jurisdiction.organizationId, a.id), eq(jurisdiction.name, "Brackwater County")));
     expect((await postJson(mgrA, `/api/team/jurisdictions/${tillow!.id}`, { isDefault: true })).status).toBe(200);
+    const [moved] = await db.select().from(auditLog).where(and(eq(auditLog.organizationId, a.id), eq(auditLog.action, "jurisdiction.update")));
+    expect(moved!.details).toMatchObject({ name: "Brackwater County", changes: { isDefault: { from: false, to: true } } });
+    expect((await db.select().from(jurisdiction).where(and(eq(jurisdiction.organizationId, a.id), eq(jurisdiction.isDefault, true)))).map((j) => j.name)).toEqual(["Brackwater County"]);
     const mod = catalog.modules.find((m) => m.slug === MODULE)!;
     await readAndComplete(learnerA, learnerAId, MODULE, mod.lessons.map((l) => l.slug));
     const start = await postJson(learnerA, "/api/quiz/attempts", { module: MODULE });
@@ -158,5 +171,21 @@ describe("quiz and certificate follow the default edition", () => {
     const pdf = await learnerA.fetch(`/api/certificates/${cert!.id}/pdf`);
     expect(pdf.status).toBe(200);
     expect(pdfText(new Uint8Array(await pdf.arrayBuffer())).replace(/\s+/g, " ")).toContain("Taught to NFPA 13D, 2016 edition");
+  });
+});
+
+describe("removing a jurisdiction", () => {
+  it("hands the default to the one recorded first, audited; the last default cannot be switched off", async () => {
+    const first = await postJson(mgrB, "/api/team/jurisdictions", { name: "Orrin Hollow", state: "WA", edition: 2019, ircP2904: false });
+    const second = await postJson(mgrB, "/api/team/jurisdictions", { name: "Pell Crossing", state: "WA", edition: 2025, ircP2904: true, isDefault: true });
+    expect([first.status, second.status]).toEqual([201, 201]);
+    const off = await postJson(mgrB, `/api/team/jurisdictions/${second.json.id as string}`, { isDefault: false });
+    expect(off.status).toBe(400);
+    expect((off.json.fieldErrors as Record<string, string[]>).isDefault?.[0]).toMatch(/choose another as default/);
+    expect((await postJson(mgrB, `/api/team/jurisdictions/${second.json.id as string}`, {}, "DELETE")).status).toBe(200);
+    const rows = await db.select().from(jurisdiction).where(eq(jurisdiction.organizationId, b.id));
+    expect(rows.map((j) => [j.name, j.isDefault])).toEqual([["Orrin Hollow", true]]);
+    const [removed] = await db.select().from(auditLog).where(and(eq(auditLog.organizationId, b.id), eq(auditLog.action, "jurisdiction.remove")));
+    expect(removed!.details).toMatchObject({ name: "Pell Crossing", edition: 2025, wasDefault: true });
   });
 });

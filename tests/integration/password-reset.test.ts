@@ -1,8 +1,12 @@
 // Password reset by mail: request → mail from the local catcher → the link → new password works,
 // the old one no longer does; an unknown address gets the same answer (no account probing).
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
-import { pool } from "@/db/client";
-import { APP, fetchFrom, freshIp, linkIn, mailsTo, postJson, anonymous, signIn, waitForMail } from "../helpers/http";
+import { db, pool } from "@/db/client";
+import { user } from "@/db/schema";
+import { APP, fetchFrom, freshIp, linkIn, mailsTo, postJson, anonymous, signIn, uniqueEmail, waitForMail } from "../helpers/http";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../helpers/fixtures";
 
 afterAll(() => pool.end());
@@ -42,5 +46,44 @@ describe("password reset", () => {
     expect(res.status).toBe(200);
     await new Promise((r) => setTimeout(r, 500));
     expect(await mailsTo(email)).toEqual([]);
+  });
+});
+
+// The Spanish mail catalog as written (messages/es/mail.json): a Spanish reader's mail carries its
+// subject and sentences, with the link and the addresses unchanged.
+const esMail = JSON.parse(readFileSync(path.join(process.cwd(), "messages/es/mail.json"), "utf8")) as { auth: Record<"reset" | "changeEmail" | "changeNotice", { subject: string; body: string }> };
+const firstLine = (body: string) => body.split("\n")[0]!.split(/[{]/)[0]!;
+
+describe("mail in the recipient's stored language", () => {
+  it("a Spanish reader's password reset arrives in Spanish and its link still works", async () => {
+    const org = await createOrganization("Reset Idioma Co");
+    const [p] = await createPeople(1, { organizationId: org.id, tag: "reset-es" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, p!.id));
+    expect((await postJson(anonymous(), "/api/auth/request-password-reset", { email: p!.email, redirectTo: "/reset-password" })).status).toBe(200);
+    const mail = await waitForMail(p!.email);
+    expect(mail.subject).toBe(esMail.auth.reset.subject);
+    expect(mail.text).toContain(`Hola, ${p!.name}:`);
+    expect(mail.text).toContain(firstLine(esMail.auth.reset.body));
+    expect(mail.text).not.toMatch(/Someone asked|ignore this message/);
+    const hop = await fetchFrom(freshIp(), linkIn(mail.text), { redirect: "manual" });
+    expect([302, 303, 307]).toContain(hop.status);
+  });
+
+  it("a Spanish reader's e-mail change: the confirmation and the notice to the old address are in Spanish", async () => {
+    const org = await createOrganization("Correo Idioma Co");
+    const [p] = await createPeople(1, { organizationId: org.id, tag: "change-es" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, p!.id));
+    const client = await signIn(p!.email, TEST_PASSWORD);
+    const next = uniqueEmail("change-es-new");
+    const res = await postJson(client, "/api/auth/change-email", { newEmail: next, callbackURL: "/account?email=changed", password: TEST_PASSWORD });
+    expect(res.status, res.text).toBe(200);
+    const confirm = await waitForMail(next);
+    expect(confirm.subject).toBe(esMail.auth.changeEmail.subject);
+    expect(confirm.text).toContain(`en lugar de ${p!.email}.`);
+    expect(confirm.text).not.toMatch(/You asked to use this address/);
+    const notice = await waitForMail(p!.email, /cambiar/);
+    expect(notice.subject).toBe(esMail.auth.changeNotice.subject);
+    expect(notice.text).toContain(`cambiar su dirección de correo a ${next}.`);
+    expect(notice.text).not.toMatch(/Someone signed in/);
   });
 });

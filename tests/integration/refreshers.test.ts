@@ -11,10 +11,11 @@ import { db, pool } from "@/db/client";
 import { certificate, materialChange, questionVersion, quizAttemptItem, refresherCompletion } from "@/db/schema";
 import { syncCatalog } from "@/lib/catalog";
 import { refresherCountFor } from "@/lib/refreshers";
+import { sendManagerDigests } from "@/lib/team/reminders";
 import { loadCatalogFrom, type Catalog } from "@/lib/content/load";
 import type { Question } from "@/lib/content/schema";
 import { clientOf, completedWithCertificate, completion, daysFromNow, fixtureOrg, fixturePerson, gradedAttempt, type FixturePerson } from "../helpers/fixtures";
-import { getJson, postJson, type Client } from "../helpers/http";
+import { getJson, postJson, waitForMail, type Client } from "../helpers/http";
 import { rightAnswer, wrongAnswer } from "../helpers/quiz";
 
 const MODULE = "freeze-protection";
@@ -42,6 +43,7 @@ let org: { id: string; teams: Record<string, string> };
 let before: FixturePerson, never: FixturePerson, after: FixturePerson;
 let mgr: Client, beforeClient: Client, neverClient: Client, afterClient: Client;
 let oldAttemptId = "";
+let managerEmail = "";
 let oldVersionId = 0;
 /** the question of the earlier attempt's first item: edited too, so its version changes under the attempt */
 let drawnId = "";
@@ -49,6 +51,7 @@ let drawnId = "";
 beforeAll(async () => {
   org = await fixtureOrg("Refresher Co", { teams: ["Crew"] });
   const manager = await fixturePerson(org, { name: "Mira Manager", role: "manager" });
+  managerEmail = manager.email;
   before = await fixturePerson(org, { name: "Bram Before", teamId: org.teams.Crew! });
   never = await fixturePerson(org, { name: "Nell Never", teamId: org.teams.Crew! });
   after = await fixturePerson(org, { name: "Ada After", teamId: org.teams.Crew! });
@@ -115,6 +118,13 @@ describe("a material change", () => {
     expect(await refresherCountFor(org.id)).toBe(1); // the managers' weekly digest line
   });
 
+  it("reaches the managers' weekly digest", async () => {
+    // a week of its own, far from the weeks the reminder tests claim
+    await sendManagerDigests({ now: daysFromNow(7 * 40) });
+    const digest = await waitForMail(managerEmail, /^Weekly training summary for Refresher Co/);
+    expect(digest.text).toContain("People with a refresher due after a lesson changed: 1\n");
+  });
+
   it("shows on the home page, on the changed lesson, on the board and in the CSV", async () => {
     // what the page shows, without the scripts (they carry the message catalogs, "Refresher due" included)
     const shown = async (c: typeof beforeClient, url: string) => (await (await c.fetch(url)).text()).replace(/<script\b[\s\S]*?<\/script>/g, "");
@@ -124,6 +134,9 @@ describe("a material change", () => {
     expect(await shown(afterClient, "/learn")).not.toContain("Refresher due");
     const lesson = await (await beforeClient.fetch(`/modules/${MODULE}/${LESSON}`)).text();
     expect(lesson).toContain("Changed since you completed it");
+    // the change itself is highlighted at the top of the lesson
+    expect(lesson).toMatch(new RegExp(`data-testid="lesson-change"[^>]*>[\\s\\S]*?<mark[^>]*>${LESSON_CHANGE.replace(/[()]/g, "\\$&")}</mark>`));
+    expect(await (await afterClient.fetch(`/modules/${MODULE}/${LESSON}`)).text()).not.toContain('data-testid="lesson-change"');
     const board = await getJson<{ rows: { name: string; cells: Record<string, { refresherDue: boolean }> }[] }>(mgr, `/api/team/board?module=${MODULE}&pageSize=50`);
     const flags = Object.fromEntries(board.body.rows.map((r) => [r.name, r.cells[MODULE]?.refresherDue]));
     expect([flags["Bram Before"], flags["Nell Never"], flags["Ada After"]]).toEqual([true, false, false]);

@@ -10,6 +10,10 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { assignment, auditLog, invitation, user } from "@/db/schema";
 import { sendDueReminders } from "@/lib/team/reminders";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import Papa from "papaparse";
+import YAML from "yaml";
 import { anonymous, linkIn, postJson, uniqueEmail, waitForMail, type Client } from "../helpers/http";
 import { clientOf, daysFromNow, fixtureOrg, fixturePerson, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
 
@@ -113,5 +117,30 @@ describe("reminders", () => {
     expect(en.text).toContain(`${MONTHS[due.getUTCMonth()]} ${due.getUTCDate()}, ${due.getUTCFullYear()}`);
     expect(en.text).toContain("This training assigned to you is past its due date:");
     expect(en.text).toContain("/modules/freeze-protection\n");
+  });
+});
+
+describe("the board CSV", () => {
+  // headers in the downloader's language: the Spanish team catalog and the Spanish module title as
+  // written (messages/es/team.json, content/es/modules/freeze-protection/module.yaml)
+  const esTeam = JSON.parse(readFileSync(path.join(process.cwd(), "messages/es/team.json"), "utf8")) as { csv: Record<string, string> };
+  const esTitle = (YAML.parse(readFileSync(path.join(process.cwd(), "content/es/modules/freeze-protection/module.yaml"), "utf8")) as { title: string }).title;
+  const header = async (c: Client) => {
+    const res = await c.fetch("/api/team/board.csv?module=freeze-protection");
+    expect(res.status).toBe(200);
+    return Papa.parse<string[]>((await res.text()).replace(/^\uFEFF/, "").trim()).data[0]!;
+  };
+
+  it("has English headers for an English manager and Spanish ones for a Spanish manager", async () => {
+    expect(await header(mgr)).toEqual(["Name", "E-mail", "Team", "Freeze protection", "Freeze protection: completed", "Freeze protection: score", "Freeze protection: certificate", "Freeze protection: due", "Modules passed", "Overdue", "Next due", "Language"]);
+    const spanish = await fixturePerson(org, { name: "Evaristo Quillon", role: "manager" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, spanish.id));
+    const c = esTeam.csv;
+    expect(await header(await clientOf(spanish.id))).toEqual([
+      c.name, c.email, c.team, esTitle,
+      `${esTitle}: completado`, `${esTitle}: puntaje`, `${esTitle}: certificado`, `${esTitle}: fecha límite`,
+      c.passed, c.overdue, c.nextDue, c.language,
+    ]);
+    expect(esTitle).not.toBe("Freeze protection");
   });
 });

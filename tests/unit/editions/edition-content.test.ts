@@ -40,6 +40,27 @@ describe("editionsOf", () => {
   });
 });
 
+describe("where the content marks edition differences", () => {
+  // The five places the accuracy review found edition differences, each with the passage that says
+  // which editions its statement was checked against (in English and in its Spanish twin).
+  const places = {
+    "omitted spaces": "modules/layouts-and-special-spaces/spaces-without-sprinklers.mdx",
+    antifreeze: "modules/freeze-protection/antifreeze-limits.mdx",
+    alarms: "modules/how-systems-work/from-water-service-to-sprinkler.mdx",
+    "the 5 gpm allowance": "modules/how-systems-work/stand-alone-and-multipurpose.mdx",
+    "support spacing": "modules/pipe-and-joining/chemical-compatibility-and-support.mdx",
+  };
+  for (const [topic, file] of Object.entries(places)) {
+    it(`${topic}: the same edition passages in ${file} and its Spanish twin`, () => {
+      const en = editionTags(readFileSync(path.join(root, file), "utf8")).map((t) => t.spec);
+      const es = editionTags(readFileSync(path.join(root, "es", file), "utf8")).map((t) => t.spec);
+      expect(en.length).toBeGreaterThan(0);
+      expect(es).toEqual(en);
+      for (const spec of en) expect(editionsOf(spec)).toHaveProperty("editions");
+    });
+  }
+});
+
 describe("questions for an edition", () => {
   const fp = catalog.modules.find((m) => m.slug === "freeze-protection")!;
   const limited = fp.questions.filter((q) => q.editions);
