@@ -149,3 +149,15 @@ GROUP BY c.organization_id, c.team_id`);
     expired: Number(r.expired),
   }));
 }
+
+/**
+ * Catalog-sync step: a module whose validity changed re-derives its cells' expiry (the generated
+ * column follows validity_months); lessons retired by this sync no longer count, so the cells are
+ * rebuilt from their sources (rare: a content release that drops lessons).
+ */
+export async function syncBoardCells(_catalog: unknown, now: Date): Promise<Record<string, never>> {
+  await db.execute(sql`UPDATE board_cell c JOIN catalog_module m ON m.slug = c.module_slug SET c.validity_months = m.validity_months WHERE c.validity_months <> m.validity_months`);
+  const [r] = await rows<{ n: number | string }>(sql`SELECT COUNT(*) AS n FROM catalog_lesson WHERE retired_at = ${now}`);
+  if (Number(r?.n ?? 0) > 0) await db.execute(sql`CALL board_rebuild(NULL, NULL)`);
+  return {};
+}
