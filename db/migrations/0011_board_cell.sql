@@ -109,12 +109,21 @@ END;
 CREATE TRIGGER `board_attempt_au` AFTER UPDATE ON `quiz_attempt` FOR EACH ROW
 BEGIN
   IF @riser_board_bulk IS NULL AND NOT (OLD.status <=> NEW.status AND OLD.score <=> NEW.score AND OLD.passed <=> NEW.passed AND OLD.submitted_at <=> NEW.submitted_at AND OLD.organization_id <=> NEW.organization_id) THEN
-    UPDATE board_cell c JOIN user u ON u.id = c.user_id
-      SET c.attempts = (SELECT COUNT(*) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id),
-        c.best_score = (SELECT MAX(a.score) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id),
-        c.last_graded_at = (SELECT MAX(a.submitted_at) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id AND a.status = 'graded'),
-        c.last_pass_at = (SELECT MAX(a.submitted_at) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id AND a.status = 'graded' AND a.passed = 1)
-      WHERE c.user_id = NEW.user_id AND c.module_slug = NEW.module_slug;
+    IF OLD.organization_id <=> NEW.organization_id AND OLD.module_slug <=> NEW.module_slug AND OLD.status <> 'graded' THEN
+      -- grading (each attempt is graded once): the maxima only grow, no other row is read
+      UPDATE board_cell c JOIN user u ON u.id = c.user_id AND u.organization_id <=> NEW.organization_id
+        SET c.best_score = COALESCE(GREATEST(c.best_score, NEW.score), c.best_score, NEW.score),
+          c.last_graded_at = IF(NEW.status = 'graded', COALESCE(GREATEST(c.last_graded_at, NEW.submitted_at), c.last_graded_at, NEW.submitted_at), c.last_graded_at),
+          c.last_pass_at = IF(NEW.status = 'graded' AND NEW.passed = 1, COALESCE(GREATEST(c.last_pass_at, NEW.submitted_at), c.last_pass_at, NEW.submitted_at), c.last_pass_at)
+        WHERE c.user_id = NEW.user_id AND c.module_slug = NEW.module_slug;
+    ELSE
+      UPDATE board_cell c JOIN user u ON u.id = c.user_id
+        SET c.attempts = (SELECT COUNT(*) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id),
+          c.best_score = (SELECT MAX(a.score) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id),
+          c.last_graded_at = (SELECT MAX(a.submitted_at) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id AND a.status = 'graded'),
+          c.last_pass_at = (SELECT MAX(a.submitted_at) FROM quiz_attempt a WHERE a.user_id = c.user_id AND a.module_slug = c.module_slug AND a.organization_id <=> u.organization_id AND a.status = 'graded' AND a.passed = 1)
+        WHERE (c.user_id = NEW.user_id AND c.module_slug = NEW.module_slug) OR (c.user_id = OLD.user_id AND c.module_slug = OLD.module_slug);
+    END IF;
   END IF;
 END;
 --> statement-breakpoint
