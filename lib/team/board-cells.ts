@@ -104,10 +104,16 @@ export async function cellFacts(people: { id: string; organizationId: string }[]
   const out = new Map<string, Map<string, CellFacts>>();
   if (people.length === 0) return out;
   const orgOf = new Map(people.map((p) => [p.id, p.organizationId]));
-  const found = await rows<CellRow>(sql`
+  const found: CellRow[] = [];
+  for (let i = 0; i < people.length; i += 5000) {
+    const ids = people.slice(i, i + 5000).map((p) => p.id);
+    found.push(
+      ...(await rows<CellRow>(sql`
 SELECT c.user_id, c.module_slug, c.organization_id, c.lessons_done, c.attempts, c.best_score, c.last_graded_at, c.last_pass_at,
   c.completed_at, c.certificates, c.valid_until, c.due_at
-FROM board_cell c WHERE c.user_id IN (${list(people.map((p) => p.id))}) ${only ? sql`AND c.module_slug = ${only}` : sql``}`);
+FROM board_cell c WHERE c.user_id IN (${list(ids)}) ${only ? sql`AND c.module_slug = ${only}` : sql``}`)),
+    );
+  }
   for (const r of found) {
     if (r.organization_id !== orgOf.get(r.user_id)) continue; // read across a move: the trigger rebuilds it
     let m = out.get(r.user_id);

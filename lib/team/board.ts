@@ -13,12 +13,12 @@ import { cellFacts, countWithStatus, hasStatusSql } from "./board-cells";
 /**
  * The team board: people × modules with one status per cell (rule: lib/team/status.ts).
  *
- * Each source is aggregated per person × module in SQL with one plain GROUP BY over an indexed
- * join (lesson progress, attempts, completions, certificates); assignments are read raw (a small
- * table) and matched to people through their *current* team, so someone who joins a team later
- * inherits its assignments without any copy. Pages are cut from the people first: with no status
- * or due filter and a name or team sort only the page's people are aggregated; otherwise the
- * scope is aggregated once, filtered and sorted, and the page cut from that.
+ * Board pages, status filters, the summary and the export read the stored cells (board_cell,
+ * kept by triggers; ./board-cells.ts): pages are cut from the people in SQL (a status filter is a
+ * condition there), then the page's cells are read in one query. Due-date filters and aggregate
+ * sorts read the scope's cells and sort here. factsFor below reads the sources directly (the
+ * person page and reminders); assignments count through the person's *current* team, so someone
+ * who joins a team later inherits its assignments without any copy.
  */
 
 
@@ -377,15 +377,15 @@ function compareStandings(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefi
 }
 
 /**
- * Every matching person in board order (status or due filters, aggregate sorts). The scope is
- * aggregated once; lesson rows (the largest source) are read for a scope of up to a few hundred
- * people (a team) or when the filter needs them, otherwise only for the page that is shown.
+ * Every matching person in board order (due filters, aggregate sorts): the status filter is a
+ * condition in SQL, the stored cells (board_cell) of the matching people are read once and
+ * sorted here. Team totals and status-filtered pages in name order never come here.
  */
 export async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Date): Promise<{ list: Standing[]; complete: boolean; modules: ModuleInfo[] }> {
   const filter = filterOf(scope, f, now);
   const { people } = await listPeople(filter, sql``);
   const modules = boardModules(f.module);
-  const lessons = true;
+  const lessons = true; // the stored cells carry the lesson counts
   const facts = await cellFacts(people, f.module);
   const dueBefore = f.dueBefore ? new Date(`${f.dueBefore}T23:59:59.999Z`).getTime() : null;
   const list: Standing[] = [];
