@@ -31,45 +31,114 @@ CREATE OR REPLACE VIEW `board_item_module` AS
 --> statement-breakpoint
 CREATE PROCEDURE `board_rebuild`(IN p_org VARCHAR(36), IN p_user VARCHAR(36))
 BEGIN
-  DELETE FROM board_cell WHERE (p_user IS NOT NULL AND user_id = p_user) OR (p_user IS NULL AND (p_org IS NULL OR organization_id = p_org));
-  INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, lessons_done, attempts, best_score, last_graded_at, last_pass_at, completed_at, certificates, valid_until, due_at)
-  SELECT f.user_id, f.module_slug, MAX(f.org), MAX(f.team), SUM(f.lessons), SUM(f.attempts), MAX(f.score), MAX(f.graded), MAX(f.pass), MAX(f.completed), SUM(f.certs), MAX(f.valid), MIN(f.due)
-  FROM (
-    SELECT u.id AS user_id, cm.slug AS module_slug, u.organization_id AS org, u.team_id AS team, 1 AS lessons, 0 AS attempts, NULL AS score, NULL AS graded, NULL AS pass, NULL AS completed, 0 AS certs, NULL AS valid, NULL AS due
-      FROM user u JOIN lesson_progress lp ON lp.user_id = u.id JOIN catalog_lesson cl ON cl.id = lp.lesson_id AND cl.retired_at IS NULL JOIN catalog_module cm ON cm.id = cl.module_id
-      WHERE (p_user IS NULL OR u.id = p_user) AND (p_org IS NULL OR u.organization_id = p_org)
-    UNION ALL
-    SELECT u.id, a.module_slug, u.organization_id, u.team_id, 0, 1, a.score, IF(a.status = 'graded', a.submitted_at, NULL), IF(a.status = 'graded' AND a.passed = 1, a.submitted_at, NULL), NULL, 0, NULL, NULL
-      FROM user u JOIN quiz_attempt a ON a.user_id = u.id AND a.organization_id <=> u.organization_id
-      WHERE (p_user IS NULL OR u.id = p_user) AND (p_org IS NULL OR u.organization_id = p_org)
-    UNION ALL
-    SELECT u.id, c.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, c.completed_at, 0, NULL, NULL
-      FROM user u JOIN module_completion c ON c.user_id = u.id
-      WHERE (p_user IS NULL OR u.id = p_user) AND (p_org IS NULL OR u.organization_id = p_org)
-    UNION ALL
-    SELECT u.id, c.subject_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 1, IF(c.revoked_at IS NULL, c.expires_at, NULL), NULL
-      FROM user u JOIN certificate c ON c.user_id = u.id AND c.kind = 'module' AND c.organization_id <=> u.organization_id
-      WHERE (p_user IS NULL OR u.id = p_user) AND (p_org IS NULL OR u.organization_id = p_org)
-    UNION ALL
-    SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
-      FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-      JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
-      WHERE (p_user IS NULL OR u.id = p_user) AND (p_org IS NULL OR u.organization_id = p_org)
-  ) f
-  GROUP BY f.user_id, f.module_slug;
+  -- one person, one organization, or everyone; each branch names its own condition so that the
+  -- optimizer sees a plain equality (an "x IS NULL OR" on a parameter would scan every table)
+  IF p_user IS NOT NULL THEN
+    DELETE FROM board_cell WHERE user_id = p_user;
+    INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, lessons_done, attempts, best_score, last_graded_at, last_pass_at, completed_at, certificates, valid_until, due_at)
+    SELECT f.user_id, f.module_slug, MAX(f.org), MAX(f.team), SUM(f.lessons), SUM(f.attempts), MAX(f.score), MAX(f.graded), MAX(f.pass), MAX(f.completed), SUM(f.certs), MAX(f.valid), MIN(f.due)
+    FROM (
+      SELECT u.id AS user_id, cm.slug AS module_slug, u.organization_id AS org, u.team_id AS team, 1 AS lessons, 0 AS attempts, NULL AS score, NULL AS graded, NULL AS pass, NULL AS completed, 0 AS certs, NULL AS valid, NULL AS due
+        FROM user u JOIN lesson_progress lp ON lp.user_id = u.id JOIN catalog_lesson cl ON cl.id = lp.lesson_id AND cl.retired_at IS NULL JOIN catalog_module cm ON cm.id = cl.module_id
+        WHERE u.id = p_user
+      UNION ALL
+      SELECT u.id, a.module_slug, u.organization_id, u.team_id, 0, 1, a.score, IF(a.status = 'graded', a.submitted_at, NULL), IF(a.status = 'graded' AND a.passed = 1, a.submitted_at, NULL), NULL, 0, NULL, NULL
+        FROM user u JOIN quiz_attempt a ON a.user_id = u.id AND a.organization_id <=> u.organization_id
+        WHERE u.id = p_user
+      UNION ALL
+      SELECT u.id, c.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, c.completed_at, 0, NULL, NULL
+        FROM user u JOIN module_completion c ON c.user_id = u.id
+        WHERE u.id = p_user
+      UNION ALL
+      SELECT u.id, c.subject_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 1, IF(c.revoked_at IS NULL, c.expires_at, NULL), NULL
+        FROM user u JOIN certificate c ON c.user_id = u.id AND c.kind = 'module' AND c.organization_id <=> u.organization_id
+        WHERE u.id = p_user
+      UNION ALL
+      SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
+        FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
+        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        WHERE u.id = p_user
+    ) f
+    GROUP BY f.user_id, f.module_slug;
+  ELSEIF p_org IS NOT NULL THEN
+    DELETE FROM board_cell WHERE organization_id = p_org;
+    INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, lessons_done, attempts, best_score, last_graded_at, last_pass_at, completed_at, certificates, valid_until, due_at)
+    SELECT f.user_id, f.module_slug, MAX(f.org), MAX(f.team), SUM(f.lessons), SUM(f.attempts), MAX(f.score), MAX(f.graded), MAX(f.pass), MAX(f.completed), SUM(f.certs), MAX(f.valid), MIN(f.due)
+    FROM (
+      SELECT u.id AS user_id, cm.slug AS module_slug, u.organization_id AS org, u.team_id AS team, 1 AS lessons, 0 AS attempts, NULL AS score, NULL AS graded, NULL AS pass, NULL AS completed, 0 AS certs, NULL AS valid, NULL AS due
+        FROM user u JOIN lesson_progress lp ON lp.user_id = u.id JOIN catalog_lesson cl ON cl.id = lp.lesson_id AND cl.retired_at IS NULL JOIN catalog_module cm ON cm.id = cl.module_id
+        WHERE u.organization_id = p_org
+      UNION ALL
+      SELECT u.id, a.module_slug, u.organization_id, u.team_id, 0, 1, a.score, IF(a.status = 'graded', a.submitted_at, NULL), IF(a.status = 'graded' AND a.passed = 1, a.submitted_at, NULL), NULL, 0, NULL, NULL
+        FROM user u JOIN quiz_attempt a ON a.user_id = u.id AND a.organization_id <=> u.organization_id
+        WHERE u.organization_id = p_org
+      UNION ALL
+      SELECT u.id, c.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, c.completed_at, 0, NULL, NULL
+        FROM user u JOIN module_completion c ON c.user_id = u.id
+        WHERE u.organization_id = p_org
+      UNION ALL
+      SELECT u.id, c.subject_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 1, IF(c.revoked_at IS NULL, c.expires_at, NULL), NULL
+        FROM user u JOIN certificate c ON c.user_id = u.id AND c.kind = 'module' AND c.organization_id <=> u.organization_id
+        WHERE u.organization_id = p_org
+      UNION ALL
+      SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
+        FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
+        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        WHERE u.organization_id = p_org
+    ) f
+    GROUP BY f.user_id, f.module_slug;
+  ELSE
+    DELETE FROM board_cell;
+    INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, lessons_done, attempts, best_score, last_graded_at, last_pass_at, completed_at, certificates, valid_until, due_at)
+    SELECT f.user_id, f.module_slug, MAX(f.org), MAX(f.team), SUM(f.lessons), SUM(f.attempts), MAX(f.score), MAX(f.graded), MAX(f.pass), MAX(f.completed), SUM(f.certs), MAX(f.valid), MIN(f.due)
+    FROM (
+      SELECT u.id AS user_id, cm.slug AS module_slug, u.organization_id AS org, u.team_id AS team, 1 AS lessons, 0 AS attempts, NULL AS score, NULL AS graded, NULL AS pass, NULL AS completed, 0 AS certs, NULL AS valid, NULL AS due
+        FROM user u JOIN lesson_progress lp ON lp.user_id = u.id JOIN catalog_lesson cl ON cl.id = lp.lesson_id AND cl.retired_at IS NULL JOIN catalog_module cm ON cm.id = cl.module_id
+        WHERE u.organization_id IS NOT NULL
+      UNION ALL
+      SELECT u.id, a.module_slug, u.organization_id, u.team_id, 0, 1, a.score, IF(a.status = 'graded', a.submitted_at, NULL), IF(a.status = 'graded' AND a.passed = 1, a.submitted_at, NULL), NULL, 0, NULL, NULL
+        FROM user u JOIN quiz_attempt a ON a.user_id = u.id AND a.organization_id <=> u.organization_id
+        WHERE u.organization_id IS NOT NULL
+      UNION ALL
+      SELECT u.id, c.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, c.completed_at, 0, NULL, NULL
+        FROM user u JOIN module_completion c ON c.user_id = u.id
+        WHERE u.organization_id IS NOT NULL
+      UNION ALL
+      SELECT u.id, c.subject_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 1, IF(c.revoked_at IS NULL, c.expires_at, NULL), NULL
+        FROM user u JOIN certificate c ON c.user_id = u.id AND c.kind = 'module' AND c.organization_id <=> u.organization_id
+        WHERE u.organization_id IS NOT NULL
+      UNION ALL
+      SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
+        FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
+        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        WHERE u.organization_id IS NOT NULL
+    ) f
+    GROUP BY f.user_id, f.module_slug;
+  END IF;
 END;
 --> statement-breakpoint
 CREATE PROCEDURE `board_due_refresh`(IN p_user VARCHAR(36), IN p_team VARCHAR(36))
 BEGIN
-  UPDATE board_cell c JOIN user u ON u.id = c.user_id SET c.due_at = NULL
-    WHERE (p_user IS NOT NULL AND u.id = p_user) OR (p_team IS NOT NULL AND u.team_id = p_team);
-  INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
-  SELECT u.id, m.module_slug, MAX(u.organization_id), MAX(u.team_id), MIN(a.due_at)
-    FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-    JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
-    WHERE (p_user IS NOT NULL AND u.id = p_user) OR (p_team IS NOT NULL AND u.team_id = p_team)
-    GROUP BY u.id, m.module_slug
-  ON DUPLICATE KEY UPDATE due_at = VALUES(due_at);
+  IF p_user IS NOT NULL THEN
+    UPDATE board_cell c JOIN user u ON u.id = c.user_id SET c.due_at = NULL WHERE u.id = p_user;
+    INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
+    SELECT u.id, m.module_slug, MAX(u.organization_id), MAX(u.team_id), MIN(a.due_at)
+      FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
+      JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+      WHERE u.id = p_user
+      GROUP BY u.id, m.module_slug
+    ON DUPLICATE KEY UPDATE due_at = VALUES(due_at);
+  END IF;
+  IF p_team IS NOT NULL THEN
+    UPDATE board_cell c JOIN user u ON u.id = c.user_id SET c.due_at = NULL WHERE u.team_id = p_team;
+    INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
+    SELECT u.id, m.module_slug, MAX(u.organization_id), MAX(u.team_id), MIN(a.due_at)
+      FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
+      JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+      WHERE u.team_id = p_team
+      GROUP BY u.id, m.module_slug
+    ON DUPLICATE KEY UPDATE due_at = VALUES(due_at);
+  END IF;
 END;
 --> statement-breakpoint
 CREATE TRIGGER `board_progress_ai` AFTER INSERT ON `lesson_progress` FOR EACH ROW
