@@ -24,11 +24,6 @@ CREATE INDEX `board_cell_org_due_idx` ON `board_cell` (`organization_id`,`due_at
 CREATE TRIGGER `board_cell_bi` BEFORE INSERT ON `board_cell` FOR EACH ROW
 SET NEW.validity_months = COALESCE((SELECT m.validity_months FROM catalog_module m WHERE m.slug = NEW.module_slug), 0);
 --> statement-breakpoint
-CREATE OR REPLACE VIEW `board_item_module` AS
-  SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm
-  UNION ALL
-  SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL;
---> statement-breakpoint
 CREATE PROCEDURE `board_rebuild`(IN p_org VARCHAR(36), IN p_user VARCHAR(36))
 BEGIN
   -- one person, one organization, or everyone; each branch names its own condition so that the
@@ -56,7 +51,7 @@ BEGIN
       UNION ALL
       SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
         FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = a.kind AND m.target_slug = a.target_slug
         WHERE u.id = p_user
     ) f
     GROUP BY f.user_id, f.module_slug;
@@ -83,7 +78,7 @@ BEGIN
       UNION ALL
       SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
         FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = a.kind AND m.target_slug = a.target_slug
         WHERE u.organization_id = p_org
     ) f
     GROUP BY f.user_id, f.module_slug;
@@ -110,7 +105,7 @@ BEGIN
       UNION ALL
       SELECT u.id, m.module_slug, u.organization_id, u.team_id, 0, 0, NULL, NULL, NULL, NULL, 0, NULL, a.due_at
         FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-        JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+        JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = a.kind AND m.target_slug = a.target_slug
         WHERE u.organization_id IS NOT NULL
     ) f
     GROUP BY f.user_id, f.module_slug;
@@ -124,7 +119,7 @@ BEGIN
     INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
     SELECT u.id, m.module_slug, MAX(u.organization_id), MAX(u.team_id), MIN(a.due_at)
       FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-      JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+      JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = a.kind AND m.target_slug = a.target_slug
       WHERE u.id = p_user
       GROUP BY u.id, m.module_slug
     ON DUPLICATE KEY UPDATE due_at = VALUES(due_at);
@@ -134,7 +129,7 @@ BEGIN
     INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
     SELECT u.id, m.module_slug, MAX(u.organization_id), MAX(u.team_id), MIN(a.due_at)
       FROM user u JOIN assignment a ON a.organization_id = u.organization_id AND (a.user_id = u.id OR a.team_id = u.team_id)
-      JOIN board_item_module m ON m.kind = a.kind AND m.target_slug = a.target_slug
+      JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = a.kind AND m.target_slug = a.target_slug
       WHERE u.team_id = p_team
       GROUP BY u.id, m.module_slug
     ON DUPLICATE KEY UPDATE due_at = VALUES(due_at);
@@ -261,7 +256,7 @@ BEGIN
   IF @riser_board_bulk IS NULL THEN
     INSERT INTO board_cell (user_id, module_slug, organization_id, team_id, due_at)
     SELECT u.id, m.module_slug, u.organization_id, u.team_id, NEW.due_at
-      FROM user u JOIN board_item_module m ON m.kind = NEW.kind AND m.target_slug = NEW.target_slug
+      FROM user u JOIN (SELECT CAST('module' AS CHAR(10) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci AS kind, cm.slug AS target_slug, cm.slug AS module_slug FROM catalog_module cm UNION ALL SELECT 'path', p.slug, CAST(j.slug AS CHAR(80) CHARACTER SET utf8mb4) COLLATE utf8mb4_unicode_ci FROM catalog_path p, JSON_TABLE(p.module_slugs, '$[*]' COLUMNS (slug VARCHAR(80) CHARACTER SET utf8mb4 PATH '$')) j WHERE p.retired_at IS NULL) m ON m.kind = NEW.kind AND m.target_slug = NEW.target_slug
       WHERE u.organization_id = NEW.organization_id AND ((NEW.user_id IS NOT NULL AND u.id = NEW.user_id) OR (NEW.team_id IS NOT NULL AND u.team_id = NEW.team_id))
     ON DUPLICATE KEY UPDATE due_at = COALESCE(LEAST(due_at, VALUES(due_at)), VALUES(due_at));
   END IF;

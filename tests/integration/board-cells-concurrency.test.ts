@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { sql } from "drizzle-orm";
 import { cellStatus, isDone, NO_FACTS, type CellFacts } from "@/lib/team/status";
-import { postJson, getJson, type Client } from "../helpers/http";
+import { postJson, getJson, uniqueEmail, type Client } from "../helpers/http";
 import { clientOf, daysFromNow, fixtureOrg, fixturePerson, readAndComplete, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
 
 type Cell = { status: string; dueAt: string | null; lessonsDone: number; attempts: number; bestScore: number | null; completedAt: string | null; expiresAt: string | null };
@@ -84,11 +84,14 @@ beforeAll(async () => {
   managerId = manager.id;
   mgr = await clientOf(manager.id);
   const names = ["Ada Racewell", "Bo Racewell", "Cy Racewell", "Di Racewell", "Ed Racewell", "Flo Racewell"];
-  for (const [i, name] of names.entries()) people.push(await fixturePerson(org, { name, teamId: i < 3 ? org.teams["Loft crew"]! : i < 5 ? org.teams["Cellar crew"]! : null }));
+  for (const [i, name] of names.entries()) people.push(await fixturePerson(org, { name, email: uniqueEmail(`race${i}`), teamId: i < 3 ? org.teams["Loft crew"]! : i < 5 ? org.teams["Cellar crew"]! : null }));
 }, 120_000);
 afterAll(() => pool.end());
 
 /** The reference: facts per person × module straight from the sources, the status by lib/team/status.ts. */
+/** A DATETIME as the driver hands it (a Date, or a string in UTC) → Date. */
+const toDate = (v: unknown): Date | null => (v === null || v === undefined ? null : v instanceof Date ? v : new Date(`${String(v).replace(" ", "T")}${/Z$/.test(String(v)) ? "" : "Z"}`));
+
 async function reference(now: Date) {
   const ids = (await q<{ id: string; organization_id: string; team_id: string | null }>(sql`SELECT id, organization_id, team_id FROM user WHERE organization_id = ${org.id}`));
   const modules = await q<{ slug: string; validity_months: number }>(sql`SELECT slug, validity_months FROM catalog_module WHERE retired_at IS NULL`);
@@ -104,8 +107,8 @@ async function reference(now: Date) {
       const certs = await q<{ expires_at: Date; revoked_at: Date | null }>(sql`SELECT expires_at, revoked_at FROM certificate WHERE user_id = ${u.id} AND kind = 'module' AND subject_slug = ${m.slug} AND organization_id = ${u.organization_id}`);
       const asg = await q<{ kind: string; target_slug: string; due_at: Date }>(sql`SELECT kind, target_slug, due_at FROM assignment WHERE organization_id = ${u.organization_id} AND (user_id = ${u.id} OR (team_id IS NOT NULL AND team_id <=> ${u.team_id}))`);
       const graded = att.filter((a) => a.status === "graded" && a.submitted_at);
-      const max = (xs: (Date | null)[]) => xs.filter((x): x is Date => x !== null).reduce<Date | null>((a, b) => (!a || b > a ? b : a), null);
-      const dues = asg.filter((a) => (a.kind === "module" ? a.target_slug === m.slug : (pathModules.get(a.target_slug) ?? []).includes(m.slug))).map((a) => a.due_at);
+      const max = (xs: unknown[]) => xs.map(toDate).filter((x): x is Date => x !== null).reduce<Date | null>((a, b) => (!a || b > a ? b : a), null);
+      const dues = asg.filter((a) => (a.kind === "module" ? a.target_slug === m.slug : (pathModules.get(a.target_slug) ?? []).includes(m.slug))).map((a) => toDate(a.due_at)!);
       const scores = att.map((a) => a.score).filter((s): s is number => s !== null);
       cells.set(m.slug, {
         ...NO_FACTS,
@@ -114,7 +117,7 @@ async function reference(now: Date) {
         bestScore: scores.length ? Math.max(...scores) : null,
         lastGradedAt: max(graded.map((a) => a.submitted_at)),
         lastPassAt: max(graded.filter((a) => Number(a.passed) === 1).map((a) => a.submitted_at)),
-        completedAt: co?.at ?? null,
+        completedAt: toDate(co?.at),
         certificates: certs.length,
         validUntil: max(certs.filter((c) => !c.revoked_at).map((c) => c.expires_at)),
         dueAt: dues.length ? dues.reduce((a, b) => (b < a ? b : a)) : null,
