@@ -71,9 +71,10 @@ if (tb) {
 }
 for (const big of [read("team-board-50k")].filter(Boolean) as Json[]) {
   const n = `${big.data.learners.toLocaleString("en-US")} learners in ${big.data.teams} teams`;
-  for (const [what, m] of [["first page", big.firstPage], ["organization-wide status filter", big.orgWideStatusFilter], ["deep page", big.deepPage], ["team summary", big.teamSummary]] as [string, Json][]) {
-    rows.push({ what: `team board, ${n}: ${what}`, figure: `p50 ${m.p50.toFixed(0)} ms, p95 ${m.p95.toFixed(0)} ms`, target: "p95 ≤ 300 ms", met: m.p95 <= 300, ratio: "—" });
+  for (const [what, m] of [["first page", big.firstPage], ["one crew, status filter", big.filteredPage], ["organization-wide status filter", big.orgWideStatusFilter], ["deep page", big.deepPage], ["team summary", big.teamSummary]] as [string, Json][]) {
+    if (m) rows.push({ what: `team board, ${n}: ${what}`, figure: `p50 ${m.p50.toFixed(0)} ms, p95 ${m.p95.toFixed(0)} ms${older(big)}`, target: "p95 ≤ 300 ms", met: m.p95 <= 300, ratio: "—" });
   }
+  if (big.export) rows.push({ what: `team board CSV export, ${n}, all rows`, figure: `median ${(big.export.medianMs / 1000).toFixed(2)} s${older(big)}`, target: "< 3 s", met: big.export.medianMs < 3000, ratio: "—" });
 }
 const js = read("lesson-js");
 if (js) {

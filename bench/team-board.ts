@@ -1,10 +1,13 @@
 // Team board at scale, through the API of a running `next start`: 5,000 learners in 20 teams
 // (scripts/seed/seed-scale.ts, seeded here when missing) with lessons, attempts, completions and
-// certificates across all nine modules. Measures, sequentially after a warm-up:
-//   - the board's first page (GET /api/team/board, 25 people, name order)        target p95 < 150 ms
-//   - a filtered page (one crew, status "overdue")                               target p95 < 150 ms
-//   - for information: an organization-wide status filter and a deep page
+// certificates across every module. Measures, sequentially after a warm-up:
+//   - the board's first page (GET /api/team/board, 25 people, name order)        target p95 ≤ 150 ms
+//   - a filtered page (one crew, status "overdue")                               target p95 ≤ 150 ms
+//   - an organization-wide status filter ("overdue") and a deep page (150)       target p95 ≤ 150 ms
+//   - the team summary (GET /api/team/summary)                                   target p95 ≤ 150 ms
 //   - the CSV export of all 5,001 rows (GET /api/team/board.csv)                target < 3 s
+// At 50,000 learners the page targets are p95 ≤ 300 ms. The queries are served by board_cell
+// (DEVELOPERS.md "Team board: stored cells").
 // BENCH_LEARNERS=50000 BENCH_TEAMS=200 seeds that size instead (replacing the 5,000) and writes
 // bench/results/team-board-50k.json.
 // Run: npm run bench -- team-board (profile test-h), or by hand against a server on any profile:
@@ -72,7 +75,9 @@ const filteredPage = await measure(`/api/team/board?page=1&pageSize=25&team=${cr
 const deepPage = await measure("/api/team/board?page=150&pageSize=25", 30);
 const orgWideStatus = await measure("/api/team/board?page=1&pageSize=25&status=overdue", 30);
 const summaryRuns: number[] = [];
-for (let i = 0; i < 10; i++) summaryRuns.push((await get("/api/team/summary")).ms);
+for (let i = 0; i < 3; i++) await get("/api/team/summary");
+for (let i = 0; i < 30; i++) summaryRuns.push((await get("/api/team/summary")).ms);
+const teamSummary = summary(summaryRuns);
 
 const exports: { ms: number; bytes: number; lines: number }[] = [];
 for (let i = 0; i < 3; i++) {
@@ -82,18 +87,30 @@ for (let i = 0; i < 3; i++) {
 }
 const exportMs = exports.map((e) => e.ms).sort((a, b) => a - b);
 
+const pageLimit = WANT >= 50_000 ? 300 : 150;
+const figures: [string, { p50: number; p95: number }][] = [
+  ["first page", firstPage],
+  ["one crew, status filter", filteredPage],
+  ["organization-wide status filter", orgWideStatus],
+  ["deep page", deepPage],
+  ["team summary", teamSummary],
+];
+console.log(`\nteam board, ${Number(learners[0]!.n).toLocaleString("en-US")} learners in ${teams.teams.length} teams (load ${os.loadavg()[0]!.toFixed(1)} on ${os.cpus().length} cores)`);
+for (const [what, m] of figures) console.log(`  ${what.padEnd(34)} p50 ${m.p50.toFixed(0).padStart(5)} ms  p95 ${m.p95.toFixed(0).padStart(5)} ms   target p95 ≤ ${pageLimit} ms  ${m.p95 <= pageLimit ? "met" : "NOT met"}`);
+console.log(`  ${"CSV export, all rows".padEnd(34)} median ${(exportMs[1]! / 1000).toFixed(2)} s          target < 3 s           ${exportMs[1]! < 3000 ? "met" : "NOT met"}\n`);
+
 record(WANT >= 50_000 ? "team-board-50k" : "team-board", {
   app: APP,
   machine: { cpus: os.cpus().length, loadavg: os.loadavg().map((l) => +l.toFixed(2)) },
   data: { organization: SCALE_ORG, learners: Number(learners[0]!.n), teams: teams.teams.length, modules: 9 },
   runs: RUNS,
-  targets: { boardPageP95Ms: 150, exportMs: 3000 },
+  targets: { boardPageP95Ms: pageLimit, exportMs: 3000 },
   firstPage,
   filteredPage: { ...filteredPage, filter: "team Crew 07 + status overdue" },
   orgWideStatusFilter: { ...orgWideStatus, note: "every person aggregated, then the page is cut" },
   deepPage,
-  teamSummary: summary(summaryRuns),
+  teamSummary,
   export: { runs: exports, medianMs: exportMs[1] },
-  met: { firstPage: firstPage.p95 < 150, filteredPage: filteredPage.p95 < 150, export: exportMs[1]! < 3000 },
+  met: { ...Object.fromEntries(figures.map(([what, m]) => [what, m.p95 <= pageLimit])), export: exportMs[1]! < 3000 },
 });
 await pool.end();

@@ -10,3 +10,4 @@ export * from "./records";
 export * from "./credentials";
 export * from "./ops";
 export * from "./editions";
+export * from "./board";

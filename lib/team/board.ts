@@ -8,16 +8,17 @@ import { loadCatalog, localizedCatalog, subjectTitle, type ContentLocale } from 
 import type { BoardQuery, BoardStatus } from "./schemas";
 import type { OrgScope } from "@/lib/access";
 import { cellStatus, expiryOf, isDone, NO_FACTS, type CellFacts } from "./status";
+import { cellFacts, countWithStatus, hasStatusSql } from "./board-cells";
 
 /**
  * The team board: people × modules with one status per cell (rule: lib/team/status.ts).
  *
- * Each source is aggregated per person × module in SQL with one plain GROUP BY over an indexed
- * join (lesson progress, attempts, completions, certificates); assignments are read raw (a small
- * table) and matched to people through their *current* team, so someone who joins a team later
- * inherits its assignments without any copy. Pages are cut from the people first: with no status
- * or due filter and a name or team sort only the page's people are aggregated; otherwise the
- * scope is aggregated once, filtered and sorted, and the page cut from that.
+ * Board pages, status filters, the summary and the export read the stored cells (board_cell,
+ * kept by triggers; ./board-cells.ts): pages are cut from the people in SQL (a status filter is a
+ * condition there), then the page's cells are read in one query. Due-date filters and aggregate
+ * sorts read the scope's cells and sort here. factsFor below reads the sources directly (the
+ * person page and reminders); assignments count through the person's *current* team, so someone
+ * who joins a team later inherits its assignments without any copy.
  */
 
 
@@ -102,7 +103,7 @@ export function itemTitle(kind: string, slug: string, locale: ContentLocale = "e
  * Who is on the board: every member of the scope's organization(s) (admins belong to none), or
  * explicit ids. Paged in name order through user_org_name_idx.
  */
-type PeopleFilter = { scope: OrgScope; team?: string; q?: string } | { ids: string[] };
+type PeopleFilter = { scope: OrgScope; team?: string; q?: string; where?: SQL; count?: () => Promise<number> } | { ids: string[] };
 
 function peopleWhere(f: PeopleFilter): SQL {
   if ("ids" in f) {
@@ -119,6 +120,7 @@ function peopleWhere(f: PeopleFilter): SQL {
     const like = `%${f.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     parts.push(sql`(u.name LIKE ${like} OR u.email LIKE ${like})`);
   }
+  if (f.where) parts.push(f.where);
   return sql.join(parts, sql` AND `);
 }
 
@@ -150,7 +152,7 @@ FROM user u LEFT JOIN team t ON t.id = u.team_id WHERE ${peopleWhere(f)} ${order
   }
   const [list, count] = await Promise.all([
     rows<PersonRow>(sql`${select} LIMIT ${limit.limit} OFFSET ${limit.offset}`),
-    rows<{ n: number | string }>(sql`SELECT COUNT(*) AS n FROM user u WHERE ${peopleWhere(f)}`),
+    "count" in f && f.count ? f.count().then((n) => [{ n }]) : rows<{ n: number | string }>(sql`SELECT COUNT(*) AS n FROM user u WHERE ${peopleWhere(f)}`),
   ]);
   return { people: list.map(toPerson), total: Number(count[0]?.n ?? 0) };
 }
@@ -312,9 +314,27 @@ export async function rowsFor(people: Person[], now = new Date(), only?: string,
   return people.map((p) => toRow(p, toCells(facts.get(p.id), modules, now)));
 }
 
+/** Board rows for a list of people from the stored cells (board_cell: one query). */
+async function rowsFromCells(people: Person[], now: Date, only?: string): Promise<BoardRow[]> {
+  const modules = boardModules(only);
+  const facts = await cellFacts(people, only);
+  return people.map((p) => toRow(p, toCells(facts.get(p.id), modules, now)));
+}
+
 export type BoardFilter = Pick<BoardQuery, "team" | "status" | "module" | "dueBefore" | "sort" | "dir" | "q">;
 
-const needsAggregate = (f: BoardFilter) => Boolean(f.status || f.dueBefore || f.sort === "progress" || f.sort === "overdue" || f.sort === "due");
+const needsAggregate = (f: BoardFilter) => Boolean(f.dueBefore || f.sort === "progress" || f.sort === "overdue" || f.sort === "due");
+
+/** The people filter of a page or export: a status filter is a condition on the stored cells. */
+function filterOf(scope: OrgScope, f: BoardFilter, now: Date): PeopleFilter {
+  if (!f.status) return { scope, team: f.team, q: f.q };
+  const { status } = f;
+  const modules = boardModules(f.module);
+  const orgId = scope.orgId;
+  // the total through the cells' organization indexes when the filter is the organization or a team
+  const count = orgId && !f.q ? () => countWithStatus(orgId, f.team, status, modules, now) : undefined;
+  return { scope, team: f.team, q: f.q, where: hasStatusSql(status, modules, now), count };
+}
 
 /** A person's standing over the shown modules, without building cells (scope-wide work). */
 type Standing = { person: Person; facts: Map<string, CellFacts> | undefined; statuses: BoardStatus[]; passed: number; overdue: number; nextDue: number | null };
@@ -357,16 +377,16 @@ function compareStandings(sort: BoardQuery["sort"], dir: "asc" | "desc" | undefi
 }
 
 /**
- * Every matching person in board order (status or due filters, aggregate sorts). The scope is
- * aggregated once; lesson rows (the largest source) are read for a scope of up to a few hundred
- * people (a team) or when the filter needs them, otherwise only for the page that is shown.
+ * Every matching person in board order (due filters, aggregate sorts): the status filter is a
+ * condition in SQL, the stored cells (board_cell) of the matching people are read once and
+ * sorted here. Team totals and status-filtered pages in name order never come here.
  */
 export async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Date): Promise<{ list: Standing[]; complete: boolean; modules: ModuleInfo[] }> {
-  const filter: PeopleFilter = { scope, team: f.team, q: f.q };
+  const filter = filterOf(scope, f, now);
   const { people } = await listPeople(filter, sql``);
   const modules = boardModules(f.module);
-  const lessons = people.length <= SMALL_SCOPE || f.status === "in_progress" || f.status === "not_started";
-  const facts = await factsFor(people, filter, f.module, lessons);
+  const lessons = true; // the stored cells carry the lesson counts
+  const facts = await cellFacts(people, f.module);
   const dueBefore = f.dueBefore ? new Date(`${f.dueBefore}T23:59:59.999Z`).getTime() : null;
   const list: Standing[] = [];
   for (const p of people) {
@@ -378,12 +398,10 @@ export async function aggregatedPeople(scope: OrgScope, f: BoardFilter, now: Dat
   return { list: list.sort(compareStandings(f.sort, f.dir)), complete: lessons, modules };
 }
 
-const SMALL_SCOPE = 1000;
-
 /** Full rows for a slice of standings: from the facts in hand, or read again with lessons. */
 async function rowsOfSlice(slice: Standing[], complete: boolean, modules: ModuleInfo[], now: Date, only?: string): Promise<BoardRow[]> {
   if (complete) return slice.map((s) => toRow(s.person, toCells(s.facts, modules, now)));
-  return rowsFor(
+  return rowsFromCells(
     slice.map((s) => s.person),
     now,
     only,
@@ -400,10 +418,9 @@ export async function boardPage(scope: OrgScope, q: BoardQuery, now = new Date()
     total = all.list.length;
     pageRows = await rowsOfSlice(all.list.slice(offset, offset + q.pageSize), all.complete, all.modules, now, q.module);
   } else {
-    const filter: PeopleFilter = { scope, team: q.team, q: q.q };
-    const listed = await listPeople(filter, nameOrder(q.sort, q.dir), { limit: q.pageSize, offset });
+    const listed = await listPeople(filterOf(scope, q, now), nameOrder(q.sort, q.dir), { limit: q.pageSize, offset });
     total = listed.total;
-    pageRows = await rowsFor(listed.people, now, q.module);
+    pageRows = await rowsFromCells(listed.people, now, q.module);
   }
   return {
     page: q.page,
@@ -422,6 +439,6 @@ export async function* boardRowsInChunks(scope: OrgScope, f: BoardFilter, chunk 
     for (let i = 0; i < all.list.length; i += chunk) yield await rowsOfSlice(all.list.slice(i, i + chunk), all.complete, all.modules, now, f.module);
     return;
   }
-  const { people } = await listPeople({ scope, team: f.team, q: f.q }, nameOrder(f.sort, f.dir));
-  for (let i = 0; i < people.length; i += chunk) yield await rowsFor(people.slice(i, i + chunk), now, f.module);
+  const { people } = await listPeople(filterOf(scope, f, now), nameOrder(f.sort, f.dir));
+  for (let i = 0; i < people.length; i += chunk) yield await rowsFromCells(people.slice(i, i + chunk), now, f.module);
 }

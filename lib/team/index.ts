@@ -18,3 +18,4 @@ export * from "./teams";
 export * from "./summary";
 export * from "./security";
 export * from "./org-language";
+export { syncBoardCells } from "./board-cells";

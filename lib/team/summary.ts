@@ -3,8 +3,8 @@ import "server-only";
 import { sql } from "drizzle-orm";
 import type { OrgScope } from "@/lib/access";
 import { addDays, isoDay } from "@/lib/dates";
-import { aggregatedPeople, rows } from "./board";
-import { isDone } from "./status";
+import { boardModules, rows } from "./board";
+import { teamCounts } from "./board-cells";
 
 export type TeamTotal = {
   teamId: string | null;
@@ -20,33 +20,39 @@ export type TeamTotal = {
 };
 
 /**
- * Totals per team over the whole scope (the board's summary and the "by team" chart). Without
- * lesson counts: "in progress" and "not started" are not told apart here.
+ * Totals per team over the whole scope (the board's summary and the "by team" chart), from the
+ * stored cells (board_cell) in one grouped scan, plus the people per team. Without lesson counts:
+ * "in progress" and "not started" are not told apart here.
  */
 export async function teamTotals(scope: OrgScope, now = new Date()): Promise<TeamTotal[]> {
-  const { list } = await aggregatedPeople(scope, { sort: "team" }, now);
-  const orgNames = new Map(
-    (await rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`)).map((o) => [o.id, o.name]),
-  );
-  const totals = new Map<string, TeamTotal>();
-  for (const { person: p, statuses } of list) {
-    const key = `${p.organizationId}/${p.teamId ?? ""}`;
-    let t = totals.get(key);
-    if (!t) {
-      t = { teamId: p.teamId, team: p.team ?? "No team", orgName: orgNames.get(p.organizationId) ?? "", people: 0, cells: 0, passed: 0, failed: 0, overdue: 0, expiring: 0, expired: 0 };
-      totals.set(key, t);
-    }
-    t.people++;
-    for (const s of statuses) {
-      t.cells++;
-      if (isDone(s)) t.passed++;
-      if (s === "failed") t.failed++;
-      if (s === "overdue") t.overdue++;
-      if (s === "expiring") t.expiring++;
-      if (s === "expired") t.expired++;
-    }
-  }
-  return [...totals.values()].sort((a, b) => a.orgName.localeCompare(b.orgName) || (a.teamId === null ? 1 : 0) - (b.teamId === null ? 1 : 0) || a.team.localeCompare(b.team));
+  const modules = boardModules();
+  const orgFilter = scope.orgId ? sql`u.organization_id = ${scope.orgId}` : sql`u.organization_id IS NOT NULL`;
+  const [people, counts, orgs] = await Promise.all([
+    rows<{ organization_id: string; team_id: string | null; team_name: string | null; n: number | string }>(sql`
+SELECT u.organization_id, u.team_id, MAX(t.name) AS team_name, COUNT(*) AS n FROM user u LEFT JOIN team t ON t.id = u.team_id
+WHERE ${orgFilter} GROUP BY u.organization_id, u.team_id`),
+    teamCounts(scope.orgId, modules, now),
+    rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`),
+  ]);
+  const orgNames = new Map(orgs.map((o) => [o.id, o.name]));
+  const countsOf = new Map(counts.map((c) => [`${c.organizationId}/${c.teamId ?? ""}`, c]));
+  const totals = people.map((p): TeamTotal => {
+    const c = countsOf.get(`${p.organization_id}/${p.team_id ?? ""}`);
+    const n = Number(p.n);
+    return {
+      teamId: p.team_id,
+      team: p.team_name ?? "No team",
+      orgName: orgNames.get(p.organization_id) ?? "",
+      people: n,
+      cells: n * modules.length,
+      passed: c?.passed ?? 0,
+      failed: c?.failed ?? 0,
+      overdue: c?.overdue ?? 0,
+      expiring: c?.expiring ?? 0,
+      expired: c?.expired ?? 0,
+    };
+  });
+  return totals.sort((a, b) => a.orgName.localeCompare(b.orgName) || (a.teamId === null ? 1 : 0) - (b.teamId === null ? 1 : 0) || a.team.localeCompare(b.team));
 }
 
 export type WeekPoint = { week: string; completions: number };

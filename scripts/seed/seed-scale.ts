@@ -57,6 +57,9 @@ async function insertMany(conn: mysql.Connection, table: string, cols: string[],
 async function main() {
   const t0 = Date.now();
   const conn = await mysql.createConnection({ uri: await databaseUrl(), timezone: "Z" });
+  // Bulk load: the board_cell triggers stand aside on this connection only, and the organization's
+  // cells are rebuilt from the sources in one statement at the end (db/migrations/0011_board_cell.sql).
+  await conn.query("SET @riser_board_bulk = 1");
   try {
     const [existing] = await conn.query<mysql.RowDataPacket[]>("SELECT id FROM organization WHERE name = ?", [SCALE_ORG]);
     if (existing.length || process.argv.includes("--remove")) {
@@ -66,6 +69,7 @@ async function main() {
         return;
       }
       const orgId = existing[0]!.id as string;
+      await conn.query("DELETE FROM board_cell WHERE organization_id = ?", [orgId]);
       await conn.query("DELETE FROM certificate WHERE organization_id = ?", [orgId]);
       await conn.query("DELETE c FROM module_completion c JOIN user u ON u.id = c.user_id WHERE u.organization_id = ?", [orgId]);
       await conn.query("DELETE r FROM reminder_log r JOIN user u ON u.id = r.user_id WHERE u.organization_id = ?", [orgId]);
@@ -222,7 +226,8 @@ async function main() {
       }
     });
     await insertMany(conn, "assignment", ["organization_id", "kind", "target_slug", "user_id", "team_id", "target_key", "due_at", "created_by", "created_at"], assignments);
-    await conn.query("ANALYZE TABLE user, lesson_progress, quiz_attempt, module_completion, certificate, assignment");
+    await conn.query("CALL board_rebuild(?, NULL)", [orgId]);
+    await conn.query("ANALYZE TABLE user, lesson_progress, quiz_attempt, module_completion, certificate, assignment, board_cell");
     console.log(
       `[seed:scale] ${SCALE_ORG}: ${LEARNERS} learners in ${TEAMS} teams, ${progress.length} lessons done, ${attempts.length} attempts, ${passes.length} completions and certificates, ${assignments.length} team assignments (${Math.round((Date.now() - t0) / 100) / 10} s). Manager: ${SCALE_MANAGER.email}`,
     );
