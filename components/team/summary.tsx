@@ -22,7 +22,9 @@ export function TeamSummary({ org, showOrgNames, initial }: { org: string | null
   const weekLabel = (d: string) => format.dateTime(startOfIsoDay(d), { month: "short", day: "numeric", timeZone: "UTC" });
   const key = `/api/team/summary${org ? `?org=${encodeURIComponent(org)}` : ""}`;
   const { data, error, isLoading, mutate } = useSWR<Summary>(key, getJson, { revalidateOnFocus: false, ...serverFirst(key, initial && { key, data: initial }) });
-  const label = (t: TeamTotal) => (showOrgNames ? `${t.orgName} · ${t.team}` : t.team);
+  // people without a team are grouped under a name in the reader's language
+  const teamName = (t: TeamTotal) => (t.teamId === null ? tr("noTeam") : t.team);
+  const label = (t: TeamTotal) => (showOrgNames ? `${t.orgName} · ${teamName(t)}` : teamName(t));
   return (
     <section aria-labelledby="summary-heading" className="mb-10">
       <h2 id="summary-heading" className="mb-3 text-2xl">

@@ -180,7 +180,7 @@ export async function sendManagerDigests({ now = new Date() }: { now?: Date } = 
     for (const m of mine) {
       const t = mailTranslator(m.language);
       const lines = totals.map((x) =>
-        t("digest.line", { team: x.team, people: x.people, passed: x.passed, cells: x.cells, pct: x.cells ? Math.round((x.passed / x.cells) * 100) : 0, overdue: x.overdue, expiring: x.expiring }),
+        t("digest.line", { team: x.teamId === null ? t("digest.noTeam") : x.team, people: x.people, passed: x.passed, cells: x.cells, pct: x.cells ? Math.round((x.passed / x.cells) * 100) : 0, overdue: x.overdue, expiring: x.expiring }),
       );
       const res = await sendMail({
         to: m.email,

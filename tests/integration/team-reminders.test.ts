@@ -4,7 +4,7 @@
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { assignment, reminderLog } from "@/db/schema";
+import { assignment, reminderLog, user } from "@/db/schema";
 import { sendDueReminders, sendManagerDigests } from "@/lib/team/reminders";
 import { anonymous, mailsTo, waitForMail } from "../helpers/http";
 import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, type FixturePerson } from "../helpers/fixtures";
@@ -12,12 +12,16 @@ import { completedWithCertificate, daysFromNow, fixtureOrg, fixturePerson, type 
 let learner: FixturePerson;
 let done: FixturePerson;
 let manager: FixturePerson;
+let managerEs: FixturePerson;
 let orgName = "";
 
 beforeAll(async () => {
   const org = await fixtureOrg("Reminder Fixture Sprinklers", { teams: ["Night crew"] });
   orgName = org.name;
   manager = await fixturePerson(org, { name: "Perpetua Lom", role: "manager" });
+  // a second manager who reads Spanish; both managers belong to no team
+  managerEs = await fixturePerson(org, { name: "Casimira Lom", role: "manager" });
+  await db.update(user).set({ language: "es" }).where(eq(user.id, managerEs.id));
   learner = await fixturePerson(org, { name: "Ulric Bode", teamId: org.teams["Night crew"] });
   done = await fixturePerson(org, { name: "Vera Bode", teamId: org.teams["Night crew"] });
   const base = { organizationId: org.id, createdBy: manager.id, createdAt: new Date() };
@@ -60,6 +64,11 @@ describe("reminder jobs", () => {
     const digest = await waitForMail(manager.email, /^Weekly training summary for Reminder Fixture/);
     expect(digest.text).toContain(`Where ${orgName} stands`);
     expect(digest.text).toMatch(/- Night crew: 2 people/);
+    expect(digest.text).toMatch(/- No team: 2 people/);
+    // the Spanish reader's digest names the same group in Spanish (messages/es/mail.json)
+    const digestEs = await waitForMail(managerEs.email, /^Resumen semanal de capacitación de Reminder Fixture/);
+    expect(digestEs.text).toMatch(/- Sin equipo: 2 personas/);
+    expect(digestEs.text).not.toContain("No team");
 
     expect((await runJobs(secret)).status).toBe(200);
     await sendDueReminders();
