@@ -1,6 +1,6 @@
 // Lighthouse 12.2.3 (pinned; runs on Node 20) with Debian's chromium, mobile emulation (its
 // default), performance only, signed in as a demo learner: a lesson page, /learn and the
-// system-demand calculator. Writes bench/results/lighthouse.json. A page that Lighthouse cannot
+// system-demand calculator, and as a floor the signed-in app shell (/tools). Writes bench/results/lighthouse.json. A page that Lighthouse cannot
 // measure is recorded with its error rather than stopping the other benches.
 import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
@@ -16,6 +16,8 @@ const PAGES = [
   { path: "/modules/freeze-protection/where-homes-freeze", kind: "lesson" },
   { path: "/learn", kind: "learner" },
   { path: "/tools/system-demand", kind: "calculator" },
+  // the floor: the calculators' index, a signed-in page with little more than the app shell
+  { path: "/tools", kind: "shell" },
 ];
 
 // LH_PAGES=calculator,lesson measures only those kinds (for a quick before/after of one change)

@@ -2,6 +2,8 @@
 // learner saves an answer to every question of their own open attempt (one PUT per attempt), then
 // each request is the first submit of its own attempt, so every one is a real grading transaction.
 // Afterwards the database is checked: every attempt graded exactly once, none lost.
+// Beside them, the floor in the same run: the same 50 workers sending the same number of requests
+// to /api/health, the smallest round trip the server answers (no session, one `SELECT 1`).
 import { performance } from "node:perf_hooks";
 import { pool } from "@/db/client";
 import { TEST_PASSWORD, createOrganization, createPeople } from "../tests/helpers/fixtures";
@@ -53,6 +55,8 @@ async function fifty(send: (i: number) => Promise<Response>) {
   return { latencyMs: summary(latencies), throughputPerSec: +(N / seconds).toFixed(1), non2xx };
 }
 
+const floor = await withServerCpu(N, () => fifty(() => fetch(`${APP}/api/health`)));
+
 const save = await withServerCpu(N, () => fifty((i) =>
   fetch(`${APP}/api/quiz/attempts/${attemptIds[i]}/answers`, { method: "PUT", headers: { cookie: jars[i]!.header, origin: APP, "content-type": "application/json" }, body: JSON.stringify({ answers: answersOf[i] }) }),
 ));
@@ -70,5 +74,6 @@ record("quiz-submit", {
   concurrentLearners: 50,
   ...submit,
   saveAnswers: save,
+  floor: { path: "/api/health", ...floor },
   integrity: { graded: Number(check!.graded), open: Number(check!.open), unmarkedItems: Number(check!.unmarked) },
 });
