@@ -37,8 +37,9 @@ export const boardCell = mysqlTable(
   (t) => [
     primaryKey({ name: "board_cell_pk", columns: [t.userId, t.moduleSlug] }),
     foreignKey({ name: "board_cell_user_fk", columns: [t.userId], foreignColumns: [user.id] }).onDelete("cascade"),
-    // totals per team and team-scoped filters (covering); org-wide filters by expiry and by due date
-    index("board_cell_org_idx").on(t.organizationId, t.teamId, t.expiresAt, t.dueAt, t.lastGradedAt, t.lastPassAt, t.lessonsDone, t.attempts),
+    // totals per team and module (covering, read in index order: no per-row module filter, no
+    // temporary table) and team-scoped filters; org-wide filters by expiry and by due date
+    index("board_cell_org_idx").on(t.organizationId, t.teamId, t.moduleSlug, t.expiresAt, t.dueAt, t.lastGradedAt, t.lastPassAt, t.lessonsDone, t.attempts),
     index("board_cell_org_expiry_idx").on(t.organizationId, t.expiresAt, t.dueAt),
     index("board_cell_org_due_idx").on(t.organizationId, t.dueAt, t.expiresAt),
   ],

@@ -76,5 +76,9 @@ export const moduleCompletion = mysqlTable(
     completedAt: datetime("completed_at", { fsp: 3 }).notNull(),
     note: text("note"),
   },
-  (t) => [uniqueIndex("completion_attempt_uq").on(t.attemptId), index("completion_user_idx").on(t.userId, t.moduleSlug)],
+  (t) => [
+    uniqueIndex("completion_attempt_uq").on(t.attemptId),
+    // one person's completions of a module; with completed_at: completions per week, index-only per person
+    index("completion_user_idx").on(t.userId, t.moduleSlug, t.completedAt),
+  ],
 );

@@ -136,24 +136,60 @@ FROM board_cell c WHERE c.user_id IN (${list(ids)}) ${only ? sql`AND c.module_sl
 
 export type TeamCounts = { organizationId: string; teamId: string | null; passed: number; failed: number; overdue: number; expiring: number; expired: number };
 
-/** Cells per status, per organization and team, over the scope's people (one grouped scan). */
+/**
+ * The status counts of a group of cells packed in one exact decimal sum: each status its own
+ * 12-digit field (a group never holds 10^12 cells), so one SUM per group counts all five.
+ */
+const FIELD = 10n ** 12n;
+const PACKED = { passed: 1n, expiring: FIELD, overdue: FIELD ** 2n, expired: FIELD ** 3n, failed: FIELD ** 4n } as const;
+
+/**
+ * lib/team/status.ts cellStatus as one first-match-wins CASE over the cell alias `c`, each status
+ * worth its PACKED weight (in progress and not started: 0). The same rule as statusIs, written in
+ * precedence order so that every branch tests only what the earlier ones left open.
+ */
+function packedStatus(now: Date): SQL {
+  const horizon = new Date(now.getTime() + EXPIRING_DAYS * 86_400_000);
+  const w = (x: bigint) => sql.raw(x.toString());
+  return sql`CASE WHEN c.expires_at > ${horizon} THEN ${w(PACKED.passed)}
+  WHEN c.expires_at > ${now} THEN ${w(PACKED.expiring)}
+  WHEN c.due_at < ${now} THEN ${w(PACKED.overdue)}
+  WHEN c.expires_at IS NOT NULL THEN ${w(PACKED.expired)}
+  WHEN c.last_graded_at IS NOT NULL AND (c.last_pass_at IS NULL OR c.last_pass_at < c.last_graded_at) THEN ${w(PACKED.failed)}
+  ELSE 0 END`;
+}
+
+/**
+ * Cells per status, per organization and team, over the scope's people: one index-only scan of
+ * board_cell_org_idx (organization, team, module, …) grouped in the index's own order (no
+ * temporary table), each cell's status evaluated once; the shown modules are picked per group
+ * here rather than per cell in SQL. The index is named so that the plan cannot drift to another
+ * index on (organization, team, …) without the module, which needs a temporary table (measured
+ * three times slower). `passed` counts every valid cell (passed or expiring).
+ */
 export async function teamCounts(orgId: string | null, modules: ModuleInfo[], now: Date): Promise<TeamCounts[]> {
   const scope = orgId ? sql`c.organization_id = ${orgId}` : sql`c.organization_id IS NOT NULL`;
-  const found = await rows<Record<string, unknown>>(sql`
-SELECT c.organization_id, c.team_id,
-  SUM(c.expires_at > ${now}) AS passed, SUM(${statusIs("expiring", now)}) AS expiring, SUM(${statusIs("overdue", now)}) AS overdue,
-  SUM(${statusIs("expired", now)}) AS expired, SUM(${statusIs("failed", now)}) AS failed
-FROM board_cell c WHERE ${scope} AND c.module_slug IN (${list(modules.map((m) => m.slug))})
-GROUP BY c.organization_id, c.team_id`);
-  return found.map((r) => ({
-    organizationId: String(r.organization_id),
-    teamId: (r.team_id as string | null) ?? null,
-    passed: Number(r.passed),
-    failed: Number(r.failed),
-    overdue: Number(r.overdue),
-    expiring: Number(r.expiring),
-    expired: Number(r.expired),
-  }));
+  const found = await rows<{ organization_id: string; team_id: string | null; module_slug: string; packed: string }>(sql`
+SELECT c.organization_id, c.team_id, c.module_slug, CAST(SUM(${packedStatus(now)}) AS CHAR) AS packed
+FROM board_cell c FORCE INDEX (board_cell_org_idx) WHERE ${scope}
+GROUP BY c.organization_id, c.team_id, c.module_slug`);
+  const shown = new Set(modules.map((m) => m.slug));
+  const out = new Map<string, TeamCounts>();
+  for (const r of found) {
+    if (!shown.has(r.module_slug)) continue;
+    const key = `${r.organization_id}/${r.team_id ?? ""}`;
+    let t = out.get(key);
+    if (!t) out.set(key, (t = { organizationId: String(r.organization_id), teamId: r.team_id ?? null, passed: 0, failed: 0, overdue: 0, expiring: 0, expired: 0 }));
+    const packed = BigInt(r.packed);
+    const field = (weight: bigint) => Number((packed / weight) % FIELD);
+    const expiring = field(PACKED.expiring);
+    t.passed += field(PACKED.passed) + expiring;
+    t.expiring += expiring;
+    t.overdue += field(PACKED.overdue);
+    t.expired += field(PACKED.expired);
+    t.failed += field(PACKED.failed);
+  }
+  return [...out.values()];
 }
 
 /**

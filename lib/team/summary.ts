@@ -21,7 +21,8 @@ export type TeamTotal = {
 
 /**
  * Totals per team over the whole scope (the board's summary and the "by team" chart), from the
- * stored cells (board_cell) in one grouped scan, plus the people per team. Without lesson counts:
+ * stored cells (board_cell) in one grouped scan, plus the people per team (counted on
+ * user_org_idx alone; team names joined to the groups, not to every person). Without lesson counts:
  * "in progress" and "not started" are not told apart here.
  */
 export async function teamTotals(scope: OrgScope, now = new Date()): Promise<TeamTotal[]> {
@@ -29,8 +30,9 @@ export async function teamTotals(scope: OrgScope, now = new Date()): Promise<Tea
   const orgFilter = scope.orgId ? sql`u.organization_id = ${scope.orgId}` : sql`u.organization_id IS NOT NULL`;
   const [people, counts, orgs] = await Promise.all([
     rows<{ organization_id: string; team_id: string | null; team_name: string | null; n: number | string }>(sql`
-SELECT u.organization_id, u.team_id, MAX(t.name) AS team_name, COUNT(*) AS n FROM user u LEFT JOIN team t ON t.id = u.team_id
-WHERE ${orgFilter} GROUP BY u.organization_id, u.team_id`),
+SELECT p.organization_id, p.team_id, t.name AS team_name, p.n
+FROM (SELECT u.organization_id, u.team_id, COUNT(*) AS n FROM user u WHERE ${orgFilter} GROUP BY u.organization_id, u.team_id) p
+LEFT JOIN team t ON t.id = p.team_id`),
     teamCounts(scope.orgId, modules, now),
     rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`),
   ]);
