@@ -113,10 +113,9 @@ export async function proxy(req: NextRequest) {
 const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_token=/;
 
 async function checkSession(requestHeaders: Headers) {
-  const { auth } = await import("@/lib/auth");
+  const { readSession } = await import("@/lib/auth");
   try {
-    const r = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true });
-    return { session: r?.response ?? null, setCookies: r?.headers.getSetCookie() ?? [], databaseDown: false };
+    return { ...(await readSession(requestHeaders)), databaseDown: false };
   } catch (err) {
     return { session: null, setCookies: [], databaseDown: isDatabaseDown(err) };
   }

@@ -20,6 +20,7 @@ import { MIN_PASSWORD_LENGTH_WITH_SECOND_FACTOR } from "./password-policy";
 import { afterEmailVerified, takeChoosePasswordUrl } from "./signup";
 import { hitSignInFromClient, lockedMessage, recordFailedSignIn, signInLock } from "./throttle";
 import { SESSION_CACHE_SECONDS, cachedSessionVersion, forgetCachedSessions } from "./session-cache";
+import { readSessionWith } from "./session-read";
 import { afterSecondStep, beforeSecondStep, SECOND_STEP_PATHS } from "./second-factor";
 
 /** the language a person chose (stored on their account), for mail written to them */
@@ -223,6 +224,9 @@ export const auth = betterAuth({
 });
 
 export type Auth = typeof auth;
+
+/** The request's session for the proxy, pages and route handlers (an accepted copy is remembered: ./session-read.ts). */
+export const readSession = (requestHeaders: Headers) => readSessionWith((o) => auth.api.getSession(o), requestHeaders);
 
 /** The server's name rule (lib/names.ts): the stored form, or a 400 with the reason. */
 function checkedName(name: unknown): string {

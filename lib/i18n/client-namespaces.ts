@@ -15,9 +15,12 @@ export const SCOPED_NAMESPACES = {
   auth: ["auth", "team"],
   certificates: ["certificates"],
   learn: ["learn", "quiz"],
-  // lessons, quizzes and sign-offs of a module; reference cards share the lesson components
-  lessons: ["lesson", "quiz", "signoffs"],
+  // lessons and everything under a module; reference cards share the lesson components
+  lessons: ["lesson"],
+  // a module's quiz and its sign-offs add theirs (their layouts), so a lesson page carries neither
+  quiz: ["quiz"],
   search: ["search"],
+  signoffs: ["signoffs"],
   team: ["billing", "editions", "signoffs", "team"],
   // the calculator pages and every calculator embedded in a lesson or card
   tools: ["calcReports", "tools"],

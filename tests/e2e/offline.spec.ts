@@ -25,6 +25,9 @@ async function phoneStorage(page: Page) {
   return page.evaluate(async () => {
     const cacheNames = (await caches.keys()).filter((n) => n.startsWith("riser-saved-"));
     const keys = await new Promise<string[]>((resolve) => {
+      // right after sign-out the browser may still be clearing the site's storage (Clear-Site-Data),
+      // which holds this open back: answer "not yet" so that the poll asks again
+      setTimeout(() => resolve(["(storage busy)"]), 1000);
       const open = indexedDB.open("riser-offline");
       open.onupgradeneeded = () => open.result.createObjectStore("kv");
       open.onsuccess = () => {
