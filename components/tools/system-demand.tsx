@@ -1,14 +1,14 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useMemo, useRef, useState } from "react";
+import { useRef, useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics";
+import { INPUT_CAPS } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField, TextField } from "./fields";
 import { sizeOptions, useMaterialOptions } from "./friction-loss";
-import { emptySegment, systemDemandFormValues, type SystemDemandFormValues } from "./form-values";
+import { emptySegment, type SystemDemandFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
@@ -186,11 +186,9 @@ function SupplyFields() {
   );
 }
 
-export function SystemDemandCalculator({ preset, embedded }: CalculatorProps) {
-  const t = useTranslations("tools");
-  // the example's labels in the reader's language (its figures are the same in both)
-  const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset), t), [preset, t]);
-  const state = useCalculator("system-demand", defaults);
+export function SystemDemandCalculator({ initial, embedded }: CalculatorProps) {
+  // the first values come from the server with the example's labels in the reader's language (./initial-state.ts)
+  const state = useCalculator<SystemDemandFormValues>("system-demand", initial);
   return (
     <CalculatorShell id="system-demand" state={state} embedded={embedded}>
       <DemandFields />
