@@ -1,14 +1,14 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
-import { FormProvider, useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
+import { memo, useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
+import { useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
 import { convertInputUnits, type CalculatorId, type CalculatorReport, type ReportT, type Units } from "@/lib/hydraulics/browser";
 import { loadEngine, type CalculatorEngine } from "./engine-loader";
-import { UnitSwitch } from "./fields";
-import { PdfButton } from "./pdf-button";
-import { ReportView } from "./report-view";
-import { SupplyChart } from "./supply-chart";
+import { FormPartsProvider, UnitSwitch } from "./fields";
+import { PdfButton as PlainPdfButton } from "./pdf-button";
+import { ReportView as PlainReportView } from "./report-view";
+import { SupplyChart as PlainSupplyChart } from "./supply-chart";
 import type { InitialCalculator } from "./types";
 
 export interface CalculatorState<TValues extends FieldValues> {
@@ -71,6 +71,11 @@ export function useCalculator<TValues extends FieldValues>(id: CalculatorId, ini
   return { form, report, input, pending, warmUp };
 }
 
+// the result's parts re-render only when the result does (not on every change of the form's state)
+const ReportView = memo(PlainReportView);
+const SupplyChart = memo(PlainSupplyChart);
+const PdfButton = memo(PlainPdfButton);
+
 /** every current field error as a list, so none can hide in a collapsed section */
 function ErrorList({ errors }: { errors: FieldErrors }) {
   const messages: string[] = [];
@@ -116,7 +121,7 @@ export function CalculatorShell<TValues extends FieldValues>({
   }
 
   return (
-    <FormProvider {...form}>
+    <>
       <section
         className={`my-6 rounded border border-line bg-paper p-4 text-ink ${embedded ? "" : "sm:p-6"}`}
         data-calculator={id}
@@ -137,7 +142,7 @@ export function CalculatorShell<TValues extends FieldValues>({
             onSubmit={form.handleSubmit(() => undefined)}
           >
             <UnitSwitch units={units} onSwitch={switchUnits} />
-            {children}
+            <FormPartsProvider form={form}>{children}</FormPartsProvider>
             <button type="submit" className="sr-only">
               {t("calculate")}
             </button>
@@ -166,7 +171,7 @@ export function CalculatorShell<TValues extends FieldValues>({
         </div>
         <SummaryBar id={id} report={report} />
       </section>
-    </FormProvider>
+    </>
   );
 }
 
@@ -174,7 +179,7 @@ export function CalculatorShell<TValues extends FieldValues>({
  * At phone width the worked result sits far below the inputs: keep the headline figure (and the
  * pass/short verdict) in view at the bottom of the screen while the inputs are edited.
  */
-function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
+const SummaryBar = memo(function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
   const t = useTranslations("tools");
   const tr = useTranslations("calcReports");
   const headline = report?.results[0];
@@ -203,4 +208,4 @@ function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport
       </a>
     </div>
   );
-}
+});
