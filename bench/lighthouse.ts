@@ -28,6 +28,7 @@ const [learner] = await db.select({ id: user.id }).from(user).where(eq(user.emai
 const tokenCookie = await sessionCookie(learner!.id);
 await pool.end();
 const dir = mkdtempSync(path.join(tmpdir(), "riser-lh-"));
+console.log(`Lighthouse reports: ${dir}`);
 const chrome = process.env.CHROME_PATH ?? "/usr/bin/chromium";
 
 // LH_RUNS=n (default 3) runs Lighthouse n times per page and records the median of each figure
@@ -39,11 +40,11 @@ const median = (xs: number[]) => {
 };
 
 type Run = { finalUrl: string; performance: number; lcpS: number; tbtMs: number; fcpS: number; cls: number };
-async function once(p: (typeof PAGES)[number]): Promise<Run | { error: string }> {
+async function once(p: (typeof PAGES)[number], i: number): Promise<Run | { error: string }> {
   // a fresh cache copy for each run (it is trusted for 60 s; one Lighthouse run can take longer)
   const headersFile = path.join(dir, "headers.json");
   writeFileSync(headersFile, JSON.stringify({ cookie: (await Jar.signedIn(tokenCookie)).header }));
-  const out = path.join(dir, `${p.kind}.json`);
+  const out = path.join(dir, `${p.kind}-${i + 1}.json`);
   const r = spawnSync(
     "npx",
     ["-y", "lighthouse@12.2.3", `${APP}${p.path}`, "--quiet", "--only-categories=performance", "--output=json", `--output-path=${out}`, `--extra-headers=${headersFile}`, "--chrome-flags=--headless=new --no-sandbox --disable-gpu"],
@@ -67,7 +68,7 @@ for (const p of measured) {
   const runs: Run[] = [];
   let error = "";
   for (let i = 0; i < RUNS; i++) {
-    const r = await once(p);
+    const r = await once(p, i);
     if ("error" in r) error = r.error;
     else runs.push(r);
   }

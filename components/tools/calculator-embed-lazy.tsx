@@ -1,7 +1,8 @@
 "use client";
 import { useTranslations } from "next-intl";
 import dynamic from "next/dynamic";
-import type { CalculatorEmbedProps } from "./types";
+import type { CalculatorId } from "@/lib/hydraulics/browser";
+import type { InitialCalculator } from "./types";
 
 /**
  * The calculator as embedded in lessons and cards, loaded only on pages that show one: the forms,
@@ -17,7 +18,7 @@ function LoadingCalculator() {
   return <p className="my-4 rounded border border-line bg-panel p-3 text-muted">{t("loading")}</p>;
 }
 
-export function CalculatorEmbedLazy(props: CalculatorEmbedProps) {
+export function CalculatorEmbedLazy(props: { id: CalculatorId | string; initial?: InitialCalculator; embedded?: boolean }) {
   return (
     <div className="wide not-prose my-6">
       <Lazy {...props} />

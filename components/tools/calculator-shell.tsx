@@ -1,28 +1,24 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useTranslations } from "next-intl";
-import { useEffect, useMemo, type ReactNode } from "react";
-import { FormProvider, useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
-import {
-  calculatorFormSchema,
-  calculatorReport,
-  convertInputUnits,
-  parseCalculatorInput,
-  type CalculatorId,
-  type CalculatorReport,
-  type ReportT,
-  type Units,
-} from "@/lib/hydraulics";
-import { UnitSwitch } from "./fields";
-import { PdfButton } from "./pdf-button";
-import { ReportView } from "./report-view";
-import { SupplyChart } from "./supply-chart";
+import { memo, useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
+import { useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
+import { convertInputUnits, type CalculatorId, type CalculatorReport, type ReportT, type Units } from "@/lib/hydraulics/browser";
+import { loadEngine, type CalculatorEngine } from "./engine-loader";
+import { FormPartsProvider, UnitSwitch } from "./fields";
+import { PdfButton as PlainPdfButton } from "./pdf-button";
+import { ReportView as PlainReportView } from "./report-view";
+import { SupplyChart as PlainSupplyChart } from "./supply-chart";
+import type { InitialCalculator } from "./types";
 
 export interface CalculatorState<TValues extends FieldValues> {
   form: UseFormReturn<TValues>;
   report: CalculatorReport | null;
   input: unknown;
+  /** the inputs changed and the engine that works them out is still loading (first edit only) */
+  pending: boolean;
+  /** starts loading the engine (on focus or touch in the form, ahead of the first edit) */
+  warmUp: () => void;
 }
 
 /**
@@ -30,32 +26,55 @@ export interface CalculatorState<TValues extends FieldValues> {
  * (lib/hydraulics/schemas.ts, the same one the report and the PDF parse with). Every change
  * re-validates the whole form (so an error between two fields shows on the right one) and
  * recomputes the report when the inputs are valid.
+ *
+ * The first values and their report come from the server (./initial-state.ts), worked out the same
+ * way, so the page shows its result without running the schemas or the calculation in the
+ * browser. Those (./engine.ts) load once the calculator is focused or touched, ahead of the first
+ * edit; until they have loaded, changed inputs show "loading", never the report of other values.
  */
-export function useCalculator<TValues extends FieldValues>(id: CalculatorId, defaultValues: TValues): CalculatorState<TValues> {
+export function useCalculator<TValues extends FieldValues>(id: CalculatorId, initial: InitialCalculator): CalculatorState<TValues> {
   // the report's and the error sentences' words in the reader's language; numbers come from lib/hydraulics either way
   const tr = useTranslations("calcReports") as unknown as ReportT;
-  const schema = useMemo(() => calculatorFormSchema(id, tr), [id, tr]);
+  const [engine, setEngine] = useState<CalculatorEngine | null>(null);
+  const resolver = useMemo<Resolver<TValues>>(
+    () => async (values, context, options) => {
+      // not loaded (offline and not yet cached): no field errors, and no result either, as it stays "loading"
+      const e = await loadEngine().catch(() => null);
+      return (e ? e.formResolver(id, tr)(values, context, options as never) : { values: {}, errors: {} }) as never;
+    },
+    [id, tr],
+  );
   const form = useForm<TValues>({
-    resolver: zodResolver(schema as never) as unknown as Resolver<TValues>,
-    defaultValues: defaultValues as DefaultValues<TValues>,
+    resolver,
+    defaultValues: initial.values as DefaultValues<TValues>,
     mode: "onChange",
   });
   const values = useWatch({ control: form.control });
   const key = JSON.stringify(values);
-  const { report, input } = useMemo(() => {
-    try {
-      const parsed = parseCalculatorInput(id, JSON.parse(key));
-      return { report: calculatorReport(id, parsed, tr), input: parsed as unknown };
-    } catch {
-      return { report: null, input: null };
-    }
-  }, [id, key, tr]);
+  const initialKey = useMemo(() => JSON.stringify(initial.values), [initial.values]);
+  const changed = key !== initialKey;
+  const { report, input, pending } = useMemo(() => {
+    if (!changed) return { report: initial.report, input: initial.input, pending: false };
+    if (!engine) return { report: null, input: null, pending: true };
+    return { ...engine.formReport(id, key, tr), pending: false };
+  }, [changed, engine, id, key, tr, initial]);
+  const warmUp = useCallback(() => {
+    if (!engine) void loadEngine().then(setEngine, () => undefined); // offline: tried again at the next edit
+  }, [engine]);
+  useEffect(() => {
+    if (changed) warmUp();
+  }, [changed, key, warmUp]);
   const { trigger, formState } = form;
   useEffect(() => {
     if (formState.isDirty || formState.submitCount > 0) void trigger();
   }, [key, trigger, formState.isDirty, formState.submitCount]);
-  return { form, report, input };
+  return { form, report, input, pending, warmUp };
 }
+
+// the result's parts re-render only when the result does (not on every change of the form's state)
+const ReportView = memo(PlainReportView);
+const SupplyChart = memo(PlainSupplyChart);
+const PdfButton = memo(PlainPdfButton);
 
 /** every current field error as a list, so none can hide in a collapsed section */
 function ErrorList({ errors }: { errors: FieldErrors }) {
@@ -91,7 +110,7 @@ export function CalculatorShell<TValues extends FieldValues>({
   embedded?: boolean;
 }) {
   const t = useTranslations("tools");
-  const { form, report, input } = state;
+  const { form, report, input, pending, warmUp } = state;
   const units = (useWatch({ control: form.control, name: "units" as never }) as unknown as Units | undefined) ?? "us";
   const info = { title: t(`info.${id}.title`), summary: t(`info.${id}.summary`) };
 
@@ -102,8 +121,13 @@ export function CalculatorShell<TValues extends FieldValues>({
   }
 
   return (
-    <FormProvider {...form}>
-      <section className={`my-6 rounded border border-line bg-paper p-4 text-ink ${embedded ? "" : "sm:p-6"}`} data-calculator={id}>
+    <>
+      <section
+        className={`my-6 rounded border border-line bg-paper p-4 text-ink ${embedded ? "" : "sm:p-6"}`}
+        data-calculator={id}
+        onFocus={warmUp}
+        onPointerDown={warmUp}
+      >
         {embedded ? (
           <>
             <h3 className="text-xl font-bold">{info.title}</h3>
@@ -118,7 +142,7 @@ export function CalculatorShell<TValues extends FieldValues>({
             onSubmit={form.handleSubmit(() => undefined)}
           >
             <UnitSwitch units={units} onSwitch={switchUnits} />
-            {children}
+            <FormPartsProvider form={form}>{children}</FormPartsProvider>
             <button type="submit" className="sr-only">
               {t("calculate")}
             </button>
@@ -130,6 +154,10 @@ export function CalculatorShell<TValues extends FieldValues>({
                 <ReportView report={report} />
                 <PdfButton id={id} input={input} />
               </>
+            ) : pending ? (
+              <p role="status" className="rounded border border-line bg-panel px-3 py-2 text-muted">
+                {t("loading")}
+              </p>
             ) : (
               <>
                 <div role="status" className="rounded border border-caution bg-caution-light px-3 py-2 text-caution">
@@ -143,7 +171,7 @@ export function CalculatorShell<TValues extends FieldValues>({
         </div>
         <SummaryBar id={id} report={report} />
       </section>
-    </FormProvider>
+    </>
   );
 }
 
@@ -151,7 +179,7 @@ export function CalculatorShell<TValues extends FieldValues>({
  * At phone width the worked result sits far below the inputs: keep the headline figure (and the
  * pass/short verdict) in view at the bottom of the screen while the inputs are edited.
  */
-function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
+const SummaryBar = memo(function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
   const t = useTranslations("tools");
   const tr = useTranslations("calcReports");
   const headline = report?.results[0];
@@ -180,4 +208,4 @@ function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport
       </a>
     </div>
   );
-}
+});

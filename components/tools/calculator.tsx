@@ -1,5 +1,5 @@
 import { useTranslations } from "next-intl";
-import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics";
+import { isCalculatorId, type CalculatorId } from "@/lib/hydraulics/browser";
 import { ElevationCalculator } from "./elevation";
 import { FlowTestCalculator } from "./flow-test";
 import { FrictionLossCalculator } from "./friction-loss";
@@ -7,7 +7,7 @@ import { RoomCoverageCalculator } from "./room-coverage";
 import { SprinklerFlowCalculator } from "./sprinkler-flow";
 import { StoredWaterCalculator } from "./stored-water";
 import { SystemDemandCalculator } from "./system-demand";
-import type { CalculatorEmbedProps, CalculatorProps } from "./types";
+import type { CalculatorProps, InitialCalculator } from "./types";
 
 export const CALCULATOR_COMPONENTS: Record<CalculatorId, (props: CalculatorProps) => React.ReactNode> = {
   "sprinkler-flow": SprinklerFlowCalculator,
@@ -20,13 +20,12 @@ export const CALCULATOR_COMPONENTS: Record<CalculatorId, (props: CalculatorProps
 };
 
 /**
- * The MDX embed: `<Calculator id="sprinkler-flow" preset={{ kFactor: 4.9, pressurePsi: 10 }} />`.
- * Preset keys follow the content contract ("Calculator embeds"); an unknown id renders a notice
- * rather than breaking the lesson.
+ * One calculator by id, started from its first state worked out on the server
+ * (./initial-state.ts). An unknown id (a lesson's typo) renders a notice rather than breaking the lesson.
  */
-export function Calculator({ id, preset, embedded = true }: CalculatorEmbedProps) {
+export function Calculator({ id, initial, embedded = true }: { id: CalculatorId | string; initial?: InitialCalculator; embedded?: boolean }) {
   const t = useTranslations("tools");
-  if (!isCalculatorId(id)) {
+  if (!isCalculatorId(id) || !initial) {
     return (
       <p role="alert" className="my-4 rounded border border-caution bg-caution-light p-3 text-caution">
         {t("unknown", { id: String(id) })}
@@ -34,5 +33,5 @@ export function Calculator({ id, preset, embedded = true }: CalculatorEmbedProps
     );
   }
   const Component = CALCULATOR_COMPONENTS[id];
-  return <Component preset={preset} embedded={embedded} />;
+  return <Component initial={initial} embedded={embedded} />;
 }

@@ -1,10 +1,40 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useId, type SelectHTMLAttributes } from "react";
-import { get, useFormContext } from "react-hook-form";
+import { createContext, useContext, useId, useMemo, type ReactNode, type SelectHTMLAttributes } from "react";
+import { get, useFormState, type FieldValues, type UseFormReturn } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 import { SelectField as PlainSelectField } from "@/components/ui/select-field";
+
+/** the parts of a form that never change while it lives */
+type FormParts<T extends FieldValues> = Pick<UseFormReturn<T>, "control" | "register" | "getValues" | "setValue">;
+const PartsContext = createContext<FormParts<FieldValues> | null>(null);
+
+/**
+ * Gives the fields below it the form's fixed parts. Unlike react-hook-form's FormProvider, whose
+ * value changes with every change of the form's state, this one never changes: each field
+ * re-renders on its own subscriptions (its errors, the values it watches), not on every change
+ * anywhere in the form (which re-rendered every field of a long form, once more right after the
+ * page hydrated).
+ */
+export function FormPartsProvider<T extends FieldValues>({ form, children }: { form: FormParts<T>; children: ReactNode }) {
+  const { control, register, getValues, setValue } = form;
+  const value = useMemo(() => ({ control, register, getValues, setValue }), [control, register, getValues, setValue]);
+  return <PartsContext.Provider value={value as unknown as FormParts<FieldValues>}>{children}</PartsContext.Provider>;
+}
+
+export function useFormParts<T extends FieldValues = FieldValues>(): FormParts<T> {
+  const parts = useContext(PartsContext);
+  if (!parts) throw new Error("a calculator field outside its form");
+  return parts as unknown as FormParts<T>;
+}
+
+/** the field's current error message, from a subscription to the form's errors */
+function useFieldError(name: string): string | undefined {
+  const { control } = useFormParts();
+  const { errors } = useFormState({ control });
+  return (get(errors, name) as { message?: string } | undefined)?.message;
+}
 
 /** a number typed as text (so a typo shows as a field error rather than vanishing), wired to the form */
 export function NumberField({
@@ -21,11 +51,8 @@ export function NumberField({
   optional?: boolean;
 }) {
   const t = useTranslations("tools");
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext();
-  const error = (get(errors, name) as { message?: string } | undefined)?.message;
+  const { register } = useFormParts();
+  const error = useFieldError(name);
   return (
     <Field
       label={`${label}${unit ? ` (${unit})` : ""}${optional ? ` — ${t("optional")}` : ""}`}
@@ -46,20 +73,14 @@ export function SelectField({
   name,
   ...rest
 }: { name: string; label: string; options: { value: string; label: string }[]; hint?: string } & SelectHTMLAttributes<HTMLSelectElement>) {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext();
-  const error = (get(errors, name) as { message?: string } | undefined)?.message;
+  const { register } = useFormParts();
+  const error = useFieldError(name);
   return <PlainSelectField data-field={name} error={error} {...rest} {...register(name)} />;
 }
 
 export function TextField({ name, label }: { name: string; label: string }) {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext();
-  return <Field label={label} error={(get(errors, name) as { message?: string } | undefined)?.message} autoComplete="off" data-field={name} {...register(name)} />;
+  const { register } = useFormParts();
+  return <Field label={label} error={useFieldError(name)} autoComplete="off" data-field={name} {...register(name)} />;
 }
 
 /** US / SI switch: converts what is typed when flipped */

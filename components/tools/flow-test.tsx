@@ -1,19 +1,16 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import type { CalculatorFormValues } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
-export function FlowTestCalculator({ preset, embedded }: CalculatorProps) {
+export function FlowTestCalculator({ initial, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
-  const defaults = useMemo(() => flatFormValues("flow-test", inputFromPreset("flow-test", preset)), [preset]);
-  const state = useCalculator("flow-test", defaults);
+  const state = useCalculator<CalculatorFormValues["flow-test"]>("flow-test", initial);
   const units = useWatch({ control: state.form.control, name: "units" });
   const u = unitLabels(units);
   return (

@@ -3,10 +3,9 @@
 import { useTranslations } from "next-intl";
 import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { PIPE_MATERIALS, inputFromPreset, sizesFor } from "@/lib/hydraulics";
+import { PIPE_MATERIALS, sizesFor, type CalculatorFormValues } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
-import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
@@ -20,11 +19,10 @@ export const sizeOptions = (material: string | undefined) =>
     (s) => ({ value: s, label: `${s} in` }),
   );
 
-export function FrictionLossCalculator({ preset, embedded }: CalculatorProps) {
+export function FrictionLossCalculator({ initial, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
   const materialOptions = useMaterialOptions();
-  const defaults = useMemo(() => flatFormValues("friction-loss", inputFromPreset("friction-loss", preset)), [preset]);
-  const state = useCalculator("friction-loss", defaults);
+  const state = useCalculator<CalculatorFormValues["friction-loss"]>("friction-loss", initial);
   const [units, material] = useWatch({ control: state.form.control, name: ["units", "material"] });
   const u = unitLabels(units);
   const plastic = material === "cpvc" || material === "pex";

@@ -1,19 +1,16 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import type { CalculatorFormValues } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField } from "./fields";
-import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
-export function RoomCoverageCalculator({ preset, embedded }: CalculatorProps) {
+export function RoomCoverageCalculator({ initial, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
-  const defaults = useMemo(() => flatFormValues("room-coverage", inputFromPreset("room-coverage", preset)), [preset]);
-  const state = useCalculator("room-coverage", defaults);
+  const state = useCalculator<CalculatorFormValues["room-coverage"]>("room-coverage", initial);
   const units = useWatch({ control: state.form.control, name: "units" });
   const u = unitLabels(units);
   return (

@@ -1,19 +1,16 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useMemo } from "react";
 import { useWatch } from "react-hook-form";
-import { inputFromPreset } from "@/lib/hydraulics";
+import type { CalculatorFormValues } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
-import { flatFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
-export function SprinklerFlowCalculator({ preset, embedded }: CalculatorProps) {
+export function SprinklerFlowCalculator({ initial, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
-  const defaults = useMemo(() => flatFormValues("sprinkler-flow", inputFromPreset("sprinkler-flow", preset)), [preset]);
-  const state = useCalculator("sprinkler-flow", defaults);
+  const state = useCalculator<CalculatorFormValues["sprinkler-flow"]>("sprinkler-flow", initial);
   const [units, solveFor] = useWatch({ control: state.form.control, name: ["units", "solveFor"] });
   const u = unitLabels(units);
   return (

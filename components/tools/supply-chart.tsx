@@ -2,7 +2,7 @@
 import { useTranslations } from "next-intl";
 import dynamic from "next/dynamic";
 import { useEffect, useRef, useState } from "react";
-import { formatForDisplay, type ReportChart } from "@/lib/hydraulics";
+import { formatForDisplay, type ReportChart } from "@/lib/hydraulics/browser";
 
 // recharts (the drawing) is the largest script on a calculator page. It loads only once the chart's
 // box comes near the screen (on a phone the chart sits below the inputs), after the page is

@@ -1,7 +1,7 @@
 "use client";
 import { useTranslations } from "next-intl";
 import { CartesianGrid, ComposedChart, Line, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { formatForDisplay, type ReportChart } from "@/lib/hydraulics";
+import { formatForDisplay, type ReportChart } from "@/lib/hydraulics/browser";
 
 // palette from tailwind.config.ts
 const WATER = "#1B617A";

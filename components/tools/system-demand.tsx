@@ -1,21 +1,21 @@
 "use client";
 
 import { useTranslations } from "next-intl";
-import { useMemo, useRef, useState } from "react";
-import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
+import { memo, useRef, useState } from "react";
+import { useFieldArray, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { INPUT_CAPS, inputFromPreset } from "@/lib/hydraulics";
+import { INPUT_CAPS } from "@/lib/hydraulics/browser";
 import { CalculatorShell, useCalculator } from "./calculator-shell";
-import { NumberField, SelectField, TextField } from "./fields";
+import { NumberField, SelectField, TextField, useFormParts } from "./fields";
 import { sizeOptions, useMaterialOptions } from "./friction-loss";
-import { emptySegment, systemDemandFormValues, type SystemDemandFormValues } from "./form-values";
+import { emptySegment, type SystemDemandFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
 /** one pipe run: material, size, length, rise and fittings */
 function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
   const t = useTranslations("tools");
-  const { control } = useFormContext<SystemDemandFormValues>();
+  const { control } = useFormParts<SystemDemandFormValues>();
   const [units, material] = useWatch({ control, name: ["units", `${prefix}.material` as "units"] }) as [string, string];
   const u = unitLabels(units === "si" ? "si" : "us");
   const plastic = material === "cpvc" || material === "pex";
@@ -56,9 +56,10 @@ function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
   );
 }
 
-function DemandFields() {
+/** memo: no props, so the calculator's own re-renders (every change of the form's state) stop here */
+const DemandFields = memo(function DemandFields() {
   const t = useTranslations("tools");
-  const { control } = useFormContext<SystemDemandFormValues>();
+  const { control } = useFormParts<SystemDemandFormValues>();
   const sprinklers = useFieldArray({ control, name: "sprinklers" });
   const segments = useFieldArray({ control, name: "segments" });
   const devices = useFieldArray({ control, name: "devices" });
@@ -146,7 +147,7 @@ function DemandFields() {
       <SupplyFields />
     </>
   );
-}
+});
 
 /**
  * The flow-test comparison. Unticking clears the three readings (blank readings mean "no supply" to
@@ -154,7 +155,7 @@ function DemandFields() {
  */
 function SupplyFields() {
   const t = useTranslations("tools");
-  const { control, getValues, setValue } = useFormContext<SystemDemandFormValues>();
+  const { control, getValues, setValue } = useFormParts<SystemDemandFormValues>();
   const units = useWatch({ control, name: "units" });
   const u = unitLabels(units);
   const [on, setOn] = useState(() => Object.values(getValues("supply")).some((v) => String(v ?? "").trim() !== ""));
@@ -186,11 +187,9 @@ function SupplyFields() {
   );
 }
 
-export function SystemDemandCalculator({ preset, embedded }: CalculatorProps) {
-  const t = useTranslations("tools");
-  // the example's labels in the reader's language (its figures are the same in both)
-  const defaults = useMemo(() => systemDemandFormValues(inputFromPreset("system-demand", preset), t), [preset, t]);
-  const state = useCalculator("system-demand", defaults);
+export function SystemDemandCalculator({ initial, embedded }: CalculatorProps) {
+  // the first values come from the server with the example's labels in the reader's language (./initial-state.ts)
+  const state = useCalculator<SystemDemandFormValues>("system-demand", initial);
   return (
     <CalculatorShell id="system-demand" state={state} embedded={embedded}>
       <DemandFields />

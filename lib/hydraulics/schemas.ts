@@ -11,14 +11,9 @@
 import { z } from "zod";
 import { NOMINAL_SIZES, PIPE_MATERIALS } from "./pipe-data";
 
-/** caps on what one calculation may hold */
-export const INPUT_CAPS = {
-  labelChars: 80,
-  numberTextChars: 32,
-  designSprinklers: 2,
-  pipeRuns: 50,
-  devices: 10,
-} as const;
+import { INPUT_CAPS } from "./caps";
+
+export { INPUT_CAPS };
 
 type Rule = "positive" | "nonnegative" | "any" | "count";
 
