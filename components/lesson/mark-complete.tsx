@@ -73,7 +73,7 @@ function useVisibleSeconds(): () => number {
  * With no connection the mark waits on the phone (lib/offline) with the phone's reading time and
  * is sent when the connection returns.
  */
-export function MarkComplete({ module, lesson, total, minutes }: { module: string; lesson: string; total: number; minutes: number }) {
+export function MarkComplete({ module, lesson, title, total, minutes }: { module: string; lesson: string; title: string; total: number; minutes: number }) {
   const t = useTranslations("lesson");
   const errorText = useErrorText();
   const key = `/api/progress?module=${module}`;
@@ -104,13 +104,13 @@ export function MarkComplete({ module, lesson, total, minutes }: { module: strin
     setSaving(true);
     setProblem(null);
     if (!online && offlineSupported()) {
-      await queueMark(module, lesson, visibleSeconds());
+      await queueMark(module, lesson, visibleSeconds(), title);
       setSaving(false);
       return;
     }
     const res = await postJson<{ completed: string[] }>("/api/progress", { module, lesson });
     if (!res.ok && res.status === 0 && offlineSupported()) {
-      await queueMark(module, lesson, visibleSeconds());
+      await queueMark(module, lesson, visibleSeconds(), title);
       await flushQueue();
     } else if (!res.ok) setProblem(res.error);
     setSaving(false);

@@ -69,7 +69,7 @@ export function OfflineOverview() {
           <ul className="mt-2 list-disc pl-6" data-testid="queue-list">
             {queue.map((q) => (
               <li key={`${q.module}/${q.lesson}`}>
-                {q.module} / {q.lesson} — {t("markedLine", { when: formatWhen(q.markedAt), minutes: Math.round(q.readingSeconds / 60) })}
+                {q.title ?? `${q.module} / ${q.lesson}`} — {t("markedLine", { when: formatWhen(q.markedAt), minutes: Math.round(q.readingSeconds / 60) })}
                 {q.note ? <span className="block text-sm text-muted">{t("server", { note: q.note })}</span> : null}
               </li>
             ))}

@@ -11,11 +11,17 @@ import { INVITE_ROLES, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, rosterRowText, type In
 
 type ImportResult = { imported: number; skipped: number; message: string };
 
-async function send(url: string, form: FormData, offline: string): Promise<{ ok: true; data: unknown } | { ok: false; error: string; billing?: boolean }> {
+type Failure = { ok: false; error: string; billing?: boolean; errorKey?: string; errorValues?: Record<string, string | number> };
+
+async function send(url: string, form: FormData, offline: string): Promise<{ ok: true; data: unknown } | Failure> {
   try {
     const res = await fetch(url, { method: "POST", body: form });
     const data = await res.json().catch(() => ({}));
-    if (!res.ok) return { ok: false, error: data.error ?? `Request failed (${res.status})`, billing: Boolean(data.billingUrl) };
+    if (!res.ok) {
+      // a whole-file problem comes with its catalog key (bulk.file.*), shown in the reader's language
+      const errorKey = typeof data.errorKey === "string" && data.errorKey.startsWith("bulk.file.") ? data.errorKey : undefined;
+      return { ok: false, error: data.error ?? `Request failed (${res.status})`, billing: Boolean(data.billingUrl), errorKey, errorValues: data.errorValues };
+    }
     return { ok: true, data };
   } catch {
     return { ok: false, error: offline };
@@ -39,6 +45,8 @@ export function BulkInvite({ org, defaultLanguage }: { org: string | null; defau
   const [result, setResult] = useState<ImportResult | null>(null);
   const [showAll, setShowAll] = useState(false);
 
+  const failureText = (f: Failure) => (f.errorKey && t.has(f.errorKey as never) ? t(f.errorKey as never, (f.errorValues ?? {}) as never) : f.error);
+
   function formFor(f: File, extra: Record<string, string> = {}) {
     const form = new FormData();
     form.set("file", f);
@@ -56,7 +64,7 @@ export function BulkInvite({ org, defaultLanguage }: { org: string | null; defau
     setBusy(true);
     const res = await send("/api/team/invites/preview", formFor(file), t("bulk.offline"));
     setBusy(false);
-    if (!res.ok) return setError({ message: res.error });
+    if (!res.ok) return setError({ message: failureText(res) });
     setPreview(res.data as RosterPreview);
   }
 
@@ -66,7 +74,7 @@ export function BulkInvite({ org, defaultLanguage }: { org: string | null; defau
     setBusy(true);
     const res = await send("/api/team/invites/import", formFor(file, { fileHash: preview.fileHash, language }), t("bulk.offline"));
     setBusy(false);
-    if (!res.ok) return setError({ message: res.error, billing: res.billing });
+    if (!res.ok) return setError({ message: failureText(res), billing: res.billing });
     setResult(res.data as ImportResult);
     setPreview(null);
     setFile(null);

@@ -96,11 +96,12 @@ export const auth = betterAuth({
       }
       // Accounts created from an invitation are verified at creation (the link proved the address).
       if (user.emailVerified) return;
+      const t = mailTranslator(stored?.language);
       await sendMail({
         to: user.email,
         kind: "verify-email",
-        subject: "Confirm your e-mail for Riser",
-        text: `Hello ${user.name},\n\nConfirm this address to finish setting up your Riser account:\n\n${url}\n\nThe link works for 24 hours.`,
+        subject: t("auth.verify.subject"),
+        text: `${t("helloName", { name: user.name })}\n\n${t("auth.verify.body", { url })}`,
       });
     },
   },

@@ -6,6 +6,7 @@ import { rateLimitBucket, user } from "@/db/schema";
 import { hitRateLimit } from "@/lib/rate-limit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { mailTranslator } from "@/lib/mail/i18n";
 
 /**
  * Failed sign-ins counted per account, whatever address they come from (NIST SP 800-63B §5.2.2:
@@ -42,14 +43,15 @@ export async function signInLock(email: string, now = new Date()): Promise<{ loc
 export async function recordFailedSignIn(email: string, ip: string, now = new Date()): Promise<void> {
   const r = await hitRateLimit(keyFor(email), env.SIGN_IN_LOCK_FAILURES, env.SIGN_IN_LOCK_WINDOW_S, now);
   if (r.hits !== env.SIGN_IN_LOCK_FAILURES) return;
-  const [owner] = await db.select({ name: user.name, email: user.email }).from(user).where(eq(user.email, email.trim().toLowerCase()));
+  const [owner] = await db.select({ name: user.name, email: user.email, language: user.language }).from(user).where(eq(user.email, email.trim().toLowerCase()));
   if (!owner) return;
   const minutes = Math.ceil(env.SIGN_IN_LOCK_WINDOW_S / 60);
+  const t = mailTranslator(owner.language);
   await sendMail({
     to: owner.email,
     kind: "sign-in-paused",
-    subject: "Sign-in to your Riser account is paused",
-    text: `Hello ${owner.name},\n\nThere were ${r.hits} sign-in attempts with a wrong password for your Riser account (the last from the network address ${ip}). To protect it, sign-in is paused for up to ${minutes} minutes.\n\nIf these were you, wait and try again, or choose a new password: ${env.APP_URL}/forgot-password\n\nIf they were not you, your password is still safe as long as nobody knows it; choosing a new, long one is a good idea.`,
+    subject: t("auth.paused.subject"),
+    text: `${t("helloName", { name: owner.name })}\n\n${t("auth.paused.body", { hits: r.hits, ip, minutes, url: `${env.APP_URL}/forgot-password` })}`,
   });
 }
 

@@ -1,17 +1,17 @@
 import "server-only";
 import { log } from "@/lib/log";
-import { and, eq, isNull, or } from "drizzle-orm";
+import { and, eq, inArray, isNull, or } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { checkout, organization, paymentEvent, user, type CheckoutStatus, type PaymentOutcome } from "@/db/schema";
 import { audit } from "@/lib/audit";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail";
+import { mailDate, mailTranslator, type MailT } from "@/lib/mail/i18n";
 import { seatsAfterPurchase } from "./allowance";
 import { isDuplicateKey } from "./checkout";
 import { PLANS } from "./plans";
 import { formatMoney } from "./pricing";
 import type { ProviderEvent, ProviderSession } from "./provider";
-import { receiptLongDate } from "@/lib/dates";
 
 export type WebhookOutcome = PaymentOutcome | "duplicate" | "unknown" | "unhandled";
 export type WebhookResult = { outcome: WebhookOutcome; seatsAdded: number };
@@ -158,8 +158,6 @@ export async function processPaymentEvent(event: ProviderEvent, now = new Date()
   return { outcome: applied.outcome, seatsAdded: applied.seatsAdded };
 }
 
-const dateText = (d: Date) => receiptLongDate(d);
-
 /** The receipt mail: to whoever bought, and to every manager of the organization. */
 async function mailReceipt(checkoutId: string, applied: Applied, tx: Tx): Promise<void> {
   const [c] = await tx
@@ -173,27 +171,31 @@ async function mailReceipt(checkoutId: string, applied: Applied, tx: Tx): Promis
     .from(user)
     .where(and(eq(user.organizationId, c.checkout.organizationId), eq(user.role, "manager"), or(isNull(user.banned), eq(user.banned, false))));
   const to = [...new Set([c.checkout.requestedByEmail, ...managers.map((m) => m.email)])];
+  const languageOf = new Map((await tx.select({ email: user.email, language: user.language }).from(user).where(inArray(user.email, to))).map((u) => [u.email, u.language]));
   const k = c.checkout;
   const plan = PLANS.find((p) => p.key === k.plan)?.name ?? k.plan;
-  const s = k.seats === 1 ? "" : "s";
-  const text = [
-    "Hello,",
-    "",
-    `The payment service confirmed a payment for ${c.orgName}. Thank you.`,
-    "",
-    `Seats added:   ${k.seats}`,
-    `Seats now:     ${applied.seatsAfter} (before: ${applied.seatsBefore})`,
-    `Amount paid:   ${formatMoney(k.amount, k.currency)} (${k.currency.toUpperCase()}), ${k.seats} × ${formatMoney(k.unitAmount, k.currency)}, ${plan}`,
-    `Date:          ${dateText(k.paidAt ?? new Date())}`,
-    `Receipt:       ${receiptNumber(applied.paymentEventId)}`,
-    `Reference:     ${k.providerSessionId ?? ""}`,
-    `Bought by:     ${k.requestedByName} (${k.requestedByEmail})`,
-    "",
-    `Receipts and seats: ${env.APP_URL}/team/billing`,
-    "",
-    "Riser",
-  ].join("\n");
+  // each recipient reads the receipt in their own stored language (English for an address without an account)
+  const textIn = (t: MailT, language: string | null | undefined) =>
+    [
+      t("hello"),
+      "",
+      t("receipt.intro", { org: c.orgName }),
+      "",
+      t("receipt.seatsAdded", { seats: k.seats }),
+      t("receipt.seatsNow", { after: String(applied.seatsAfter ?? "—"), before: String(applied.seatsBefore ?? "—") }),
+      t("receipt.amount", { total: formatMoney(k.amount, k.currency), currency: k.currency.toUpperCase(), seats: k.seats, unit: formatMoney(k.unitAmount, k.currency), plan }),
+      t("receipt.date", { date: mailDate(language, k.paidAt ?? new Date()) }),
+      t("receipt.number", { number: receiptNumber(applied.paymentEventId) }),
+      t("receipt.reference", { reference: k.providerSessionId ?? "" }),
+      t("receipt.boughtBy", { name: k.requestedByName, email: k.requestedByEmail }),
+      "",
+      t("receipt.link", { url: `${env.APP_URL}/team/billing` }),
+      "",
+      t("signature"),
+    ].join("\n");
   for (const address of to) {
-    await sendMail({ to: address, subject: `Riser receipt: ${k.seats} seat${s} for ${c.orgName}`, text, kind: "billing.receipt", key: `billing.receipt:${applied.paymentEventId}:${address}` }, tx);
+    const language = languageOf.get(address);
+    const t = mailTranslator(language);
+    await sendMail({ to: address, subject: t("receipt.subject", { seats: k.seats, org: c.orgName }), text: textIn(t, language), kind: "billing.receipt", key: `billing.receipt:${applied.paymentEventId}:${address}` }, tx);
   }
 }

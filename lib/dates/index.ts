@@ -59,5 +59,3 @@ export const weekdayLongDate = fmt("en-US", { weekday: "short", month: "long", d
 /** "1 Dec 2026" and "1 Dec 2026, 08:30": billing (receipts follow the day-month-year order). */
 export const receiptDate = fmt("en-GB", { day: "numeric", month: "short", year: "numeric" });
 export const receiptDateTime = fmt("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", hour12: false });
-/** "1 December 2026": billing mail. */
-export const receiptLongDate = fmt("en-GB", { day: "numeric", month: "long", year: "numeric" });

@@ -23,7 +23,7 @@ export class DomainError extends Error {
     message: string,
     readonly fieldErrors?: Record<string, string[]>,
     /** extra figures the answer carries beside the message (a seat refusal's seats and billing link) */
-    readonly details?: Record<string, string | number>,
+    readonly details?: Record<string, string | number | Record<string, string | number>>,
   ) {
     super(message);
   }

@@ -9,7 +9,8 @@ export * from "./names";
 
 /** `locale`: the language the pages were stored in (the reader's, when they were kept). */
 export type SavedModule = { module: string; locale?: string; title: string; version: string; savedAt: string; bytes: number; pages: number; cache: string };
-export type QueuedMark = { module: string; lesson: string; readingSeconds: number; markedAt: string; note?: string };
+/** `title`: module and lesson titles as the learner read them (marks queued before it was kept have none) */
+export type QueuedMark = { module: string; lesson: string; title?: string; readingSeconds: number; markedAt: string; note?: string };
 type Plan = { module: string; locale: string; title: string; version: string; urls: string[] };
 
 /**
@@ -179,11 +180,11 @@ export async function listQueue(): Promise<QueuedMark[]> {
 }
 
 /** One entry per lesson: marking twice keeps the first mark and the longer reading time. */
-export async function queueMark(module: string, lesson: string, readingSeconds: number): Promise<void> {
+export async function queueMark(module: string, lesson: string, readingSeconds: number, title?: string): Promise<void> {
   const key = `queue:${module}/${lesson}`;
   const prev = await get<QueuedMark>(key, db());
   const seconds = Math.max(0, Math.round(readingSeconds), prev?.readingSeconds ?? 0);
-  await set(key, { module, lesson, readingSeconds: seconds, markedAt: prev?.markedAt ?? new Date().toISOString() }, db());
+  await set(key, { module, lesson, title: title ?? prev?.title, readingSeconds: seconds, markedAt: prev?.markedAt ?? new Date().toISOString() }, db());
   changed();
 }
 

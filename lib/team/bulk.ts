@@ -9,7 +9,7 @@ import { DomainError } from "@/lib/errors";
 import { audit } from "@/lib/audit";
 import { sendMail } from "@/lib/mail";
 import { insertInvitation, inviteMail, pendingEmails } from "./invites";
-import { checkRoster, decodeRoster, parseRoster, type CheckedRow, type RawRosterRow } from "./roster";
+import { checkRoster, decodeRoster, parseRoster, type CheckedRow, type RawRosterRow, type RosterFileProblem } from "./roster";
 import { ROSTER_MAX_BYTES } from "./schemas";
 import type { Locale } from "@/lib/i18n/browser";
 import { assertSeatAvailable, seatUsage } from "@/lib/billing";
@@ -40,11 +40,14 @@ export async function readUpload(req: Request): Promise<{ bytes: Uint8Array; fil
   return { bytes: new Uint8Array(await file.arrayBuffer()), fileName: file.name || "roster.csv", form };
 }
 
+/** 400 with the English text, plus its catalog key and parts so the page can show it in the reader's language. */
+const fileError = (p: RosterFileProblem) => new DomainError("invalid", p.error, { file: [p.error] }, { errorKey: p.message.key, errorValues: p.message.values });
+
 function rowsOf(bytes: Uint8Array, fileName: string): RawRosterRow[] {
   const decoded = decodeRoster(bytes, fileName);
-  if ("error" in decoded) throw new DomainError("invalid", decoded.error, { file: [decoded.error] });
+  if ("error" in decoded) throw fileError(decoded);
   const parsed = parseRoster(decoded.text);
-  if ("error" in parsed) throw new DomainError("invalid", parsed.error, { file: [parsed.error] });
+  if ("error" in parsed) throw fileError(parsed);
   return parsed.rows;
 }
 

@@ -11,34 +11,42 @@ import enTeam from "@/messages/en/team.json";
 import type { RosterMessage } from "./roster-text";
 import { INVITE_ROLES, ROSTER_COLUMNS, ROSTER_MAX_BYTES, ROSTER_MAX_ROWS, type InviteRole } from "./schemas";
 
-export type RosterFileProblem = { error: string };
+/** A whole-file problem: the English text (the API's `error`) and the same as a team catalog key (`bulk.file.*`). */
+export type RosterFileProblem = { error: string; message: RosterFileMessage };
+export type RosterFileMessage = { key: string; values: Record<string, string | number> };
 
-const kb = (n: number) => `${Math.round(n / 1024)} KB`;
-const LIMIT_TEXT = `${ROSTER_MAX_BYTES / (1024 * 1024)} MB`;
+const english = createTranslator({ locale: "en-US", messages: { team: enTeam }, namespace: "team" });
+const englishOf = english as unknown as (k: string, v: Record<string, string | number>) => string;
+
+function fileProblem(name: string, values: Record<string, string | number> = {}): RosterFileProblem {
+  const key = `bulk.file.${name}`;
+  return { error: englishOf(key, values), message: { key, values } };
+}
+const LIMITS = { mb: ROSTER_MAX_BYTES / (1024 * 1024), rows: ROSTER_MAX_ROWS };
 
 /**
  * Bytes → text. Refuses what is not a CSV (a spreadsheet workbook, a binary file), what is too
  * large, and text that is not UTF-8 (invalid byte sequences are caught by a fatal decoder).
  */
 export function decodeRoster(bytes: Uint8Array, fileName: string): { text: string } | RosterFileProblem {
-  if (bytes.byteLength === 0) return { error: "The file is empty. Use the template: a header row (email,name,role,team) and one row per person." };
-  if (bytes.byteLength > ROSTER_MAX_BYTES) return { error: `The file is ${kb(bytes.byteLength)}; the limit is ${LIMIT_TEXT} (about ${ROSTER_MAX_ROWS.toLocaleString("en-US")} rows). Split it into smaller files.` };
+  if (bytes.byteLength === 0) return fileProblem("empty");
+  if (bytes.byteLength > ROSTER_MAX_BYTES) return fileProblem("tooLarge", { kb: Math.round(bytes.byteLength / 1024), ...LIMITS });
   const name = fileName.toLowerCase();
   const zip = bytes[0] === 0x50 && bytes[1] === 0x4b; // PK: xlsx, ods, zip
   if (zip || /\.(xlsx|xlsm|xls|ods|numbers|zip)$/.test(name)) {
-    return { error: "This is a spreadsheet workbook, not a CSV file. In your spreadsheet choose Save as (or Download) → “CSV UTF-8”, then upload that file." };
+    return fileProblem("workbook");
   }
-  if (!/\.(csv|txt)$/.test(name)) return { error: "Upload a .csv file (comma-separated values). Start from the template if unsure." };
+  if (!/\.(csv|txt)$/.test(name)) return fileProblem("notCsv");
   if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
-    return { error: "The file is saved as UTF-16 text. Save it again as “CSV UTF-8” and upload that file." };
+    return fileProblem("utf16");
   }
   let text: string;
   try {
     text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
   } catch {
-    return { error: "The file is not UTF-8 text (it has bytes that are not valid UTF-8, as in a file saved as Windows-1252 or Latin-1). Save it again as “CSV UTF-8” and upload that file." };
+    return fileProblem("notUtf8");
   }
-  if (text.includes("\u0000")) return { error: "The file contains binary data, so it is not a CSV file. Save your roster as “CSV UTF-8” and upload that file." };
+  if (text.includes("\u0000")) return fileProblem("binary");
   return { text: text.replace(/^\uFEFF/, "") };
 }
 
@@ -50,7 +58,7 @@ export function parseRoster(text: string): { rows: RawRosterRow[] } | RosterFile
   const data = parsed.data;
   const header = (data[0] ?? []).map((h) => h.trim().toLowerCase().replace(/^e-mail$/, "email"));
   if (!header.includes("email")) {
-    return { error: `The first row must name the columns: ${ROSTER_COLUMNS.join(",")} (only email is required). Download the template to see the layout.` };
+    return fileProblem("noHeader", { columns: ROSTER_COLUMNS.join(",") });
   }
   const col = (n: string) => header.indexOf(n);
   const [ie, inm, ir, it] = [col("email"), col("name"), col("role"), col("team")];
@@ -61,9 +69,9 @@ export function parseRoster(text: string): { rows: RawRosterRow[] } | RosterFile
     const at = (k: number) => (k >= 0 ? (cells[k] ?? "").trim() : "");
     rows.push({ line: i + 1, email: at(ie), name: at(inm), role: at(ir), team: at(it) });
   }
-  if (rows.length === 0) return { error: "The file has a header row but no people under it." };
+  if (rows.length === 0) return fileProblem("noRows");
   if (rows.length > ROSTER_MAX_ROWS) {
-    return { error: `The file has ${rows.length.toLocaleString("en-US")} rows; the limit is ${ROSTER_MAX_ROWS.toLocaleString("en-US")} per upload. Split it into smaller files.` };
+    return fileProblem("tooManyRows", { count: rows.length, rows: ROSTER_MAX_ROWS });
   }
   return { rows };
 }
@@ -84,9 +92,8 @@ export type RosterContext = {
   used: number;
 };
 
-const english = createTranslator({ locale: "en-US", messages: { team: enTeam }, namespace: "team" });
 /** the English text of a row message (what `problems` and `notes` hold) */
-export const rosterMessageEnglish = (m: RosterMessage) => (english as unknown as (k: string, v: Record<string, string>) => string)(`bulk.row.${m.key}`, m.values);
+export const rosterMessageEnglish = (m: RosterMessage) => englishOf(`bulk.row.${m.key}`, m.values);
 
 export type CheckedRow = RawRosterRow & {
   /** in English; `problemMessages` / `noteMessages` carry the same as catalog keys for other languages */

@@ -6,7 +6,7 @@ import { randomUUID } from "node:crypto";
 import { and, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { auditLog, checkout, invitation, organization, paymentEvent } from "@/db/schema";
+import { auditLog, checkout, invitation, organization, paymentEvent, user } from "@/db/schema";
 import { demoByRole } from "@/db/demo";
 import { CURRENCY, PLANS, TRIAL } from "@/lib/billing/plans";
 import { formatMoney, quote } from "@/lib/billing/pricing";
@@ -152,6 +152,21 @@ describe("checkout → fake payment → signed webhook → seats", () => {
     expect(results.map((r) => r.status)).toEqual([200, 200, 200]);
     expect(results.filter((r) => r.json.outcome === "seats_added")).toHaveLength(1);
     expect(await seatsOf(t.id)).toBe(8);
+  });
+
+  it("a manager who reads Spanish gets the receipt in Spanish, the same figures", async () => {
+    const t = await testOrg("idioma", 5);
+    await db.update(user).set({ language: "es" }).where(eq(user.id, t.manager.id));
+    const res = await buy(t.client, 2);
+    const [s] = await fakeSessions(res.json.checkoutId as string);
+    expect((await postWebhook(sessionEvent("checkout.session.completed", { ...s, status: "complete", payment_status: "paid" }))).json.outcome).toBe("seats_added");
+    const two = quote(2, PLANS, CURRENCY)!;
+    // messages/es/mail.json receipt.*: "{seats, plural, one {# puesto} other {# puestos}}"
+    const mail = await waitForMail(t.manager.email, /Recibo de Riser: 2 puestos para Billing idioma Fire Co/);
+    expect(mail.text).toContain("Puestos ahora:    7 (antes: 5)");
+    expect(mail.text).toContain(formatMoney(two.amount, CURRENCY));
+    expect(mail.text).toMatch(/Recibo:\s+R-\d{6}/);
+    expect(mail.text).not.toMatch(/Seats now|Amount paid/);
   });
 
   it("a late 'expired' event for the paid checkout changes nothing", async () => {

@@ -6,8 +6,9 @@
 import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
-import { session } from "@/db/schema";
-import { APP, fetchFrom, freshIp, mailsTo, uniqueEmail } from "../helpers/http";
+import { session, user } from "@/db/schema";
+import esMail from "@/messages/es/mail.json";
+import { APP, fetchFrom, freshIp, mailsTo, uniqueEmail, waitForMail } from "../helpers/http";
 import { createOrganization, createPeople, TEST_PASSWORD } from "../helpers/fixtures";
 
 afterAll(() => pool.end());
@@ -93,6 +94,21 @@ describe("per-account sign-in pause", () => {
     }
     expect(notices).toHaveLength(1);
     expect(notices[0]!.text).toContain("/forgot-password");
+  });
+
+  it("mails the pause notice in the owner's stored language", async () => {
+    const org = await createOrganization("Pausa Idioma Co");
+    const [p] = await createPeople(1, { organizationId: org.id, tag: "lockout-es" });
+    await db.update(user).set({ language: "es" }).where(eq(user.id, p!.id));
+    await awayFromWindowEdge();
+    for (let i = 0; i < LOCK_FAILURES; i++) await signInFrom(freshIp(), p!.email, `contrasena-mala-${i}`);
+    const notice = await waitForMail(p!.email);
+    // messages/es/mail.json auth.paused, with the count of failures and the way out filled in
+    expect(notice.subject).toBe(esMail.auth.paused.subject);
+    expect(notice.text).toContain(`Hola, ${p!.name}:`);
+    expect(notice.text).toContain(`Hubo ${LOCK_FAILURES} intentos`);
+    expect(notice.text).toContain("/forgot-password");
+    expect(notice.text).not.toMatch(/wrong password|is paused/);
   });
 
   it("does not pause an account for failures under the limit", async () => {

@@ -85,6 +85,8 @@ describe("CSV roster", () => {
     const xlsx = await uploadRoster(mgr, "/api/team/invites/preview", Uint8Array.from([0x50, 0x4b, 3, 4, 20, 0, 6, 0]), "roster.xlsx");
     expect(xlsx.status).toBe(400);
     expect(xlsx.json.error).toMatch(/spreadsheet workbook, not a CSV file/);
+    // the same refusal as a team-catalog key, so the page shows it in the manager's language
+    expect(xlsx.json.errorKey).toBe("bulk.file.workbook");
     const big = await uploadRoster(mgr, "/api/team/invites/preview", new Uint8Array(1024 * 1024 + 10).fill(0x61), "big.csv");
     expect(big.status).toBe(413);
     expect(big.json.error).toMatch(/the limit is 1 MB/);
@@ -96,6 +98,7 @@ describe("CSV roster", () => {
     const noHeader = await uploadRoster(mgr, "/api/team/invites/preview", "name,team\r\nA,B\r\n", "r.csv");
     expect(noHeader.status).toBe(400);
     expect(noHeader.json.error).toMatch(/first row must name the columns/);
+    expect(noHeader.json).toMatchObject({ errorKey: "bulk.file.noHeader", errorValues: { columns: "email,name,role,team" } });
     expect(await invitesOf(org.id)).toBe(2);
   });
 

@@ -2,6 +2,8 @@
 // Encoding facts: "ë" is the single byte 0xEB in Windows-1252/Latin-1, which is not valid UTF-8
 // on its own (RFC 3629); an .xlsx workbook is a ZIP archive and starts with "PK" (0x50 0x4B).
 import { describe, expect, it } from "vitest";
+import { createTranslator } from "use-intl/core";
+import esTeam from "@/messages/es/team.json";
 import { checkRoster, decodeRoster, parseRoster, rosterTemplate, type RosterContext } from "@/lib/team/roster";
 
 const enc = (s: string) => new TextEncoder().encode(s);
@@ -19,6 +21,42 @@ describe("decodeRoster", () => {
 
   it("accepts UTF-8 with or without a byte-order mark", () => {
     expect(decodeRoster(enc("\uFEFFemail\nzoë@x.example\n"), "r.csv")).toEqual({ text: "email\nzoë@x.example\n" });
+  });
+});
+
+describe("whole-file problems in the reader's language", () => {
+  // Every whole-file refusal carries its team-catalog key; the Spanish catalog has the same key with
+  // the same placeholders, and numbers are written the Spanish way (CLDR es: "." groups thousands).
+  const es = createTranslator({ locale: "es", messages: { team: esTeam }, namespace: "team" }) as unknown as (k: string, v: Record<string, string | number>) => string;
+  const problems = [
+    decodeRoster(new Uint8Array(0), "r.csv"),
+    decodeRoster(new Uint8Array(1024 * 1024 + 1), "r.csv"),
+    decodeRoster(Uint8Array.from([0x50, 0x4b, 3, 4]), "r.csv"),
+    decodeRoster(enc("a"), "r.pdf"),
+    decodeRoster(Uint8Array.from([0xff, 0xfe, 0x65, 0]), "r.csv"),
+    decodeRoster(Uint8Array.from([0x61, 0xeb, 0x0a]), "r.csv"),
+    decodeRoster(enc("a\u0000b"), "r.csv"),
+    parseRoster("name\nA\n"),
+    parseRoster("email\n\n"),
+    parseRoster(`email\n${Array.from({ length: 2001 }, (_, i) => `p${i}@x.example`).join("\n")}\n`),
+  ];
+
+  it("names ten distinct problems, each with a key in both catalogs", () => {
+    const keys = problems.map((p) => ("message" in p ? p.message.key : "none"));
+    expect(new Set(keys).size).toBe(10);
+    for (const p of problems) {
+      if (!("message" in p)) throw new Error("expected a problem");
+      const text = es(p.message.key, p.message.values);
+      expect(text, p.message.key).not.toBe(p.error);
+      expect(text, p.message.key).not.toMatch(/[{}]|bulk\.file/);
+    }
+  });
+
+  it("formats the row counts for Spanish readers", () => {
+    const tooMany = problems[9]!;
+    if (!("message" in tooMany)) throw new Error("expected a problem");
+    expect(es(tooMany.message.key, tooMany.message.values)).toMatch(/2001 filas; el límite es 2000 por carga/);
+    expect(es(tooMany.message.key, { ...tooMany.message.values, count: 12345 })).toMatch(/12\.345 filas/);
   });
 });
 

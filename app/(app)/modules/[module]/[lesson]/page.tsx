@@ -90,7 +90,7 @@ export default async function LessonPage({ params }: Params) {
         </ul>
         <p className="mt-2 text-muted">{t("updated", { date: lesson.meta.updated })}</p>
       </section>
-      <MarkComplete module={mod.slug} lesson={lesson.slug} total={mod.lessons.length} minutes={lesson.meta.minutes} />
+      <MarkComplete module={mod.slug} lesson={lesson.slug} title={`${mod.meta.title} — ${lesson.meta.title}`} total={mod.lessons.length} minutes={lesson.meta.minutes} />
       <nav aria-label={t("lessons")} className="flex flex-wrap justify-between gap-4">
         {prev ? <Link href={`/modules/${mod.slug}/${prev.slug}`}>← {prev.meta.title}</Link> : <span />}
         {next ? (
