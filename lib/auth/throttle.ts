@@ -5,8 +5,7 @@ import { db } from "@/db/client";
 import { rateLimitBucket, user } from "@/db/schema";
 import { hitRateLimit } from "@/lib/rate-limit";
 import { env } from "@/lib/env";
-import { sendMail } from "@/lib/mail";
-import { mailTranslator } from "@/lib/mail/i18n";
+import { mailTranslator, sendMail } from "@/lib/mail";
 
 /**
  * Failed sign-ins counted per account, whatever address they come from (NIST SP 800-63B §5.2.2:
