@@ -89,6 +89,32 @@ test("system demand at phone width keeps a result summary in view, and its chart
   await expect(page.locator('figure[aria-label="Demand versus supply"] figcaption')).toContainText(/shown up to/);
 });
 
+test("system demand: a field far below the first screen works at once — what is typed stays, the result follows, the unit switch converts it, a typo shows beside it", async ({ page }) => {
+  await signInAs(page, "callum@quillmoor.example");
+  await page.setViewportSize({ width: 360, height: 780 });
+  await page.goto("/tools/system-demand");
+  await page.waitForLoadState("networkidle");
+  const bar = page.locator("[data-summary-bar]");
+  await expect(bar).toContainText("psi");
+  const before = await bar.innerText();
+  // the last pipe run's length, far down the phone-width form, typed into without scrolling to it first
+  const length = page.locator('[data-field^="segments."][data-field$=".length"]').last();
+  await length.fill("100");
+  await expect(length).toHaveValue("100");
+  await expect(bar).not.toHaveText(before);
+  await expect(length).toHaveValue("100");
+  // US -> SI: 100 ft = 30.48 m (the international foot is 0.3048 m exactly; NIST SP 811, appendix B)
+  await page.getByLabel(/^SI/).check();
+  await expect(length).toHaveValue("30.48");
+  await expect(page.locator(`label[for="${await length.getAttribute("id")}"]`)).toContainText("(m)");
+  // a typo: the field's own error, tied to it for screen readers
+  await length.fill("3o");
+  await expect(length).toHaveAttribute("aria-invalid", "true");
+  const described = (await length.getAttribute("aria-describedby"))!.split(" ");
+  await expect(page.locator(`[id="${described[0]}"]`)).toHaveAttribute("role", "alert");
+  await expect(bar).toContainText(/fix/i);
+});
+
 test("friction loss in 1 in CPVC uses the average bore and lets the listed inside diameter govern", async ({ page }) => {
   await signInAs(page, "callum@quillmoor.example");
   await page.goto("/tools/friction-loss");
