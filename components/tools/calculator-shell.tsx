@@ -1,15 +1,15 @@
 "use client";
 
-import { useTranslations } from "next-intl";
+import { useLocale, useTimeZone, useTranslations } from "next-intl";
 import { memo, useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
 import { useForm, useWatch, type DefaultValues, type FieldErrors, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
-import { convertInputUnits, type CalculatorId, type CalculatorReport, type ReportT, type Units } from "@/lib/hydraulics/browser";
-import { loadEngine, type CalculatorEngine } from "./engine-loader";
+import { convertInputUnits, type CalculatorId, type CalculatorReport, type Units } from "@/lib/hydraulics/browser";
+import { loadEngine, type LoadedEngine } from "./engine-loader";
 import { FormPartsProvider, UnitSwitch } from "./fields";
 import { PdfButton as PlainPdfButton } from "./pdf-button";
 import { ReportView as PlainReportView } from "./report-view";
 import { SupplyChart as PlainSupplyChart } from "./supply-chart";
-import type { InitialCalculator } from "./types";
+import type { CalculatorWords, InitialCalculator } from "./types";
 
 export interface CalculatorState<TValues extends FieldValues> {
   form: UseFormReturn<TValues>;
@@ -19,6 +19,8 @@ export interface CalculatorState<TValues extends FieldValues> {
   pending: boolean;
   /** starts loading the engine (on focus or touch in the form, ahead of the first edit) */
   warmUp: () => void;
+  /** the few catalog words the form shows before the engine has loaded (from the server) */
+  words: CalculatorWords;
 }
 
 /**
@@ -31,18 +33,24 @@ export interface CalculatorState<TValues extends FieldValues> {
  * way, so the page shows its result without running the schemas or the calculation in the
  * browser. Those (./engine.ts) load once the calculator is focused or touched, ahead of the first
  * edit; until they have loaded, changed inputs show "loading", never the report of other values.
+ * The report's and the error sentences' words (the calcReports catalog, in the reader's language)
+ * load with them.
  */
 export function useCalculator<TValues extends FieldValues>(id: CalculatorId, initial: InitialCalculator): CalculatorState<TValues> {
-  // the report's and the error sentences' words in the reader's language; numbers come from lib/hydraulics either way
-  const tr = useTranslations("calcReports") as unknown as ReportT;
-  const [engine, setEngine] = useState<CalculatorEngine | null>(null);
+  // the engine comes with the report's and the error sentences' words in the reader's language;
+  // numbers come from lib/hydraulics either way
+  const tag = useLocale();
+  const timeZone = useTimeZone();
+  const [loaded, setLoaded] = useState<LoadedEngine | null>(null);
+  // one made for another language (the reader switched) is not used
+  const engine = loaded?.tag === tag ? loaded : null;
   const resolver = useMemo<Resolver<TValues>>(
     () => async (values, context, options) => {
       // not loaded (offline and not yet cached): no field errors, and no result either, as it stays "loading"
-      const e = await loadEngine().catch(() => null);
-      return (e ? e.formResolver(id, tr)(values, context, options as never) : { values: {}, errors: {} }) as never;
+      const e = await loadEngine(tag, timeZone).catch(() => null);
+      return (e ? e.engine.formResolver(id, e.tr)(values, context, options as never) : { values: {}, errors: {} }) as never;
     },
-    [id, tr],
+    [id, tag, timeZone],
   );
   const form = useForm<TValues>({
     resolver,
@@ -56,11 +64,11 @@ export function useCalculator<TValues extends FieldValues>(id: CalculatorId, ini
   const { report, input, pending } = useMemo(() => {
     if (!changed) return { report: initial.report, input: initial.input, pending: false };
     if (!engine) return { report: null, input: null, pending: true };
-    return { ...engine.formReport(id, key, tr), pending: false };
-  }, [changed, engine, id, key, tr, initial]);
+    return { ...engine.engine.formReport(id, key, engine.tr), pending: false };
+  }, [changed, engine, id, key, initial]);
   const warmUp = useCallback(() => {
-    if (!engine) void loadEngine().then(setEngine, () => undefined); // offline: tried again at the next edit
-  }, [engine]);
+    if (!engine) void loadEngine(tag, timeZone).then(setLoaded, () => undefined); // offline: tried again at the next edit
+  }, [engine, tag, timeZone]);
   useEffect(() => {
     if (changed) warmUp();
   }, [changed, key, warmUp]);
@@ -68,7 +76,7 @@ export function useCalculator<TValues extends FieldValues>(id: CalculatorId, ini
   useEffect(() => {
     if (formState.isDirty || formState.submitCount > 0) void trigger();
   }, [key, trigger, formState.isDirty, formState.submitCount]);
-  return { form, report, input, pending, warmUp };
+  return { form, report, input, pending, warmUp, words: initial.words };
 }
 
 // the result's parts re-render only when the result does (not on every change of the form's state)
@@ -110,7 +118,7 @@ export function CalculatorShell<TValues extends FieldValues>({
   embedded?: boolean;
 }) {
   const t = useTranslations("tools");
-  const { form, report, input, pending, warmUp } = state;
+  const { form, report, input, pending, warmUp, words } = state;
   const units = (useWatch({ control: form.control, name: "units" as never }) as unknown as Units | undefined) ?? "us";
   const info = { title: t(`info.${id}.title`), summary: t(`info.${id}.summary`) };
 
@@ -142,7 +150,9 @@ export function CalculatorShell<TValues extends FieldValues>({
             onSubmit={form.handleSubmit(() => undefined)}
           >
             <UnitSwitch units={units} onSwitch={switchUnits} />
-            <FormPartsProvider form={form}>{children}</FormPartsProvider>
+            <FormPartsProvider form={form} words={words}>
+              {children}
+            </FormPartsProvider>
             <button type="submit" className="sr-only">
               {t("calculate")}
             </button>
@@ -169,7 +179,7 @@ export function CalculatorShell<TValues extends FieldValues>({
             )}
           </div>
         </div>
-        <SummaryBar id={id} report={report} />
+        <SummaryBar id={id} report={report} words={words} />
       </section>
     </>
   );
@@ -179,11 +189,10 @@ export function CalculatorShell<TValues extends FieldValues>({
  * At phone width the worked result sits far below the inputs: keep the headline figure (and the
  * pass/short verdict) in view at the bottom of the screen while the inputs are edited.
  */
-const SummaryBar = memo(function SummaryBar({ id, report }: { id: CalculatorId; report: CalculatorReport | null }) {
+const SummaryBar = memo(function SummaryBar({ id, report, words }: { id: CalculatorId; report: CalculatorReport | null; words: CalculatorWords }) {
   const t = useTranslations("tools");
-  const tr = useTranslations("calcReports");
   const headline = report?.results[0];
-  const margin = report?.results.find((r) => r.label === tr("common.margin") || r.label === tr("common.shortfall"));
+  const margin = report?.results.find((r) => r.label === words.margin || r.label === words.shortfall);
   return (
     <div
       className="sticky bottom-0 z-10 -mx-4 mt-4 flex items-center justify-between gap-3 border-t border-line bg-paper px-4 py-2 lg:hidden"

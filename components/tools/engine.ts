@@ -6,7 +6,17 @@
  */
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { FieldValues, Resolver } from "react-hook-form";
+import { createTranslator } from "use-intl/core";
+import { FORMATS } from "@/lib/i18n/browser";
 import { calculatorFormSchema, calculatorReport, parseCalculatorInput, type CalculatorId, type CalculatorReport, type ReportT } from "@/lib/hydraulics";
+
+/**
+ * The calcReports translator for the browser, made from the catalog that loads with this code
+ * (./engine-loader.ts) with the locale, time zone and formats the page's own translators use.
+ */
+export function reportTranslator(locale: string, timeZone: string | undefined, messages: Record<string, unknown>): ReportT {
+  return createTranslator({ locale, timeZone, formats: FORMATS, messages: { calcReports: messages } as never, namespace: "calcReports" as never }) as unknown as ReportT;
+}
 
 const resolvers = new Map<CalculatorId, WeakMap<ReportT, Resolver<FieldValues>>>();
 

@@ -3,7 +3,9 @@
  * leaves out. The values are the input type of the calculator's schema (lib/hydraulics/shared), so
  * the same schema validates them.
  */
-import type { CalculatorFormValues, CalculatorId, CalculatorInputs, SegmentReportInput } from "@/lib/hydraulics";
+import type { CalculatorFormValues, CalculatorId, CalculatorInputs, ReportT, SegmentReportInput } from "@/lib/hydraulics";
+import { PIPE_MATERIALS } from "@/lib/hydraulics/browser";
+import type { CalculatorWords } from "./types";
 
 const text = (v: number | undefined) => (v === undefined ? "" : String(v));
 
@@ -90,6 +92,15 @@ export function systemDemandFormValues(input: CalculatorInputs["system-demand"],
       residualPressure: text(input.supply?.residualPressure),
       testFlow: text(input.supply?.testFlow),
     },
+  };
+}
+
+/** the calcReports words a form shows before its engine has loaded, from that catalog's translator */
+export function calculatorWords(tr: ReportT): CalculatorWords {
+  return {
+    materials: Object.fromEntries(PIPE_MATERIALS.map((m) => [m, tr(`material.${m}`)])),
+    margin: tr("common.margin"),
+    shortfall: tr("common.shortfall"),
   };
 }
 

@@ -7,12 +7,11 @@ import { PIPE_MATERIALS, sizesFor, type CalculatorFormValues } from "@/lib/hydra
 import { CalculatorShell, useCalculator } from "./calculator-shell";
 import { NumberField, SelectField } from "./fields";
 import { unitLabels } from "./unit-labels";
-import type { CalculatorProps } from "./types";
+import type { CalculatorProps, CalculatorWords } from "./types";
 
-/** the pipe materials with their names in the reader's language (calcReports catalog) */
-export function useMaterialOptions() {
-  const t = useTranslations("calcReports");
-  return useMemo(() => PIPE_MATERIALS.map((m) => ({ value: m, label: t(`material.${m}`) })), [t]);
+/** the pipe materials with their names in the reader's language (from the server: ./initial-state.ts) */
+export function useMaterialOptions(words: CalculatorWords) {
+  return useMemo(() => PIPE_MATERIALS.map((m) => ({ value: m, label: words.materials[m] ?? m })), [words]);
 }
 export const sizeOptions = (material: string | undefined) =>
   sizesFor((PIPE_MATERIALS as readonly string[]).includes(material ?? "") ? (material as (typeof PIPE_MATERIALS)[number]) : "copper-l").map(
@@ -21,7 +20,7 @@ export const sizeOptions = (material: string | undefined) =>
 
 export function FrictionLossCalculator({ initial, embedded }: CalculatorProps) {
   const t = useTranslations("tools");
-  const materialOptions = useMaterialOptions();
+  const materialOptions = useMaterialOptions(initial.words);
   const state = useCalculator<CalculatorFormValues["friction-loss"]>("friction-loss", initial);
   const [units, material] = useWatch({ control: state.form.control, name: ["units", "material"] });
   const u = unitLabels(units);

@@ -12,14 +12,26 @@ import { emptySegment, type SystemDemandFormValues } from "./form-values";
 import { unitLabels } from "./unit-labels";
 import type { CalculatorProps } from "./types";
 
+/**
+ * The form is some 7,000 px tall on a phone: each group below the first screen is laid out and
+ * painted only as it comes near the screen (content-visibility: auto; it stays in the page, in the
+ * accessibility tree, in find-in-page and in the tab order). The sizes are rough phone heights kept
+ * until the group has been laid out once, after which the browser remembers the real one.
+ */
+const OFFSCREEN = {
+  sprinkler: "[content-visibility:auto] [contain-intrinsic-size:auto_1500px]",
+  pipeRun: "[content-visibility:auto] [contain-intrinsic-size:auto_1000px]",
+  device: "[content-visibility:auto] [contain-intrinsic-size:auto_260px]",
+};
+
 /** one pipe run: material, size, length, rise and fittings */
 function SegmentFields({ prefix, title }: { prefix: string; title: string }) {
   const t = useTranslations("tools");
-  const { control } = useFormParts<SystemDemandFormValues>();
+  const { control, words } = useFormParts<SystemDemandFormValues>();
   const [units, material] = useWatch({ control, name: ["units", `${prefix}.material` as "units"] }) as [string, string];
   const u = unitLabels(units === "si" ? "si" : "us");
   const plastic = material === "cpvc" || material === "pex";
-  const materialOptions = useMaterialOptions();
+  const materialOptions = useMaterialOptions(words);
   return (
     <fieldset className="flex flex-col gap-3 rounded border border-line bg-panel p-3">
       <legend className="px-1 font-bold">{title}</legend>
@@ -69,7 +81,7 @@ const DemandFields = memo(function DemandFields() {
     <>
       <h3 className="font-bold">{t("designSprinklers")}</h3>
       {sprinklers.fields.map((field, i) => (
-        <fieldset key={field.id} className="flex flex-col gap-3 rounded border border-line p-3">
+        <fieldset key={field.id} className={`flex flex-col gap-3 rounded border border-line p-3 ${OFFSCREEN.sprinkler}`}>
           <legend className="px-1 font-bold">{t("sprinklerN", { letter: String.fromCharCode(65 + i) })}</legend>
           <TextField name={`sprinklers.${i}.label`} label={t("label")} />
           <NumberField name={`sprinklers.${i}.k`} label={t("kFactor")} unit={u.k} hint={t("fromTheSprinklerSListing")} />
@@ -105,7 +117,7 @@ const DemandFields = memo(function DemandFields() {
       <h3 className="font-bold">{t("pipeFromTheSourceToThe")}</h3>
       <p className="text-sm text-muted">{t("listTheRunsFromTheWater")}</p>
       {segments.fields.map((field, i) => (
-        <div key={field.id} className="flex flex-col gap-2">
+        <div key={field.id} className={`flex flex-col gap-2 ${OFFSCREEN.pipeRun}`}>
           <SegmentFields prefix={`segments.${i}`} title={t("pipeRunN", { n: i + 1 })} />
           <Button type="button" variant="secondary" onClick={() => segments.remove(i)}>
             {t("removePipeRun", { n: i + 1 })}
@@ -121,7 +133,7 @@ const DemandFields = memo(function DemandFields() {
       <h3 className="font-bold">{t("devicesLossAtTheDesignFlow")}</h3>
       <p className="text-sm text-muted">{t("meterBackflowPreventerValvesReadEach")}</p>
       {devices.fields.map((field, i) => (
-        <fieldset key={field.id} className="flex flex-col gap-3 rounded border border-line p-3">
+        <fieldset key={field.id} className={`flex flex-col gap-3 rounded border border-line p-3 ${OFFSCREEN.device}`}>
           <legend className="px-1 font-bold">{t("deviceN", { n: i + 1 })}</legend>
           <TextField name={`devices.${i}.label`} label={t("device")} />
           <NumberField name={`devices.${i}.loss`} label={t("loss")} unit={u.pressure} />

@@ -22,8 +22,9 @@ export const SCOPED_NAMESPACES = {
   search: ["search"],
   signoffs: ["signoffs"],
   team: ["billing", "editions", "signoffs", "team"],
-  // the calculator pages and every calculator embedded in a lesson or card
-  tools: ["calcReports", "tools"],
+  // the calculator pages and every calculator embedded in a lesson or card; the report catalog
+  // (calcReports) is not among them: it loads with the calculators' engine (components/tools/engine-loader.ts)
+  tools: ["tools"],
   verify: ["verify"],
 } as const satisfies Record<string, readonly string[]>;
 

@@ -1,7 +1,9 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
 import { PDFDocument } from "pdf-lib";
-import { signInAs } from "./helpers";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { signInAs, throwAwayLearner } from "./helpers";
 
 test("a calculator computes from typed inputs, shows field errors and downloads its PDF summary", async ({ page }) => {
   await signInAs(page, "callum@quillmoor.example");
@@ -89,6 +91,32 @@ test("system demand at phone width keeps a result summary in view, and its chart
   await expect(page.locator('figure[aria-label="Demand versus supply"] figcaption')).toContainText(/shown up to/);
 });
 
+test("system demand: a field far below the first screen works at once — what is typed stays, the result follows, the unit switch converts it, a typo shows beside it", async ({ page }) => {
+  await signInAs(page, "callum@quillmoor.example");
+  await page.setViewportSize({ width: 360, height: 780 });
+  await page.goto("/tools/system-demand");
+  await page.waitForLoadState("networkidle");
+  const bar = page.locator("[data-summary-bar]");
+  await expect(bar).toContainText("psi");
+  const before = await bar.innerText();
+  // the last pipe run's length, far down the phone-width form, typed into without scrolling to it first
+  const length = page.locator('[data-field^="segments."][data-field$=".length"]').last();
+  await length.fill("100");
+  await expect(length).toHaveValue("100");
+  await expect(bar).not.toHaveText(before);
+  await expect(length).toHaveValue("100");
+  // US -> SI: 100 ft = 30.48 m (the international foot is 0.3048 m exactly; NIST SP 811, appendix B)
+  await page.getByLabel(/^SI/).check();
+  await expect(length).toHaveValue("30.48");
+  await expect(page.locator(`label[for="${await length.getAttribute("id")}"]`)).toContainText("(m)");
+  // a typo: the field's own error, tied to it for screen readers
+  await length.fill("3o");
+  await expect(length).toHaveAttribute("aria-invalid", "true");
+  const described = (await length.getAttribute("aria-describedby"))!.split(" ");
+  await expect(page.locator(`[id="${described[0]}"]`)).toHaveAttribute("role", "alert");
+  await expect(bar).toContainText(/fix/i);
+});
+
 test("friction loss in 1 in CPVC uses the average bore and lets the listed inside diameter govern", async ({ page }) => {
   await signInAs(page, "callum@quillmoor.example");
   await page.goto("/tools/friction-loss");
@@ -100,4 +128,29 @@ test("friction loss in 1 in CPVC uses the average bore and lets the listed insid
   await page.getByLabel(/^Listed inside diameter/).fill("1.09");
   await expect(page.locator('[data-report="friction-loss"]')).toContainText("1.090 in");
   await expect(page.locator('[data-report="friction-loss"]')).toContainText(/nominal overstates loss/);
+});
+
+test("a calculator in Spanish: what the browser works out after an edit — the report and the field errors — reads the Spanish report catalog", async ({ page }) => {
+  // the report catalog loads with the calculators' engine, in the reader's language (components/tools/engine-loader.ts)
+  const es = JSON.parse(readFileSync(path.join(process.cwd(), "messages", "es", "calcReports.json"), "utf8")) as { sprinklerFlow: { noteDischarge: string } };
+  const email = await throwAwayLearner();
+  await signInAs(page, email);
+  await page.goto("/tools");
+  await page.getByTestId("language-switch").getByRole("button", { name: "Español" }).click();
+  await expect(page.locator("html")).toHaveAttribute("lang", "es-US");
+  await page.goto("/tools/sprinkler-flow");
+  await page.waitForLoadState("networkidle");
+  await page.locator('[data-field="k"]').fill("5.6");
+  await page.locator('[data-field="pressure"]').fill("16");
+  // Q = K√P = 5.6 × √16 = 22.4 gpm (NFPA 13D discharge relation; arithmetic exact)
+  await expect(page.locator('[data-result="headline"]')).toContainText("22.4");
+  await expect(page.locator('[data-report="sprinkler-flow"]')).toContainText(es.sprinklerFlow.noteDischarge);
+  // a K-factor above the library's documented limit (100, lib/hydraulics/errors.ts INPUT_LIMITS): the field's
+  // own error, from the Spanish catalog's inputErrors.atMost ("{field}: debe ser como máximo {max}; se recibió {got}.")
+  const k = page.locator('[data-field="k"]');
+  await k.fill("150");
+  await expect(k).toHaveAttribute("aria-invalid", "true");
+  const errorId = (await k.getAttribute("aria-describedby"))!.split(" ")[0]!;
+  await expect(page.locator(`[id="${errorId}"]`)).toContainText("debe ser como máximo 100; se recibió 150");
+  await expect(page.locator('[data-result="headline"]')).toHaveCount(0);
 });

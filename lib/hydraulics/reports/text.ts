@@ -1,8 +1,9 @@
 /**
  * The words of the calculator reports come from the `calcReports` message catalog, in the reader's
  * language; the numbers, units and citations are put in as arguments, already formatted, so a
- * language never changes a figure. Builders take a translator for that namespace (the page passes
- * useTranslations("calcReports"), the PDF catalogTranslator(language, "calcReports")); without one
+ * language never changes a figure. Builders take a translator for that namespace (the server's
+ * getTranslations, the browser's made from the catalog that loads with the calculators' engine —
+ * components/tools/engine-loader.ts — and the PDF's catalogTranslator(language, …)); without one
  * they speak English.
  */
 import { createTranslator } from "use-intl/core";

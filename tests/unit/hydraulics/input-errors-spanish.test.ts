@@ -3,14 +3,13 @@
 // documented input limits (lib/hydraulics/errors.ts INPUT_LIMITS: K-factor at most 100, 10,000 ft of
 // elevation), the sentence the English form has always shown ("<Field> <reason>."), and the Spanish
 // catalog as written in messages/es. Numbers must come through unchanged in both languages.
-import { createElement, type FunctionComponent, type ReactNode } from "react";
+import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
-import { NextIntlClientProvider } from "next-intl";
 import { describe, expect, it } from "vitest";
 import { EXAMPLE_SYSTEM_DEMAND, HydraulicsInputError, PIPE_DATA, PIPE_MATERIALS, INPUT_FIELD_NAMES, INPUT_LIMITS, calculatorFormSchema, fieldLabel, inputErrorSentence, inputFromPreset, type ReportT } from "../../../lib/hydraulics";
 import { catalogTranslator } from "../../../lib/i18n/translator";
 import { loadMessages } from "../../../lib/i18n/messages";
-import { systemDemandFormValues, type LabelT } from "../../../components/tools/form-values";
+import { calculatorWords, systemDemandFormValues, type LabelT } from "../../../components/tools/form-values";
 import { useMaterialOptions } from "../../../components/tools/friction-loss";
 import { summaryPdfResponse } from "../../../lib/tools/summary-pdf";
 
@@ -118,11 +117,11 @@ describe("the system-demand form in Spanish", () => {
   });
 
   it("lists the pipe materials in the reader's language", () => {
-    function Options() {
-      return createElement("ul", null, ...useMaterialOptions().map((o) => createElement("li", { key: o.value }, o.label)));
+    // the names come with the page (components/tools/initial-state.ts: calculatorWords of the reader's calcReports)
+    function Options({ tr }: { tr: ReportT }) {
+      return createElement("ul", null, ...useMaterialOptions(calculatorWords(tr)).map((o) => createElement("li", { key: o.value }, o.label)));
     }
-    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(Provider, { locale, messages: loadMessages(locale), timeZone: "UTC" }, createElement(Options)));
-    const Provider = NextIntlClientProvider as unknown as FunctionComponent<{ locale: string; messages: unknown; timeZone: string; children?: ReactNode }>;
+    const render = (locale: "en" | "es") => renderToStaticMarkup(createElement(Options, { tr: locale === "es" ? esT : enT }));
     const materials = (es.calcReports as { material: Record<string, string> }).material;
     const spanish = render("es");
     for (const name of Object.values(materials)) expect(spanish).toContain(name);
