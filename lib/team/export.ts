@@ -28,50 +28,32 @@ export async function boardCsv(scope: OrgScope, f: BoardFilter, language: Locale
   const perModule = (title: string) => [title, t("csv.completed", { title }), t("csv.score", { title }), t("csv.certificate", { title }), t("csv.due", { title })];
   const header = [t("csv.name"), t("csv.email"), t("csv.team"), ...modules.flatMap((m) => perModule(titles.get(m.slug) ?? m.title)), t("csv.passed"), t("csv.overdue"), t("csv.nextDue"), t("csv.language")];
   return csvResponse(`riser-team-board-${stamp()}.csv`, header, async function* () {
-    // chunks of 2,000 people; the next chunk's reads run while this one is written out
-    const chunks = boardRowsInChunks(scope, f, 2000);
-    const read = async () => {
-      const r = await chunks.next();
-      return r.done ? null : withCellExtras(r.value);
-    };
-    let next = read();
-    try {
-      for (;;) {
-        const rich = await next;
-        if (!rich) return;
-        next = read();
-        yield csvRows(rich);
-      }
-    } finally {
-      next.catch(() => undefined); // a download cancelled while a read was under way
-      await chunks.return(undefined);
+    for await (const chunk of boardRowsInChunks(scope, f)) {
+      const rich = await withCellExtras(chunk);
+      yield rich.map((r) => [
+        r.name,
+        r.email,
+        r.team ?? "",
+        ...modules.flatMap((m) => {
+          const c = r.cells[m.slug];
+          if (!c) return ["", "", "", "", ""];
+          const label = STATUS_LABELS[c.status];
+          const waiting = (c.waitingSignOffs ? "; sign-off waiting for review" : "") + (c.refresherDue ? "; refresher due" : "");
+          const status =
+            c.status === "expiring" || c.status === "expired"
+              ? `${label} (${day(c.expiresAt)})`
+              : !isDone(c.status) && c.dueAt
+                ? `${label} (due ${day(c.dueAt)}${waiting})`
+                : `${label}${waiting ? ` (${waiting.slice(2)})` : ""}`;
+          return [status, day(c.completedAt), c.bestScore === null ? "" : `${c.bestScore}%`, c.serial ?? "", isDone(c.status) ? "" : day(c.dueAt)];
+        }),
+        r.passed,
+        r.overdue,
+        day(r.nextDue),
+        r.language ?? "",
+      ]);
     }
   });
-
-  function csvRows(rich: Awaited<ReturnType<typeof withCellExtras>>) {
-    return rich.map((r) => [
-      r.name,
-      r.email,
-      r.team ?? "",
-      ...modules.flatMap((m) => {
-        const c = r.cells[m.slug];
-        if (!c) return ["", "", "", "", ""];
-        const label = STATUS_LABELS[c.status];
-        const waiting = (c.waitingSignOffs ? "; sign-off waiting for review" : "") + (c.refresherDue ? "; refresher due" : "");
-        const status =
-          c.status === "expiring" || c.status === "expired"
-            ? `${label} (${day(c.expiresAt)})`
-            : !isDone(c.status) && c.dueAt
-              ? `${label} (due ${day(c.dueAt)}${waiting})`
-              : `${label}${waiting ? ` (${waiting.slice(2)})` : ""}`;
-        return [status, day(c.completedAt), c.bestScore === null ? "" : `${c.bestScore}%`, c.serial ?? "", isDone(c.status) ? "" : day(c.dueAt)];
-      }),
-      r.passed,
-      r.overdue,
-      day(r.nextDue),
-      r.language ?? "",
-    ]);
-  }
 }
 
 /** Certificates earned in the scope's organization(s), holder by holder, streamed in pages. */

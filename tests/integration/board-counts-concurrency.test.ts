@@ -125,6 +125,11 @@ describe("stored team totals under concurrent writes, folds and a moving clock",
       () => retrying(() => db.execute(sql`DELETE FROM user WHERE id = ${leaver.id}`)),
       () => retrying(() => db.transaction((tx) => tx.execute(sql`CALL board_rebuild(${org.id}, NULL)`))),
       () => retrying(() => db.execute(sql`CALL board_rebuild(${org.id}, NULL)`)),
+      // a second wave: more passes and failures with expiries on both sides of now and of the window, moves back
+      ...people.map((p, k) => () => grade(p, MODULES[k % MODULES.length]!, k % 3 !== 0, daysFromNow(-1 - k), k % 3 === 0 ? undefined : daysFromNow(-40 + 9 * k))),
+      () => postJson(mgr, `/api/team/people/${a.id}`, { teamId: north }),
+      () => postJson(mgr, `/api/team/people/${e.id}`, { teamId: yard }),
+      () => revoke(d, MODULES[1]!),
     ];
     // four lanes, each running its writes one after another, all lanes at once (the reads and
     // folds below overlap many states, not just the end)
@@ -147,15 +152,19 @@ describe("stored team totals under concurrent writes, folds and a moving clock",
       }
     })();
     let reads = 0;
-    const reader = (async () => {
-      while (writing) {
-        const [, , summary] = await Promise.all([sameSnapshot(new Date()), sameSnapshot(daysFromNow(35)), getJson(mgr, "/api/team/summary")]);
-        expect(summary.status).toBe(200);
-        reads++;
-      }
+    const readers = [0, 35, -20].map((days) =>
+      (async () => {
+        while (writing) {
+          await sameSnapshot(daysFromNow(days));
+          reads++;
+        }
+      })(),
+    );
+    const summaries = (async () => {
+      while (writing) expect((await getJson(mgr, "/api/team/summary")).status).toBe(200);
     })();
     const results = await done;
-    await Promise.all([folder, reader]);
+    await Promise.all([folder, summaries, ...readers]);
     expect(results.flatMap((r, k) => (r.status === "rejected" ? [`write ${k}: ${String(r.reason)}`] : []))).toEqual([]);
     expect(reads).toBeGreaterThan(0);
     expect(folds.length).toBeGreaterThan(0);
