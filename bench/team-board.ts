@@ -79,6 +79,33 @@ for (let i = 0; i < 3; i++) await get("/api/team/summary");
 for (let i = 0; i < 30; i++) summaryRuns.push((await get("/api/team/summary")).ms);
 const teamSummary = summary(summaryRuns);
 
+// Same-run baseline for the summary's counts, in this process against the same database: the
+// from-scratch recount (every cell of the organization, the summary's query before stored totals)
+// beside the stored totals with their corrections, alternated; both answers must agree.
+const { recountTeamCounts } = await import("@/lib/team/board-cells");
+const { storedTeamCounts } = await import("@/lib/team/board-counts");
+const [moduleRows] = (await pool.query("SELECT slug FROM catalog_module WHERE retired_at IS NULL")) as unknown as [{ slug: string }[]];
+const recountMs: number[] = [];
+const storedMs: number[] = [];
+let countsAgree = true;
+const sortCounts = (xs: { teamId: string | null }[]) => JSON.stringify([...xs].sort((a, b) => String(a.teamId).localeCompare(String(b.teamId))));
+for (let i = 0; i < 33; i++) {
+  const at = new Date();
+  let s = performance.now();
+  const recounted = await recountTeamCounts(org.id, moduleRows, at);
+  const r = performance.now() - s;
+  s = performance.now();
+  const stored = await storedTeamCounts([org.id], moduleRows, at);
+  const t = performance.now() - s;
+  if (sortCounts(recounted) !== sortCounts(stored)) countsAgree = false;
+  if (i >= 3) {
+    recountMs.push(r);
+    storedMs.push(t);
+  }
+}
+const countsRecount = summary(recountMs);
+const countsStored = summary(storedMs);
+
 const exports: { ms: number; bytes: number; lines: number }[] = [];
 for (let i = 0; i < 3; i++) {
   const r = await get("/api/team/board.csv");
@@ -97,6 +124,7 @@ const figures: [string, { p50: number; p95: number }][] = [
 ];
 console.log(`\nteam board, ${Number(learners[0]!.n).toLocaleString("en-US")} learners in ${teams.teams.length} teams (load ${os.loadavg()[0]!.toFixed(1)} on ${os.cpus().length} cores)`);
 for (const [what, m] of figures) console.log(`  ${what.padEnd(34)} p50 ${m.p50.toFixed(0).padStart(5)} ms  p95 ${m.p95.toFixed(0).padStart(5)} ms   target p95 ≤ ${pageLimit} ms  ${m.p95 <= pageLimit ? "met" : "NOT met"}`);
+console.log(`  summary counts in-process, same run: recount of every cell p50 ${countsRecount.p50.toFixed(0)} / p95 ${countsRecount.p95.toFixed(0)} ms, stored totals p50 ${countsStored.p50.toFixed(0)} / p95 ${countsStored.p95.toFixed(0)} ms, answers equal: ${countsAgree ? "yes" : "NO"}`);
 console.log(`  ${"CSV export, all rows".padEnd(34)} median ${(exportMs[1]! / 1000).toFixed(2)} s          target < 3 s           ${exportMs[1]! < 3000 ? "met" : "NOT met"}\n`);
 
 record(WANT >= 50_000 ? "team-board-50k" : "team-board", {
@@ -110,6 +138,7 @@ record(WANT >= 50_000 ? "team-board-50k" : "team-board", {
   orgWideStatusFilter: { ...orgWideStatus, note: "every person aggregated, then the page is cut" },
   deepPage,
   teamSummary,
+  summaryCountsInProcess: { recountOfEveryCell: countsRecount, storedTotals: countsStored, answersEqual: countsAgree },
   export: { runs: exports, medianMs: exportMs[1] },
   met: { ...Object.fromEntries(figures.map(([what, m]) => [what, m.p95 <= pageLimit])), export: exportMs[1]! < 3000 },
 });

@@ -29,8 +29,11 @@ export const user = mysqlTable(
     /** the person's language for pages, e-mails and certificates (lib/i18n/config.ts LOCALES) */
     language: varchar("language", { length: 5 }).default("en").notNull(),
   },
-  // user_org_name_idx: the team board pages an organization's people in name order (lib/team/board.ts)
-  (t) => [index("user_org_idx").on(t.organizationId, t.teamId), index("user_org_name_idx").on(t.organizationId, t.name)],
+  // user_org_name_idx: the team board pages an organization's people in name order; user_org_idx
+  // ends in the name so that one team's people are in name order too (a crew's filtered page reads
+  // its own people, not the organization's), and still counts people per team index-only
+  // (lib/team/board.ts, lib/team/summary.ts)
+  (t) => [index("user_org_idx").on(t.organizationId, t.teamId, t.name), index("user_org_name_idx").on(t.organizationId, t.name)],
 );
 
 export const session = mysqlTable(

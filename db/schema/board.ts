@@ -6,8 +6,9 @@
  * (lib/team/board-cells.ts), with the rule of lib/team/status.ts.
  */
 import { sql } from "drizzle-orm";
-import { datetime, foreignKey, index, int, mysqlTable, primaryKey, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, datetime, foreignKey, index, int, mysqlTable, primaryKey, tinyint, varchar } from "drizzle-orm/mysql-core";
 import { user } from "./auth";
+import { organization } from "./org";
 
 export const boardCell = mysqlTable(
   "board_cell",
@@ -43,4 +44,64 @@ export const boardCell = mysqlTable(
     index("board_cell_org_expiry_idx").on(t.organizationId, t.expiresAt, t.dueAt),
     index("board_cell_org_due_idx").on(t.organizationId, t.dueAt, t.expiresAt),
   ],
+);
+
+/**
+ * Stored totals per organization, team and module (DEVELOPERS.md "Team board: stored cells"): the
+ * statuses of the organization's cells as they stood at `counted_at`. The time a total was taken
+ * at is fixed, so a cell's status at it is a function of the cell alone: every change of a cell
+ * adds one insert-only row to board_count_delta (a trigger on board_cell, in the writer's
+ * transaction, no shared row locked), and the fold (lib/team/board-counts.ts: the job
+ * "board-counts-fold", or a reader finding the totals stale) moves those rows into the totals and
+ * moves `counted_at` to "now" by recounting the few cells whose due date or expiry lies between
+ * the two times. A reader adds the same two corrections to the stored totals in one snapshot.
+ */
+export const boardCountState = mysqlTable(
+  "board_count_state",
+  {
+    organizationId: varchar("organization_id", { length: 36 }).notNull().primaryKey(),
+    /** the time every total of the organization in board_team_count is evaluated at */
+    countedAt: datetime("counted_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [foreignKey({ name: "board_count_state_org_fk", columns: [t.organizationId], foreignColumns: [organization.id] }).onDelete("cascade")],
+);
+
+export const boardTeamCount = mysqlTable(
+  "board_team_count",
+  {
+    organizationId: varchar("organization_id", { length: 36 }).notNull(),
+    /** the team's id, "" for people without a team */
+    teamKey: varchar("team_key", { length: 36 }).notNull(),
+    moduleSlug: varchar("module_slug", { length: 80 }).notNull(),
+    /** cells per status at board_count_state.counted_at (passed: valid beyond the expiring window) */
+    passed: int("passed").notNull().default(0),
+    expiring: int("expiring").notNull().default(0),
+    overdue: int("overdue").notNull().default(0),
+    expired: int("expired").notNull().default(0),
+    failed: int("failed").notNull().default(0),
+  },
+  (t) => [
+    primaryKey({ name: "board_team_count_pk", columns: [t.organizationId, t.teamKey, t.moduleSlug] }),
+    foreignKey({ name: "board_team_count_org_fk", columns: [t.organizationId], foreignColumns: [organization.id] }).onDelete("cascade"),
+  ],
+);
+
+/**
+ * One row per change of a counted cell since the last fold: the cell's status-deciding facts
+ * before (n = -1) and after (n = +1). Insert-only for writers; the fold deletes what it folded.
+ */
+export const boardCountDelta = mysqlTable(
+  "board_count_delta",
+  {
+    id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
+    organizationId: varchar("organization_id", { length: 36 }).notNull(),
+    teamId: varchar("team_id", { length: 36 }),
+    moduleSlug: varchar("module_slug", { length: 80 }).notNull(),
+    expiresAt: datetime("expires_at", { fsp: 3 }),
+    dueAt: datetime("due_at", { fsp: 3 }),
+    /** the last graded attempt failed (lib/team/status.ts rule 5) */
+    failed: boolean("failed").notNull(),
+    n: tinyint("n").notNull(),
+  },
+  (t) => [index("board_count_delta_org_idx").on(t.organizationId, t.id)],
 );

@@ -23,6 +23,7 @@ export const JOBS: Job[] = [
   { name: "evidence-orphans", run: async () => (await import("@/lib/signoffs")).removeOrphanedEvidence({ olderThanMinutes: 60 }) },
   { name: "assignment-reminders", run: async () => (await import("@/lib/team")).sendDueReminders() },
   { name: "unverified-accounts-expire", run: async () => (await import("@/lib/auth")).expireUnverifiedAccounts() },
+  { name: "board-counts-fold", run: async () => (await import("@/lib/team")).foldAllBoardCounts() },
   { name: "manager-digest", run: async () => (await import("@/lib/team")).sendManagerDigests() },
   // last, so that the messages the jobs above queued go out in the same run
   { name: "mail-outbox", run: async () => (await import("@/lib/mail")).deliverOutbox() },

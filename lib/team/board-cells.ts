@@ -134,7 +134,8 @@ FROM board_cell c WHERE c.user_id IN (${list(ids)}) ${only ? sql`AND c.module_sl
   return out;
 }
 
-export type TeamCounts = { organizationId: string; teamId: string | null; passed: number; failed: number; overdue: number; expiring: number; expired: number };
+export type { TeamCounts } from "./board-counts";
+import type { TeamCounts } from "./board-counts";
 
 /**
  * The status counts of a group of cells packed in one exact decimal sum: each status its own
@@ -160,14 +161,15 @@ function packedStatus(now: Date): SQL {
 }
 
 /**
- * Cells per status, per organization and team, over the scope's people: one index-only scan of
+ * A recount from scratch (the team summary reads the stored totals instead, ./board-counts.ts):
+ * cells per status, per organization and team, over the scope's people: one index-only scan of
  * board_cell_org_idx (organization, team, module, …) grouped in the index's own order (no
  * temporary table), each cell's status evaluated once; the shown modules are picked per group
  * here rather than per cell in SQL. The index is named so that the plan cannot drift to another
  * index on (organization, team, …) without the module, which needs a temporary table (measured
  * three times slower). `passed` counts every valid cell (passed or expiring).
  */
-export async function teamCounts(orgId: string | null, modules: ModuleInfo[], now: Date): Promise<TeamCounts[]> {
+export async function recountTeamCounts(orgId: string | null, modules: ModuleInfo[], now: Date): Promise<TeamCounts[]> {
   const scope = orgId ? sql`c.organization_id = ${orgId}` : sql`c.organization_id IS NOT NULL`;
   const found = await rows<{ organization_id: string; team_id: string | null; module_slug: string; packed: string }>(sql`
 SELECT c.organization_id, c.team_id, c.module_slug, CAST(SUM(${packedStatus(now)}) AS CHAR) AS packed

@@ -19,3 +19,4 @@ export * from "./summary";
 export * from "./security";
 export * from "./org-language";
 export { syncBoardCells } from "./board-cells";
+export { foldAllBoardCounts } from "./board-counts";

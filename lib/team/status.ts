@@ -64,3 +64,19 @@ export function cellStatus(f: CellFacts, validityMonths: number, now: Date): Boa
 }
 
 export const isDone = (s: BoardStatus) => s === "passed" || s === "expiring";
+
+/** The statuses the team totals count (in progress and not started are not counted). */
+export type CountedStatus = "passed" | "expiring" | "overdue" | "expired" | "failed";
+
+/**
+ * cellStatus reduced to the three facts the team totals need: the expiry (expiryOf), the due date
+ * and whether the last graded attempt failed. Same precedence; null where cellStatus says
+ * "in progress" or "not started".
+ */
+export function countedStatus(expiresAt: Date | null, dueAt: Date | null, failed: boolean, now: Date): CountedStatus | null {
+  const t = now.getTime();
+  if (expiresAt && expiresAt.getTime() > t) return isExpiring(expiresAt, now) ? "expiring" : "passed";
+  if (dueAt && dueAt.getTime() < t) return "overdue";
+  if (expiresAt) return "expired";
+  return failed ? "failed" : null;
+}

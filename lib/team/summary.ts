@@ -4,7 +4,7 @@ import { sql } from "drizzle-orm";
 import type { OrgScope } from "@/lib/access";
 import { addDays, isoDay } from "@/lib/dates";
 import { boardModules, rows } from "./board";
-import { teamCounts } from "./board-cells";
+import { storedTeamCounts } from "./board-counts";
 
 export type TeamTotal = {
   teamId: string | null;
@@ -21,20 +21,24 @@ export type TeamTotal = {
 
 /**
  * Totals per team over the whole scope (the board's summary and the "by team" chart), from the
- * stored cells (board_cell) in one grouped scan, plus the people per team (counted on
+ * stored totals per team and module (./board-counts.ts: exact at `now`), plus the people per team (counted on
  * user_org_idx alone; team names joined to the groups, not to every person). Without lesson counts:
  * "in progress" and "not started" are not told apart here.
  */
 export async function teamTotals(scope: OrgScope, now = new Date()): Promise<TeamTotal[]> {
   const modules = boardModules();
   const orgFilter = scope.orgId ? sql`u.organization_id = ${scope.orgId}` : sql`u.organization_id IS NOT NULL`;
-  const [people, counts, orgs] = await Promise.all([
+  const orgs = await rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`);
+  const [people, counts] = await Promise.all([
     rows<{ organization_id: string; team_id: string | null; team_name: string | null; n: number | string }>(sql`
 SELECT p.organization_id, p.team_id, t.name AS team_name, p.n
 FROM (SELECT u.organization_id, u.team_id, COUNT(*) AS n FROM user u WHERE ${orgFilter} GROUP BY u.organization_id, u.team_id) p
 LEFT JOIN team t ON t.id = p.team_id`),
-    teamCounts(scope.orgId, modules, now),
-    rows<{ id: string; name: string }>(sql`SELECT id, name FROM organization ${scope.orgId ? sql`WHERE id = ${scope.orgId}` : sql``}`),
+    storedTeamCounts(
+      orgs.map((o) => o.id),
+      modules,
+      now,
+    ),
   ]);
   const orgNames = new Map(orgs.map((o) => [o.id, o.name]));
   const countsOf = new Map(counts.map((c) => [`${c.organizationId}/${c.teamId ?? ""}`, c]));

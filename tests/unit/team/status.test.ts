@@ -2,7 +2,7 @@
 // precedence between them. The 30-day "expiring" window is Riser's own choice (EXPIRY_REMINDER_DAYS,
 // shared with the certificate reminder); validity months come from content/modules/*/module.yaml.
 import { describe, expect, it } from "vitest";
-import { cellStatus, expiryOf, NO_FACTS, type CellFacts } from "@/lib/team/status";
+import { cellStatus, countedStatus, expiryOf, NO_FACTS, type CellFacts } from "@/lib/team/status";
 
 const now = new Date("2027-03-15T12:00:00Z");
 const days = (n: number) => new Date(now.getTime() + n * 86_400_000);
@@ -49,3 +49,28 @@ describe("cellStatus", () => {
     expect(cellStatus(f({ completedAt: days(-20), certificates: 1, validUntil: null, lessonsDone: 4, lastGradedAt: days(-20), lastPassAt: days(-20) }), VALIDITY, now)).toBe("in_progress");
   });
 });
+
+// The stored team totals (lib/team/board-counts.ts) evaluate a status from three facts only; it must
+// agree with cellStatus on every fact pattern, including each boundary instant (the rule above is
+// the reference), or the totals would drift from the board.
+describe("countedStatus", () => {
+  it("agrees with cellStatus on every combination of expiry, due date and attempts around each boundary", () => {
+    const instants = [null, days(-400), days(-1), new Date(now.getTime() - 1), now, new Date(now.getTime() + 1), days(1), days(30), new Date(days(30).getTime() + 1), days(31), days(400)];
+    const attempts: Partial<CellFacts>[] = [{}, { lessonsDone: 2 }, { attempts: 1, lastGradedAt: days(-2) }, { attempts: 2, lastGradedAt: days(-2), lastPassAt: days(-2) }, { attempts: 2, lastGradedAt: days(-2), lastPassAt: days(-5) }];
+    let compared = 0;
+    for (const validUntil of instants)
+      for (const dueAt of instants)
+        for (const a of attempts)
+          for (const revoked of [false, true]) {
+            const facts = f({ ...a, dueAt, certificates: validUntil || revoked ? 1 : 0, validUntil: revoked ? null : validUntil, completedAt: validUntil ? days(-500) : null });
+            const expires = expiryOf(facts, VALIDITY);
+            const failed = facts.lastGradedAt !== null && (facts.lastPassAt === null || facts.lastPassAt < facts.lastGradedAt);
+            const full = cellStatus(facts, VALIDITY, now);
+            const want = full === "in_progress" || full === "not_started" ? null : full;
+            expect({ validUntil, dueAt, a, revoked, s: countedStatus(expires, dueAt, failed, now) }).toEqual({ validUntil, dueAt, a, revoked, s: want });
+            compared++;
+          }
+    expect(compared).toBe(11 * 11 * 5 * 2);
+  });
+});
+
