@@ -9,10 +9,8 @@ import { useOfflineState, useOnline } from "./use-offline";
  * Runs on every page: registers the service worker, forgets what another
  * person kept on this phone, and whenever the connection is there sends queued marks and replaces
  * kept modules whose content changed. Shows a plain notice while offline.
- * `userId`: who the header's session answer says is signed in; null when it said nobody (or could
- * not be read), undefined while that answer is still on its way.
  */
-export function OfflineSync({ userId }: { userId: string | null | undefined }) {
+export function OfflineSync({ userId }: { userId: string | null }) {
   const t = useTranslations("offline");
   const online = useOnline();
   const { queue } = useOfflineState();
@@ -34,7 +32,6 @@ export function OfflineSync({ userId }: { userId: string | null | undefined }) {
       const timer = setInterval(() => void checkConnection(), 20_000);
       return () => clearInterval(timer);
     }
-    if (userId === undefined) return;
     // Claimed first, for the person the server says is signed in now: marks and kept modules someone
     // else left on this phone are forgotten, never sent under this person's session.
     void (async () => {

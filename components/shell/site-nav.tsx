@@ -1,31 +1,13 @@
 "use client";
-import dynamic from "next/dynamic";
 import Link from "next/link";
 import { usePathname, useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
 import { useTranslations } from "next-intl";
+import { OfflineSync } from "@/components/offline/offline-sync";
 import { postJson } from "@/lib/fetcher";
 import { isRole } from "@/lib/access/browser";
+import { flushQueue, forgetEverything, listQueue, offlineSupported } from "@/lib/offline/browser";
 import { navFor, signedOutLinks } from "./nav-items";
-
-// The offline layer (service worker, kept modules, queued marks) is not part of the page's first
-// load: its script is fetched and run once the page has been drawn and made interactive (useIdle).
-// Offline, the service worker serves it from its precache like every other script.
-const OfflineSync = dynamic(() => import("@/components/offline/offline-sync").then((m) => m.OfflineSync), { ssr: false });
-
-/** True once the browser is idle after the first load (at most 3 s; a short timer where there is no idle callback). */
-function useIdle(): boolean {
-  const [idle, setIdle] = useState(false);
-  useEffect(() => {
-    if (typeof window.requestIdleCallback === "function") {
-      const id = window.requestIdleCallback(() => setIdle(true), { timeout: 3000 });
-      return () => window.cancelIdleCallback(id);
-    }
-    const timer = setTimeout(() => setIdle(true), 200);
-    return () => clearTimeout(timer);
-  }, []);
-  return idle;
-}
 
 type NavSession = { user: { id: string; name: string; role?: string } } | null;
 
@@ -41,7 +23,6 @@ export function SiteNav() {
   const [open, setOpen] = useState(false);
   const [data, setData] = useState<NavSession>(null);
   const [isPending, setPending] = useState(true);
-  const idle = useIdle();
   useEffect(() => {
     let live = true;
     fetch("/api/auth/get-session", { cache: "no-store" })
@@ -62,7 +43,6 @@ export function SiteNav() {
   async function signOut() {
     // Kept lessons and queued marks are personal: send what can be sent, then forget them all
     // (the sign-out answer also carries Clear-Site-Data for the same reason).
-    const { flushQueue, forgetEverything, listQueue, offlineSupported } = await import("@/lib/offline/browser");
     if (offlineSupported()) {
       if (navigator.onLine) await flushQueue().catch(() => undefined);
       const left = await listQueue().catch(() => []);
@@ -77,8 +57,7 @@ export function SiteNav() {
 
   return (
     <nav aria-label={t("mainNav")} className="flex flex-1 flex-wrap items-center justify-end gap-2">
-      {/* undefined until the session answer is in: the offline layer then asks no second time */}
-      {idle ? <OfflineSync userId={isPending ? undefined : (data?.user.id ?? null)} /> : null}
+      <OfflineSync userId={data?.user.id ?? null} />
       {isPending ? (
         <span className="text-sm text-paper/70">{t("loading")}</span>
       ) : data ? (
