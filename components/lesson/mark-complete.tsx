@@ -72,8 +72,12 @@ function useVisibleSeconds(): () => number {
  * decides whether enough reading time has passed since it first served this lesson to the person.
  * With no connection the mark waits on the phone (lib/offline) with the phone's reading time and
  * is sent when the connection returns.
+ *
+ * `progressLines[n]` is the module's progress line for n lessons done, worded by the server: building
+ * the first message format in the browser costs the phone one long task (its Intl locale data), so
+ * the line shown on every lesson load is not formatted here.
  */
-export function MarkComplete({ module, lesson, title, total, minutes }: { module: string; lesson: string; title: string; total: number; minutes: number }) {
+export function MarkComplete({ module, lesson, title, total, minutes, progressLines }: { module: string; lesson: string; title: string; total: number; minutes: number; progressLines: string[] }) {
   const t = useTranslations("lesson");
   const errorText = useErrorText();
   const key = `/api/progress?module=${module}`;
@@ -141,7 +145,7 @@ export function MarkComplete({ module, lesson, title, total, minutes }: { module
         {showButton ? <Button onClick={mark} disabled={saving}>{saving ? t("saving") : t("markComplete")}</Button> : null}
         {data ? (
           <p className="text-sm text-muted" aria-live="polite" data-testid="module-progress">
-            {t("moduleProgress", { count, total, minutes: Math.ceil(minutes / 2) })}
+            {progressLines[count] ?? t("moduleProgress", { count, total, minutes: Math.ceil(minutes / 2) })}
           </p>
         ) : noNetwork || !online ? (
           <p className="text-sm text-muted">{t("noConnection")}</p>

@@ -46,7 +46,10 @@ export default async function LessonPage({ params }: Params) {
     localRulesFor(viewer.organizationId, lessonTopics(mod.slug, lesson.slug)),
     lessonChangesDue(viewer, mod.slug, lesson.slug),
   ]);
-  const [t, editions] = await Promise.all([getTranslations("modules"), editionText()]);
+  const [t, tl, editions] = await Promise.all([getTranslations("modules"), getTranslations("lesson"), editionText()]);
+  // the progress line for 0…all lessons done, worded here (components/lesson/mark-complete.tsx)
+  const total = mod.lessons.length;
+  const progressLines = Array.from({ length: total + 1 }, (_, count) => tl("moduleProgress", { count, total, minutes: Math.ceil(lesson.meta.minutes / 2) }));
 
   return (
     <article className="flex flex-col gap-6">
@@ -90,7 +93,7 @@ export default async function LessonPage({ params }: Params) {
         </ul>
         <p className="mt-2 text-muted">{t("updated", { date: lesson.meta.updated })}</p>
       </section>
-      <MarkComplete module={mod.slug} lesson={lesson.slug} title={`${mod.meta.title} — ${lesson.meta.title}`} total={mod.lessons.length} minutes={lesson.meta.minutes} />
+      <MarkComplete module={mod.slug} lesson={lesson.slug} title={`${mod.meta.title} — ${lesson.meta.title}`} total={total} minutes={lesson.meta.minutes} progressLines={progressLines} />
       <nav aria-label={t("lessons")} className="flex flex-wrap justify-between gap-4">
         {prev ? <Link href={`/modules/${mod.slug}/${prev.slug}`}>← {prev.meta.title}</Link> : <span />}
         {next ? (
