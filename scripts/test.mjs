@@ -10,7 +10,7 @@ import { contentBuild, ensureDependencies } from "./lib/steps.mjs";
 
 const only = process.argv.find((a) => a.startsWith("--only="))?.split("=")[1]?.split(",");
 const want = (step) => !only || only.includes(step);
-// --files=a,b limits vitest and playwright to those files (for quick local loops)
+// --files=a,b limits vitest and playwright to those files (for quick local loops); PW_REPEAT=n runs each browser test n times
 const files = process.argv.find((a) => a.startsWith("--files="))?.split("=")[1]?.split(",") ?? [];
 const bin = (name) => path.join(root, "node_modules", ".bin", name);
 const app = stack({
@@ -57,7 +57,7 @@ try {
     }
     if (want("e2e")) {
       step("browser tests");
-      run(bin("playwright"), ["test", ...files.filter((f) => f.includes("e2e/"))], { cwd: root, env });
+      run(bin("playwright"), ["test", ...files.filter((f) => f.includes("e2e/")), ...(process.env.PW_REPEAT ? [`--repeat-each=${process.env.PW_REPEAT}`] : [])], { cwd: root, env });
     }
     if (want("faults")) {
       step("fault tests (stops and restarts the test database)");

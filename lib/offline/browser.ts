@@ -102,6 +102,12 @@ export function subscribeConnection(onChange: () => void): () => void {
 
 // ---- kept modules ---------------------------------------------------------------------------
 
+/**
+ * Counts sign-outs in this page: a module still being kept when one happens stores nothing (its
+ * pages and record would otherwise land after forgetEverything's clear and stay for the next person).
+ */
+let forgetRound = 0;
+
 export async function listSaved(): Promise<SavedModule[]> {
   const all = await entries<string, SavedModule>(db());
   return all.filter(([k]) => k.startsWith("saved:")).map(([, v]) => v).sort((a, b) => a.title.localeCompare(b.title));
@@ -116,6 +122,7 @@ export async function savedModule(module: string): Promise<SavedModule | undefin
  * any older copy. A failure part-way leaves the previous copy as it was.
  */
 export async function keepModule(module: string): Promise<SavedModule> {
+  const started = forgetRound;
   const res = await fetch(`/api/offline/modules/${encodeURIComponent(module)}`, { credentials: "same-origin" });
   const planBody = (await res.json().catch(() => ({}))) as Plan & { error?: string };
   if (!res.ok) throw new KeepError("planFailed", { message: planBody.error, status: res.status });
@@ -141,7 +148,13 @@ export async function keepModule(module: string): Promise<SavedModule> {
     if (previous?.cache !== name) await caches.delete(name);
     throw err instanceof TypeError ? new KeepError("connectionDropped") : err;
   }
+  // Signed out while the pages were on their way: keep nothing for the next person on this phone.
+  if (forgetRound !== started) {
+    await caches.delete(name);
+    throw new KeepError("sessionEnded");
+  }
   const saved: SavedModule = { module: planBody.module, locale: planBody.locale, title: planBody.title, version: planBody.version, savedAt: new Date().toISOString(), bytes, pages: planBody.urls.length, cache: name };
+  // no await between the check above and this write: a later sign-out's clear() runs after it
   await set(`saved:${planBody.module}`, saved, db());
   for (const old of await caches.keys()) if (old.startsWith(`${SAVED_CACHE_PREFIX}${planBody.module}@`) && old !== name) await caches.delete(old);
   changed();
@@ -219,6 +232,7 @@ export async function flushQueue(): Promise<{ sent: number; waiting: number }> {
 /** Deletes every kept page and every queued mark on this phone, and tells the worker to do the same. */
 export async function forgetEverything(): Promise<void> {
   if (!offlineSupported()) return;
+  forgetRound++;
   const names = await caches.keys();
   await Promise.all(names.filter((n) => n.startsWith(SAVED_CACHE_PREFIX)).map((n) => caches.delete(n)));
   await clear(db());
