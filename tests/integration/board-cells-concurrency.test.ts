@@ -13,6 +13,7 @@ import { sql } from "drizzle-orm";
 import { cellStatus, isDone, NO_FACTS, type CellFacts } from "@/lib/team/status";
 import { postJson, getJson, uniqueEmail, type Client } from "../helpers/http";
 import { clientOf, daysFromNow, fixtureOrg, fixturePerson, readAndComplete, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
+import { deadlockRetrier } from "../helpers/deadlock";
 
 type Cell = { status: string; dueAt: string | null; lessonsDone: number; attempts: number; bestScore: number | null; completedAt: string | null; expiresAt: string | null };
 type Row = { id: string; name: string; cells: Record<string, Cell> };
@@ -30,19 +31,8 @@ async function q<T>(query: ReturnType<typeof sql>): Promise<T[]> {
   return r;
 }
 
-/** Retries a transaction that lost a deadlock (MariaDB rolls it back whole, as a client would retry). */
-let deadlocks = 0;
-async function retrying<T>(f: () => Promise<T>): Promise<T> {
-  for (let i = 0; ; i++) {
-    try {
-      return await f();
-    } catch (err) {
-      const code = (err as { cause?: { errno?: number }; errno?: number }).cause?.errno ?? (err as { errno?: number }).errno;
-      if (code !== 1213 || i > 5) throw err;
-      deadlocks++;
-    }
-  }
-}
+/** Retries a transaction that lost a deadlock, counting the retries. */
+const { retrying, state: retried } = deadlockRetrier(5);
 
 /** A quiz attempt started, then graded in a second statement of one transaction (as grading leaves it). */
 async function gradeOnce(p: FixturePerson, slug: string, passed: boolean, at: Date, withCertificate?: { expiresAt: Date }) {
@@ -176,7 +166,7 @@ describe("board cells under concurrent writes", () => {
       gradeOnce(e, MODULES[0]!, true, daysFromNow(-1), { expiresAt: daysFromNow(500) }),
     ]);
     expect(second.filter((r) => r.status === "rejected")).toEqual([]);
-    console.log(`[board-cells] deadlocks retried: ${deadlocks}`);
+    console.log(`[board-cells] deadlocks retried: ${retried.deadlocks}`);
   }, 240_000);
 
   it("every board cell equals the recomputation from the source tables", async () => {

@@ -17,6 +17,7 @@ import { recountTeamCounts } from "@/lib/team/board-cells";
 import { countsBesideRecount, foldBoardCounts } from "@/lib/team/board-counts";
 import { getJson, postJson, uniqueEmail, type Client } from "../helpers/http";
 import { clientOf, daysFromNow, fixtureOrg, fixturePerson, type FixtureOrg, type FixturePerson } from "../helpers/fixtures";
+import { deadlockRetrier } from "../helpers/deadlock";
 
 const MODULES = ["freeze-protection", "how-systems-work", "pipe-and-joining", "hydraulics-and-permits"];
 const HOUR = 3_600_000;
@@ -26,19 +27,8 @@ let managerId: string;
 const people: FixturePerson[] = [];
 let leaver: FixturePerson;
 
-/** Retries a transaction that lost a deadlock (InnoDB rolls it back whole; a client retries). */
-let deadlocks = 0;
-async function retrying<T>(f: () => Promise<T>): Promise<T> {
-  for (let i = 0; ; i++) {
-    try {
-      return await f();
-    } catch (err) {
-      const code = (err as { cause?: { errno?: number }; errno?: number }).cause?.errno ?? (err as { errno?: number }).errno;
-      if (code !== 1213 || i > 8) throw err;
-      deadlocks++;
-    }
-  }
-}
+/** Retries a transaction that lost a deadlock, counting the retries. */
+const { retrying, state: retried } = deadlockRetrier(8);
 
 /** An attempt opened then graded in one transaction, with its completion and certificate when passed. */
 async function grade(p: FixturePerson, slug: string, passed: boolean, at: Date, expiresAt?: Date) {
@@ -168,7 +158,7 @@ describe("stored team totals under concurrent writes, folds and a moving clock",
     expect(results.flatMap((r, k) => (r.status === "rejected" ? [`write ${k}: ${String(r.reason)}`] : []))).toEqual([]);
     expect(reads).toBeGreaterThan(0);
     expect(folds.length).toBeGreaterThan(0);
-    console.log(`[board-counts] ${reads} reads and ${folds.length} folds in flight (${folds.reduce((n, f) => n + f.folded, 0)} change rows folded), deadlocks retried: ${deadlocks}`);
+    console.log(`[board-counts] ${reads} reads and ${folds.length} folds in flight (${folds.reduce((n, f) => n + f.folded, 0)} change rows folded), deadlocks retried: ${retried.deadlocks}`);
     // settled, before and after a fold
     await sameSnapshot(new Date());
     const [pending] = (await pool.query("SELECT COUNT(*) AS n FROM board_count_delta WHERE organization_id = ?", [org.id])) as unknown as [{ n: number }[]];
